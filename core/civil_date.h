@@ -1,0 +1,49 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#pragma once
+#include <optional>
+#include <string>
+#include <string_view>
+
+namespace hierloom::core {
+
+/// A calendar day as a count of days since 1970-01-01 (proleptic Gregorian).
+using Day = int;
+
+/// Days since 1970-01-01 of a Gregorian date (H. Hinnant's days_from_civil algorithm).
+Day dayFromCivil(int year, unsigned month, unsigned day);
+
+struct CivilDate {
+    int year;
+    unsigned month;
+    unsigned day;
+};
+
+/// The Gregorian date of a day count (inverse of dayFromCivil).
+CivilDate civilFromDay(Day d);
+
+/// Parses a strict `YYYY-MM-DD` real calendar date; nullopt otherwise.
+std::optional<Day> parseDate(std::string_view text);
+
+/// Formats a day as `YYYY-MM-DD`.
+std::string formatDate(Day d);
+
+/// Parses `HH:MM` (24 h) into minutes after midnight; nullopt otherwise.
+std::optional<int> parseTimeOfDay(std::string_view text);
+
+/// Formats minutes after midnight as `HH:MM`.
+std::string formatTimeOfDay(int minutes);
+
+/// The day an animal born on `birth` turns `years` old; a 29 February
+/// birthday falls on 1 March in common years (methods.md, "Age").
+Day anniversary(Day birth, int years);
+
+/// Whole years of age on `d` for an animal born on `birth`.
+int ageInYears(Day birth, Day d);
+
+/// Today's date in the local time zone.
+Day today();
+
+bool isLeapYear(int year);
+unsigned daysInMonth(int year, unsigned month);
+
+} // namespace hierloom::core
