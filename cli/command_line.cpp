@@ -1,15 +1,62 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "cli/command_line.h"
 
+#include "cli/commands.h"
+#include "core/colony_file_error.h"
+
+#include <CLI/CLI.hpp>
+
 #include <iostream>
 
 namespace hierloom::cli {
 
 int run(int argc, const char* const* argv, std::ostream& out, std::ostream& err)
 {
-    (void)argc; (void)argv; (void)out;
-    err << "hierloom-cli: no command given\n";
-    return BadInput;
+    CLI::App app{"Hierloom: dominance ranks and inherited rank in animal colonies.\n"
+                 "Usage: hierloom-cli COMMAND COLONY_FILE [options]; CSV on standard output.",
+                 "hierloom-cli"};
+    app.set_version_flag("--version", std::string("hierloom-cli ") + HIERLOOM_VERSION);
+    app.require_subcommand(1);
+    app.fallthrough(false);
+    CommandContext ctx{out, err, {}};
+    CommandAction action;
+    addInitCommand(app, ctx, action);
+    addImportCommand(app, ctx, action);
+    addExportCommand(app, ctx, action);
+    addDemoCommand(app, ctx, action);
+    addRanksCommand(app, ctx, action);
+    addMatrixCommand(app, ctx, action);
+    addMetricsCommand(app, ctx, action);
+    try {
+        app.parse(argc, argv);
+    } catch (const CLI::CallForHelp&) {
+        out << app.help();
+        return Success;
+    } catch (const CLI::CallForAllHelp&) {
+        out << app.help("", CLI::AppFormatMode::All);
+        return Success;
+    } catch (const CLI::CallForVersion&) {
+        out << std::string("hierloom-cli ") + HIERLOOM_VERSION << "\n";
+        return Success;
+    } catch (const CLI::ParseError& e) {
+        err << "hierloom-cli: " << e.what() << "\n";
+        if (e.get_exit_code() == static_cast<int>(CLI::ExitCodes::RequiredError) && app.get_subcommands().empty())
+            err << "Run 'hierloom-cli --help' for the list of commands.\n";
+        return BadInput;
+    }
+    try {
+        if (action) action();
+        return Success;
+    } catch (const BadInput& e) {
+        err << "hierloom-cli: " << e.what() << "\n";
+        return BadInput;
+    } catch (const core::ColonyFileError& e) {
+        err << "hierloom-cli: " << e.what() << "\n";
+        return e.kind() == core::ColonyFileError::Kind::Io ? InternalFailure : BadInput;
+    } catch (const std::exception& e) {
+        err << "hierloom-cli: internal failure: " << e.what() << "\n";
+        return InternalFailure;
+    }
 }
 
 int run(int argc, char** argv) { return run(argc, argv, std::cout, std::cerr); }

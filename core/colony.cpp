@@ -2,6 +2,7 @@
 #include "core/colony.h"
 
 #include <algorithm>
+#include <chrono>
 #include <numeric>
 #include <random>
 
@@ -98,20 +99,30 @@ std::optional<Outcome> parseOutcome(std::string_view s)
 
 std::string newUid()
 {
+    // Time-ordered (version 7 layout): 48 bits of Unix milliseconds, then a
+    // per-process counter and random bits, so bulk inserts append to the
+    // uid index instead of scattering across it.
     static thread_local std::mt19937_64 rng{std::random_device{}()};
-    const std::uint64_t hi = (rng() & 0xFFFFFFFFFFFF0FFFULL) | 0x0000000000004000ULL;
-    const std::uint64_t lo = (rng() & 0x3FFFFFFFFFFFFFFFULL) | 0x8000000000000000ULL;
+    static thread_local std::uint64_t lastMs = 0;
+    static thread_local std::uint64_t counter = 0;
+    const auto ms = static_cast<std::uint64_t>(std::chrono::duration_cast<std::chrono::milliseconds>(
+                                                   std::chrono::system_clock::now().time_since_epoch())
+                                                   .count());
+    if (ms == lastMs) ++counter;
+    else { lastMs = ms; counter = rng() & 0x3FF; }
+    const std::uint64_t hi = (ms << 16) | 0x7000ULL | ((counter >> 20) & 0x0FFFULL);
+    const std::uint64_t lo = 0x8000000000000000ULL | ((counter & 0xFFFFFULL) << 42) | (rng() >> 22);
     static const char* hex = "0123456789abcdef";
     std::string out(36, '-');
     int pos = 0;
-    auto put = [&](std::uint64_t v, int nibbles) {
-        for (int i = nibbles - 1; i >= 0; --i) {
+    auto put = [&](std::uint64_t v) {
+        for (int i = 15; i >= 0; --i) {
             if (pos == 8 || pos == 13 || pos == 18 || pos == 23) ++pos;
             out[static_cast<size_t>(pos++)] = hex[(v >> (4 * i)) & 0xF];
         }
     };
-    put(hi, 16);
-    put(lo, 16);
+    put(hi);
+    put(lo);
     return out;
 }
 

@@ -1,0 +1,46 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#pragma once
+#include "core/civil_date.h"
+
+#include <iosfwd>
+#include <optional>
+#include <stdexcept>
+#include <string>
+
+namespace CLI {
+class App;
+}
+
+namespace hierloom::cli {
+
+/// A mistake in the command line or its input, reported with exit status 2.
+class BadInput : public std::runtime_error {
+public:
+    using std::runtime_error::runtime_error;
+};
+
+/// Streams and the output file option shared by every command.
+struct CommandContext {
+    std::ostream& out;
+    std::ostream& err;
+    std::string outFile; // --out
+};
+
+/// Options every analysis command takes (interfaces.md "Common options").
+struct WindowOptions {
+    std::string from;
+    std::string to;
+    std::string group;
+    std::string draws = "half";
+};
+
+/// Adds --from, --to, --group and --draws to a command.
+void addWindowOptions(CLI::App& command, WindowOptions& options);
+
+/// Parses a `YYYY-MM-DD` option value; BadInput naming the option otherwise.
+std::optional<hierloom::core::Day> optionDate(const std::string& text, const char* option);
+
+/// Writes `text` to --out FILE (atomically, via a temporary file) or to standard output.
+void emit(CommandContext& ctx, const std::string& text);
+
+} // namespace hierloom::cli

@@ -1,0 +1,21 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#pragma once
+#include "cli/command_context.h"
+
+#include <functional>
+
+namespace hierloom::cli {
+
+/// What a command runs once its options are parsed.
+using CommandAction = std::function<void()>;
+
+// Each adds one subcommand and sets `action` when that subcommand is chosen.
+void addInitCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
+void addImportCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
+void addExportCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
+void addDemoCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
+void addRanksCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
+void addMatrixCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
+void addMetricsCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
+
+} // namespace hierloom::cli

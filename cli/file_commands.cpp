@@ -1,0 +1,123 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+// init, import, export and demo: the commands that move records in and out.
+#include "cli/commands.h"
+
+#include "core/colony_csv_export.h"
+#include "core/colony_import.h"
+#include "core/colony_store.h"
+#include "core/demo_colony.h"
+
+#include <CLI/CLI.hpp>
+
+#include <filesystem>
+#include <fstream>
+#include <ostream>
+#include <sstream>
+
+namespace hierloom::cli {
+
+using namespace hierloom::core;
+
+void addInitCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
+{
+    auto* cmd = app.add_subcommand("init", "create an empty colony file");
+    auto path = std::make_shared<std::string>();
+    cmd->add_option("COLONY_FILE", *path, "the colony file to create (.hierloom)")->required();
+    cmd->callback([&ctx, &action, path] {
+        action = [&ctx, path] {
+            ColonyStore::create(*path);
+            ctx.err << "created " << *path << "\n";
+        };
+    });
+}
+
+void addImportCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
+{
+    auto* cmd = app.add_subcommand("import", "add animals, residences and encounters from CSV files, all or nothing");
+    struct Options {
+        std::string colony;
+        ImportPaths paths;
+    };
+    auto o = std::make_shared<Options>();
+    cmd->add_option("COLONY_FILE", o->colony, "the colony file to add to")->required();
+    cmd->add_option("--animals", o->paths.animals, "animals.csv (id, sex, birth_date, mother, ...)");
+    cmd->add_option("--residences", o->paths.residences,
+                    "residences.csv (animal, group, from, to); without it new animals live in group 'main'");
+    cmd->add_option("--encounters", o->paths.encounters, "encounters.csv (date, time, winner, loser, ...)");
+    cmd->callback([&ctx, &action, o] {
+        action = [&ctx, o] {
+            if (o->paths.animals.empty() && o->paths.residences.empty() && o->paths.encounters.empty())
+                throw BadInput("import: name at least one of --animals, --residences, --encounters");
+            ColonyStore store = ColonyStore::open(o->colony);
+            const ImportPlan plan = importFiles(store, o->paths, today());
+            if (!plan.ok()) {
+                ctx.err << plan.problems.text();
+                throw BadInput("nothing was imported; " + o->colony + " is unchanged");
+            }
+            ctx.err << "imported " << plan.animals.size() << " animals, " << plan.residences.size()
+                    << " residences, " << plan.encounters.size() << " encounters into " << o->colony << "\n";
+        };
+    });
+}
+
+void addExportCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
+{
+    auto* cmd = app.add_subcommand("export", "write the colony as animals.csv, residences.csv and encounters.csv");
+    struct Options {
+        std::string colony;
+        std::string dir = ".";
+    };
+    auto o = std::make_shared<Options>();
+    cmd->add_option("COLONY_FILE", o->colony, "the colony file to read")->required();
+    cmd->add_option("--dir", o->dir, "folder to write the three files into (default: the current folder)");
+    cmd->callback([&ctx, &action, o] {
+        action = [&ctx, o] {
+            const ColonyStore store = ColonyStore::open(o->colony, ColonyStore::Mode::ReadOnly);
+            const Colony colony = store.load();
+            std::error_code ec;
+            std::filesystem::create_directories(o->dir, ec);
+            if (ec) throw BadInput("--dir: cannot create " + o->dir + ": " + ec.message());
+            auto write = [&](const char* name, void (*writer)(std::ostream&, const Colony&)) {
+                const std::filesystem::path target = std::filesystem::path(o->dir) / name;
+                CommandContext fileCtx{ctx.out, ctx.err, target.string()};
+                std::ostringstream text;
+                writer(text, colony);
+                emit(fileCtx, text.str());
+            };
+            write("animals.csv", writeAnimalsCsv);
+            write("residences.csv", writeResidencesCsv);
+            write("encounters.csv", writeEncountersCsv);
+            ctx.err << "wrote " << colony.animals.size() << " animals, " << colony.residences.size()
+                    << " residences, " << colony.encounters.size() << " encounters to " << o->dir << "\n";
+        };
+    });
+}
+
+void addDemoCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
+{
+    auto* cmd = app.add_subcommand("demo", "write the bundled demo colony (an invented macaque group) into a new colony file");
+    auto path = std::make_shared<std::string>();
+    cmd->add_option("COLONY_FILE", *path, "the colony file to create")->required();
+    cmd->callback([&ctx, &action, path] {
+        action = [&ctx, path] {
+            const Colony demoColony = generateDemoColony(demo::kDefaultSeed);
+            // Through the real import path, so the demo obeys every import rule.
+            std::ostringstream animals, residences, encounters;
+            writeAnimalsCsv(animals, demoColony);
+            writeResidencesCsv(residences, demoColony);
+            writeEncountersCsv(encounters, demoColony);
+            ImportInput input{ImportSource{"demo animals.csv", animals.str()},
+                              ImportSource{"demo residences.csv", residences.str()},
+                              ImportSource{"demo encounters.csv", encounters.str()}};
+            const ImportPlan plan = planImport({}, {}, input, today());
+            if (!plan.ok()) throw std::runtime_error("the demo colony does not import:\n" + plan.problems.text());
+            ColonyStore store = ColonyStore::create(*path);
+            store.append(plan.animals, plan.residences, plan.encounters);
+            store.setSetting("species", "rhesus macaque");
+            ctx.err << "wrote the demo colony (" << plan.animals.size() << " animals, " << plan.encounters.size()
+                    << " encounters) to " << *path << "\n";
+        };
+    });
+}
+
+} // namespace hierloom::cli

@@ -1,0 +1,55 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#pragma once
+#include "core/colony.h"
+#include "core/import_problems.h"
+
+#include <optional>
+#include <string>
+#include <vector>
+
+namespace hierloom::core {
+
+class ColonyStore;
+
+/// One import file's name (used in messages) and its whole text.
+struct ImportSource {
+    std::string name;
+    std::string text;
+};
+
+/// The files of one import; any of them may be absent.
+struct ImportInput {
+    std::optional<ImportSource> animals;
+    std::optional<ImportSource> residences;
+    std::optional<ImportSource> encounters;
+};
+
+/// What an import would add, or the problems that stop it.
+struct ImportPlan {
+    std::vector<Animal> animals;
+    std::vector<Residence> residences;
+    std::vector<Encounter> encounters;
+    ImportProblems problems;
+    bool ok() const { return problems.empty(); }
+};
+
+/// Checks import files against the colony's existing animals and residences
+/// under every rule of interfaces.md; writes nothing. `today` bounds dates.
+ImportPlan planImport(const std::vector<Animal>& existingAnimals, const std::vector<Residence>& existingResidences,
+                      const ImportInput& input, Day today);
+
+/// Paths of the files to import; empty means not given.
+struct ImportPaths {
+    std::string animals;
+    std::string residences;
+    std::string encounters;
+};
+
+/// Reads, checks and, only when every row passes, writes the files in one
+/// transaction. The returned plan lists the problems (nothing written) or what was added.
+ImportPlan importFiles(ColonyStore& store, const ImportPaths& paths, Day today);
+
+/// True when an id has 1-32 letters, digits, '_', '-' or '.'.
+bool isValidAnimalId(std::string_view id);
+
+} // namespace hierloom::core

@@ -1,0 +1,73 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#include "core/colony_schema.h"
+
+namespace hierloom::core {
+
+// Dates are stored as ISO text so that anyone opening the file with the
+// sqlite3 shell reads them directly; the CHECKs keep them in that shape.
+const char* schemaVersion1Sql()
+{
+    return R"SQL(
+CREATE TABLE animal (
+  uid         TEXT NOT NULL UNIQUE,
+  id          TEXT PRIMARY KEY NOT NULL CHECK (length(id) BETWEEN 1 AND 32 AND id NOT GLOB '*[^A-Za-z0-9_.-]*'),
+  name        TEXT NOT NULL DEFAULT '',
+  sex         TEXT NOT NULL CHECK (sex IN ('F', 'M', 'U')),
+  birth_date  TEXT CHECK (birth_date IS NULL OR birth_date GLOB '[0-9][0-9][0-9][0-9]-[0-1][0-9]-[0-3][0-9]'),
+  mother      TEXT REFERENCES animal(id) ON UPDATE CASCADE DEFERRABLE INITIALLY DEFERRED,
+  father      TEXT REFERENCES animal(id) ON UPDATE CASCADE DEFERRABLE INITIALLY DEFERRED,
+  entry_date  TEXT CHECK (entry_date IS NULL OR entry_date GLOB '[0-9][0-9][0-9][0-9]-[0-1][0-9]-[0-3][0-9]'),
+  entry_type  TEXT CHECK (entry_type IS NULL OR entry_type IN ('born', 'introduced', 'founder')),
+  exit_date   TEXT CHECK (exit_date IS NULL OR exit_date GLOB '[0-9][0-9][0-9][0-9]-[0-1][0-9]-[0-3][0-9]'),
+  exit_type   TEXT CHECK (exit_type IS NULL OR exit_type IN ('died', 'removed')),
+  CHECK (mother IS NULL OR mother <> id),
+  CHECK (father IS NULL OR father <> id),
+  CHECK ((exit_date IS NULL) = (exit_type IS NULL)),
+  CHECK (exit_date IS NULL OR entry_date IS NULL OR exit_date >= entry_date)
+);
+CREATE TABLE residence (
+  uid        TEXT NOT NULL UNIQUE,
+  animal     TEXT NOT NULL REFERENCES animal(id) ON UPDATE CASCADE ON DELETE CASCADE,
+  grp        TEXT NOT NULL CHECK (length(grp) > 0),
+  from_date  TEXT NOT NULL CHECK (from_date GLOB '[0-9][0-9][0-9][0-9]-[0-1][0-9]-[0-3][0-9]'),
+  to_date    TEXT CHECK (to_date IS NULL OR to_date >= from_date)
+);
+CREATE INDEX residence_by_animal ON residence(animal, from_date);
+CREATE TABLE encounter (
+  seq        INTEGER PRIMARY KEY,
+  uid        TEXT NOT NULL UNIQUE,
+  date       TEXT NOT NULL CHECK (date GLOB '[0-9][0-9][0-9][0-9]-[0-1][0-9]-[0-3][0-9]'),
+  time       INTEGER CHECK (time IS NULL OR time BETWEEN 0 AND 1439),
+  winner     TEXT NOT NULL REFERENCES animal(id) ON UPDATE CASCADE,
+  loser      TEXT NOT NULL REFERENCES animal(id) ON UPDATE CASCADE,
+  outcome    TEXT NOT NULL DEFAULT 'decided' CHECK (outcome IN ('decided', 'draw')),
+  behaviour  TEXT NOT NULL DEFAULT '',
+  grp        TEXT NOT NULL DEFAULT '',
+  observer   TEXT NOT NULL DEFAULT '',
+  note       TEXT NOT NULL DEFAULT '',
+  CHECK (winner <> loser)
+);
+CREATE TABLE observer (
+  name       TEXT PRIMARY KEY NOT NULL CHECK (length(name) > 0),
+  full_name  TEXT NOT NULL DEFAULT ''
+);
+CREATE TABLE behaviour_code (
+  code         TEXT PRIMARY KEY NOT NULL CHECK (length(code) > 0),
+  severity     INTEGER NOT NULL DEFAULT 1 CHECK (severity BETWEEN 0 AND 5),
+  description  TEXT NOT NULL DEFAULT ''
+);
+CREATE TABLE setting (
+  key    TEXT PRIMARY KEY NOT NULL,
+  value  TEXT NOT NULL
+);
+INSERT INTO behaviour_code(code, severity, description) VALUES
+  ('displace', 1, 'takes the place of the other, who moves away'),
+  ('avoid', 1, 'the other moves away at its approach'),
+  ('threat', 2, 'open-mouth stare, head bob or lunge without contact'),
+  ('grab', 3, 'grabs, slaps or pushes'),
+  ('chase', 3, 'chases the other'),
+  ('bite', 5, 'bites; note wounds in the note column');
+)SQL";
+}
+
+} // namespace hierloom::core

@@ -1,0 +1,438 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#include "core/colony_store.h"
+
+#include "core/colony_schema.h"
+#include "core/sqlite_statement.h"
+
+#include <sqlite3.h>
+
+#include <cstdio>
+#include <cstring>
+#include <filesystem>
+#include <fstream>
+
+namespace hierloom::core {
+
+namespace {
+
+using Kind = ColonyFileError::Kind;
+
+std::optional<std::string> dateText(const std::optional<Day>& d)
+{
+    if (!d) return std::nullopt;
+    return formatDate(*d);
+}
+
+std::optional<Day> dayOf(const std::optional<std::string>& text)
+{
+    if (!text) return std::nullopt;
+    return parseDate(*text);
+}
+
+Day requiredDay(const std::string& text, const std::string& path)
+{
+    auto d = parseDate(text);
+    if (!d) throw ColonyFileError(Kind::Damaged, path + ": holds an impossible date '" + text + "'");
+    return *d;
+}
+
+int pragmaInt(sqlite3* db, const char* sql, const std::string& path)
+{
+    sqlite3_stmt* stmt = nullptr;
+    int rc = sqlite3_prepare_v2(db, sql, -1, &stmt, nullptr);
+    if (rc != SQLITE_OK) {
+        sqlite3_finalize(stmt);
+        if ((rc & 0xFF) == SQLITE_NOTADB)
+            throw ColonyFileError(Kind::NotAColonyFile, path + ": is not a colony file (not an SQLite database)");
+        throwSqliteError(db, rc, path);
+    }
+    rc = sqlite3_step(stmt);
+    const int value = rc == SQLITE_ROW ? sqlite3_column_int(stmt, 0) : 0;
+    sqlite3_finalize(stmt);
+    if (rc != SQLITE_ROW && rc != SQLITE_DONE) {
+        if ((rc & 0xFF) == SQLITE_NOTADB)
+            throw ColonyFileError(Kind::NotAColonyFile, path + ": is not a colony file (not an SQLite database)");
+        throwSqliteError(db, rc, path);
+    }
+    return value;
+}
+
+void execOn(sqlite3* db, const char* sql, const std::string& context)
+{
+    char* msg = nullptr;
+    const int rc = sqlite3_exec(db, sql, nullptr, nullptr, &msg);
+    if (rc != SQLITE_OK) {
+        const std::string text = msg ? msg : sqlite3_errstr(rc);
+        sqlite3_free(msg);
+        if ((rc & 0xFF) == SQLITE_BUSY || (rc & 0xFF) == SQLITE_LOCKED)
+            throwSqliteError(db, rc, context);
+        throw ColonyFileError((rc & 0xFF) == SQLITE_CORRUPT ? Kind::Damaged : Kind::Io, context + ": " + text);
+    }
+}
+
+void configureConnection(sqlite3* db, const std::string& path)
+{
+    sqlite3_busy_timeout(db, 5000);
+    sqlite3_extended_result_codes(db, 1);
+    execOn(db, "PRAGMA foreign_keys = ON", path);
+    // FULL: a committed line survives a power cut, not only a crash.
+    execOn(db, "PRAGMA synchronous = FULL", path);
+}
+
+// Checks the first bytes before SQLite sees the file, so that an empty or
+// foreign file gets a plain message and is never modified.
+void checkHeader(const std::string& path)
+{
+    std::error_code ec;
+    if (!std::filesystem::exists(path, ec))
+        throw ColonyFileError(Kind::Missing, path + ": no such colony file");
+    if (std::filesystem::is_directory(path, ec))
+        throw ColonyFileError(Kind::NotAColonyFile, path + ": is a folder, not a colony file");
+    const auto size = std::filesystem::file_size(path, ec);
+    if (ec) throw ColonyFileError(Kind::Io, path + ": cannot be read: " + ec.message());
+    if (size == 0) throw ColonyFileError(Kind::NotAColonyFile, path + ": is empty, not a colony file");
+    std::ifstream in(path, std::ios::binary);
+    char head[16] = {};
+    in.read(head, sizeof head);
+    if (in.gcount() < 16 || std::memcmp(head, "SQLite format 3", 16) != 0)
+        throw ColonyFileError(Kind::NotAColonyFile, path + ": is not a colony file (not an SQLite database)");
+    if (size < 512)
+        throw ColonyFileError(Kind::Damaged, path + ": is damaged (shorter than one database page)");
+}
+
+} // namespace
+
+ColonyStore ColonyStore::create(const std::string& path)
+{
+    std::error_code ec;
+    if (std::filesystem::exists(path, ec))
+        throw ColonyFileError(Kind::AlreadyExists, path + ": already exists; choose another name");
+    sqlite3* db = nullptr;
+    const int rc = sqlite3_open_v2(path.c_str(), &db, SQLITE_OPEN_READWRITE | SQLITE_OPEN_CREATE, nullptr);
+    if (rc != SQLITE_OK) {
+        const std::string msg = db ? sqlite3_errmsg(db) : sqlite3_errstr(rc);
+        sqlite3_close(db);
+        throw ColonyFileError(Kind::Io, path + ": cannot be created: " + msg);
+    }
+    ColonyStore store(db, path);
+    configureConnection(db, path);
+    store.exec("PRAGMA journal_mode = WAL");
+    store.exec("BEGIN IMMEDIATE");
+    try {
+        store.exec(schemaVersion1Sql());
+        store.exec(("PRAGMA application_id = " + std::to_string(colonyApplicationId)).c_str());
+        store.exec(("PRAGMA user_version = " + std::to_string(currentSchemaVersion)).c_str());
+        store.exec("COMMIT");
+    } catch (...) {
+        sqlite3_exec(db, "ROLLBACK", nullptr, nullptr, nullptr);
+        throw;
+    }
+    return store;
+}
+
+int probeColonyFile(const std::string& path)
+{
+    checkHeader(path);
+    sqlite3* db = nullptr;
+    const int rc = sqlite3_open_v2(path.c_str(), &db, SQLITE_OPEN_READONLY, nullptr);
+    if (rc != SQLITE_OK) {
+        sqlite3_close(db);
+        throw ColonyFileError(Kind::Io, path + ": cannot be opened");
+    }
+    int version = 0;
+    try {
+        sqlite3_busy_timeout(db, 5000);
+        const int appId = pragmaInt(db, "PRAGMA application_id", path);
+        version = pragmaInt(db, "PRAGMA user_version", path);
+        pragmaInt(db, "SELECT count(*) FROM sqlite_schema", path);
+        if (appId != colonyApplicationId)
+            throw ColonyFileError(Kind::NotAColonyFile,
+                                  path + ": is an SQLite database of another program, not a colony file");
+    } catch (...) {
+        sqlite3_close(db);
+        throw;
+    }
+    sqlite3_close(db);
+    return version;
+}
+
+ColonyStore ColonyStore::open(const std::string& path, Mode mode)
+{
+    const int version = probeColonyFile(path);
+    if (version > currentSchemaVersion)
+        throw ColonyFileError(Kind::NewerVersion,
+                              path + ": was written by a newer Hierloom (file version " + std::to_string(version) +
+                                  ", this program reads up to " + std::to_string(currentSchemaVersion) +
+                                  "); update the program to open it");
+    sqlite3* db = nullptr;
+    const int flags = mode == Mode::ReadOnly ? SQLITE_OPEN_READONLY : SQLITE_OPEN_READWRITE;
+    const int rc = sqlite3_open_v2(path.c_str(), &db, flags, nullptr);
+    if (rc != SQLITE_OK) {
+        const std::string msg = db ? sqlite3_errmsg(db) : sqlite3_errstr(rc);
+        sqlite3_close(db);
+        throw ColonyFileError(Kind::Io, path + ": cannot be opened: " + msg);
+    }
+    ColonyStore store(db, path);
+    configureConnection(db, path);
+    if (version < currentSchemaVersion) {
+        if (mode == Mode::ReadOnly)
+            throw ColonyFileError(Kind::NewerVersion, path + ": uses an older file version (" + std::to_string(version) +
+                                                          "); open it once for writing to update it");
+        store.migrate(version);
+    }
+    return store;
+}
+
+void ColonyStore::migrate(int fromVersion)
+{
+    // Keep a consistent copy of the file as it was, before anything changes.
+    const std::string backup = path_ + ".v" + std::to_string(fromVersion) + ".bak";
+    sqlite3* dest = nullptr;
+    if (sqlite3_open(backup.c_str(), &dest) == SQLITE_OK) {
+        sqlite3_backup* b = sqlite3_backup_init(dest, "main", db_, "main");
+        if (b) {
+            sqlite3_backup_step(b, -1);
+            sqlite3_backup_finish(b);
+        }
+    }
+    const int brc = sqlite3_errcode(dest);
+    sqlite3_close(dest);
+    if (brc != SQLITE_OK) throw ColonyFileError(Kind::Io, backup + ": the backup before updating the file failed");
+
+    exec("BEGIN IMMEDIATE");
+    try {
+        // Each step takes the file from version v to v + 1.
+        for (int v = fromVersion; v < currentSchemaVersion; ++v) {
+            if (v == 0) {
+                // Version 0: a file stamped as a colony file but without tables.
+                exec(schemaVersion1Sql());
+            }
+            exec(("PRAGMA user_version = " + std::to_string(v + 1)).c_str());
+        }
+        exec("COMMIT");
+    } catch (...) {
+        sqlite3_exec(db_, "ROLLBACK", nullptr, nullptr, nullptr);
+        throw;
+    }
+    exec("PRAGMA journal_mode = WAL");
+}
+
+ColonyStore::ColonyStore(ColonyStore&& other) noexcept : db_(other.db_), path_(std::move(other.path_))
+{
+    other.db_ = nullptr;
+}
+
+ColonyStore& ColonyStore::operator=(ColonyStore&& other) noexcept
+{
+    if (this != &other) {
+        sqlite3_close(db_);
+        db_ = other.db_;
+        path_ = std::move(other.path_);
+        other.db_ = nullptr;
+    }
+    return *this;
+}
+
+ColonyStore::~ColonyStore() { sqlite3_close(db_); }
+
+void ColonyStore::exec(const char* sql) const { execOn(db_, sql, path_); }
+
+int ColonyStore::schemaVersion() const { return pragmaInt(db_, "PRAGMA user_version", path_); }
+
+std::vector<Animal> ColonyStore::loadAnimals() const
+{
+    SqliteStatement q(db_, "SELECT uid, id, name, sex, birth_date, mother, father, entry_date, entry_type, "
+                           "exit_date, exit_type FROM animal ORDER BY id");
+    std::vector<Animal> out;
+    while (q.step()) {
+        Animal a;
+        a.uid = q.text(0);
+        a.id = q.text(1);
+        a.name = q.text(2);
+        a.sex = parseSex(q.text(3)).value_or(Sex::Unknown);
+        a.birth = dayOf(q.optionalText(4));
+        a.mother = q.text(5);
+        a.father = q.text(6);
+        a.entry = dayOf(q.optionalText(7));
+        a.entryType = parseEntryType(q.text(8)).value_or(EntryType::None);
+        a.exit = dayOf(q.optionalText(9));
+        a.exitType = parseExitType(q.text(10)).value_or(ExitType::None);
+        out.push_back(std::move(a));
+    }
+    return out;
+}
+
+std::vector<Residence> ColonyStore::loadResidences() const
+{
+    SqliteStatement q(db_, "SELECT uid, animal, grp, from_date, to_date FROM residence ORDER BY animal, from_date");
+    std::vector<Residence> out;
+    while (q.step()) {
+        Residence r;
+        r.uid = q.text(0);
+        r.animal = q.text(1);
+        r.group = q.text(2);
+        r.from = requiredDay(q.text(3), path_);
+        r.to = dayOf(q.optionalText(4));
+        out.push_back(std::move(r));
+    }
+    return out;
+}
+
+std::vector<Encounter> ColonyStore::loadEncounters() const
+{
+    SqliteStatement q(db_, "SELECT seq, uid, date, time, winner, loser, outcome, behaviour, grp, observer, note "
+                           "FROM encounter ORDER BY seq");
+    std::vector<Encounter> out;
+    while (q.step()) {
+        Encounter e;
+        e.seq = q.integer(0);
+        e.uid = q.text(1);
+        e.date = requiredDay(q.text(2), path_);
+        if (!q.isNull(3)) e.time = static_cast<int>(q.integer(3));
+        e.winner = q.text(4);
+        e.loser = q.text(5);
+        e.outcome = q.text(6) == "draw" ? Outcome::Draw : Outcome::Decided;
+        e.behaviour = q.text(7);
+        e.group = q.text(8);
+        e.observer = q.text(9);
+        e.note = q.text(10);
+        out.push_back(std::move(e));
+    }
+    return out;
+}
+
+Colony ColonyStore::load() const
+{
+    Colony c;
+    c.animals = loadAnimals();
+    c.residences = loadResidences();
+    c.encounters = loadEncounters();
+    c.reindex();
+    return c;
+}
+
+std::int64_t ColonyStore::encounterCount() const
+{
+    SqliteStatement q(db_, "SELECT count(*) FROM encounter");
+    q.step();
+    return q.integer(0);
+}
+
+void ColonyStore::append(std::vector<Animal> animals, std::vector<Residence> residences,
+                         std::vector<Encounter> encounters)
+{
+    exec("BEGIN IMMEDIATE");
+    try {
+        {
+            SqliteStatement ins(db_, "INSERT INTO animal(uid, id, name, sex, birth_date, mother, father, entry_date, "
+                                     "entry_type, exit_date, exit_type) VALUES (?,?,?,?,?,?,?,?,?,?,?)");
+            for (Animal& a : animals) {
+                if (a.uid.empty()) a.uid = newUid();
+                ins.bind(1, a.uid);
+                ins.bind(2, a.id);
+                ins.bind(3, a.name);
+                ins.bind(4, toString(a.sex));
+                ins.bindOptional(5, dateText(a.birth));
+                ins.bindNullableText(6, a.mother);
+                ins.bindNullableText(7, a.father);
+                ins.bindOptional(8, dateText(a.entry));
+                ins.bindNullableText(9, toString(a.entryType));
+                ins.bindOptional(10, dateText(a.exit));
+                ins.bindNullableText(11, toString(a.exitType));
+                ins.run();
+            }
+        }
+        {
+            SqliteStatement ins(db_, "INSERT INTO residence(uid, animal, grp, from_date, to_date) VALUES (?,?,?,?,?)");
+            for (Residence& r : residences) {
+                if (r.uid.empty()) r.uid = newUid();
+                ins.bind(1, r.uid);
+                ins.bind(2, r.animal);
+                ins.bind(3, r.group);
+                ins.bind(4, formatDate(r.from));
+                ins.bindOptional(5, dateText(r.to));
+                ins.run();
+            }
+        }
+        if (!encounters.empty()) {
+            std::int64_t seq = 0;
+            {
+                SqliteStatement q(db_, "SELECT coalesce(max(seq), 0) FROM encounter");
+                q.step();
+                seq = q.integer(0);
+            }
+            SqliteStatement ins(db_, "INSERT INTO encounter(seq, uid, date, time, winner, loser, outcome, behaviour, "
+                                     "grp, observer, note) VALUES (?,?,?,?,?,?,?,?,?,?,?)");
+            for (Encounter& e : encounters) {
+                if (e.uid.empty()) e.uid = newUid();
+                e.seq = ++seq;
+                ins.bind(1, e.seq);
+                ins.bind(2, e.uid);
+                ins.bind(3, formatDate(e.date));
+                if (e.time) ins.bind(4, static_cast<std::int64_t>(*e.time));
+                else ins.bindNull(4);
+                ins.bind(5, e.winner);
+                ins.bind(6, e.loser);
+                ins.bind(7, toString(e.outcome));
+                ins.bind(8, e.behaviour);
+                ins.bind(9, e.group);
+                ins.bind(10, e.observer);
+                ins.bind(11, e.note);
+                ins.run();
+            }
+            SqliteStatement obs(db_, "INSERT OR IGNORE INTO observer(name) VALUES (?)");
+            std::string last;
+            for (const Encounter& e : encounters) {
+                if (e.observer.empty() || e.observer == last) continue;
+                last = e.observer;
+                obs.bind(1, e.observer);
+                obs.run();
+            }
+        }
+        exec("COMMIT");
+    } catch (...) {
+        sqlite3_exec(db_, "ROLLBACK", nullptr, nullptr, nullptr);
+        throw;
+    }
+}
+
+std::vector<std::string> ColonyStore::observers() const
+{
+    SqliteStatement q(db_, "SELECT name FROM observer ORDER BY name");
+    std::vector<std::string> out;
+    while (q.step()) out.push_back(q.text(0));
+    return out;
+}
+
+void ColonyStore::addObserver(const std::string& name)
+{
+    SqliteStatement q(db_, "INSERT OR IGNORE INTO observer(name) VALUES (?)");
+    q.bind(1, name);
+    q.run();
+}
+
+std::vector<ColonyStore::BehaviourCode> ColonyStore::behaviourCodes() const
+{
+    SqliteStatement q(db_, "SELECT code, severity, description FROM behaviour_code ORDER BY severity, code");
+    std::vector<BehaviourCode> out;
+    while (q.step()) out.push_back({q.text(0), static_cast<int>(q.integer(1)), q.text(2)});
+    return out;
+}
+
+std::string ColonyStore::setting(const std::string& key, const std::string& fallback) const
+{
+    SqliteStatement q(db_, "SELECT value FROM setting WHERE key = ?");
+    q.bind(1, key);
+    return q.step() ? q.text(0) : fallback;
+}
+
+void ColonyStore::setSetting(const std::string& key, const std::string& value)
+{
+    SqliteStatement q(db_, "INSERT INTO setting(key, value) VALUES (?, ?) "
+                           "ON CONFLICT(key) DO UPDATE SET value = excluded.value");
+    q.bind(1, key);
+    q.bind(2, value);
+    q.run();
+}
+
+} // namespace hierloom::core

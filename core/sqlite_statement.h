@@ -1,0 +1,47 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#pragma once
+#include <cstdint>
+#include <optional>
+#include <string>
+#include <string_view>
+
+struct sqlite3;
+struct sqlite3_stmt;
+
+namespace hierloom::core {
+
+/// A prepared SQLite statement that finalises itself; errors become
+/// ColonyFileError carrying SQLite's message.
+class SqliteStatement {
+public:
+    SqliteStatement(sqlite3* db, const char* sql);
+    ~SqliteStatement();
+    SqliteStatement(const SqliteStatement&) = delete;
+    SqliteStatement& operator=(const SqliteStatement&) = delete;
+
+    void bind(int index, std::string_view text);
+    void bindOptional(int index, const std::optional<std::string>& text);
+    void bindNullableText(int index, std::string_view text); // empty -> NULL
+    void bind(int index, std::int64_t value);
+    void bindNull(int index);
+
+    /// Steps once: true when a row is available.
+    bool step();
+    /// Steps a statement that returns no rows and resets it for reuse.
+    void run();
+    void reset();
+
+    std::string text(int column) const;
+    std::optional<std::string> optionalText(int column) const;
+    std::int64_t integer(int column) const;
+    bool isNull(int column) const;
+
+private:
+    sqlite3* db_;
+    sqlite3_stmt* stmt_ = nullptr;
+};
+
+/// Throws ColonyFileError for an SQLite result code that is not OK.
+void throwSqliteError(sqlite3* db, int rc, const std::string& context);
+
+} // namespace hierloom::core
