@@ -23,7 +23,7 @@ std::optional<hierloom::core::Day> optionDate(const std::string& text, const cha
 {
     if (text.empty()) return std::nullopt;
     auto d = hierloom::core::parseDate(text);
-    if (!d) throw BadInput(std::string(option) + ": '" + text + "' is not a real date in the form YYYY-MM-DD");
+    if (!d) throw BadInputError(std::string(option) + ": '" + text + "' is not a real date in the form YYYY-MM-DD");
     return d;
 }
 
@@ -37,14 +37,14 @@ void emit(CommandContext& ctx, const std::string& text)
     const std::string tmp = ctx.outFile + ".part";
     {
         std::ofstream f(tmp, std::ios::binary | std::ios::trunc);
-        if (!f) throw BadInput("--out: cannot write " + ctx.outFile);
+        if (!f) throw BadInputError("--out: cannot write " + ctx.outFile);
         f << text;
         f.flush();
-        if (!f) throw BadInput("--out: writing " + ctx.outFile + " failed (disk full?)");
+        if (!f) throw BadInputError("--out: writing " + ctx.outFile + " failed (disk full?)");
     }
     std::error_code ec;
     std::filesystem::rename(tmp, ctx.outFile, ec);
-    if (ec) throw BadInput("--out: cannot write " + ctx.outFile + ": " + ec.message());
+    if (ec) throw BadInputError("--out: cannot write " + ctx.outFile + ": " + ec.message());
 }
 
 } // namespace hierloom::cli

@@ -14,7 +14,7 @@ class App;
 namespace hierloom::cli {
 
 /// A mistake in the command line or its input, reported with exit status 2.
-class BadInput : public std::runtime_error {
+class BadInputError : public std::runtime_error {
 public:
     using std::runtime_error::runtime_error;
 };

@@ -47,7 +47,7 @@ int run(int argc, const char* const* argv, std::ostream& out, std::ostream& err)
     try {
         if (action) action();
         return Success;
-    } catch (const BadInput& e) {
+    } catch (const BadInputError& e) {
         err << "hierloom-cli: " << e.what() << "\n";
         return BadInput;
     } catch (const core::ColonyFileError& e) {

@@ -47,12 +47,12 @@ void addImportCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
     cmd->callback([&ctx, &action, o] {
         action = [&ctx, o] {
             if (o->paths.animals.empty() && o->paths.residences.empty() && o->paths.encounters.empty())
-                throw BadInput("import: name at least one of --animals, --residences, --encounters");
+                throw BadInputError("import: name at least one of --animals, --residences, --encounters");
             ColonyStore store = ColonyStore::open(o->colony);
             const ImportPlan plan = importFiles(store, o->paths, today());
             if (!plan.ok()) {
                 ctx.err << plan.problems.text();
-                throw BadInput("nothing was imported; " + o->colony + " is unchanged");
+                throw BadInputError("nothing was imported; " + o->colony + " is unchanged");
             }
             ctx.err << "imported " << plan.animals.size() << " animals, " << plan.residences.size()
                     << " residences, " << plan.encounters.size() << " encounters into " << o->colony << "\n";
@@ -76,7 +76,7 @@ void addExportCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
             const Colony colony = store.load();
             std::error_code ec;
             std::filesystem::create_directories(o->dir, ec);
-            if (ec) throw BadInput("--dir: cannot create " + o->dir + ": " + ec.message());
+            if (ec) throw BadInputError("--dir: cannot create " + o->dir + ": " + ec.message());
             auto write = [&](const char* name, void (*writer)(std::ostream&, const Colony&)) {
                 const std::filesystem::path target = std::filesystem::path(o->dir) / name;
                 CommandContext fileCtx{ctx.out, ctx.err, target.string()};

@@ -1,0 +1,188 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+// ranks, matrix and metrics: the hierarchy figures of methods.md as CSV.
+#include "cli/colony_loading.h"
+#include "cli/commands.h"
+
+#include "core/hierarchy_metrics.h"
+#include "core/number_format.h"
+#include "core/parallel_randomisation.h"
+#include "core/rank_table.h"
+#include "core/win_matrix.h"
+
+#include <CLI/CLI.hpp>
+
+#include <ostream>
+#include <sstream>
+
+namespace hierloom::cli {
+
+using namespace hierloom::core;
+
+namespace {
+
+struct RanksOptions {
+    std::string colony;
+    WindowOptions window;
+    std::string method = "elo";
+    std::string at;
+    double k = 100;
+    double start = 1000;
+    std::string curve = "logistic";
+    bool optimiseK = false;
+    int randomise = 0;
+    std::uint64_t seed = 1;
+    bool corrected = false;
+    std::string every;
+    unsigned threads = 0;
+};
+
+void runRanks(CommandContext& ctx, const RanksOptions& o)
+{
+    const LoadedColony loaded = loadColony(o.colony);
+    const SelectionOptions sel = selectionOf(o.window, loaded);
+    RankOptions r;
+    r.method = *parseRankMethod(o.method);
+    r.elo.k = o.k;
+    r.elo.start = o.start;
+    r.elo.curve = o.curve == "normal" ? EloCurve::Normal : EloCurve::Logistic;
+    r.at = optionDate(o.at, "--at");
+    r.optimiseK = o.optimiseK;
+    r.randomise = o.randomise;
+    r.seed = o.seed;
+    r.correctedDs = o.corrected;
+    r.threads = o.threads;
+    if (r.method != RankMethod::Elo && (r.at || o.optimiseK || o.randomise > 0))
+        throw BadInputError("--at, --optimise-k and --randomise go with --method elo");
+    if (r.method != RankMethod::DavidsScore && o.corrected) throw BadInputError("--corrected goes with --method ds");
+    std::ostringstream out;
+    if (!o.every.empty()) {
+        if (r.at || o.randomise > 0) throw BadInputError("--every cannot be combined with --at or --randomise");
+        out << "period_start,period_end,animal,rank,score\n";
+        for (const PeriodRankRow& p : computeRanksByPeriod(loaded.colony, loaded.where, sel, r, *parsePeriodLength(o.every)))
+            out << formatDate(p.period.start) << ',' << formatDate(p.period.end) << ',' << csvField(p.row.animal) << ','
+                << p.row.rank << ',' << formatNumber(p.row.score) << '\n';
+        emit(ctx, out.str());
+        return;
+    }
+    const RankTable table = computeRanks(loaded.colony, loaded.where, sel, r);
+    if (table.rows.empty()) ctx.err << "hierloom-cli: no animal could be ranked in this window\n";
+    if (r.method == RankMethod::Elo && table.kUsed)
+        ctx.err << "elo: k = " << formatNumber(*table.kUsed) << (o.optimiseK ? " (optimised)" : "")
+                << ", ranked among animals resident on " << (table.rankedOn ? formatDate(*table.rankedOn) : "-") << "\n";
+    out << "animal,rank,score";
+    if (o.randomise > 0) out << ",rating_low,rating_high,mean_rank";
+    out << '\n';
+    for (const RankRow& row : table.rows) {
+        out << csvField(row.animal) << ',' << row.rank << ',' << formatNumber(row.score);
+        if (o.randomise > 0)
+            out << ',' << formatNumber(row.low) << ',' << formatNumber(row.high) << ',' << formatNumber(row.meanRank);
+        out << '\n';
+    }
+    emit(ctx, out.str());
+}
+
+} // namespace
+
+void addRanksCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
+{
+    auto* cmd = app.add_subcommand("ranks", "rank the animals by Elo rating, David's score or I&SI");
+    auto o = std::make_shared<RanksOptions>();
+    cmd->add_option("COLONY_FILE", o->colony, "the colony file")->required();
+    addWindowOptions(*cmd, o->window);
+    cmd->add_option("--method", o->method, "elo, ds (David's score) or isi (default: elo)")
+        ->check(CLI::IsMember({"elo", "ds", "isi"}));
+    cmd->add_option("--at", o->at, "elo: ratings at this date, ranked among the animals resident that day");
+    cmd->add_option("--k", o->k, "elo: the k factor (default: 100)")->check(CLI::Range(0.0, 100000.0));
+    cmd->add_option("--start", o->start, "elo: every animal's start rating (default: 1000)");
+    cmd->add_option("--curve", o->curve, "elo: logistic or normal expectation (default: logistic)")
+        ->check(CLI::IsMember({"logistic", "normal"}));
+    cmd->add_flag("--optimise-k", o->optimiseK, "elo: use the maximum-likelihood k (Foerster et al. 2016)");
+    cmd->add_option("--randomise", o->randomise, "elo: randomised Elo over N random orders (default: off)")
+        ->check(CLI::Range(1, 1000000));
+    cmd->add_option("--seed", o->seed, "seed of --randomise (default: 1)");
+    cmd->add_flag("--corrected", o->corrected, "ds: use the dyadic index corrected for chance (D) instead of P");
+    cmd->add_option("--every", o->every, "a long table per day, week, month or year")
+        ->check(CLI::IsMember({"day", "week", "month", "year"}));
+    cmd->add_option("--out", ctx.outFile, "write the CSV to this file instead of standard output");
+    cmd->add_option("--threads", o->threads, "threads for randomisations (default: every core)");
+    cmd->callback([&ctx, &action, o] { action = [&ctx, o] { runRanks(ctx, *o); }; });
+}
+
+void addMatrixCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
+{
+    auto* cmd = app.add_subcommand("matrix", "the win matrix (sociomatrix): rows are winners, columns losers");
+    struct Options {
+        std::string colony;
+        WindowOptions window;
+        std::string order = "isi";
+    };
+    auto o = std::make_shared<Options>();
+    cmd->add_option("COLONY_FILE", o->colony, "the colony file")->required();
+    addWindowOptions(*cmd, o->window);
+    cmd->add_option("--order", o->order, "order of rows and columns: elo, ds, isi or id (default: isi)")
+        ->check(CLI::IsMember({"elo", "ds", "isi", "id"}));
+    cmd->add_option("--out", ctx.outFile, "write the CSV to this file instead of standard output");
+    cmd->callback([&ctx, &action, o] {
+        action = [&ctx, o] {
+            const LoadedColony loaded = loadColony(o->colony);
+            const SelectionOptions sel = selectionOf(o->window, loaded);
+            const EncounterSelection s = selectEncounters(loaded.colony, loaded.where, sel);
+            std::vector<int> order;
+            if (o->order == "id") {
+                for (int i = 0; i < s.size(); ++i) order.push_back(i);
+            } else {
+                order = orderByMethod(s, *parseRankMethod(o->order), sel.draws);
+            }
+            const WinMatrix m = WinMatrix::fromBouts(s.size(), s.bouts, sel.draws);
+            std::ostringstream out;
+            out << "animal";
+            for (int j : order) out << ',' << csvField(s.ids[static_cast<size_t>(j)]);
+            out << '\n';
+            for (int i : order) {
+                out << csvField(s.ids[static_cast<size_t>(i)]);
+                for (int j : order) out << ',' << (i == j ? std::string() : formatNumber(m.s(i, j)));
+                out << '\n';
+            }
+            emit(ctx, out.str());
+        };
+    });
+}
+
+void addMetricsCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
+{
+    auto* cmd = app.add_subcommand("metrics", "linearity, steepness, transitivity and other hierarchy figures");
+    struct Options {
+        std::string colony;
+        WindowOptions window;
+        int randomisations = 10000;
+        std::uint64_t seed = 1;
+        unsigned threads = 0;
+        bool residents = false;
+    };
+    auto o = std::make_shared<Options>();
+    cmd->add_option("COLONY_FILE", o->colony, "the colony file")->required();
+    addWindowOptions(*cmd, o->window);
+    cmd->add_option("--randomisations", o->randomisations, "iterations of each randomisation test (default: 10000)")
+        ->check(CLI::Range(0, 10000000));
+    cmd->add_option("--seed", o->seed, "seed of the randomisation tests (default: 1)");
+    cmd->add_option("--threads", o->threads, "threads for randomisations (default: every core)");
+    cmd->add_flag("--include-residents", o->residents,
+                  "also analyse animals resident in the window without any encounter");
+    cmd->add_option("--out", ctx.outFile, "write the CSV to this file instead of standard output");
+    cmd->callback([&ctx, &action, o] {
+        action = [&ctx, o] {
+            const LoadedColony loaded = loadColony(o->colony);
+            SelectionOptions sel = selectionOf(o->window, loaded);
+            sel.includeResidents = o->residents;
+            const EncounterSelection s = selectEncounters(loaded.colony, loaded.where, sel);
+            const unsigned threads = o->threads == 0 ? defaultThreadCount() : o->threads;
+            const HierarchyMetrics m = computeHierarchyMetrics(s, sel.draws, o->randomisations, o->seed, threads);
+            std::ostringstream out;
+            out << "metric,value\n";
+            for (const auto& [name, value] : metricRows(m)) out << name << ',' << value << '\n';
+            emit(ctx, out.str());
+        };
+    });
+}
+
+} // namespace hierloom::cli

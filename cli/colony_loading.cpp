@@ -1,0 +1,46 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#include "cli/colony_loading.h"
+
+#include "core/colony_store.h"
+
+namespace hierloom::cli {
+
+using namespace hierloom::core;
+
+LoadedColony loadColony(const std::string& path)
+{
+    const ColonyStore store = ColonyStore::open(path, ColonyStore::Mode::ReadOnly);
+    LoadedColony out;
+    out.colony = store.load();
+    out.where = ResidenceIndex(out.colony.animals, out.colony.residences);
+    return out;
+}
+
+SelectionOptions selectionOf(const WindowOptions& o, const LoadedColony& loaded)
+{
+    SelectionOptions s;
+    s.from = optionDate(o.from, "--from");
+    s.to = optionDate(o.to, "--to");
+    if (s.from && s.to && *s.from > *s.to) throw BadInputError("--from " + o.from + " is after --to " + o.to);
+    s.group = o.group;
+    if (!s.group.empty() && loaded.where.group(s.group) < 0) {
+        std::string known;
+        for (const auto& g : loaded.where.groups()) known += (known.empty() ? "" : ", ") + g;
+        throw BadInputError("--group: no group named '" + s.group + "' (groups: " + (known.empty() ? "none" : known) + ")");
+    }
+    s.draws = o.draws == "ignore" ? DrawPolicy::Ignore : DrawPolicy::Half;
+    return s;
+}
+
+std::string csvField(const std::string& text)
+{
+    if (text.find_first_of(",\"\r\n") == std::string::npos) return text;
+    std::string out = "\"";
+    for (char c : text) {
+        if (c == '"') out += '"';
+        out += c;
+    }
+    return out + "\"";
+}
+
+} // namespace hierloom::cli
