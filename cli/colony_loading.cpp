@@ -32,15 +32,4 @@ SelectionOptions selectionOf(const WindowOptions& o, const LoadedColony& loaded)
     return s;
 }
 
-std::string csvField(const std::string& text)
-{
-    if (text.find_first_of(",\"\r\n") == std::string::npos) return text;
-    std::string out = "\"";
-    for (char c : text) {
-        if (c == '"') out += '"';
-        out += c;
-    }
-    return out + "\"";
-}
-
 } // namespace hierloom::cli

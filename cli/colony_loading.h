@@ -2,6 +2,7 @@
 #pragma once
 #include "cli/command_context.h"
 #include "core/colony.h"
+#include "core/csv_writer.h"
 #include "core/encounter_selection.h"
 #include "core/residence_index.h"
 
@@ -20,8 +21,5 @@ LoadedColony loadColony(const std::string& path);
 
 /// Turns the common window options into a selection, checking them.
 core::SelectionOptions selectionOf(const WindowOptions& options, const LoadedColony& loaded);
-
-/// Quotes a CSV field when needed (RFC 4180).
-std::string csvField(const std::string& text);
 
 } // namespace hierloom::cli

@@ -10,30 +10,51 @@ namespace {
 
 std::string dateText(const std::optional<Day>& d) { return d ? formatDate(*d) : std::string(); }
 
+/// The uid column is written, last, only when the records carry uids (an
+/// exported colony does; the generated demo files do not), so that
+/// importing an export keeps every record's identity for later merges.
+template <typename Record>
+bool hasUids(const std::vector<Record>& records)
+{
+    return std::any_of(records.begin(), records.end(), [](const Record& r) { return !r.uid.empty(); });
+}
+
+std::vector<std::string> withUid(std::vector<std::string> row, bool uids, const std::string& uid)
+{
+    if (uids) row.push_back(uid);
+    return row;
+}
+
 } // namespace
 
 void writeAnimalsCsv(std::ostream& out, const Colony& colony)
 {
     CsvWriter csv(out);
-    csv.writeRow({"id", "name", "sex", "birth_date", "mother", "father", "entry_date", "entry_type",
-                  "exit_date", "exit_type"});
+    const bool uids = hasUids(colony.animals);
+    csv.writeRow(withUid({"id", "name", "sex", "birth_date", "mother", "father", "entry_date", "entry_type",
+                          "exit_date", "exit_type"},
+                         uids, "uid"));
     for (const Animal& a : colony.animals)
-        csv.writeRow({a.id, a.name, toString(a.sex), dateText(a.birth), a.mother, a.father,
-                      dateText(a.entry), toString(a.entryType), dateText(a.exit), toString(a.exitType)});
+        csv.writeRow(withUid({a.id, a.name, toString(a.sex), dateText(a.birth), a.mother, a.father,
+                              dateText(a.entry), toString(a.entryType), dateText(a.exit), toString(a.exitType)},
+                             uids, a.uid));
 }
 
 void writeResidencesCsv(std::ostream& out, const Colony& colony)
 {
     CsvWriter csv(out);
-    csv.writeRow({"animal", "group", "from", "to"});
+    const bool uids = hasUids(colony.residences);
+    csv.writeRow(withUid({"animal", "group", "from", "to"}, uids, "uid"));
     for (const Residence& r : colony.residences)
-        csv.writeRow({r.animal, r.group, formatDate(r.from), dateText(r.to)});
+        csv.writeRow(withUid({r.animal, r.group, formatDate(r.from), dateText(r.to)}, uids, r.uid));
 }
 
 void writeEncountersCsv(std::ostream& out, const Colony& colony)
 {
     CsvWriter csv(out);
-    csv.writeRow({"date", "time", "winner", "loser", "outcome", "behaviour", "group", "observer", "note"});
+    const bool uids = hasUids(colony.encounters);
+    csv.writeRow(withUid({"date", "time", "winner", "loser", "outcome", "behaviour", "group", "observer", "note"},
+                         uids, "uid"));
     // Entry order: seq ascending, ties (equal seq) kept as stored.
     std::vector<size_t> order(colony.encounters.size());
     std::iota(order.begin(), order.end(), size_t{0});
@@ -42,8 +63,9 @@ void writeEncountersCsv(std::ostream& out, const Colony& colony)
     });
     for (size_t i : order) {
         const Encounter& e = colony.encounters[i];
-        csv.writeRow({formatDate(e.date), e.time ? formatTimeOfDay(*e.time) : std::string(), e.winner, e.loser,
-                      toString(e.outcome), e.behaviour, e.group, e.observer, e.note});
+        csv.writeRow(withUid({formatDate(e.date), e.time ? formatTimeOfDay(*e.time) : std::string(), e.winner,
+                              e.loser, toString(e.outcome), e.behaviour, e.group, e.observer, e.note},
+                             uids, e.uid));
     }
 }
 

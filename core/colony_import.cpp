@@ -21,9 +21,39 @@ bool isValidAnimalId(std::string_view id)
     });
 }
 
+bool isValidUid(std::string_view u)
+{
+    if (u.size() != 36) return false;
+    for (size_t i = 0; i < u.size(); ++i) {
+        const char c = u[i];
+        if (i == 8 || i == 13 || i == 18 || i == 23) {
+            if (c != '-') return false;
+        } else if (!((c >= '0' && c <= '9') || (c >= 'a' && c <= 'f') || (c >= 'A' && c <= 'F'))) {
+            return false;
+        }
+    }
+    return true;
+}
+
 namespace {
 
 std::string quoted(std::string_view s) { return "'" + std::string(s) + "'"; }
+
+/// Checks an optional uid cell: its form, and that no record already has it.
+void checkUid(std::string_view uid, std::unordered_set<std::string>& seen, const std::string& file, int line,
+              ImportProblems& problems, std::string& out)
+{
+    if (uid.empty()) return;
+    if (!isValidUid(uid)) {
+        problems.add(file, line, "uid", quoted(uid) + " is not a record uid (36 characters: 8-4-4-4-12 hex digits)");
+        return;
+    }
+    if (!seen.insert(std::string(uid)).second) {
+        problems.add(file, line, "uid", quoted(uid) + " is already in the colony or earlier in this file");
+        return;
+    }
+    out = std::string(uid);
+}
 
 /// Reports the first non-UTF-8 line of a file; false when the text is not UTF-8.
 bool checkUtf8(const ImportSource& src, ImportProblems& problems)
@@ -91,10 +121,12 @@ std::optional<Day> dateField(std::string_view text, Day today, const std::string
 
 void planAnimals(const std::vector<Animal>& existing, const ImportSource& src, Day today, ImportPlan& plan)
 {
-    enum { Id, Name, SexCol, Birth, Mother, Father, Entry, EntryTypeCol, Exit, ExitTypeCol };
+    enum { Id, Name, SexCol, Birth, Mother, Father, Entry, EntryTypeCol, Exit, ExitTypeCol, Uid };
     CsvColumns cols({{"id", true}, {"name", false}, {"sex", true}, {"birth_date", false}, {"mother", false},
                      {"father", false}, {"entry_date", false}, {"entry_type", false}, {"exit_date", false},
-                     {"exit_type", false}});
+                     {"exit_type", false}, {"uid", false}});
+    std::unordered_set<std::string> uids;
+    for (const Animal& a : existing) uids.insert(a.uid);
     ImportProblems& P = plan.problems;
     const std::string& F = src.name;
     IdIndex existingIds;
@@ -169,7 +201,7 @@ void planAnimals(const std::vector<Animal>& existing, const ImportSource& src, D
             P.add(F, line, "exit_date", formatDate(*a.exit) + " is before the entry date " + formatDate(*a.entry));
             bad = true;
         }
-        (void)bad;
+        checkUid(cols.field(f, Uid), uids, F, line, P, a.uid);
         if (!id.empty() && !fileIds.count(id)) fileIds.emplace(std::string(id), static_cast<int>(plan.animals.size()));
         lines.push_back(line);
         plan.animals.push_back(std::move(a));
@@ -224,8 +256,10 @@ void planAnimals(const std::vector<Animal>& existing, const ImportSource& src, D
 void planResidences(const std::vector<Animal>& allAnimals, const std::vector<Residence>& existing,
                     const ImportSource& src, Day today, ImportPlan& plan)
 {
-    enum { AnimalCol, GroupCol, From, To };
-    CsvColumns cols({{"animal", true}, {"group", true}, {"from", true}, {"to", false}});
+    enum { AnimalCol, GroupCol, From, To, Uid };
+    CsvColumns cols({{"animal", true}, {"group", true}, {"from", true}, {"to", false}, {"uid", false}});
+    std::unordered_set<std::string> uids;
+    for (const Residence& r : existing) uids.insert(r.uid);
     ImportProblems& P = plan.problems;
     const std::string& F = src.name;
     IdIndex ids;
@@ -261,6 +295,7 @@ void planResidences(const std::vector<Animal>& allAnimals, const std::vector<Res
         }
         r.to = dateField(cols.field(f, To), today, F, line, "to", P, bad);
         if (from) r.from = *from;
+        checkUid(cols.field(f, Uid), uids, F, line, P, r.uid);
         if (from && r.to && *r.to < *from) {
             P.add(F, line, "to", formatDate(*r.to) + " is before from " + formatDate(*from));
             bad = true;
@@ -300,11 +335,12 @@ void planResidences(const std::vector<Animal>& allAnimals, const std::vector<Res
     });
 }
 
-void planEncounters(const ResidenceIndex& where, const ImportSource& src, Day today, ImportPlan& plan)
+void planEncounters(const ResidenceIndex& where, std::unordered_set<std::string> uids, const ImportSource& src,
+                    Day today, ImportPlan& plan)
 {
-    enum { DateCol, Time, Winner, Loser, OutcomeCol, Behaviour, GroupCol, Observer, Note };
+    enum { DateCol, Time, Winner, Loser, OutcomeCol, Behaviour, GroupCol, Observer, Note, Uid };
     CsvColumns cols({{"date", true}, {"time", false}, {"winner", true}, {"loser", true}, {"outcome", false},
-                     {"behaviour", false}, {"group", false}, {"observer", false}, {"note", false}});
+                     {"behaviour", false}, {"group", false}, {"observer", false}, {"note", false}, {"uid", false}});
     ImportProblems& P = plan.problems;
     const std::string& F = src.name;
     forEachRow(src, cols, P, [&](const std::vector<std::string_view>& f, int line) {
@@ -376,6 +412,7 @@ void planEncounters(const ResidenceIndex& where, const ImportSource& src, Day to
         e.behaviour = std::string(cols.field(f, Behaviour));
         e.observer = std::string(cols.field(f, Observer));
         e.note = std::string(cols.field(f, Note));
+        checkUid(cols.field(f, Uid), uids, F, line, P, e.uid);
         plan.encounters.push_back(std::move(e));
     });
 }
@@ -383,7 +420,7 @@ void planEncounters(const ResidenceIndex& where, const ImportSource& src, Day to
 } // namespace
 
 ImportPlan planImport(const std::vector<Animal>& existingAnimals, const std::vector<Residence>& existingResidences,
-                      const ImportInput& input, Day today)
+                      const ImportInput& input, Day today, const std::unordered_set<std::string>& encounterUids)
 {
     ImportPlan plan;
     if (input.animals) planAnimals(existingAnimals, *input.animals, today, plan);
@@ -400,7 +437,7 @@ ImportPlan planImport(const std::vector<Animal>& existingAnimals, const std::vec
         std::vector<Residence> residences = existingResidences;
         residences.insert(residences.end(), plan.residences.begin(), plan.residences.end());
         const ResidenceIndex where(all, residences);
-        planEncounters(where, *input.encounters, today, plan);
+        planEncounters(where, encounterUids, *input.encounters, today, plan);
     }
     if (!plan.ok()) {
         plan.animals.clear();
@@ -426,7 +463,12 @@ ImportPlan importFiles(ColonyStore& store, const ImportPaths& paths, Day today)
     read(paths.residences, input.residences);
     read(paths.encounters, input.encounters);
     if (!failed.ok()) return failed;
-    ImportPlan plan = planImport(store.loadAnimals(), store.loadResidences(), input, today);
+    // Encounter uids are read only when the file carries them (an export being re-imported).
+    std::unordered_set<std::string> encounterUids;
+    if (input.encounters && input.encounters->text.substr(0, input.encounters->text.find('\n')).find("uid") !=
+                                std::string::npos)
+        encounterUids = store.encounterUids();
+    ImportPlan plan = planImport(store.loadAnimals(), store.loadResidences(), input, today, encounterUids);
     if (plan.ok()) store.append(plan.animals, plan.residences, plan.encounters);
     return plan;
 }

@@ -5,6 +5,8 @@
 
 #include <optional>
 #include <string>
+#include <string_view>
+#include <unordered_set>
 #include <vector>
 
 namespace hierloom::core {
@@ -35,8 +37,10 @@ struct ImportPlan {
 
 /// Checks import files against the colony's existing animals and residences
 /// under every rule of interfaces.md; writes nothing. `today` bounds dates.
+/// `encounterUids` holds the uids of the colony's encounters, needed only
+/// when the encounters file has a uid column.
 ImportPlan planImport(const std::vector<Animal>& existingAnimals, const std::vector<Residence>& existingResidences,
-                      const ImportInput& input, Day today);
+                      const ImportInput& input, Day today, const std::unordered_set<std::string>& encounterUids = {});
 
 /// Paths of the files to import; empty means not given.
 struct ImportPaths {
@@ -48,6 +52,9 @@ struct ImportPaths {
 /// Reads, checks and, only when every row passes, writes the files in one
 /// transaction. The returned plan lists the problems (nothing written) or what was added.
 ImportPlan importFiles(ColonyStore& store, const ImportPaths& paths, Day today);
+
+/// True when a uid has the 8-4-4-4-12 hexadecimal form.
+bool isValidUid(std::string_view uid);
 
 /// True when an id has 1-32 letters, digits, '_', '-' or '.'.
 bool isValidAnimalId(std::string_view id);

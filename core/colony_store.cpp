@@ -318,6 +318,14 @@ std::int64_t ColonyStore::encounterCount() const
     return q.integer(0);
 }
 
+std::unordered_set<std::string> ColonyStore::encounterUids() const
+{
+    SqliteStatement q(db_, "SELECT uid FROM encounter");
+    std::unordered_set<std::string> out;
+    while (q.step()) out.insert(q.text(0));
+    return out;
+}
+
 void ColonyStore::append(std::vector<Animal> animals, std::vector<Residence> residences,
                          std::vector<Encounter> encounters)
 {

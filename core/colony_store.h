@@ -4,6 +4,7 @@
 #include "core/colony_file_error.h"
 
 #include <string>
+#include <unordered_set>
 #include <vector>
 
 struct sqlite3;
@@ -38,6 +39,8 @@ public:
     /// Everything: animals, residences and encounters.
     Colony load() const;
     std::int64_t encounterCount() const;
+    /// Uids of every encounter (for checking a re-imported export).
+    std::unordered_set<std::string> encounterUids() const;
 
     /// Appends validated records in one transaction; new uids are assigned
     /// to records without one and encounters get consecutive seq numbers.

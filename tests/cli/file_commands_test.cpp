@@ -1,0 +1,98 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#include "cli_test_support.h"
+#include "core/colony_store.h"
+
+#include <gtest/gtest.h>
+
+using namespace hierloom::test;
+
+TEST(CliFiles, InitCreatesAndRefusesToOverwrite)
+{
+    CliTempDir dir;
+    const std::string colony = dir.file("c.hierloom");
+    EXPECT_EQ(runCli({"init", colony}).status, 0);
+    const CliResult again = runCli({"init", colony});
+    EXPECT_EQ(again.status, 2);
+    EXPECT_NE(again.err.find("already exists"), std::string::npos);
+}
+
+TEST(CliFiles, UsageMistakesExitWithTwo)
+{
+    EXPECT_EQ(runCli({}).status, 2);
+    EXPECT_EQ(runCli({"no-such-command"}).status, 2);
+    EXPECT_EQ(runCli({"ranks"}).status, 2); // the colony file is required
+    const CliResult missing = runCli({"ranks", "/nonexistent/x.hierloom"});
+    EXPECT_EQ(missing.status, 2);
+    EXPECT_NE(missing.err.find("no such colony file"), std::string::npos);
+    EXPECT_EQ(runCli({"--help"}).status, 0);
+    EXPECT_NE(runCli({"--version"}).out.find("hierloom-cli"), std::string::npos);
+}
+
+TEST(CliFiles, BadImportIsRefusedWithLocatedMessagesAndNothingWritten)
+{
+    CliTempDir dir;
+    const std::string colony = dir.file("c.hierloom");
+    ASSERT_EQ(runCli({"init", colony}).status, 0);
+    const std::string animals = dir.write("animals.csv", "id,sex,birth_date\nA1,F,2015-01-01\nA1,F,2016-01-01\n");
+    const std::string before = CliTempDir::read(colony);
+    const CliResult r = runCli({"import", colony, "--animals", animals});
+    EXPECT_EQ(r.status, 2);
+    EXPECT_NE(r.err.find(animals + ":3: id: 'A1' appears twice (first on line 2)"), std::string::npos) << r.err;
+    EXPECT_NE(r.err.find("nothing was imported"), std::string::npos);
+    EXPECT_EQ(CliTempDir::read(colony), before);
+}
+
+TEST(CliFiles, ExportThenImportReproducesTheDemoColonyExactly)
+{
+    CliTempDir dir;
+    const std::string first = dir.file("first.hierloom");
+    ASSERT_EQ(runCli({"demo", first}).status, 0);
+    ASSERT_EQ(runCli({"export", first, "--dir", dir.file("a")}).status, 0);
+    const std::string second = dir.file("second.hierloom");
+    ASSERT_EQ(runCli({"init", second}).status, 0);
+    const CliResult imp = runCli({"import", second, "--animals", dir.file("a/animals.csv"), "--residences",
+                                  dir.file("a/residences.csv"), "--encounters", dir.file("a/encounters.csv")});
+    ASSERT_EQ(imp.status, 0) << imp.err;
+    ASSERT_EQ(runCli({"export", second, "--dir", dir.file("b")}).status, 0);
+    for (const char* name : {"animals.csv", "residences.csv", "encounters.csv"})
+        EXPECT_EQ(CliTempDir::read(dir.file(std::string("a/") + name)), CliTempDir::read(dir.file(std::string("b/") + name)))
+            << name;
+
+    using namespace hierloom::core;
+    const Colony a = ColonyStore::open(first, ColonyStore::Mode::ReadOnly).load();
+    const Colony b = ColonyStore::open(second, ColonyStore::Mode::ReadOnly).load();
+    ASSERT_EQ(a.animals.size(), b.animals.size());
+    ASSERT_EQ(a.encounters.size(), b.encounters.size());
+    ASSERT_GE(a.encounters.size(), 15000U);
+    for (size_t i = 0; i < a.animals.size(); ++i) {
+        EXPECT_EQ(a.animals[i].uid, b.animals[i].uid);
+        EXPECT_EQ(a.animals[i].mother, b.animals[i].mother);
+        EXPECT_EQ(a.animals[i].exit, b.animals[i].exit);
+    }
+    for (size_t i = 0; i < a.encounters.size(); ++i) {
+        const Encounter& x = a.encounters[i];
+        const Encounter& y = b.encounters[i];
+        ASSERT_TRUE(x.uid == y.uid && x.seq == y.seq && x.date == y.date && x.time == y.time && x.winner == y.winner &&
+                    x.loser == y.loser && x.outcome == y.outcome && x.behaviour == y.behaviour && x.group == y.group &&
+                    x.observer == y.observer && x.note == y.note)
+            << "encounter " << i;
+    }
+    // Importing the same export again is refused: the records are already there.
+    const CliResult twice = runCli({"import", second, "--encounters", dir.file("a/encounters.csv")});
+    EXPECT_EQ(twice.status, 2);
+    EXPECT_NE(twice.err.find(":2: uid:"), std::string::npos);
+}
+
+TEST(CliFiles, OutFileIsWrittenWhole)
+{
+    CliTempDir dir;
+    const std::string colony = dir.file("d.hierloom");
+    ASSERT_EQ(runCli({"demo", colony}).status, 0);
+    const CliResult r = runCli({"ranks", colony, "--out", dir.file("ranks.csv")});
+    ASSERT_EQ(r.status, 0) << r.err;
+    EXPECT_TRUE(r.out.empty());
+    const auto rows = lines(CliTempDir::read(dir.file("ranks.csv")));
+    ASSERT_GT(rows.size(), 10U);
+    EXPECT_EQ(rows[0], "animal,rank,score");
+    EXPECT_FALSE(std::filesystem::exists(dir.file("ranks.csv.part")));
+}
