@@ -27,6 +27,11 @@ int run(int argc, const char* const* argv, std::ostream& out, std::ostream& err)
     addRanksCommand(app, ctx, action);
     addMatrixCommand(app, ctx, action);
     addMetricsCommand(app, ctx, action);
+    addSexRatioCommand(app, ctx, action);
+    addMaternalRanksCommand(app, ctx, action);
+    addExportTablesCommand(app, ctx, action);
+    addInheritCommand(app, ctx, action);
+    addScenarioCommand(app, ctx, action);
     try {
         app.parse(argc, argv);
     } catch (const CLI::CallForHelp&) {

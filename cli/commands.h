@@ -17,5 +17,10 @@ void addDemoCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 void addRanksCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 void addMatrixCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 void addMetricsCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
+void addSexRatioCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
+void addMaternalRanksCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
+void addExportTablesCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
+void addInheritCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
+void addScenarioCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 
 } // namespace hierloom::cli

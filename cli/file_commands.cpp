@@ -5,7 +5,7 @@
 #include "core/colony_csv_export.h"
 #include "core/colony_import.h"
 #include "core/colony_store.h"
-#include "core/demo_colony.h"
+#include "core/demo_colony_file.h"
 
 #include <CLI/CLI.hpp>
 
@@ -100,22 +100,9 @@ void addDemoCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
     cmd->add_option("COLONY_FILE", *path, "the colony file to create")->required();
     cmd->callback([&ctx, &action, path] {
         action = [&ctx, path] {
-            const Colony demoColony = generateDemoColony(demo::kDefaultSeed);
-            // Through the real import path, so the demo obeys every import rule.
-            std::ostringstream animals, residences, encounters;
-            writeAnimalsCsv(animals, demoColony);
-            writeResidencesCsv(residences, demoColony);
-            writeEncountersCsv(encounters, demoColony);
-            ImportInput input{ImportSource{"demo animals.csv", animals.str()},
-                              ImportSource{"demo residences.csv", residences.str()},
-                              ImportSource{"demo encounters.csv", encounters.str()}};
-            const ImportPlan plan = planImport({}, {}, input, today());
-            if (!plan.ok()) throw std::runtime_error("the demo colony does not import:\n" + plan.problems.text());
-            ColonyStore store = ColonyStore::create(*path);
-            store.append(plan.animals, plan.residences, plan.encounters);
-            store.setSetting("species", "rhesus macaque");
-            ctx.err << "wrote the demo colony (" << plan.animals.size() << " animals, " << plan.encounters.size()
-                    << " encounters) to " << *path << "\n";
+            const ColonyStore store = createDemoColonyFile(*path);
+            ctx.err << "wrote the demo colony (" << store.loadAnimals().size() << " animals, "
+                    << store.encounterCount() << " encounters) to " << *path << "\n";
         };
     });
 }

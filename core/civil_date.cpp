@@ -60,10 +60,24 @@ std::optional<Day> parseDate(std::string_view s)
 
 std::string formatDate(Day d)
 {
+    // Hand-formatted: this runs once per encounter on import and export.
     const CivilDate c = civilFromDay(d);
-    char buf[16];
-    std::snprintf(buf, sizeof buf, "%04d-%02u-%02u", c.year, c.month, c.day);
-    return buf;
+    if (c.year < 0 || c.year > 9999) {
+        char buf[24];
+        std::snprintf(buf, sizeof buf, "%04d-%02u-%02u", c.year, c.month, c.day);
+        return buf;
+    }
+    std::string out(10, '-');
+    const auto y = static_cast<unsigned>(c.year);
+    out[0] = static_cast<char>('0' + y / 1000);
+    out[1] = static_cast<char>('0' + y / 100 % 10);
+    out[2] = static_cast<char>('0' + y / 10 % 10);
+    out[3] = static_cast<char>('0' + y % 10);
+    out[5] = static_cast<char>('0' + c.month / 10);
+    out[6] = static_cast<char>('0' + c.month % 10);
+    out[8] = static_cast<char>('0' + c.day / 10);
+    out[9] = static_cast<char>('0' + c.day % 10);
+    return out;
 }
 
 std::optional<int> parseTimeOfDay(std::string_view s)

@@ -341,6 +341,7 @@ void planEncounters(const ResidenceIndex& where, std::unordered_set<std::string>
     enum { DateCol, Time, Winner, Loser, OutcomeCol, Behaviour, GroupCol, Observer, Note, Uid };
     CsvColumns cols({{"date", true}, {"time", false}, {"winner", true}, {"loser", true}, {"outcome", false},
                      {"behaviour", false}, {"group", false}, {"observer", false}, {"note", false}, {"uid", false}});
+    plan.encounters.reserve(static_cast<size_t>(std::count(src.text.begin(), src.text.end(), '\n')));
     ImportProblems& P = plan.problems;
     const std::string& F = src.name;
     forEachRow(src, cols, P, [&](const std::vector<std::string_view>& f, int line) {

@@ -326,9 +326,25 @@ std::unordered_set<std::string> ColonyStore::encounterUids() const
     return out;
 }
 
-void ColonyStore::append(std::vector<Animal> animals, std::vector<Residence> residences,
-                         std::vector<Encounter> encounters)
+void ColonyStore::append(std::vector<Animal>& animals, std::vector<Residence>& residences,
+                         std::vector<Encounter>& encounters)
 {
+    // Bulk loads: a larger page cache, and the per-row foreign-key lookups of
+    // encounters replaced by one set-based check of the new rows before the
+    // commit (the per-row lookups cost half the import's time).
+    const bool bulk = encounters.size() > 10000;
+    if (bulk) {
+        exec("PRAGMA cache_size = -65536");
+        exec("PRAGMA foreign_keys = OFF");
+    }
+    struct RestoreForeignKeys {
+        const ColonyStore* store;
+        bool active;
+        ~RestoreForeignKeys()
+        {
+            if (active) sqlite3_exec(store->handle(), "PRAGMA foreign_keys = ON", nullptr, nullptr, nullptr);
+        }
+    } restore{this, bulk};
     exec("BEGIN IMMEDIATE");
     try {
         {
@@ -371,22 +387,34 @@ void ColonyStore::append(std::vector<Animal> animals, std::vector<Residence> res
             }
             SqliteStatement ins(db_, "INSERT INTO encounter(seq, uid, date, time, winner, loser, outcome, behaviour, "
                                      "grp, observer, note) VALUES (?,?,?,?,?,?,?,?,?,?,?)");
+            std::string date;
             for (Encounter& e : encounters) {
                 if (e.uid.empty()) e.uid = newUid();
                 e.seq = ++seq;
+                date = formatDate(e.date);
+                // Static binding: every bound string outlives the run() below.
                 ins.bind(1, e.seq);
-                ins.bind(2, e.uid);
-                ins.bind(3, formatDate(e.date));
+                ins.bindStatic(2, e.uid);
+                ins.bindStatic(3, date);
                 if (e.time) ins.bind(4, static_cast<std::int64_t>(*e.time));
                 else ins.bindNull(4);
-                ins.bind(5, e.winner);
-                ins.bind(6, e.loser);
-                ins.bind(7, toString(e.outcome));
-                ins.bind(8, e.behaviour);
-                ins.bind(9, e.group);
-                ins.bind(10, e.observer);
-                ins.bind(11, e.note);
+                ins.bindStatic(5, e.winner);
+                ins.bindStatic(6, e.loser);
+                ins.bindStatic(7, toString(e.outcome));
+                ins.bindStatic(8, e.behaviour);
+                ins.bindStatic(9, e.group);
+                ins.bindStatic(10, e.observer);
+                ins.bindStatic(11, e.note);
                 ins.run();
+            }
+            if (bulk) {
+                SqliteStatement check(db_, "SELECT count(*) FROM encounter WHERE seq > ? AND "
+                                           "(winner NOT IN (SELECT id FROM animal) OR loser NOT IN (SELECT id FROM animal))");
+                check.bind(1, static_cast<std::int64_t>(encounters.front().seq - 1));
+                check.step();
+                if (check.integer(0) != 0)
+                    throw ColonyFileError(Kind::Io, path_ + ": " + std::to_string(check.integer(0)) +
+                                                        " encounters name animals that are not in the colony");
             }
             SqliteStatement obs(db_, "INSERT OR IGNORE INTO observer(name) VALUES (?)");
             std::string last;

@@ -43,9 +43,13 @@ public:
     std::unordered_set<std::string> encounterUids() const;
 
     /// Appends validated records in one transaction; new uids are assigned
-    /// to records without one and encounters get consecutive seq numbers.
-    void append(std::vector<Animal> animals, std::vector<Residence> residences,
-                std::vector<Encounter> encounters);
+    /// to records without one (written back) and encounters get consecutive
+    /// seq numbers (written back).
+    void append(std::vector<Animal>& animals, std::vector<Residence>& residences, std::vector<Encounter>& encounters);
+    void append(std::vector<Animal>&& animals, std::vector<Residence>&& residences, std::vector<Encounter>&& encounters)
+    {
+        append(animals, residences, encounters);
+    }
 
     /// Observers and behaviour codes kept in the file.
     std::vector<std::string> observers() const;

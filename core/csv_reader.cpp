@@ -122,6 +122,11 @@ std::string readWholeFile(const std::string& path)
     std::FILE* f = std::fopen(path.c_str(), "rb");
     if (!f) throw std::runtime_error(path + ": cannot open: " + std::strerror(errno));
     std::string data;
+    if (std::fseek(f, 0, SEEK_END) == 0) {
+        const long size = std::ftell(f);
+        if (size > 0) data.reserve(static_cast<size_t>(size));
+        std::rewind(f);
+    }
     char buf[1 << 16];
     size_t got;
     while ((got = std::fread(buf, 1, sizeof buf, f)) > 0) data.append(buf, got);

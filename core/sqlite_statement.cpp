@@ -35,6 +35,11 @@ void SqliteStatement::bind(int index, std::string_view text)
     sqlite3_bind_text(stmt_, index, text.data(), static_cast<int>(text.size()), SQLITE_TRANSIENT);
 }
 
+void SqliteStatement::bindStatic(int index, std::string_view text)
+{
+    sqlite3_bind_text(stmt_, index, text.data(), static_cast<int>(text.size()), SQLITE_STATIC);
+}
+
 void SqliteStatement::bindOptional(int index, const std::optional<std::string>& text)
 {
     if (text) bind(index, *text);

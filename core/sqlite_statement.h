@@ -20,6 +20,8 @@ public:
     SqliteStatement& operator=(const SqliteStatement&) = delete;
 
     void bind(int index, std::string_view text);
+    /// Binds text that stays alive and unchanged until the statement is stepped (no copy).
+    void bindStatic(int index, std::string_view text);
     void bindOptional(int index, const std::optional<std::string>& text);
     void bindNullableText(int index, std::string_view text); // empty -> NULL
     void bind(int index, std::int64_t value);

@@ -1,0 +1,267 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+// sex-ratio, maternal-ranks and export-tables: maternal rank against offspring
+// sex (Trivers & Willard 1973) and the research tables, through the same core
+// table functions the desktop program shows.
+#include "cli/colony_loading.h"
+#include "cli/commands.h"
+
+#include "core/colony_store.h"
+#include "core/export_tables.h"
+#include "core/maternal_rank.h"
+#include "core/number_format.h"
+#include "core/sex_ratio_analysis.h"
+#include "core/species_profile.h"
+
+#include <CLI/CLI.hpp>
+
+#include <map>
+#include <memory>
+#include <ostream>
+
+namespace hierloom::cli {
+
+using namespace hierloom::core;
+
+namespace {
+
+/// Options shared by sex-ratio and maternal-ranks.
+struct BirthOptions {
+    std::string colony;
+    WindowOptions window;
+    std::string species;
+    int gestationDays = 0; // 0: the colony's setting
+    int maturityYears = -1; // -1: the colony's setting
+};
+
+void addBirthOptions(CLI::App& cmd, BirthOptions& o, bool exportWindow = false)
+{
+    cmd.add_option("COLONY_FILE", o.colony, "the colony file")->required();
+    const std::string also = exportWindow ? " and first day of the encounter window" : "";
+    cmd.add_option("--from", o.window.from, "first birth date counted" + also + ", YYYY-MM-DD (default: all)");
+    cmd.add_option("--to", o.window.to, "last birth date counted" + (exportWindow ? std::string(" and last day of the encounter window") : std::string()) + ", YYYY-MM-DD (default: all)");
+    cmd.add_option("--group", o.window.group,
+                   "births in this social group, mothers ranked among its females (default: every group)");
+    cmd.add_option("--draws", o.window.draws, "draws count half to each side, or are ignored (default: half)")
+        ->check(CLI::IsMember({"half", "ignore"}));
+    std::string keys;
+    for (const SpeciesProfile& p : knownSpecies()) keys += (keys.empty() ? "" : ", ") + p.key;
+    cmd.add_option("--species", o.species, "species whose defaults apply for this run: " + keys +
+                                               " (default: the colony's setting, else rhesus_macaque)");
+    cmd.add_option("--gestation-days", o.gestationDays,
+                   "gestation length in days (default: the colony's setting, else the species default)")
+        ->check(CLI::Range(1, 1000));
+    cmd.add_option("--maturity-years", o.maturityYears,
+                   "age in whole years from which females are ranked (default: the colony's setting, else the "
+                   "species default)")
+        ->check(CLI::Range(0, 50));
+}
+
+/// The colony's species settings with this run's overrides.
+SpeciesSettings speciesFor(const BirthOptions& o)
+{
+    const ColonyStore store = ColonyStore::open(o.colony, ColonyStore::Mode::ReadOnly);
+    const std::string stored = store.setting(kSpeciesSettingKey);
+    try {
+        // A species chosen for this run brings its own defaults, not the file's overrides.
+        SpeciesSettings s = o.species.empty() ? readSpeciesSettings(store) : resolveSpeciesSettings(o.species, "", "");
+        if (o.gestationDays > 0) {
+            s.gestationDays = o.gestationDays;
+            s.gestationOverridden = true;
+        }
+        if (o.maturityYears >= 0) {
+            s.maturityYears = o.maturityYears;
+            s.maturityOverridden = true;
+        }
+        return s;
+    } catch (const std::invalid_argument& e) {
+        throw BadInputError(std::string(o.species.empty() ? "the colony's species setting: " : "--species: ") +
+                            e.what());
+    }
+}
+
+MaternalRankOptions maternalOptions(const BirthOptions& o, const LoadedColony& loaded, const SpeciesSettings& s)
+{
+    const SelectionOptions sel = selectionOf(o.window, loaded); // checks dates and group
+    MaternalRankOptions m;
+    m.from = sel.from;
+    m.to = sel.to;
+    m.group = sel.group;
+    m.gestationDays = s.gestationDays;
+    m.maturityYears = s.maturityYears;
+    m.elo.draws = sel.draws;
+    return m;
+}
+
+void reportSettings(CommandContext& ctx, const char* command, const SpeciesSettings& s)
+{
+    ctx.err << command << ": species " << s.species << ", gestation " << s.gestationDays << " days"
+            << (s.gestationOverridden ? "" : " (species default)") << ", maturity " << s.maturityYears << " years"
+            << (s.maturityOverridden ? "" : " (species default)") << "\n";
+}
+
+/// Clear messages for the cases in which figures are left empty.
+void reportSexRatio(CommandContext& ctx, const std::vector<MaternalRankRow>& births, const SexRatioAnalysis& a)
+{
+    if (births.empty()) {
+        ctx.err << "sex-ratio: no births in this window; every figure is empty\n";
+        return;
+    }
+    if (a.birthsLeftOut > 0) {
+        std::map<std::string, int> reasons;
+        for (const MaternalRankRow& b : births)
+            if (b.exclusion != BirthExclusion::None) ++reasons[std::string(describe(b.exclusion))];
+        ctx.err << "sex-ratio: " << a.birthsLeftOut << " of " << births.size() << " births left out";
+        for (const auto& [why, n] : reasons) ctx.err << "; " << n << ": " << why;
+        ctx.err << " (--births FILE lists each birth and its reason)\n";
+    }
+    if (a.birthsUsed == 0) {
+        ctx.err << "sex-ratio: no birth could be used; every figure is empty\n";
+        return;
+    }
+    if (!a.fit.slope) {
+        if (a.sons == 0 || a.daughters == 0)
+            ctx.err << "sex-ratio: the offspring are all of one sex; the logistic regression is undefined\n";
+        else
+            ctx.err << "sex-ratio: the logistic regression is undefined (fewer than two births, one maternal rank "
+                       "only, or complete separation)\n";
+    }
+}
+
+void runSexRatio(CommandContext& ctx, const BirthOptions& o, const std::string& birthsFile,
+                 const std::string& thirdsFile)
+{
+    const SpeciesSettings species = speciesFor(o);
+    const LoadedColony loaded = loadColony(o.colony);
+    const std::vector<MaternalRankRow> births =
+        computeMaternalRanks(loaded.colony, loaded.where, maternalOptions(o, loaded, species));
+    const SexRatioAnalysis a = analyseSexRatio(births);
+    reportSettings(ctx, "sex-ratio", species);
+    reportSexRatio(ctx, births, a);
+    // The side files first, so a failure leaves standard output untouched.
+    auto side = [&](const std::string& path, const ExportTable& t, const char* option) {
+        if (path.empty()) return;
+        CommandContext file{ctx.out, ctx.err, path};
+        try {
+            emit(file, tableCsv(t, false));
+        } catch (const BadInputError&) {
+            throw BadInputError(std::string(option) + ": cannot write " + path);
+        }
+    };
+    side(birthsFile, maternalRankTable(births), "--births");
+    side(thirdsFile, rankThirdsTable(a), "--thirds");
+    emit(ctx, tableCsv(sexRatioTable(a), false));
+}
+
+void runMaternalRanks(CommandContext& ctx, const BirthOptions& o)
+{
+    const SpeciesSettings species = speciesFor(o);
+    const LoadedColony loaded = loadColony(o.colony);
+    const std::vector<MaternalRankRow> births =
+        computeMaternalRanks(loaded.colony, loaded.where, maternalOptions(o, loaded, species));
+    reportSettings(ctx, "maternal-ranks", species);
+    if (births.empty()) ctx.err << "maternal-ranks: no births in this window\n";
+    emit(ctx, tableCsv(maternalRankTable(births), false));
+}
+
+struct ExportTablesOptions {
+    BirthOptions births;
+    std::string dir;
+    std::string every;
+    std::vector<std::string> windows;
+    std::string method = "elo";
+    int randomisations = 0;
+    std::uint64_t seed = 1;
+    unsigned threads = 0;
+    bool spreadsheet = false;
+};
+
+CalendarPeriod parseWindow(const std::string& text)
+{
+    const auto comma = text.find(',');
+    const auto from = comma == std::string::npos ? std::nullopt : parseDate(text.substr(0, comma));
+    const auto to = comma == std::string::npos ? std::nullopt : parseDate(text.substr(comma + 1));
+    if (!from || !to || *from > *to)
+        throw BadInputError("--window: '" + text + "' is not FROM,TO with two dates YYYY-MM-DD, FROM not after TO");
+    return {*from, *to};
+}
+
+void runExportTables(CommandContext& ctx, const ExportTablesOptions& o)
+{
+    if (!o.every.empty() && !o.windows.empty()) throw BadInputError("--every and --window cannot be combined");
+    const SpeciesSettings species = speciesFor(o.births);
+    const LoadedColony loaded = loadColony(o.births.colony);
+    ResearchExportOptions r;
+    r.selection = selectionOf(o.births.window, loaded);
+    r.ranks.method = *parseRankMethod(o.method);
+    if (!o.every.empty()) r.every = parsePeriodLength(o.every);
+    for (const std::string& w : o.windows) r.windows.push_back(parseWindow(w));
+    r.randomisations = o.randomisations;
+    r.seed = o.seed;
+    r.threads = o.threads;
+    r.gestationDays = species.gestationDays;
+    r.maturityYears = species.maturityYears;
+    reportSettings(ctx, "export-tables", species);
+    const std::vector<ExportTable> tables = researchTables(loaded.colony, loaded.where, r);
+    try {
+        writeTableSet(tables, o.dir, o.spreadsheet);
+    } catch (const std::runtime_error& e) {
+        throw BadInputError(std::string("--dir: ") + e.what());
+    }
+    for (const ExportTable& t : tables)
+        ctx.err << "export-tables: wrote " << t.name << ".csv (" << t.rows.size() << " rows)\n";
+}
+
+} // namespace
+
+void addSexRatioCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
+{
+    auto* cmd = app.add_subcommand("sex-ratio", "maternal rank at conception against offspring sex "
+                                                "(Trivers & Willard 1973): logistic regression and Fisher's test");
+    auto o = std::make_shared<BirthOptions>();
+    auto births = std::make_shared<std::string>();
+    auto thirds = std::make_shared<std::string>();
+    addBirthOptions(*cmd, *o);
+    cmd->add_option("--births", *births, "also write every birth, used or left out with its reason, to this CSV file");
+    cmd->add_option("--thirds", *thirds,
+                    "also write the proportion of sons with Wilson 95 % intervals per maternal rank third to this file");
+    cmd->add_option("--out", ctx.outFile, "write the CSV to this file instead of standard output");
+    cmd->callback([&ctx, &action, o, births, thirds] {
+        action = [&ctx, o, births, thirds] { runSexRatio(ctx, *o, *births, *thirds); };
+    });
+}
+
+void addMaternalRanksCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
+{
+    auto* cmd = app.add_subcommand("maternal-ranks",
+                                   "every birth with the mother's Elo rank and relative rank at conception and at birth");
+    auto o = std::make_shared<BirthOptions>();
+    addBirthOptions(*cmd, *o);
+    cmd->add_option("--out", ctx.outFile, "write the CSV to this file instead of standard output");
+    cmd->callback([&ctx, &action, o] { action = [&ctx, o] { runMaternalRanks(ctx, *o); }; });
+}
+
+void addExportTablesCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
+{
+    auto* cmd = app.add_subcommand(
+        "export-tables", "write the research tables (ranks by period, win matrix, metrics by period, maternal ranks, "
+                         "sex ratio) as CSV files into a folder; text cells starting with = + - @ get a leading '");
+    auto o = std::make_shared<ExportTablesOptions>();
+    addBirthOptions(*cmd, o->births, true);
+    cmd->add_option("--dir", o->dir, "folder to write the tables into (created if missing)")->required();
+    cmd->add_option("--every", o->every, "periods of the rank and metrics tables: day, week, month or year "
+                                         "(default: the whole window as one period)")
+        ->check(CLI::IsMember({"day", "week", "month", "year"}));
+    cmd->add_option("--window", o->windows, "a custom period FROM,TO (repeat for several)");
+    cmd->add_option("--method", o->method, "rank method: elo, ds or isi (default: elo)")
+        ->check(CLI::IsMember({"elo", "ds", "isi"}));
+    cmd->add_option("--randomisations", o->randomisations,
+                    "iterations of each test in the metrics table (default: 0, tests skipped and their p empty)")
+        ->check(CLI::Range(0, 10000000));
+    cmd->add_option("--seed", o->seed, "seed of the randomisation tests (default: 1)");
+    cmd->add_option("--threads", o->threads, "threads for randomisations (default: every core)");
+    cmd->add_flag("--spreadsheet", o->spreadsheet,
+                  "start each file with a UTF-8 byte-order mark so spreadsheet programs read names correctly");
+    cmd->callback([&ctx, &action, o] { action = [&ctx, o] { runExportTables(ctx, *o); }; });
+}
+
+} // namespace hierloom::cli

@@ -1,0 +1,236 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#include "ui/main_window.h"
+
+#include "core/colony_file_error.h"
+#include "ui/animal_view.h"
+#include "ui/colony_document.h"
+#include "ui/encounter_view.h"
+#include "ui/import_dialog.h"
+#include "ui/welcome_panel.h"
+
+#include <QAction>
+#include <QApplication>
+#include <QCloseEvent>
+#include <QDir>
+#include <QFileDialog>
+#include <QFileInfo>
+#include <QLabel>
+#include <QLocale>
+#include <QMenuBar>
+#include <QMessageBox>
+#include <QSettings>
+#include <QStackedWidget>
+#include <QStatusBar>
+#include <QTabWidget>
+#include <QScopeGuard>
+#include <QTimer>
+
+namespace hierloom::ui {
+
+namespace {
+const char* const colonyFilter = QT_TRANSLATE_NOOP("hierloom::ui::MainWindow", "Hierloom colonies (*.hierloom);;All files (*)");
+}
+
+MainWindow::MainWindow(const QString& colonyPath, QWidget* parent)
+    : QMainWindow(parent),
+      document_(new ColonyDocument(this)),
+      stack_(new QStackedWidget(this)),
+      welcome_(new WelcomePanel(this)),
+      tabs_(new QTabWidget(this)),
+      animals_(new AnimalView(document_, this)),
+      encounters_(new EncounterView(document_, this)),
+      fileLabel_(new QLabel(this)),
+      animalCount_(new QLabel(this)),
+      encounterCount_(new QLabel(this))
+{
+    tabs_->addTab(animals_, tr("Animals"));
+    tabs_->addTab(encounters_, tr("Encounters"));
+    tabs_->setDocumentMode(true);
+    stack_->addWidget(welcome_);
+    stack_->addWidget(tabs_);
+    setCentralWidget(stack_);
+
+    statusBar()->addWidget(fileLabel_, 1);
+    statusBar()->addPermanentWidget(animalCount_);
+    statusBar()->addPermanentWidget(encounterCount_);
+
+    buildMenus();
+    connect(welcome_, &WelcomePanel::openRequested, this, [this] { openDialog(false); });
+    connect(welcome_, &WelcomePanel::newRequested, this, &MainWindow::newColonyDialog);
+    connect(document_, &ColonyDocument::changed, this, &MainWindow::refresh);
+
+    QSettings settings;
+    if (!restoreGeometry(settings.value("mainWindow/geometry").toByteArray())) resize(1200, 760);
+    restoreState(settings.value("mainWindow/state").toByteArray());
+    tabs_->setCurrentIndex(settings.value("mainWindow/view", 0).toInt());
+    refresh();
+
+    if (!colonyPath.isEmpty())
+        QTimer::singleShot(0, this, [this, colonyPath] { openColony(colonyPath); });
+}
+
+MainWindow::~MainWindow() = default;
+
+void MainWindow::buildMenus()
+{
+    QMenu* file = menuBar()->addMenu(tr("&File"));
+    QAction* create = file->addAction(tr("&New Colony..."), this, &MainWindow::newColonyDialog);
+    create->setShortcut(QKeySequence::New);
+    QAction* open = file->addAction(tr("&Open..."), this, [this] { openDialog(false); });
+    open->setShortcut(QKeySequence::Open);
+    QAction* openReadOnly = file->addAction(tr("Open &Read-Only..."), this, [this] { openDialog(true); });
+    openReadOnly->setShortcut(QKeySequence(tr("Ctrl+Shift+O")));
+    recentMenu_ = file->addMenu(tr("Open Re&cent"));
+    connect(recentMenu_, &QMenu::aboutToShow, this, &MainWindow::fillRecentMenu);
+    file->addSeparator();
+    importAction_ = file->addAction(tr("&Import CSV..."), this, &MainWindow::importCsv);
+    importAction_->setShortcut(QKeySequence(tr("Ctrl+I")));
+    file->addSeparator();
+    closeAction_ = file->addAction(tr("&Close"), this, &MainWindow::closeColony);
+    closeAction_->setShortcut(QKeySequence::Close);
+    QAction* quit = file->addAction(tr("&Quit"), qApp, &QApplication::closeAllWindows);
+    quit->setShortcut(QKeySequence::Quit);
+    quit->setMenuRole(QAction::QuitRole);
+
+    QMenu* view = menuBar()->addMenu(tr("&View"));
+    const QStringList names{tr("&Animals"), tr("&Encounters")};
+    for (int i = 0; i < names.size(); ++i) {
+        QAction* show = view->addAction(names[i], this, [this, i] { tabs_->setCurrentIndex(i); });
+        show->setShortcut(QKeySequence(Qt::CTRL | static_cast<Qt::Key>(Qt::Key_1 + i)));
+        viewActions_ << show;
+    }
+}
+
+void MainWindow::fillRecentMenu()
+{
+    recentMenu_->clear();
+    const QStringList files = recent_.list();
+    for (int i = 0; i < files.size(); ++i) {
+        const QString& path = files[i];
+        // Number the entries 1-8 so each is one key press away.
+        QAction* action = recentMenu_->addAction(tr("&%1 %2").arg(i + 1).arg(QDir::toNativeSeparators(path)));
+        connect(action, &QAction::triggered, this, [this, path] { openColony(path); });
+    }
+    if (files.isEmpty()) recentMenu_->addAction(tr("(none)"))->setEnabled(false);
+    recentMenu_->addSeparator();
+    QAction* clear = recentMenu_->addAction(tr("C&lear List"), this, [this] { recent_.clear(); });
+    clear->setEnabled(!files.isEmpty());
+}
+
+void MainWindow::reportError(const QString& title, const QString& message)
+{
+    emit errorReported(title, message);
+    QMessageBox::warning(this, title, message);
+}
+
+bool MainWindow::openColony(const QString& path, bool readOnly)
+{
+    // A large colony takes a few seconds to read; say so with the cursor.
+    QApplication::setOverrideCursor(Qt::WaitCursor);
+    const auto restoreCursor = qScopeGuard([] { QApplication::restoreOverrideCursor(); });
+    try {
+        document_->open(path, readOnly);
+    } catch (const core::ColonyFileError& error) {
+        if (error.kind() == core::ColonyFileError::Kind::Missing) recent_.remove(path);
+        reportError(tr("Cannot Open Colony"), QString::fromUtf8(error.what()));
+        return false;
+    } catch (const std::exception& error) {
+        reportError(tr("Cannot Open Colony"),
+                    tr("%1 could not be read: %2").arg(QDir::toNativeSeparators(path), QString::fromUtf8(error.what())));
+        return false;
+    }
+    recent_.add(path);
+    setLastFolder(path);
+    return true;
+}
+
+bool MainWindow::createColony(const QString& path)
+{
+    try {
+        document_->create(path);
+    } catch (const std::exception& error) {
+        reportError(tr("Cannot Create Colony"), QString::fromUtf8(error.what()));
+        return false;
+    }
+    recent_.add(path);
+    setLastFolder(path);
+    return true;
+}
+
+void MainWindow::newColonyDialog()
+{
+    // The store refuses to overwrite, so let it say so instead of asking twice.
+    QString path = QFileDialog::getSaveFileName(this, tr("New Colony"), lastFolder(), tr(colonyFilter),
+                                                nullptr, QFileDialog::DontConfirmOverwrite);
+    if (path.isEmpty()) return;
+    if (QFileInfo(path).suffix().isEmpty()) path += QStringLiteral(".hierloom");
+    createColony(path);
+}
+
+void MainWindow::openDialog(bool readOnly)
+{
+    const QString path = QFileDialog::getOpenFileName(this, readOnly ? tr("Open Colony Read-Only") : tr("Open Colony"),
+                                                      lastFolder(), tr(colonyFilter));
+    if (!path.isEmpty()) openColony(path, readOnly);
+}
+
+void MainWindow::importCsv()
+{
+    if (!document_->isOpen() || document_->isReadOnly()) return;
+    ImportDialog dialog(document_, this);
+    dialog.setStartFolder(lastFolder());
+    dialog.exec();
+    setLastFolder(dialog.startFolder());
+}
+
+void MainWindow::closeColony() { document_->close(); }
+
+void MainWindow::refresh()
+{
+    const bool open = document_->isOpen();
+    stack_->setCurrentWidget(open ? static_cast<QWidget*>(tabs_) : welcome_);
+    importAction_->setEnabled(open && !document_->isReadOnly());
+    closeAction_->setEnabled(open);
+    for (QAction* action : viewActions_) action->setEnabled(open);
+
+    const QLocale locale;
+    if (!open) {
+        setWindowTitle(tr("Hierloom"));
+        fileLabel_->setText(tr("No colony open"));
+        animalCount_->clear();
+        encounterCount_->clear();
+        return;
+    }
+    const QString name = QFileInfo(document_->path()).fileName();
+    const QString shown = document_->isReadOnly() ? tr("%1 (read-only)").arg(name) : name;
+    setWindowTitle(tr("%1 - Hierloom").arg(shown));
+    fileLabel_->setText(shown);
+    fileLabel_->setToolTip(QDir::toNativeSeparators(document_->path()));
+    const auto& colony = document_->colony();
+    animalCount_->setText(tr("Animals: %1").arg(locale.toString(static_cast<qlonglong>(colony.animals.size()))));
+    encounterCount_->setText(
+        tr("Encounters: %1").arg(locale.toString(static_cast<qlonglong>(colony.encounters.size()))));
+}
+
+QString MainWindow::lastFolder() const
+{
+    return QSettings().value("lastFolder", QDir::homePath()).toString();
+}
+
+void MainWindow::setLastFolder(const QString& fileOrFolder)
+{
+    if (fileOrFolder.isEmpty()) return;
+    const QFileInfo info(fileOrFolder);
+    QSettings().setValue("lastFolder", info.isDir() ? info.absoluteFilePath() : info.absolutePath());
+}
+
+void MainWindow::closeEvent(QCloseEvent* event)
+{
+    QSettings settings;
+    settings.setValue("mainWindow/geometry", saveGeometry());
+    settings.setValue("mainWindow/state", saveState());
+    settings.setValue("mainWindow/view", tabs_->currentIndex());
+    event->accept();
+}
+
+} // namespace hierloom::ui

@@ -1,0 +1,74 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#pragma once
+#include "ui/recent_files.h"
+
+#include <QMainWindow>
+
+class QAction;
+class QLabel;
+class QMenu;
+class QStackedWidget;
+class QTabWidget;
+
+namespace hierloom::ui {
+
+class AnimalView;
+class ColonyDocument;
+class EncounterView;
+class WelcomePanel;
+
+/// The desktop window: menus, the animal and encounter views and a status
+/// bar, assembled around one ColonyDocument. It computes nothing itself.
+class MainWindow : public QMainWindow {
+    Q_OBJECT
+public:
+    /// Opens `colonyPath` (if given) once the event loop runs.
+    explicit MainWindow(const QString& colonyPath = {}, QWidget* parent = nullptr);
+    ~MainWindow() override;
+
+    /// Opens a colony file; on failure reports the error and keeps the current one.
+    bool openColony(const QString& path, bool readOnly = false);
+    /// Creates a new colony file and opens it; reports an error on failure.
+    bool createColony(const QString& path);
+
+    ColonyDocument* document() const { return document_; }
+    AnimalView* animalView() const { return animals_; }
+    EncounterView* encounterView() const { return encounters_; }
+
+signals:
+    /// Every error shown to the person, also as a signal (for tests and logs).
+    void errorReported(const QString& title, const QString& message);
+
+protected:
+    /// Shows an error; tests override it to observe errors without a modal box.
+    virtual void reportError(const QString& title, const QString& message);
+    void closeEvent(QCloseEvent* event) override;
+
+private:
+    void buildMenus();
+    void newColonyDialog();
+    void openDialog(bool readOnly);
+    void importCsv();
+    void closeColony();
+    void refresh();
+    void fillRecentMenu();
+    QString lastFolder() const;
+    void setLastFolder(const QString& fileOrFolder);
+
+    ColonyDocument* document_;
+    RecentFiles recent_;
+    QStackedWidget* stack_;
+    WelcomePanel* welcome_;
+    QTabWidget* tabs_;
+    AnimalView* animals_;
+    EncounterView* encounters_;
+    QLabel* fileLabel_;
+    QLabel* animalCount_;
+    QLabel* encounterCount_;
+    QMenu* recentMenu_ = nullptr;
+    QAction* importAction_ = nullptr;
+    QAction* closeAction_ = nullptr;
+    QList<QAction*> viewActions_;
+};
+
+} // namespace hierloom::ui
