@@ -177,9 +177,8 @@ void runScenarioCommand(CommandContext& ctx, const std::string& colonyPath, cons
 
 void addInheritCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
 {
-    auto* cmd = app.add_subcommand(
-        "inherit",
-        "predicted (matrilineal inheritance) against observed Elo ranks of the resident mature females.\n"
+    auto* cmd = app.add_subcommand("inherit", "predicted (matrilineal inheritance) against observed ranks of the females");
+    cmd->footer(
         "Matrilines are named after their matriarch (the end of the mother links); within a line each mother\n"
         "comes directly before her daughters, youngest first by default; lines are ordered by their best\n"
         "observed rank. Females with an unknown birth date count as mature and are placed as the eldest of\n"
@@ -211,9 +210,9 @@ void addInheritCommand(CLI::App& app, CommandContext& ctx, CommandAction& action
 
 void addScenarioCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
 {
-    auto* cmd = app.add_subcommand(
-        "scenario",
-        "what-if: the predicted order after hypothetical changes read from a scenario file (docs/scenario-files.md);\n"
+    auto* cmd = app.add_subcommand("scenario", "what-if: the predicted order after removals, births, introductions, splits");
+    cmd->footer(
+        "Changes are read from a scenario file (docs/scenario-files.md);\n"
         "the colony file is never changed. CSV: group,animal,rank_before,rank_after,matriline,group_before,status\n"
         "(group: the group after the change; status: removed, new, moved, rises, falls, unchanged, joined, left).\n"
         "With --dyads: group,predicted_above,predicted_below,wins_predicted_above,wins_predicted_below,\n"

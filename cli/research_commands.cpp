@@ -215,8 +215,9 @@ void runExportTables(CommandContext& ctx, const ExportTablesOptions& o)
 
 void addSexRatioCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
 {
-    auto* cmd = app.add_subcommand("sex-ratio", "maternal rank at conception against offspring sex "
-                                                "(Trivers & Willard 1973): logistic regression and Fisher's test");
+    auto* cmd = app.add_subcommand("sex-ratio", "maternal rank at conception against offspring sex");
+    cmd->footer("Trivers & Willard (1973): logistic regression of male offspring on the mother's relative Elo rank\n"
+                "at conception, Fisher's exact test on high against low mothers, sons per rank third.");
     auto o = std::make_shared<BirthOptions>();
     auto births = std::make_shared<std::string>();
     auto thirds = std::make_shared<std::string>();
@@ -232,8 +233,7 @@ void addSexRatioCommand(CLI::App& app, CommandContext& ctx, CommandAction& actio
 
 void addMaternalRanksCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
 {
-    auto* cmd = app.add_subcommand("maternal-ranks",
-                                   "every birth with the mother's Elo rank and relative rank at conception and at birth");
+    auto* cmd = app.add_subcommand("maternal-ranks", "every birth with the mother's rank at conception and at birth");
     auto o = std::make_shared<BirthOptions>();
     addBirthOptions(*cmd, *o);
     cmd->add_option("--out", ctx.outFile, "write the CSV to this file instead of standard output");
@@ -242,9 +242,9 @@ void addMaternalRanksCommand(CLI::App& app, CommandContext& ctx, CommandAction& 
 
 void addExportTablesCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
 {
-    auto* cmd = app.add_subcommand(
-        "export-tables", "write the research tables (ranks by period, win matrix, metrics by period, maternal ranks, "
-                         "sex ratio) as CSV files into a folder; text cells starting with = + - @ get a leading '");
+    auto* cmd = app.add_subcommand("export-tables", "write the research tables as CSV files into a folder");
+    cmd->footer("Tables: ranks by period, win matrix, metrics by period, maternal ranks, sex ratio. In the files,\n"
+                "text cells starting with = + - @ get a leading ' so a spreadsheet cannot run them.");
     auto o = std::make_shared<ExportTablesOptions>();
     addBirthOptions(*cmd, o->births, true);
     cmd->add_option("--dir", o->dir, "folder to write the tables into (created if missing)")->required();
