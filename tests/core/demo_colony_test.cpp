@@ -3,6 +3,7 @@
 // (core/demo_colony.h, demo-colony/README.md) and the import rules of interfaces.md.
 #include "core/colony_csv_export.h"
 #include "core/demo_colony.h"
+#include "demo_fixture.h"
 
 #include <gtest/gtest.h>
 
@@ -13,20 +14,11 @@
 #include <sstream>
 
 using namespace hierloom::core;
+using hierloom::test::demoColony;
+using hierloom::test::facts;
 
 namespace {
 
-const Colony& demoColony()
-{
-    static const Colony c = generateDemoColony();
-    return c;
-}
-
-const DemoColonyFacts& facts()
-{
-    static const DemoColonyFacts f = demoColonyFacts();
-    return f;
-}
 
 const Animal& animal(const std::string& id)
 {

@@ -5,6 +5,7 @@
 #include "core/scenario_file.h"
 
 #include "core/demo_colony.h"
+#include "demo_fixture.h"
 #include "pedigree_test_support.h"
 
 #include <gtest/gtest.h>
@@ -13,20 +14,11 @@
 
 using namespace hierloom::core;
 using hierloom::test::PedigreeBuilder;
+using hierloom::test::demoColony;
+using hierloom::test::facts;
 
 namespace {
 
-const Colony& demoColony()
-{
-    static const Colony c = generateDemoColony();
-    return c;
-}
-
-const DemoColonyFacts& facts()
-{
-    static const DemoColonyFacts f = demoColonyFacts();
-    return f;
-}
 
 const Day kAt = dayFromCivil(2024, 5, 1);
 
