@@ -43,6 +43,22 @@ void BM_RunElo(benchmark::State& state)
 }
 BENCHMARK(BM_RunElo)->Arg(0)->Arg(1)->Unit(benchmark::kMillisecond);
 
+// The daily history: the same million bouts spread over 5,000 days (about 14
+// years), one rating vector of 200 animals kept per day.
+void BM_DailyHistory(benchmark::State& state)
+{
+    const auto bouts = randomBouts(200, 1'000'000, 1);
+    std::vector<Day> days(bouts.size());
+    for (size_t i = 0; i < days.size(); ++i) days[i] = static_cast<Day>(i * 5000 / days.size());
+    EloSettings s;
+    for (auto _ : state) {
+        auto history = eloDailyHistory(200, bouts, days, s);
+        benchmark::DoNotOptimize(history.data());
+    }
+    state.SetItemsProcessed(state.iterations() * static_cast<int64_t>(bouts.size()));
+}
+BENCHMARK(BM_DailyHistory)->Unit(benchmark::kMillisecond);
+
 void BM_RandomisedElo(benchmark::State& state)
 {
     const auto bouts = randomBouts(200, 10'000, 2);
