@@ -91,7 +91,8 @@ void addRanksCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
     addWindowOptions(*cmd, o->window);
     cmd->add_option("--method", o->method, "elo, ds (David's score) or isi (default: elo)")
         ->check(CLI::IsMember({"elo", "ds", "isi"}));
-    cmd->add_option("--at", o->at, "elo: ratings at this date, ranked among the animals resident that day");
+    cmd->add_option("--at", o->at, "elo: ratings at this date, ranked among the animals resident that day "
+                                      "(default: after the window's last encounter)");
     cmd->add_option("--k", o->k, "elo: the k factor (default: 100)")->check(CLI::Range(0.0, 100000.0));
     cmd->add_option("--start", o->start, "elo: every animal's start rating (default: 1000)");
     cmd->add_option("--curve", o->curve, "elo: logistic or normal expectation (default: logistic)")
@@ -101,7 +102,7 @@ void addRanksCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
         ->check(CLI::Range(1, 1000000));
     cmd->add_option("--seed", o->seed, "seed of --randomise (default: 1)");
     cmd->add_flag("--corrected", o->corrected, "ds: use the dyadic index corrected for chance (D) instead of P");
-    cmd->add_option("--every", o->every, "a long table per day, week, month or year")
+    cmd->add_option("--every", o->every, "a long table per day, week, month or year (default: one table for the whole window)")
         ->check(CLI::IsMember({"day", "week", "month", "year"}));
     cmd->add_option("--out", ctx.outFile, "write the CSV to this file instead of standard output");
     cmd->add_option("--threads", o->threads, "threads for randomisations (default: every core)");

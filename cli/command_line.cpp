@@ -2,6 +2,7 @@
 #include "cli/command_line.h"
 
 #include "cli/commands.h"
+#include "cli/option_defaults.h"
 #include "core/colony_file_error.h"
 
 #include <CLI/CLI.hpp>
@@ -32,6 +33,13 @@ int run(int argc, const char* const* argv, std::ostream& out, std::ostream& err)
     addExportTablesCommand(app, ctx, action);
     addInheritCommand(app, ctx, action);
     addScenarioCommand(app, ctx, action);
+    addStabilityCommand(app, ctx, action);
+    addReportCommand(app, ctx, action);
+    addBackupCommand(app, ctx, action);
+    addRestoreCommand(app, ctx, action);
+    addMergeCommand(app, ctx, action);
+    addHistoryCommand(app, ctx, action);
+    describeDefaults(app);
     try {
         app.parse(argc, argv);
     } catch (const CLI::CallForHelp&) {

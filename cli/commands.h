@@ -22,5 +22,11 @@ void addMaternalRanksCommand(CLI::App& app, CommandContext& ctx, CommandAction& 
 void addExportTablesCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 void addInheritCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 void addScenarioCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
+void addStabilityCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
+void addReportCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
+void addBackupCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
+void addRestoreCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
+void addMergeCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
+void addHistoryCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 
 } // namespace hierloom::cli

@@ -2,6 +2,7 @@
 // init, import, export and demo: the commands that move records in and out.
 #include "cli/commands.h"
 
+#include "core/colony_backup.h"
 #include "core/colony_csv_export.h"
 #include "core/colony_import.h"
 #include "core/colony_store.h"
@@ -9,6 +10,7 @@
 
 #include <CLI/CLI.hpp>
 
+#include <chrono>
 #include <filesystem>
 #include <fstream>
 #include <ostream>
@@ -49,6 +51,9 @@ void addImportCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
             if (o->paths.animals.empty() && o->paths.residences.empty() && o->paths.encounters.empty())
                 throw BadInputError("import: name at least one of --animals, --residences, --encounters");
             ColonyStore store = ColonyStore::open(o->colony);
+            // The scheduled backup (backup_interval_hours) is taken before the file changes.
+            if (backupIfDue(store, std::chrono::system_clock::now()))
+                ctx.err << "backed up " << o->colony << " into " << backupFolder(o->colony) << "\n";
             const ImportPlan plan = importFiles(store, o->paths, today());
             if (!plan.ok()) {
                 ctx.err << plan.problems.text();

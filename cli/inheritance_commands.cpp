@@ -190,7 +190,7 @@ void addInheritCommand(CLI::App& app, CommandContext& ctx, CommandAction& action
         ->check(CLI::IsMember({"youngest", "eldest"}));
     cmd->add_option("--maturity-years", o->maturityYears, "age in whole years from which a female is ranked (default: 4)")
         ->check(CLI::Range(0, 100));
-    cmd->add_option("--group", o->group, "rank only the females resident in this social group");
+    cmd->add_option("--group", o->group, "rank only the females resident in this social group (default: every group)");
     cmd->add_option("--matriline-order", o->matrilineOrder,
                     "explicit order of the matrilines, matriarch ids top first, comma-separated "
                     "(lines not listed follow in the observed order)");

@@ -470,7 +470,7 @@ ImportPlan importFiles(ColonyStore& store, const ImportPaths& paths, Day today)
                                 std::string::npos)
         encounterUids = store.encounterUids();
     ImportPlan plan = planImport(store.loadAnimals(), store.loadResidences(), input, today, encounterUids);
-    if (plan.ok()) store.append(plan.animals, plan.residences, plan.encounters);
+    if (plan.ok()) store.append(plan.animals, plan.residences, plan.encounters, "import of " + paths.encounters);
     return plan;
 }
 

@@ -1,6 +1,9 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "core/colony_schema.h"
 
+#include <string>
+#include <vector>
+
 namespace hierloom::core {
 
 // Dates are stored as ISO text so that anyone opening the file with the
@@ -67,6 +70,86 @@ INSERT INTO behaviour_code(code, severity, description) VALUES
   ('grab', 3, 'grabs, slaps or pushes'),
   ('chase', 3, 'chases the other'),
   ('bite', 5, 'bites; note wounds in the note column');
+)SQL";
+}
+
+namespace {
+
+struct AuditedTable {
+    const char* name;
+    std::vector<const char*> columns;
+};
+
+/// json_object('col', ROW.col, ...) for the columns of one table.
+std::string jsonOf(const AuditedTable& t, const char* row)
+{
+    std::string out = "json_object(";
+    for (size_t i = 0; i < t.columns.size(); ++i) {
+        if (i) out += ", ";
+        out += std::string("'") + t.columns[i] + "', " + row + "." + t.columns[i];
+    }
+    return out + ")";
+}
+
+std::string buildVersion2Sql()
+{
+    // `user` is left empty here and stamped by the connection's TEMP trigger
+    // (sessionSql); a change made with another tool keeps an empty user but is
+    // still recorded. Rows in audit_pause (only ever inside one bulk
+    // transaction) switch the per-row triggers off for that transaction.
+    std::string sql = R"SQL(
+CREATE TABLE audit (
+  id          INTEGER PRIMARY KEY,
+  time        TEXT NOT NULL DEFAULT (strftime('%Y-%m-%dT%H:%M:%SZ', 'now')),
+  user        TEXT NOT NULL DEFAULT '',
+  tbl         TEXT NOT NULL,
+  uid         TEXT NOT NULL DEFAULT '',
+  action      TEXT NOT NULL CHECK (action IN ('insert', 'update', 'delete', 'import', 'merge', 'restore')),
+  old_values  TEXT,
+  new_values  TEXT
+);
+CREATE INDEX audit_by_uid ON audit(uid);
+CREATE TABLE audit_pause (reason TEXT NOT NULL);
+)SQL";
+    const std::vector<AuditedTable> tables = {
+        {"animal",
+         {"uid", "id", "name", "sex", "birth_date", "mother", "father", "entry_date", "entry_type", "exit_date",
+          "exit_type"}},
+        {"residence", {"uid", "animal", "grp", "from_date", "to_date"}},
+        {"encounter",
+         {"seq", "uid", "date", "time", "winner", "loser", "outcome", "behaviour", "grp", "observer", "note"}},
+    };
+    const std::string when = " WHEN NOT EXISTS (SELECT 1 FROM audit_pause) BEGIN\n";
+    for (const AuditedTable& t : tables) {
+        const std::string n = t.name;
+        sql += "CREATE TRIGGER audit_" + n + "_insert AFTER INSERT ON " + n + when +
+               "  INSERT INTO audit(tbl, uid, action, new_values) VALUES ('" + n + "', new.uid, 'insert', " +
+               jsonOf(t, "new") + ");\nEND;\n";
+        sql += "CREATE TRIGGER audit_" + n + "_update AFTER UPDATE ON " + n + when +
+               "  INSERT INTO audit(tbl, uid, action, old_values, new_values) VALUES ('" + n + "', new.uid, 'update', " +
+               jsonOf(t, "old") + ", " + jsonOf(t, "new") + ");\nEND;\n";
+        sql += "CREATE TRIGGER audit_" + n + "_delete AFTER DELETE ON " + n + when +
+               "  INSERT INTO audit(tbl, uid, action, old_values) VALUES ('" + n + "', old.uid, 'delete', " +
+               jsonOf(t, "old") + ");\nEND;\n";
+    }
+    return sql;
+}
+
+} // namespace
+
+const char* schemaVersion2Sql()
+{
+    static const std::string sql = buildVersion2Sql();
+    return sql.c_str();
+}
+
+const char* sessionSql()
+{
+    return R"SQL(
+CREATE TEMP TABLE IF NOT EXISTS session_user (name TEXT NOT NULL);
+CREATE TEMP TRIGGER IF NOT EXISTS stamp_audit_user AFTER INSERT ON main.audit WHEN new.user = '' BEGIN
+  UPDATE audit SET user = (SELECT name FROM temp.session_user LIMIT 1) WHERE id = new.id;
+END;
 )SQL";
 }
 

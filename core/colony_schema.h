@@ -7,9 +7,20 @@ namespace hierloom::core {
 constexpr int colonyApplicationId = 0x48524C4D;
 
 /// The schema version this build writes (`PRAGMA user_version`).
-constexpr int currentSchemaVersion = 1;
+constexpr int currentSchemaVersion = 2;
 
 /// SQL creating the version-1 schema.
 const char* schemaVersion1Sql();
+
+/// SQL taking a version-1 schema to version 2: the `audit` table and the
+/// triggers that record every insert, update and delete of animals,
+/// residences and encounters (old and new values as JSON via json_object).
+const char* schemaVersion2Sql();
+
+/// SQL run on every connection to a version-2 file: the per-connection
+/// `session_user` (who is writing) and the TEMP trigger that stamps it on
+/// each new audit row. TEMP objects because a trigger stored in the file
+/// cannot read a connection's TEMP table.
+const char* sessionSql();
 
 } // namespace hierloom::core

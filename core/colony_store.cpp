@@ -6,7 +6,9 @@
 
 #include <sqlite3.h>
 
+#include <cstdint>
 #include <cstdio>
+#include <cstdlib>
 #include <cstring>
 #include <filesystem>
 #include <fstream>
@@ -98,6 +100,33 @@ void checkHeader(const std::string& path)
         throw ColonyFileError(Kind::NotAColonyFile, path + ": is not a colony file (not an SQLite database)");
     if (size < 512)
         throw ColonyFileError(Kind::Damaged, path + ": is damaged (shorter than one database page)");
+    // The header records the page count when its two change counters agree;
+    // a shorter file lost its end (a partial copy). A non-empty -wal file may
+    // legitimately finish an interrupted checkpoint, so the check is skipped then.
+    unsigned char h[100] = {};
+    in.seekg(0);
+    in.read(reinterpret_cast<char*>(h), sizeof h);
+    if (in.gcount() < 100) throw ColonyFileError(Kind::Damaged, path + ": is damaged (its header is cut short)");
+    auto be32 = [&](int at) {
+        return (std::uint32_t{h[at]} << 24) | (std::uint32_t{h[at + 1]} << 16) | (std::uint32_t{h[at + 2]} << 8) |
+               std::uint32_t{h[at + 3]};
+    };
+    const std::uint32_t rawPage = (std::uint32_t{h[16]} << 8) | h[17];
+    const std::uint64_t pageSize = rawPage == 1 ? 65536 : rawPage;
+    const std::uint64_t pages = be32(28);
+    const auto walSize = std::filesystem::file_size(path + "-wal", ec);
+    const bool walPending = !ec && walSize > 0;
+    if (!walPending && pages > 0 && be32(24) == be32(92) && pageSize >= 512 && pages * pageSize > size)
+        throw ColonyFileError(Kind::Damaged, path + ": is damaged: cut short (" + std::to_string(size) + " of " +
+                                                 std::to_string(pages * pageSize) +
+                                                 " bytes); restore it from a backup");
+}
+
+std::string defaultUserName()
+{
+    for (const char* var : {"HIERLOOM_USER", "USER", "LOGNAME"})
+        if (const char* v = std::getenv(var); v && *v) return v;
+    return "unknown";
 }
 
 } // namespace
@@ -120,6 +149,7 @@ ColonyStore ColonyStore::create(const std::string& path)
     store.exec("BEGIN IMMEDIATE");
     try {
         store.exec(schemaVersion1Sql());
+        store.exec(schemaVersion2Sql());
         store.exec(("PRAGMA application_id = " + std::to_string(colonyApplicationId)).c_str());
         store.exec(("PRAGMA user_version = " + std::to_string(currentSchemaVersion)).c_str());
         store.exec("COMMIT");
@@ -127,6 +157,7 @@ ColonyStore ColonyStore::create(const std::string& path)
         sqlite3_exec(db, "ROLLBACK", nullptr, nullptr, nullptr);
         throw;
     }
+    store.startSession();
     return store;
 }
 
@@ -180,8 +211,31 @@ ColonyStore ColonyStore::open(const std::string& path, Mode mode)
                                                           "); open it once for writing to update it");
         store.migrate(version);
     }
+    if (mode == Mode::ReadWrite) store.startSession();
     return store;
 }
+
+void ColonyStore::startSession()
+{
+    exec(sessionSql());
+    setUserName(defaultUserName());
+}
+
+void ColonyStore::setUserName(const std::string& name)
+{
+    exec("DELETE FROM temp.session_user");
+    SqliteStatement q(db_, "INSERT INTO temp.session_user(name) VALUES (?)");
+    q.bind(1, name.empty() ? std::string("unknown") : name);
+    q.run();
+}
+
+std::string ColonyStore::userName() const
+{
+    SqliteStatement q(db_, "SELECT name FROM temp.session_user LIMIT 1");
+    return q.step() ? q.text(0) : std::string();
+}
+
+void ColonyStore::setBusyTimeout(int milliseconds) { sqlite3_busy_timeout(db_, milliseconds); }
 
 void ColonyStore::migrate(int fromVersion)
 {
@@ -206,6 +260,9 @@ void ColonyStore::migrate(int fromVersion)
             if (v == 0) {
                 // Version 0: a file stamped as a colony file but without tables.
                 exec(schemaVersion1Sql());
+            } else if (v == 1) {
+                // Version 2 adds the audit trail; existing records keep no history before it.
+                exec(schemaVersion2Sql());
             }
             exec(("PRAGMA user_version = " + std::to_string(v + 1)).c_str());
         }
@@ -327,13 +384,16 @@ std::unordered_set<std::string> ColonyStore::encounterUids() const
 }
 
 void ColonyStore::append(std::vector<Animal>& animals, std::vector<Residence>& residences,
-                         std::vector<Encounter>& encounters)
+                         std::vector<Encounter>& encounters, const std::string& source)
 {
     // Bulk loads: a larger page cache, and the per-row foreign-key lookups of
     // encounters replaced by one set-based check of the new rows before the
     // commit (the per-row lookups cost half the import's time).
     const bool bulk = encounters.size() > 10000;
-    if (bulk) {
+    // Inside a caller's transaction (a merge) this append is one savepoint of it;
+    // foreign keys then stay on (the pragma is a no-op inside a transaction).
+    const bool nested = sqlite3_get_autocommit(db_) == 0;
+    if (bulk && !nested) {
         exec("PRAGMA cache_size = -65536");
         exec("PRAGMA foreign_keys = OFF");
     }
@@ -344,8 +404,8 @@ void ColonyStore::append(std::vector<Animal>& animals, std::vector<Residence>& r
         {
             if (active) sqlite3_exec(store->handle(), "PRAGMA foreign_keys = ON", nullptr, nullptr, nullptr);
         }
-    } restore{this, bulk};
-    exec("BEGIN IMMEDIATE");
+    } restore{this, bulk && !nested};
+    exec(nested ? "SAVEPOINT append_records" : "BEGIN IMMEDIATE");
     try {
         {
             SqliteStatement ins(db_, "INSERT INTO animal(uid, id, name, sex, birth_date, mother, father, entry_date, "
@@ -385,6 +445,8 @@ void ColonyStore::append(std::vector<Animal>& animals, std::vector<Residence>& r
                 q.step();
                 seq = q.integer(0);
             }
+            // One audit row for a bulk append instead of a million (see DEVELOPERS.md).
+            if (bulk) exec("INSERT INTO audit_pause(reason) VALUES ('bulk append')");
             SqliteStatement ins(db_, "INSERT INTO encounter(seq, uid, date, time, winner, loser, outcome, behaviour, "
                                      "grp, observer, note) VALUES (?,?,?,?,?,?,?,?,?,?,?)");
             std::string date;
@@ -408,6 +470,16 @@ void ColonyStore::append(std::vector<Animal>& animals, std::vector<Residence>& r
                 ins.run();
             }
             if (bulk) {
+                exec("DELETE FROM audit_pause");
+                SqliteStatement note(db_, "INSERT INTO audit(tbl, action, new_values) VALUES ('encounter', 'import', "
+                                          "json_object('source', ?, 'count', ?, 'first_seq', ?, 'last_seq', ?))");
+                note.bind(1, source);
+                note.bind(2, static_cast<std::int64_t>(encounters.size()));
+                note.bind(3, encounters.front().seq);
+                note.bind(4, encounters.back().seq);
+                note.run();
+            }
+            if (bulk && !nested) {
                 SqliteStatement check(db_, "SELECT count(*) FROM encounter WHERE seq > ? AND "
                                            "(winner NOT IN (SELECT id FROM animal) OR loser NOT IN (SELECT id FROM animal))");
                 check.bind(1, static_cast<std::int64_t>(encounters.front().seq - 1));
@@ -425,9 +497,12 @@ void ColonyStore::append(std::vector<Animal>& animals, std::vector<Residence>& r
                 obs.run();
             }
         }
-        exec("COMMIT");
+        exec(nested ? "RELEASE append_records" : "COMMIT");
     } catch (...) {
-        sqlite3_exec(db_, "ROLLBACK", nullptr, nullptr, nullptr);
+        if (nested)
+            sqlite3_exec(db_, "ROLLBACK TO append_records; RELEASE append_records", nullptr, nullptr, nullptr);
+        else
+            sqlite3_exec(db_, "ROLLBACK", nullptr, nullptr, nullptr);
         throw;
     }
 }

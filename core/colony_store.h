@@ -45,10 +45,16 @@ public:
     /// Appends validated records in one transaction; new uids are assigned
     /// to records without one (written back) and encounters get consecutive
     /// seq numbers (written back).
-    void append(std::vector<Animal>& animals, std::vector<Residence>& residences, std::vector<Encounter>& encounters);
-    void append(std::vector<Animal>&& animals, std::vector<Residence>&& residences, std::vector<Encounter>&& encounters)
+    /// Inside a transaction already open on this connection it runs as a
+    /// savepoint of that transaction. A bulk append (more than 10,000
+    /// encounters) is audited as one 'import' row naming `source` and the seq
+    /// range instead of one row per encounter.
+    void append(std::vector<Animal>& animals, std::vector<Residence>& residences, std::vector<Encounter>& encounters,
+                const std::string& source = {});
+    void append(std::vector<Animal>&& animals, std::vector<Residence>&& residences, std::vector<Encounter>&& encounters,
+                const std::string& source = {})
     {
-        append(animals, residences, encounters);
+        append(animals, residences, encounters, source);
     }
 
     /// Observers and behaviour codes kept in the file.
@@ -65,6 +71,15 @@ public:
     std::string setting(const std::string& key, const std::string& fallback = {}) const;
     void setSetting(const std::string& key, const std::string& value);
 
+    /// The name stamped on audit rows of this connection's changes (default:
+    /// the USER environment variable, else "unknown").
+    void setUserName(const std::string& name);
+    std::string userName() const;
+
+    /// How long a write waits for another program's write to finish before
+    /// failing with ColonyFileError::Kind::Busy (default 5000 ms).
+    void setBusyTimeout(int milliseconds);
+
     /// The raw handle, for the few store modules (edits, backups, merges).
     sqlite3* handle() const { return db_; }
 
@@ -74,6 +89,7 @@ public:
 private:
     ColonyStore(sqlite3* db, std::string path) : db_(db), path_(std::move(path)) {}
     void migrate(int fromVersion);
+    void startSession();
 
     sqlite3* db_ = nullptr;
     std::string path_;

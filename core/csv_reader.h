@@ -1,5 +1,6 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
+#include <deque>
 #include <string>
 #include <string_view>
 #include <vector>
@@ -30,7 +31,9 @@ private:
     int lineNo_ = 1;
     int recordLine_ = 0;
     std::string error_;
-    std::vector<std::string> scratch_;
+    // A deque: adding a buffer for a later quoted field must not move the
+    // earlier ones, whose (short-string) bytes the record's views point into.
+    std::deque<std::string> scratch_;
 };
 
 /// True when `s` is well-formed UTF-8 (no overlongs, no surrogates).

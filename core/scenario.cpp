@@ -230,6 +230,13 @@ std::vector<ScenarioProblem> checkScenario(const Colony& colony, const Scenario&
     return apply(colony, scenario).problems;
 }
 
+Colony scenarioColony(const Colony& colony, const Scenario& s)
+{
+    Applied a = apply(colony, s);
+    if (!a.problems.empty()) throw ScenarioError(std::move(a.problems));
+    return std::move(a.colony);
+}
+
 ScenarioResult runScenario(const Colony& colony, const Scenario& s)
 {
     Applied a = apply(colony, s);

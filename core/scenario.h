@@ -117,4 +117,9 @@ struct ScenarioResult {
 /// nothing is written anywhere. Throws ScenarioError when checkScenario finds problems.
 ScenarioResult runScenario(const Colony& colony, const Scenario& scenario);
 
+/// The copy of the colony with the scenario's changes applied (as runScenario
+/// sees it), for figures beyond the predicted order such as group composition.
+/// Throws ScenarioError when checkScenario finds problems.
+Colony scenarioColony(const Colony& colony, const Scenario& scenario);
+
 } // namespace hierloom::core

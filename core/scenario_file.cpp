@@ -167,6 +167,39 @@ ScenarioFileResult parseScenarioText(std::string_view text, const std::string& f
     return result;
 }
 
+std::string formatScenarioText(const Scenario& s)
+{
+    std::ostringstream out;
+    if (s.at) out << "date " << formatDate(*s.at) << "\n";
+    if (!s.group.empty()) out << "group " << s.group << "\n";
+    out << "rule " << toString(s.rule) << "\n";
+    out << "maturity " << s.maturityYears << "\n";
+    out << "window " << s.recentDays << "\n";
+    out << "newborns " << (s.newbornsAsAdults ? "adult" : "infant") << "\n";
+    if (!s.matrilineOrder.empty()) {
+        out << "matrilines";
+        for (const std::string& m : s.matrilineOrder) out << ' ' << m;
+        out << "\n";
+    }
+    for (const ScenarioChange& c : s.changes) {
+        switch (c.kind) {
+        case ScenarioChange::Kind::Remove: out << "remove " << c.animal << "\n"; break;
+        case ScenarioChange::Kind::Birth:
+            out << "birth " << c.animal << ' ' << toString(c.sex);
+            if (!c.newId.empty()) out << ' ' << c.newId;
+            out << "\n";
+            break;
+        case ScenarioChange::Kind::Introduce: out << "introduce " << c.animal << "\n"; break;
+        case ScenarioChange::Kind::Split:
+            out << "split";
+            for (const std::string& m : c.matriarchs) out << ' ' << m;
+            out << " -> " << c.toGroup << "\n";
+            break;
+        }
+    }
+    return out.str();
+}
+
 ScenarioFileResult readScenarioFile(const std::string& path, const Colony& colony)
 {
     std::ifstream in(path, std::ios::binary);

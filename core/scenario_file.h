@@ -22,6 +22,12 @@ struct ScenarioFileResult {
 /// (checkScenario), so that unknown animals are reported with their line.
 ScenarioFileResult parseScenarioText(std::string_view text, const std::string& fileName, const Colony& colony);
 
+/// Writes a scenario in the format parseScenarioText reads (docs/scenario-files.md):
+/// every setting spelled out, then the changes in order, so that parsing the text
+/// gives the same scenario back (line numbers aside). Elo settings are not part
+/// of the format and are not written.
+std::string formatScenarioText(const Scenario& scenario);
+
 /// Reads and parses a scenario file; an unreadable file is an error of the result.
 ScenarioFileResult readScenarioFile(const std::string& path, const Colony& colony);
 

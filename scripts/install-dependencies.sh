@@ -7,7 +7,9 @@ packages=(
   qt6-base-dev qt6-svg-dev libqt6svg6-dev qt6-tools-dev qt6-tools-dev-tools qt6-l10n-tools
   libqcustomplot-dev libsqlite3-dev sqlite3 libcli11-dev
   libgtest-dev libgmock-dev libbenchmark-dev
+  clang libclang-rt-14-dev
   xvfb xauth imagemagick poppler-utils
+  help2man dpkg-dev librsvg2-bin desktop-file-utils
 )
 missing=()
 for p in "${packages[@]}"; do

@@ -3,9 +3,13 @@
 
 #include "ui/qt_convert.h"
 
+#include <QUndoStack>
+
+#include <algorithm>
+
 namespace hierloom::ui {
 
-ColonyDocument::ColonyDocument(QObject* parent) : QObject(parent) {}
+ColonyDocument::ColonyDocument(QObject* parent) : QObject(parent), undoStack_(new QUndoStack(this)) {}
 
 ColonyDocument::~ColonyDocument() = default;
 
@@ -32,6 +36,8 @@ void ColonyDocument::adopt(core::ColonyStore store, const QString& path, bool re
     residences_ = std::move(residences);
     path_ = path;
     readOnly_ = readOnly;
+    undoStack_->clear();
+    lastChange_ = Change{};
     emit changed();
 }
 
@@ -42,6 +48,8 @@ void ColonyDocument::close()
     residences_ = core::ResidenceIndex{};
     path_.clear();
     readOnly_ = false;
+    undoStack_->clear();
+    lastChange_ = Change{};
     emit changed();
 }
 
@@ -52,6 +60,50 @@ void ColonyDocument::reload()
     residences_ = core::ResidenceIndex(colony.animals, colony.residences);
     colony_ = std::move(colony);
     colony_.reindex();
+    lastChange_ = Change{};
+    emit changed();
+}
+
+void ColonyDocument::reloadAnimals()
+{
+    if (!store_) return;
+    colony_.animals = store_->loadAnimals();
+    colony_.residences = store_->loadResidences();
+    colony_.reindex();
+    residences_ = core::ResidenceIndex(colony_.animals, colony_.residences);
+    lastChange_ = Change{Change::AnimalsChanged, 0};
+    emit changed();
+}
+
+void ColonyDocument::applyEncounterChange(const std::vector<core::Encounter>& removed,
+                                          const std::vector<core::Encounter>& inserted)
+{
+    // The cache is in seq order, so each record is found by binary search.
+    auto& cache = colony_.encounters;
+    const auto bySeq = [](const core::Encounter& e, std::int64_t seq) { return e.seq < seq; };
+    for (const core::Encounter& r : removed) {
+        auto it = std::lower_bound(cache.begin(), cache.end(), r.seq, bySeq);
+        if (it != cache.end() && it->seq == r.seq) cache.erase(it);
+    }
+    const size_t first = cache.size();
+    bool appendedOnly = removed.empty();
+    std::vector<core::Encounter> sorted = inserted;
+    std::sort(sorted.begin(), sorted.end(), [](const auto& a, const auto& b) { return a.seq < b.seq; });
+    for (core::Encounter& e : sorted) {
+        if (cache.empty() || e.seq > cache.back().seq) {
+            cache.push_back(std::move(e));
+        } else {
+            appendedOnly = false;
+            cache.insert(std::lower_bound(cache.begin(), cache.end(), e.seq, bySeq), std::move(e));
+        }
+    }
+    lastChange_ = appendedOnly ? Change{Change::EncountersAppended, first} : Change{Change::EncountersChanged, 0};
+    emit changed();
+}
+
+void ColonyDocument::listsChanged()
+{
+    lastChange_ = Change{Change::ListsChanged, 0};
     emit changed();
 }
 

@@ -8,6 +8,9 @@
 #include <QString>
 
 #include <optional>
+#include <vector>
+
+class QUndoStack;
 
 namespace hierloom::ui {
 
@@ -28,6 +31,26 @@ public:
     void close();
     /// Re-reads the records from the file; called after anything wrote to it.
     void reload();
+    /// Re-reads animals and residences only (encounters unchanged), after a pedigree or life-history edit.
+    void reloadAnimals();
+    /// Brings the cached encounters up to date after `removed` were deleted from
+    /// the file and `inserted` written (seq order kept), without re-reading a
+    /// million rows; used by the undo commands of encounter edits.
+    void applyEncounterChange(const std::vector<core::Encounter>& removed, const std::vector<core::Encounter>& inserted);
+    /// Announces a change of the behaviour code or observer lists.
+    void listsChanged();
+
+    /// What the last changed() was about, so a listener may update only what changed.
+    struct Change {
+        enum Kind { Reset, EncountersAppended, EncountersChanged, AnimalsChanged, ListsChanged };
+        Kind kind = Reset;
+        size_t firstAppended = 0; // EncountersAppended: index of the first new encounter
+    };
+    const Change& lastChange() const { return lastChange_; }
+
+    /// The undo history of edits to this file (cleared when another file opens
+    /// or something outside the history, such as an import, writes to it).
+    QUndoStack* undoStack() const { return undoStack_; }
 
     bool isOpen() const { return store_.has_value(); }
     bool isReadOnly() const { return readOnly_; }
@@ -41,6 +64,8 @@ public:
 signals:
     /// Emitted once after any open, close, reload or edit.
     void changed();
+    /// An edit or its undo could not be written (disk full, file locked...).
+    void writeFailed(const QString& message);
 
 private:
     void adopt(core::ColonyStore store, const QString& path, bool readOnly);
@@ -50,6 +75,8 @@ private:
     core::ResidenceIndex residences_;
     QString path_;
     bool readOnly_ = false;
+    Change lastChange_;
+    QUndoStack* undoStack_;
 };
 
 } // namespace hierloom::ui

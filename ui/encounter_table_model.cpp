@@ -19,8 +19,31 @@ EncounterTableModel::EncounterTableModel(const ColonyDocument* document, QObject
 
 void EncounterTableModel::rebuild()
 {
-    beginResetModel();
     const auto& encounters = document_->colony().encounters;
+    const ColonyDocument::Change& change = document_->lastChange();
+    if (change.kind == ColonyDocument::Change::EncountersAppended && change.firstAppended == newestFirst_.size()) {
+        // An evening entry appends a row: place it (and tell the view of one
+        // inserted row) instead of re-sorting and resetting a million.
+        const auto newer = [&](size_t a, size_t b) { return core::encounterBefore(encounters[b], encounters[a]); };
+        for (size_t i = change.firstAppended; i < encounters.size(); ++i) {
+            newestFirst_.insert(std::upper_bound(newestFirst_.begin(), newestFirst_.end(), i, newer), i);
+            if (filter_ == EncounterFilter{} || filter_.accepts(encounters[i])) {
+                const auto at = std::upper_bound(rows_.begin(), rows_.end(), i, newer);
+                const int row = static_cast<int>(at - rows_.begin());
+                beginInsertRows(QModelIndex(), row, row);
+                rows_.insert(at, i);
+                endInsertRows();
+            }
+            const QString name = toQString(encounters[i].observer);
+            const auto o = std::lower_bound(observers_.begin(), observers_.end(), name);
+            if (o == observers_.end() || *o != name) observers_.insert(o, name);
+        }
+        return;
+    }
+    if (change.kind == ColonyDocument::Change::AnimalsChanged || change.kind == ColonyDocument::Change::ListsChanged) {
+        if (newestFirst_.size() == encounters.size()) return; // the encounters are as they were
+    }
+    beginResetModel();
     newestFirst_ = core::chronologicalOrder(encounters);
     std::reverse(newestFirst_.begin(), newestFirst_.end());
     std::set<std::string_view> names;

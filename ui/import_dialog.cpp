@@ -3,6 +3,7 @@
 
 #include "core/colony_import.h"
 #include "ui/colony_document.h"
+#include "ui/help_browser.h"
 #include "ui/qt_convert.h"
 
 #include <QDialogButtonBox>
@@ -38,7 +39,10 @@ ImportDialog::ImportDialog(ColonyDocument* document, QWidget* parent)
     problems_->setPlaceholderText(tr("Problems found in the files are listed here."));
     problems_->setAccessibleName(tr("Import problems"));
 
-    buttons_ = new QDialogButtonBox(QDialogButtonBox::Close, this);
+    buttons_ = new QDialogButtonBox(QDialogButtonBox::Close | QDialogButtonBox::Help, this);
+    // Help shows the columns of each file with an example, beside the dialog.
+    connect(buttons_, &QDialogButtonBox::helpRequested, this,
+            [this] { showHelp(this, QStringLiteral("import-formats.html")); });
     importButton_ = buttons_->addButton(tr("&Import"), QDialogButtonBox::AcceptRole);
     importButton_->setDefault(true);
     connect(importButton_, &QPushButton::clicked, this, &ImportDialog::runImport);

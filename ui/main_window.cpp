@@ -4,7 +4,12 @@
 #include "core/colony_file_error.h"
 #include "ui/animal_view.h"
 #include "ui/colony_document.h"
+#include "ui/colony_edit_facade.h"
+#include "ui/edit_menus.h"
+#include "ui/encounter_entry_panel.h"
+#include "ui/demo_colony_copy.h"
 #include "ui/encounter_view.h"
+#include "ui/help_menu.h"
 #include "ui/import_dialog.h"
 #include "ui/welcome_panel.h"
 
@@ -24,6 +29,7 @@
 #include <QTabWidget>
 #include <QScopeGuard>
 #include <QTimer>
+#include <QUndoStack>
 
 namespace hierloom::ui {
 
@@ -45,6 +51,12 @@ MainWindow::MainWindow(const QString& colonyPath, QWidget* parent)
 {
     tabs_->addTab(animals_, tr("Animals"));
     tabs_->addTab(encounters_, tr("Encounters"));
+    analysis_ = addAnalysisViews(tabs_, document_, this);
+    facade_ = new ColonyEditFacade(document_, this);
+    entry_ = new EncounterEntryPanel(facade_, this);
+    entry_->setObjectName(QStringLiteral("entry"));
+    tabs_->addTab(entry_, tr("Evening Entry"));
+    manager_ = addColonyManagerViews(this, tabs_, document_);
     tabs_->setDocumentMode(true);
     stack_->addWidget(welcome_);
     stack_->addWidget(tabs_);
@@ -55,8 +67,21 @@ MainWindow::MainWindow(const QString& colonyPath, QWidget* parent)
     statusBar()->addPermanentWidget(encounterCount_);
 
     buildMenus();
+    new EditMenus(this, facade_, [this] {
+        showView(QStringLiteral("entry"));
+        entry_->focusEntry();
+    });
+    connect(document_, &ColonyDocument::writeFailed, this,
+            [this](const QString& message) { reportError(tr("Cannot Save the Change"), message); });
     connect(welcome_, &WelcomePanel::openRequested, this, [this] { openDialog(false); });
     connect(welcome_, &WelcomePanel::newRequested, this, &MainWindow::newColonyDialog);
+    connect(welcome_, &WelcomePanel::demoRequested, this, &MainWindow::openDemoColony);
+    connect(welcome_, &WelcomePanel::recentRequested, this, [this](const QString& path) { openColony(path); });
+    connect(welcome_, &WelcomePanel::importRequested, this, [this] {
+        // Importing needs a colony to import into: make one first, then ask for the files.
+        newColonyDialog();
+        if (document_->isOpen() && !document_->isReadOnly()) importCsv();
+    });
     connect(document_, &ColonyDocument::changed, this, &MainWindow::refresh);
 
     QSettings settings;
@@ -85,6 +110,7 @@ void MainWindow::buildMenus()
     file->addSeparator();
     importAction_ = file->addAction(tr("&Import CSV..."), this, &MainWindow::importCsv);
     importAction_->setShortcut(QKeySequence(tr("Ctrl+I")));
+    addReportActions(file, this, document_);
     file->addSeparator();
     closeAction_ = file->addAction(tr("&Close"), this, &MainWindow::closeColony);
     closeAction_->setShortcut(QKeySequence::Close);
@@ -93,12 +119,26 @@ void MainWindow::buildMenus()
     quit->setMenuRole(QAction::QuitRole);
 
     QMenu* view = menuBar()->addMenu(tr("&View"));
-    const QStringList names{tr("&Animals"), tr("&Encounters")};
+    const QStringList names{tr("&Animals"), tr("&Encounters"), tr("&Timeline"), tr("&Prediction"), tr("&Matrix"),
+                            tr("&Hierarchy")};
     for (int i = 0; i < names.size(); ++i) {
         QAction* show = view->addAction(names[i], this, [this, i] { tabs_->setCurrentIndex(i); });
         show->setShortcut(QKeySequence(Qt::CTRL | static_cast<Qt::Key>(Qt::Key_1 + i)));
         viewActions_ << show;
     }
+    addHelpMenu(this, [this] { openDemoColony(); });
+}
+
+bool MainWindow::showView(const QString& name)
+{
+    for (int i = 0; i < tabs_->count(); ++i) {
+        const QString text = tabs_->tabText(i).remove(QLatin1Char('&'));
+        if (tabs_->widget(i)->objectName() == name || text.compare(name, Qt::CaseInsensitive) == 0) {
+            tabs_->setCurrentIndex(i);
+            return true;
+        }
+    }
+    return false;
 }
 
 void MainWindow::fillRecentMenu()
@@ -113,7 +153,10 @@ void MainWindow::fillRecentMenu()
     }
     if (files.isEmpty()) recentMenu_->addAction(tr("(none)"))->setEnabled(false);
     recentMenu_->addSeparator();
-    QAction* clear = recentMenu_->addAction(tr("C&lear List"), this, [this] { recent_.clear(); });
+    QAction* clear = recentMenu_->addAction(tr("C&lear List"), this, [this] {
+        recent_.clear();
+        refresh();
+    });
     clear->setEnabled(!files.isEmpty());
 }
 
@@ -142,6 +185,24 @@ bool MainWindow::openColony(const QString& path, bool readOnly)
     recent_.add(path);
     setLastFolder(path);
     return true;
+}
+
+bool MainWindow::openDemoColony()
+{
+    // A fresh copy, opened read-only: a newcomer can explore but not damage it.
+    QString path;
+    try {
+        QApplication::setOverrideCursor(Qt::WaitCursor);
+        const auto restoreCursor = qScopeGuard([] { QApplication::restoreOverrideCursor(); });
+        path = prepareDemoColonyCopy();
+    } catch (const std::exception& error) {
+        reportError(tr("Cannot Open the Demo Colony"), QString::fromUtf8(error.what()));
+        return false;
+    }
+    // The copy is replaced on every visit, so it does not belong in the recent list.
+    const bool opened = openColony(path, true);
+    recent_.remove(path);
+    return opened;
 }
 
 bool MainWindow::createColony(const QString& path)
@@ -179,8 +240,13 @@ void MainWindow::importCsv()
     if (!document_->isOpen() || document_->isReadOnly()) return;
     ImportDialog dialog(document_, this);
     dialog.setStartFolder(lastFolder());
+    const size_t encountersBefore = document_->colony().encounters.size();
+    const size_t animalsBefore = document_->colony().animals.size();
     dialog.exec();
     setLastFolder(dialog.startFolder());
+    // An import is not in the undo history; commands recorded before it could no longer be undone safely.
+    if (document_->colony().encounters.size() != encountersBefore || document_->colony().animals.size() != animalsBefore)
+        document_->undoStack()->clear();
 }
 
 void MainWindow::closeColony() { document_->close(); }
@@ -195,6 +261,7 @@ void MainWindow::refresh()
 
     const QLocale locale;
     if (!open) {
+        welcome_->setRecentFiles(recent_.list());
         setWindowTitle(tr("Hierloom"));
         fileLabel_->setText(tr("No colony open"));
         animalCount_->clear();

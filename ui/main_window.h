@@ -1,5 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
+#include "ui/analysis_views.h"
+#include "ui/colony_manager_views.h"
 #include "ui/recent_files.h"
 
 #include <QMainWindow>
@@ -14,6 +16,8 @@ namespace hierloom::ui {
 
 class AnimalView;
 class ColonyDocument;
+class ColonyEditFacade;
+class EncounterEntryPanel;
 class EncounterView;
 class WelcomePanel;
 
@@ -30,10 +34,20 @@ public:
     bool openColony(const QString& path, bool readOnly = false);
     /// Creates a new colony file and opens it; reports an error on failure.
     bool createColony(const QString& path);
+    /// Opens a fresh read-only copy of the bundled demo colony (first-run path).
+    bool openDemoColony();
 
     ColonyDocument* document() const { return document_; }
     AnimalView* animalView() const { return animals_; }
     EncounterView* encounterView() const { return encounters_; }
+    /// The one writer of the desktop (undo commands) and the evening entry tab ("--view entry").
+    ColonyEditFacade* editFacade() const { return facade_; }
+    EncounterEntryPanel* entryPanel() const { return entry_; }
+    const AnalysisViews& analysisViews() const { return analysis_; }
+    /// The Planner and Stability tabs and the status-bar stability alert.
+    const ColonyManagerViews& managerViews() const { return manager_; }
+    /// Shows the tab named `name` (e.g. "timeline", "matrix"); false when there is none.
+    bool showView(const QString& name);
 
 signals:
     /// Every error shown to the person, also as a signal (for tests and logs).
@@ -62,6 +76,10 @@ private:
     QTabWidget* tabs_;
     AnimalView* animals_;
     EncounterView* encounters_;
+    AnalysisViews analysis_;
+    ColonyManagerViews manager_;
+    ColonyEditFacade* facade_ = nullptr;
+    EncounterEntryPanel* entry_ = nullptr;
     QLabel* fileLabel_;
     QLabel* animalCount_;
     QLabel* encounterCount_;

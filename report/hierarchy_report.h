@@ -1,0 +1,40 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#pragma once
+#include "core/colony.h"
+#include "core/elo_rating.h"
+#include "core/inheritance_prediction.h"
+#include "core/stability_watch.h"
+
+#include <QString>
+
+#include <map>
+#include <optional>
+#include <string>
+
+class QPagedPaintDevice;
+
+namespace hierloom::report {
+
+/// What a hierarchy report covers and how its figures are computed.
+struct HierarchyReportOptions {
+    std::string group;           ///< required
+    std::optional<core::Day> at; ///< default: the group's last encounter
+    std::string colonyName;      ///< shown under the title (the file name)
+    core::EloSettings elo;
+    core::SiblingRule rule = core::SiblingRule::Youngest;
+    int maturityYears = 4;
+    int changeDays = 90; ///< recent rank changes: Elo ranks this many days before the date against at it
+    core::StabilityThresholds thresholds;
+    std::map<std::string, int, std::less<>> severity; ///< behaviour code -> severity
+};
+
+/// Paints the hierarchy report of one group at one date on a paged device (a
+/// QPdfWriter or a QPrinter) and returns its number of pages. Throws
+/// std::invalid_argument for a group without encounters up to the date.
+int paintHierarchyReport(QPagedPaintDevice& device, const core::Colony& colony, const HierarchyReportOptions& options);
+
+/// Writes the report as an A4 PDF file; returns the number of pages. Throws
+/// std::runtime_error when the file cannot be written.
+int writeHierarchyReportPdf(const QString& path, const core::Colony& colony, const HierarchyReportOptions& options);
+
+} // namespace hierloom::report

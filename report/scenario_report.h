@@ -1,0 +1,28 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#pragma once
+#include "core/colony.h"
+#include "core/scenario.h"
+
+#include <QString>
+
+#include <vector>
+
+class QPagedPaintDevice;
+
+namespace hierloom::report {
+
+/// A what-if scenario with the name it was saved under.
+struct NamedScenario {
+    QString name;
+    core::Scenario scenario;
+};
+
+/// Paints the planner's printout of one scenario, or of several one after the
+/// other (a comparison): the changes, the caution, and per resulting group its
+/// composition, the observed order next to the predicted one, the predicted
+/// moves and the observed relationships that would have to reverse. Returns
+/// the number of pages; throws core::ScenarioError for a scenario that cannot run.
+int paintScenarioReport(QPagedPaintDevice& device, const core::Colony& colony, const std::vector<NamedScenario>& scenarios,
+                        const QString& colonyName);
+
+} // namespace hierloom::report

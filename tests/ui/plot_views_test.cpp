@@ -1,0 +1,143 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+// The matrix and hierarchy views on the demo colony against the core
+// computations they show, the figure export and the main window's tabs.
+#include "ui/hierarchy_plots_view.h"
+#include "ui/matrix_view.h"
+
+#include "core/encounter_selection.h"
+#include "core/export_tables.h"
+#include "core/matriline.h"
+#include "plot_test_support.h"
+#include "ui/main_window.h"
+#include "ui/plot_export.h"
+#include "ui/rank_timeline_view.h"
+#include "ui/qt_convert.h"
+
+#include <QFile>
+#include <QImage>
+#include <QRegularExpression>
+
+#include <gtest/gtest.h>
+#include <qcustomplot.h>
+
+using namespace hierloom;
+using hierloom::test::DemoDocument;
+using hierloom::test::finish;
+using hierloom::test::TempDir;
+
+namespace {
+
+QStringList expectedOrder(const core::Colony& c, const core::ResidenceIndex& where, const core::SelectionOptions& o,
+                          core::RankMethod method)
+{
+    const core::EncounterSelection sel = core::selectEncounters(c, where, o);
+    QStringList out;
+    for (int i : core::orderByMethod(sel, method, o.draws)) out << ui::toQString(sel.ids[static_cast<size_t>(i)]);
+    return out;
+}
+
+} // namespace
+
+TEST(MatrixView, OrderedAsCoreOrdersWithMarksAndBoundaries)
+{
+    DemoDocument demo;
+    ui::MatrixView view(demo.document());
+    const core::Colony& c = demo.document()->colony();
+    const core::ResidenceIndex& where = demo.document()->residences();
+    const core::Matrilines lines(c);
+    for (core::RankMethod m : {core::RankMethod::Elo, core::RankMethod::DavidsScore, core::RankMethod::Isi}) {
+        view.setMethod(m);
+        finish(view.runner());
+        // Identity: the rows follow core::orderByMethod over the same window.
+        const QStringList order = expectedOrder(c, where, {}, m);
+        ASSERT_EQ(view.order(), order) << static_cast<int>(m);
+        // Brute force over the shown matrix: marks below the diagonal, boundaries between lines.
+        const core::WinMatrix& w = view.matrix();
+        int below = 0, boundaries = 0;
+        double total = 0;
+        for (int i = 0; i < w.n; ++i)
+            for (int j = 0; j < w.n; ++j) {
+                below += (i > j && w.s(i, j) > 0) ? 1 : 0;
+                total += w.s(i, j);
+            }
+        for (int i = 0; i + 1 < w.n; ++i) {
+            const int a = lines.index(order[i].toStdString()), b = lines.index(order[i + 1].toStdString());
+            boundaries += lines.matriarch(a) != lines.matriarch(b) ? 1 : 0;
+        }
+        EXPECT_EQ(view.markedCount(), below);
+        EXPECT_GT(below, 0);
+        EXPECT_EQ(view.boundaryCount(), boundaries);
+        // Draws count half to each side, so the cells add up to the counted encounters.
+        EXPECT_DOUBLE_EQ(total, static_cast<double>(core::selectEncounters(c, where, {}).bouts.size()));
+    }
+    // A window and the Elo order of that window.
+    const core::Day from = core::dayFromCivil(2023, 5, 15), to = core::dayFromCivil(2023, 7, 31);
+    view.setMethod(core::RankMethod::Elo);
+    view.setWindow(from, to);
+    finish(view.runner());
+    core::SelectionOptions o;
+    o.from = from;
+    o.to = to;
+    EXPECT_EQ(view.order(), expectedOrder(c, where, o, core::RankMethod::Elo));
+    EXPECT_TRUE(view.describeCell(1, 0).contains(QStringLiteral("beat")));
+}
+
+TEST(HierarchyPlotsView, OnePointPerMonthInEveryPanel)
+{
+    DemoDocument demo;
+    ui::HierarchyPlotsView view(demo.document());
+    finish(view.runner());
+    const core::Colony& c = demo.document()->colony();
+    const core::ResidenceIndex& where = demo.document()->residences();
+    const size_t months = core::selectionPeriods(c, where, {}, core::PeriodLength::Month).size();
+    EXPECT_EQ(months, 84u); // 2019-01 .. 2025-12
+    for (int p = 0; p < ui::HierarchyPlotsView::PanelCount; ++p)
+        EXPECT_EQ(view.pointCount(static_cast<ui::HierarchyPlotsView::Panel>(p)), static_cast<int>(months)) << p;
+    // The encounter bars add up to the record's counted encounters.
+    double sum = 0;
+    const auto* bars = qobject_cast<QCPBars*>(view.plottable(ui::HierarchyPlotsView::Encounters));
+    ASSERT_NE(bars, nullptr);
+    for (auto it = bars->data()->constBegin(); it != bars->data()->constEnd(); ++it) sum += it->value;
+    EXPECT_DOUBLE_EQ(sum, static_cast<double>(core::selectEncounters(c, where, {}).bouts.size()));
+}
+
+TEST(PlotExport, PublicationSizedPngAndPdf)
+{
+    DemoDocument demo;
+    ui::HierarchyPlotsView view(demo.document());
+    finish(view.runner());
+    TempDir dir;
+    const QString png = QString::fromStdString(dir.file("h.png")), pdf = QString::fromStdString(dir.file("h.pdf"));
+    ASSERT_TRUE(ui::exportPng(view.plot(), png));
+    const QImage image(png);
+    // 180 mm at 300 dpi = 2126 px; laid out at 96 dpi (680 px) and scaled by 300/96.
+    EXPECT_NEAR(image.width(), 2126, 2);
+    EXPECT_NEAR(image.height(), 1417, 2); // 120 mm
+    EXPECT_NEAR(image.dotsPerMeterX(), 300 / 0.0254, 2);
+    ASSERT_TRUE(ui::exportPdf(view.plot(), pdf));
+    QFile file(pdf);
+    ASSERT_TRUE(file.open(QIODevice::ReadOnly));
+    const QByteArray bytes = file.readAll();
+    EXPECT_TRUE(bytes.startsWith("%PDF"));
+    // The page is 180 x 120 mm = 510.2 x 340.2 points.
+    const QRegularExpression box(QStringLiteral("/MediaBox \\[0 0 ([0-9.]+) ([0-9.]+)\\]"));
+    const auto match = box.match(QString::fromLatin1(bytes));
+    ASSERT_TRUE(match.hasMatch());
+    EXPECT_NEAR(match.captured(1).toDouble(), 510.2, 1);
+    EXPECT_NEAR(match.captured(2).toDouble(), 340.2, 1);
+    EXPECT_TRUE(view.plot()->legend->visible());
+}
+
+TEST(MainWindowViews, PlotTabsOpenByName)
+{
+    DemoDocument demo;
+    ui::MainWindow window;
+    ASSERT_TRUE(window.openColony(QString::fromStdString(demo.path())));
+    for (const char* name : {"timeline", "prediction", "matrix", "hierarchy"}) EXPECT_TRUE(window.showView(name)) << name;
+    EXPECT_FALSE(window.showView(QStringLiteral("nowhere")));
+    const ui::AnalysisViews& v = window.analysisViews();
+    finish(v.timeline->runner());
+    finish(v.matrix->runner());
+    EXPECT_GT(v.timeline->visibleLineCount(), 20);
+    EXPECT_GT(v.matrix->order().size(), 20);
+}

@@ -1,0 +1,2289 @@
+<?xml version="1.0" encoding="utf-8"?>
+<!DOCTYPE TS>
+<TS version="2.1" language="en" sourcelanguage="en">
+<context>
+    <name>QObject</name>
+    <message>
+        <source>Export</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Save the plot as a 180 mm, 300 dpi figure, or copy it</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>PNG images (*.png)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>PDF documents (*.pdf)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Export Plot</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Export Failed</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 could not be written.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Save as &amp;PNG...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Save as P&amp;DF...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Copy to Clipboard</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Timeline</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Prediction</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Matrix</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Hierarchy</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Planner</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Stability</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Print Hierarchy Report...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Save Hierarchy Report as P&amp;DF...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Save Hierarchy Report</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>PDF (*.pdf)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Cannot Make the Report</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::AboutDialog</name>
+    <message>
+        <source>Qt %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>LGPL-3.0</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>windows, tables, help</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>QCustomPlot %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>GPL-3.0</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>plots</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>SQLite</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>public domain</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>the colony file</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>CLI11</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>BSD-3-Clause</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>command-line options</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>GoogleTest</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>tests only, not shipped</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&lt;h2&gt;Hierloom %1&lt;/h2&gt;&lt;p&gt;Dominance ranks and their inheritance in animal colonies.&lt;/p&gt;&lt;p&gt;Copyright &amp;copy; the Hierloom authors.&lt;br&gt;This program is free software: you can redistribute it and/or modify it under the terms of the GNU General Public License as published by the Free Software Foundation, either version 3 of the License, or (at your option) any later version (GPL-3.0-or-later). It comes with ABSOLUTELY NO WARRANTY.&lt;/p&gt;&lt;p&gt;Built with:&lt;/p&gt;</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Library</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Licence</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Used for</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>About Hierloom</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::AnimalEditorDialog</name>
+    <message>
+        <source>Add Animal</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Edit Animal</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Record Birth</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Record Introduction</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>female</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>male</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>unknown</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>founder</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>born</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>introduced</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>(not recorded)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>(still present)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>died</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>removed</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Id:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Name:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Sex:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Born on:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Birth date:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Mother:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Father:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Introduced on:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Entry date:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Entry &amp;type:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Group:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>E&amp;xit date:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Exit t&amp;ype:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>The newborn lives in the group its mother was in on that day.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>(unknown)</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::AnimalTableModel</name>
+    <message>
+        <source>removed %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>died %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>present</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>F</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>M</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>?</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>ID</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Name</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Sex</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Born</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Age</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Mother</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Matriarch</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Group now</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Status</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::AnimalView</name>
+    <message>
+        <source>ID, name, mother or matriarch</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>F&amp;ind:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>All animals</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Present only</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Show:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 of %2 animals</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::ColonyEditFacade</name>
+    <message>
+        <source>No colony is open.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>The colony is open read-only; open it for writing to change it.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Enter %1 over %2</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Edit encounter %1 over %2</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message numerus="yes">
+        <source>Delete %n encounter(s)</source>
+        <translation type="unfinished">
+            <numerusform></numerusform>
+            <numerusform></numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>Add animal %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Introduce %1 into %2</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Birth of %1 to %2</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Edit animal %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Death of %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Removal of %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Move %1 to %2</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Edit behaviour codes</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Edit observers</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::DemoColony</name>
+    <message>
+        <source>Cannot create the folder %1 for the demo colony.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Cannot replace the old demo colony %1: %2</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::EditMenus</name>
+    <message>
+        <source>&amp;Edit</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Undo</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Redo</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Evening &amp;Entry</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Behaviour Codes...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Observers...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Pedigree</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Add Animal...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Edit Animal...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Record &amp;Birth...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Record &amp;Death...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Record &amp;Removal...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Record &amp;Introduction...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Move Between Groups...</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::EncounterEntryPanel</name>
+    <message>
+        <source>1 line</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 lines</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>1 animal</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 animals</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>1 warning</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 warnings</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Possible Duplicate</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;End Session</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Dra&amp;w</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Add Line (Enter)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Undo Whole Session</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>HH:MM</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>id or name</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>note</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Date:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Group:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>O&amp;bserver:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Time</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>W&amp;inner</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Loser</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Be&amp;haviour</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>N&amp;ote</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Line</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Time</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Winner</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Loser</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Outcome</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Behaviour</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Note</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Edit Line (F2)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Delete Line (Del)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>This session (each line is saved as it is entered):</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&apos;%1&apos; matches %2; type more</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&apos;%1&apos; is not a time of day in the form HH:MM (24 h)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>The colony has no groups yet: add animals first.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>No animal lived in this group on that day.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>at %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>without a time</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 and %2 %3 are already in this session. Save this line as another encounter?</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Not saved: a possible duplicate.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>draw</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>decided</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Changing line %1: Enter saves it, Esc cancels.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Take back the session of %1 (%2)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Session ended: %1, group %2, observer %3: %4, %5, %6.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>(none)</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::EncounterTableModel</name>
+    <message>
+        <source>draw</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>decided</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Date</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Time</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Winner</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Loser</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Outcome</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Behaviour</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Group</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Observer</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Note</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::EncounterView</name>
+    <message>
+        <source>Fr&amp;om</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;To</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>A&amp;nimal:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>O&amp;bserver:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Any animal</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Any observer</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>(none recorded)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 of %2 encounters</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::HelpBrowser</name>
+    <message>
+        <source>Hierloom Help</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Back</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Forward</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Contents</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Methods</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Import Formats</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Shortcuts</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Keys</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Menu command</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::HelpButton</name>
+    <message>
+        <source>Open the help on this</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>What is %1? Opens its definition in the help.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Help</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Help on %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::HelpMenu</name>
+    <message>
+        <source>&amp;Help</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Hierloom &amp;Help</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Methods and Figures</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Keyboard Shortcuts</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Import File Formats</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Open the &amp;Demo Colony</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;About Hierloom</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>About &amp;Qt</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::HelpTopic</name>
+    <message>
+        <source>Which encounters, in which order</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Elo rating</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Optimised k</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Randomised Elo</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>David&apos;s score</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Normalised David&apos;s score</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Steepness</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Steepness test</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>I&amp;SI order</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Win matrix</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Landau&apos;s h</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Improved linearity h&apos;</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Linearity test</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Directional consistency</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Triangle transitivity</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Transitivity test</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Matrilineal rank prediction</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Conformity</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Discordant pairs</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Kendall&apos;s tau-b</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Rank acquisition</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Maternal relative rank</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Sex ratio of births</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Offspring sex and maternal rank</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Fisher&apos;s exact test</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Wilson interval</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Counter-dominance</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Rank changes</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Severe aggression</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Coefficient of relatedness</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::HierarchyPlotsView</name>
+    <message>
+        <source>the monthly hierarchy figures</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Month by month over the whole record</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>h&apos;</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Steepness</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>t_tri</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Conformity</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Encounters</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>h&apos; (de Vries 1995)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>steepness (David&apos;s score, Dij)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>triangle transitivity t_tri</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>conformity with the inheritance rule (Elo)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>encounters per month</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Month</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::ImportDialog</name>
+    <message>
+        <source>Import CSV Files</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Choose the files to add to the colony. Each is optional; the import is all or nothing: if any row is wrong, nothing is written.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Animals:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Residences:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Encounters:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Problems found in the files are listed here.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Import problems</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Import</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>not imported</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Browse...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>CSV files (*.csv);;All files (*)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>No colony is open for writing; nothing was imported.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>The colony file could not be written; nothing was imported.
+%1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>... and %1 more problems not listed; fix these first.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Problems found: %1. Nothing was imported.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Imported %1 animals, %2 residences and %3 encounters.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>The colony could not be read back: %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::LifeEventDialog</name>
+    <message>
+        <source>Record Death</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Record Removal</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Move Between Groups</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Animal:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Date:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>To &amp;group:</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::ListEditorDialog</name>
+    <message>
+        <source>Behaviour Codes</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Observers</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Code</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Severity (0-5)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Description</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Name or initials</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Add</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Remove</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::MainWindow</name>
+    <message>
+        <source>Hierloom colonies (*.hierloom);;All files (*)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Animals</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Encounters</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Evening Entry</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Cannot Save the Change</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;File</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;New Colony...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Open...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Open &amp;Read-Only...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Ctrl+Shift+O</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Open Re&amp;cent</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Import CSV...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Ctrl+I</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Close</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Quit</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;View</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Animals</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Encounters</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Timeline</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Prediction</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Matrix</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Hierarchy</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;%1 %2</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>(none)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>C&amp;lear List</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Cannot Open Colony</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 could not be read: %2</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Cannot Open the Demo Colony</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Cannot Create Colony</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>New Colony</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Open Colony Read-Only</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Open Colony</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Hierloom</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>No colony open</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 (read-only)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 - Hierloom</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Animals: %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Encounters: %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::MatrixView</name>
+    <message>
+        <source>the matrix</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Elo rating</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>David&apos;s score</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>I&amp;&amp;SI</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>All groups</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Order by:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>From:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>To:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Loser</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Winner</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>No encounters in this window.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>wins (cell shade, square-root scale)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>wins against the order (below the diagonal)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Won</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Lost</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 animals, %2 encounters counted; ordered by %3; %4 cells with wins against the order.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 beat %2: %3
+%2 beat %1: %4</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>
+(wins against the order)</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::PedigreeView</name>
+    <message>
+        <source>%1 (%2)%3</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>, present</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Line of %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::PlannerView</name>
+    <message>
+        <source>no adult male</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Save As...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Delete</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Animal</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Matriline</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Before</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>After</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Predicted move</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Group</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Predicted above</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Predicted below</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Observed wins above</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Observed wins below</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Already predicted so before</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Rank</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Scenario A</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Scenario B</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Open</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>New</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Print...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Save PDF...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Saved:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Orders and Groups</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Predicted Moves</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Relationships to Reverse</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Compare</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>A:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>B:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Save Scenario</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Name:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>(being composed)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>The colony is open read-only</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>No saved scenario named %1.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>The saved scenario no longer fits the record:
+%1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>The colony has no group with encounters.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>yes</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>no</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Relationships to Reverse (%1)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Group %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Animals %1 -&gt; %2; adult females/males %3/%4 -&gt; %5/%6; adult sex ratio (F:M) %7 -&gt; %8; matrilines %9 -&gt; %10</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>#</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Observed now (Elo)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Predicted after</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Move</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source> (new)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>the scenario being composed</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1: %2</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 %2 females</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 %2: %3; %4 observed relationships to reverse</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>(unsaved)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Save Scenario as PDF</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>PDF (*.pdf)</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::PredictionView</name>
+    <message>
+        <source>daughter over mother</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>sibling order</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>within matriline</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>across matrilines</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>the prediction</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Youngest ascendancy</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Eldest first</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Date:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Rule:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Observed above</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Observed below</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Category</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Rank (1 = top)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Predicted</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Observed (Elo)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 (%2)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>No ranked females on this date.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 ranked females, %2 with an observed rank. Discordant dyads: %3 of %4 comparable; conformity %5, Kendall&apos;s tau-b %6.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>undefined</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>in a discordant dyad</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>concordant</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>line %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Order on %1 (%2)</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::ProgressStrip</name>
+    <message>
+        <source>Cancel</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Compute Again</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Computing %1...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Failed: %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Failed</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Stopped; the view shows nothing new.</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::RankTimelineView</name>
+    <message>
+        <source>Birth</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Maturity</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Introduction</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Removal</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Death</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>the rank timeline</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Rank</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Elo rating</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Monthly</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Weekly</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>All ages</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Young adults (under 8)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Prime (8 to 15)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Old (16 and over)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>All matrilines</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>All groups</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Show:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Date:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Date</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Line of %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>In a discordant dyad</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Observed rank (1 = top)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 (%2)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Date: %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Rank: %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>none (no rating yet)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Predicted rank: %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Elo rating: %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Matriline: %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Discordant dyads: %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::ReportDialog</name>
+    <message>
+        <source>Hierarchy Report</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Group:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>At:</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::ScenarioComposer</name>
+    <message>
+        <source>youngest ascendancy</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>eldest first</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Starting date:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Group:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Sibling rule:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Remove an animal</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Introduce an unrelated female</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Add an expected birth</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Split: move whole matrilines to a new group</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Animal:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>new id, e.g. NEW1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>New female&apos;s id:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>female</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>male</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>unknown</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>optional; default new-1, new-2, ...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Mother:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Sex:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Id:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Matrilines that move (each whole, named by its matriarch):</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>New group:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>e.g. South Pen</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Add Change</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Remove Selected Change</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Changes (applied in order; the records are never changed)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message numerus="yes">
+        <source>%1 (%n resident member(s))</source>
+        <translation type="unfinished">
+            <numerusform></numerusform>
+            <numerusform></numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>Remove %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Introduce unrelated female %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Expected birth: %1 of %2%3</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>daughter</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>son</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>infant</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source> (id %1)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Split: lines of %1 move to %2</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>NEW%1</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::StabilityBadge</name>
+    <message>
+        <source>Stability alert: %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::StabilityThresholdsDialog</name>
+    <message>
+        <source>Stability Thresholds</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source> %</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>off</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source> x median</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Counter-dominance share above</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>... over at least (decided encounters)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>... with at least this many between two matrilines, per week</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Rank change per animal above</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Severe behaviour: severity at least</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Severe encounters per animal-day above</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>... with at least (severe encounters)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Defaults: counter-dominance above %1 % over at least %2 decided encounters with at least %3 a week between the same two matrilines; severe (severity %4 or more) above %5 times the record&apos;s median rate with at least %6 in the period; rank changes off. Kept in the colony file.</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::StabilityView</name>
+    <message>
+        <source>Counter-dominance</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Rank changes</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Severe aggression</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Thresholds...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Weeks</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Months</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Group:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Per:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Period</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Signal</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Value</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Evidence</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Choose an alert to see its evidence: the dyads and dates behind it.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Counter-dom.
+share</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Severe
+x median</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Rank change
+per animal</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Stability Thresholds (read-only colony: not saved)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>The colony is open read-only: thresholds cannot be saved</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>counter-dominance share</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>severe per animal-day / median</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>rank change per animal</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Stability alert for %1 in the latest period (%2 - %3): %4. See the evidence below.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>, </source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Severe encounters (date, winner, loser, behaviour):</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Counter-dominant dyads (winner below loser before the encounter; matrilines; dates):</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::WelcomePanel</name>
+    <message>
+        <source>Recent colonies</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Explore the demo colony</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>A made-up group of monkeys with seven years of records. It opens as a read-only copy, so nothing you do can break it.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Create a new colony</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>An empty colony file for your own animals and encounters.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Import CSV files</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Make a new colony from spreadsheet files of animals, groups and encounters.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Open a Colony File...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Help</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1   (%2)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Welcome to Hierloom</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Hierloom keeps the records of an animal colony and shows who ranks above whom. New here? Start with the demo colony.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>No colony is open</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Open a recent colony (double-click it), or choose below.</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>main</name>
+    <message>
+        <source>Hierloom: dominance ranks and their inheritance in animal colonies.
+Without a colony file it opens on a start screen that offers the demo colony.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>A colony file (.hierloom) to open.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Open on this view: animals, encounters, timeline, prediction, matrix, hierarchy, entry, planner or stability.</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+</TS>

@@ -1,0 +1,33 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#include "ui/analysis_views.h"
+
+#include "ui/animal_selection.h"
+#include "ui/hierarchy_plots_view.h"
+#include "ui/matrix_view.h"
+#include "ui/prediction_view.h"
+#include "ui/rank_timeline_view.h"
+
+#include <QTabWidget>
+
+namespace hierloom::ui {
+
+AnalysisViews addAnalysisViews(QTabWidget* tabs, ColonyDocument* document, QObject* owner)
+{
+    AnalysisViews v;
+    v.selection = new AnimalSelection(owner);
+    v.timeline = new RankTimelineView(document, v.selection, tabs);
+    v.prediction = new PredictionView(document, v.selection, tabs);
+    v.matrix = new MatrixView(document, tabs);
+    v.hierarchy = new HierarchyPlotsView(document, tabs);
+    v.timeline->setObjectName(QStringLiteral("timeline"));
+    v.prediction->setObjectName(QStringLiteral("prediction"));
+    v.matrix->setObjectName(QStringLiteral("matrix"));
+    v.hierarchy->setObjectName(QStringLiteral("hierarchy"));
+    tabs->addTab(v.timeline, QObject::tr("Timeline"));
+    tabs->addTab(v.prediction, QObject::tr("Prediction"));
+    tabs->addTab(v.matrix, QObject::tr("Matrix"));
+    tabs->addTab(v.hierarchy, QObject::tr("Hierarchy"));
+    return v;
+}
+
+} // namespace hierloom::ui

@@ -1,0 +1,28 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#pragma once
+class QObject;
+class QTabWidget;
+
+namespace hierloom::ui {
+
+class AnimalSelection;
+class ColonyDocument;
+class HierarchyPlotsView;
+class MatrixView;
+class PredictionView;
+class RankTimelineView;
+
+/// The plot views of the main window and the selection that links them.
+struct AnalysisViews {
+    AnimalSelection* selection = nullptr;
+    RankTimelineView* timeline = nullptr;
+    PredictionView* prediction = nullptr;
+    MatrixView* matrix = nullptr;
+    HierarchyPlotsView* hierarchy = nullptr;
+};
+
+/// Creates the Timeline, Prediction, Matrix and Hierarchy tabs (in that order,
+/// named by objectName "timeline", "prediction", "matrix", "hierarchy").
+AnalysisViews addAnalysisViews(QTabWidget* tabs, ColonyDocument* document, QObject* owner);
+
+} // namespace hierloom::ui

@@ -1,0 +1,66 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#pragma once
+#include "core/civil_date.h"
+#include "core/matriline.h"
+#include "ui/matriline_palette.h"
+
+#include <QScrollArea>
+#include <QString>
+
+#include <memory>
+#include <optional>
+#include <vector>
+
+namespace hierloom::ui {
+
+class AnimalSelection;
+class ColonyDocument;
+
+/// The matrilines as family trees: each line a block headed by its matriarch,
+/// mothers above their offspring, sisters left to right in birth order
+/// (females round, males square). Animals alive in the colony on the
+/// selected date are filled in their line's colour, the others hollow; a
+/// click selects an animal in the shared AnimalSelection.
+class PedigreeView : public QScrollArea {
+    Q_OBJECT
+public:
+    PedigreeView(ColonyDocument* document, AnimalSelection* selection, QWidget* parent = nullptr);
+    ~PedigreeView() override;
+
+    /// One drawn animal.
+    struct Node {
+        QString id;
+        QString label;
+        int parent = -1; ///< index of the mother's node, or -1
+        int line = -1;   ///< palette line number
+        bool female = true;
+        bool recorded = true;
+        QPointF at;      ///< centre, in canvas coordinates
+        bool present = false; ///< alive in the colony on the selected date
+    };
+    const std::vector<Node>& nodes() const { return nodes_; }
+    /// Node index of an id, or -1.
+    int find(const QString& id) const;
+    /// Number of animals drawn as present on the selected date.
+    int presentCount() const;
+    /// Centre of a node in the view's viewport coordinates (tests click there).
+    QPoint viewportPosition(const QString& id) const;
+    /// Selects the animal drawn at a viewport point, if any (what a click does).
+    bool clickAt(QPoint viewportPoint);
+
+private:
+    class Canvas;
+    void rebuild();
+    void updatePresence();
+
+    ColonyDocument* document_;
+    AnimalSelection* selection_;
+    Canvas* canvas_;
+    std::unique_ptr<core::Matrilines> lines_;
+    MatrilinePalette palette_;
+    std::vector<Node> nodes_;
+    std::vector<std::pair<QString, QPointF>> titles_; ///< line headings
+    friend class Canvas;
+};
+
+} // namespace hierloom::ui
