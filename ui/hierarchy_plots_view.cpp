@@ -2,6 +2,7 @@
 #include "ui/hierarchy_plots_view.h"
 
 #include "ui/colony_document.h"
+#include "ui/visible_refresh.h"
 #include "ui/compute_runner.h"
 #include "ui/plot_export.h"
 #include "ui/progress_strip.h"
@@ -97,7 +98,9 @@ HierarchyPlotsView::HierarchyPlotsView(ColonyDocument* document, QWidget* parent
     plot_->setInteractions(QCP::iRangeDrag | QCP::iRangeZoom);
 
     connect(progress_, &ProgressStrip::retry, this, &HierarchyPlotsView::recompute);
-    connect(document_, &ColonyDocument::changed, this, &HierarchyPlotsView::recompute);
+    // Recomputed only while on screen; a hidden tab catches up when shown.
+    auto* refresh = new VisibleRefresh(this, [this] { recompute(); });
+    connect(document_, &ColonyDocument::changed, refresh, &VisibleRefresh::request);
     recompute();
 }
 

@@ -4,6 +4,7 @@
 #include "core/encounter_selection.h"
 #include "core/matriline.h"
 #include "ui/colony_document.h"
+#include "ui/visible_refresh.h"
 #include "ui/compute_runner.h"
 #include "ui/plot_export.h"
 #include "ui/progress_strip.h"
@@ -94,7 +95,9 @@ MatrixView::MatrixView(ColonyDocument* document, QWidget* parent)
     connect(toEdit_, &QDateEdit::editingFinished, this, [this] { setWindow(from_, toDay(toEdit_->date())); });
     connect(progress_, &ProgressStrip::retry, this, &MatrixView::recompute);
     connect(plot_, &QCustomPlot::mouseMove, this, &MatrixView::hover);
-    connect(document_, &ColonyDocument::changed, this, &MatrixView::recompute);
+    // Recomputed only while on screen; a hidden tab catches up when shown.
+    auto* refresh = new VisibleRefresh(this, [this] { recompute(); });
+    connect(document_, &ColonyDocument::changed, refresh, &VisibleRefresh::request);
     recompute();
 }
 

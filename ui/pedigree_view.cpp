@@ -4,6 +4,7 @@
 #include "core/inheritance_prediction.h"
 #include "ui/animal_selection.h"
 #include "ui/colony_document.h"
+#include "ui/visible_refresh.h"
 #include "ui/qt_convert.h"
 
 #include <QMouseEvent>
@@ -109,7 +110,9 @@ PedigreeView::PedigreeView(ColonyDocument* document, AnimalSelection* selection,
     setWidget(canvas_);
     setWidgetResizable(false);
     setBackgroundRole(QPalette::Base);
-    connect(document_, &ColonyDocument::changed, this, &PedigreeView::rebuild);
+    // Recomputed only while on screen; a hidden tab catches up when shown.
+    auto* refresh = new VisibleRefresh(this, [this] { rebuild(); });
+    connect(document_, &ColonyDocument::changed, refresh, &VisibleRefresh::request);
     connect(selection_, &AnimalSelection::dayChanged, this, &PedigreeView::updatePresence);
     connect(selection_, &AnimalSelection::animalChanged, this, [this](const QString& id) {
         canvas_->update();

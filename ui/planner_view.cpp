@@ -7,6 +7,7 @@
 #include "report/scenario_report.h"
 #include "ui/caution_label.h"
 #include "ui/colony_document.h"
+#include "ui/visible_refresh.h"
 #include "ui/qt_convert.h"
 #include "ui/scenario_composer.h"
 
@@ -148,7 +149,9 @@ PlannerView::PlannerView(ColonyDocument* document, QWidget* parent)
     layout->addWidget(makeCautionLabel(this));
     layout->addWidget(split, 1);
 
-    connect(composer_, &ScenarioComposer::changed, this, &PlannerView::rerun);
+    // The prediction is recomputed only while the planner is on screen.
+    auto* refresh = new VisibleRefresh(this, [this] { rerun(); });
+    connect(composer_, &ScenarioComposer::changed, refresh, &VisibleRefresh::request);
     connect(document_, &ColonyDocument::changed, this, &PlannerView::refreshSaved);
     connect(newButton, &QPushButton::clicked, composer_, &ScenarioComposer::reset);
     connect(openButton, &QPushButton::clicked, this, [this] { openScenario(savedBox_->currentText()); });

@@ -3,6 +3,7 @@
 
 #include "ui/animal_selection.h"
 #include "ui/colony_document.h"
+#include "ui/visible_refresh.h"
 #include "ui/compute_runner.h"
 #include "ui/plot_export.h"
 #include "ui/progress_strip.h"
@@ -104,7 +105,9 @@ PredictionView::PredictionView(ColonyDocument* document, AnimalSelection* select
             selection_->setAnimal(item->data(Qt::UserRole).toString());
     });
     connect(progress_, &ProgressStrip::retry, this, &PredictionView::recompute);
-    connect(document_, &ColonyDocument::changed, this, &PredictionView::recompute);
+    // Recomputed only while on screen; a hidden tab catches up when shown.
+    auto* refresh = new VisibleRefresh(this, [this] { recompute(); });
+    connect(document_, &ColonyDocument::changed, refresh, &VisibleRefresh::request);
     connect(selection_, &AnimalSelection::dayChanged, this, &PredictionView::recompute);
     connect(selection_, &AnimalSelection::animalChanged, this, &PredictionView::rebuildPlot);
     recompute();

@@ -3,6 +3,7 @@
 
 #include "ui/animal_selection.h"
 #include "ui/colony_document.h"
+#include "ui/visible_refresh.h"
 #include "ui/compute_runner.h"
 #include "ui/pedigree_view.h"
 #include "ui/plot_export.h"
@@ -142,7 +143,9 @@ RankTimelineView::RankTimelineView(ColonyDocument* document, AnimalSelection* se
     connect(plot_, &QCustomPlot::mouseMove, this, &RankTimelineView::hover);
     connect(plot_, &QCustomPlot::mousePress, this, [this](QMouseEvent* e) { pressedAt_ = e->pos(); });
     connect(plot_, &QCustomPlot::mouseRelease, this, &RankTimelineView::click);
-    connect(document_, &ColonyDocument::changed, this, &RankTimelineView::recompute);
+    // Recomputed only while on screen; a hidden tab catches up when shown.
+    auto* refresh = new VisibleRefresh(this, [this] { recompute(); });
+    connect(document_, &ColonyDocument::changed, refresh, &VisibleRefresh::request);
     connect(selection_, &AnimalSelection::dayChanged, this, &RankTimelineView::showDay);
     connect(selection_, &AnimalSelection::animalChanged, this, &RankTimelineView::applySelection);
     recompute();

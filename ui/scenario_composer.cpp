@@ -112,7 +112,16 @@ ScenarioComposer::ScenarioComposer(ColonyDocument* document, QWidget* parent)
         emit changed();
     });
     connect(rule_, &QComboBox::currentIndexChanged, this, &ScenarioComposer::changed);
-    connect(document_, &ColonyDocument::changed, this, &ScenarioComposer::reset);
+    // A new file starts a new scenario; an edit of the record (an evening's
+    // entries) keeps the changes composed so far and refreshes the choices.
+    connect(document_, &ColonyDocument::changed, this, [this] {
+        if (document_->lastChange().kind == ColonyDocument::Change::Reset) {
+            reset();
+        } else {
+            refreshChoices();
+            emit changed();
+        }
+    });
     reset();
 }
 

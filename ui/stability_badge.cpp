@@ -14,7 +14,14 @@ StabilityBadge::StabilityBadge(ColonyDocument* document, QWidget* parent) : QToo
     setAutoRaise(true);
     setStyleSheet(QStringLiteral("QToolButton { color: white; background: #c00000; border-radius: 3px;"
                                  " padding: 1px 8px; font-weight: bold; }"));
-    connect(document_, &ColonyDocument::changed, this, &StabilityBadge::refresh);
+    // A burst of edits (an evening's typing) re-checks the alerts once, after a pause.
+    debounce_.setSingleShot(true);
+    debounce_.setInterval(3000);
+    connect(&debounce_, &QTimer::timeout, this, &StabilityBadge::refresh);
+    connect(document_, &ColonyDocument::changed, this, [this] {
+        if (document_->lastChange().kind == ColonyDocument::Change::Reset) refresh();
+        else debounce_.start();
+    });
     refresh();
 }
 

@@ -1,5 +1,6 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
+#include <QTimer>
 #include <QToolButton>
 
 namespace hierloom::ui {
@@ -21,6 +22,7 @@ public:
 private:
     ColonyDocument* document_;
     QStringList groups_;
+    QTimer debounce_;
 };
 
 } // namespace hierloom::ui

@@ -5,6 +5,7 @@
 #include "core/stability_settings.h"
 #include "ui/caution_label.h"
 #include "ui/colony_document.h"
+#include "ui/visible_refresh.h"
 #include "ui/qt_convert.h"
 #include "ui/stability_thresholds_dialog.h"
 
@@ -139,10 +140,12 @@ StabilityView::StabilityView(ColonyDocument* document, QWidget* parent)
     connect(length_, &QComboBox::currentIndexChanged, this, &StabilityView::recompute);
     connect(thresholdsButton_, &QPushButton::clicked, this, &StabilityView::editThresholds);
     connect(alerts_, &QTreeWidget::currentItemChanged, this, &StabilityView::showEvidence);
-    connect(document_, &ColonyDocument::changed, this, [this] {
+    // Recomputed only while on screen; a hidden tab catches up when shown.
+    auto* refresh = new VisibleRefresh(this, [this] {
         refreshGroups();
         recompute();
     });
+    connect(document_, &ColonyDocument::changed, refresh, &VisibleRefresh::request);
     refreshGroups();
     recompute();
 }

@@ -150,7 +150,9 @@ TEST(PlannerView, SplitByMatrilinesSaveAndReopen)
         if (!m.groupAfter.empty()) groupsOfLine[m.matriarch].insert(m.groupAfter);
     for (const auto& [line, groups] : groupsOfLine) {
         EXPECT_EQ(groups.size(), 1u) << line;
-        if (moving.count(line)) EXPECT_EQ(*groups.begin(), "South Pen");
+        if (moving.count(line)) {
+            EXPECT_EQ(*groups.begin(), "South Pen");
+        }
     }
     const auto composition = planner->findChildren<QLabel*>(QStringLiteral("composition"));
     EXPECT_EQ(composition.size(), 2);
