@@ -91,7 +91,7 @@ std::optional<int> parseTimeOfDay(std::string_view s)
 
 std::string formatTimeOfDay(int minutes)
 {
-    char buf[8];
+    char buf[32];
     std::snprintf(buf, sizeof buf, "%02d:%02d", minutes / 60, minutes % 60);
     return buf;
 }

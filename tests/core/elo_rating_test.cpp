@@ -145,7 +145,7 @@ TEST(EloRating, DrawsHalfAndIgnore)
 
 TEST(EloRating, MatchesPlainFormulaOnRandomData)
 {
-    // Brute force: the kernel against a direct transcription of the methods.md formulas.
+    // Brute force: the kernel against a plain, line-by-line implementation of the methods.md formulas.
     const std::vector<Bout> bouts = randomBouts(12, 3000, 7, 0.1);
     for (EloCurve curve : {EloCurve::Logistic, EloCurve::Normal})
         for (DrawPolicy draws : {DrawPolicy::Half, DrawPolicy::Ignore}) {
