@@ -45,8 +45,8 @@ int main(int argc, char* argv[])
     const QCommandLineOption viewOption(
         QStringLiteral("view"),
         QCoreApplication::translate("main",
-                                    "Open on this view: animals, encounters, timeline, prediction, matrix, hierarchy, entry, planner "
-                                    "or stability."),
+                                    "Open on this view: animals, encounters, timeline, prediction, matrix, hierarchy, sex-ratio, "
+                                    "entry, planner or stability."),
         QStringLiteral("name"));
     parser.addOption(viewOption);
     parser.process(*app);

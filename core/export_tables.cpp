@@ -2,6 +2,7 @@
 #include "core/export_tables.h"
 
 #include "core/csv_writer.h"
+#include "core/discordance.h"
 #include "core/hierarchy_metrics.h"
 #include "core/matriline.h"
 #include "core/number_format.h"
@@ -133,6 +134,34 @@ ExportTable metricsByPeriodTable(const Colony& colony, const ResidenceIndex& whe
     return t;
 }
 
+ExportTable discordanceByMonthTable(const Colony& colony, const ResidenceIndex& where, const SelectionOptions& selection,
+                                    const EloSettings& elo, int maturityYears)
+{
+    ExportTable t{"discordance_by_month",
+                  {"method", "period_start", "period_end", "ranked", "observed", "comparable", "discordant",
+                   "conformity", "tau_b"},
+                  {}};
+    InheritanceOptions o;
+    o.group = selection.group;
+    o.maturityYears = maturityYears;
+    o.elo = elo;
+    o.elo.draws = selection.draws;
+    const Matrilines lines(colony);
+    const ConformitySeries series = monthlyConformity(colony, where, lines, o);
+    auto add = [&](const char* method, const std::vector<ConformityPoint>& points) {
+        for (const ConformityPoint& p : points) {
+            if ((selection.from && p.periodEnd < *selection.from) || (selection.to && p.periodStart > *selection.to))
+                continue;
+            t.rows.push_back({method, formatDate(p.periodStart), formatDate(p.periodEnd), std::to_string(p.ranked),
+                              std::to_string(p.observed), std::to_string(p.comparable), std::to_string(p.discordant),
+                              formatNumber(p.conformity), formatNumber(p.tauB)});
+        }
+    };
+    add("elo", series.elo);
+    add("ds", series.davidsScore);
+    return t;
+}
+
 ExportTable maternalRankTable(const std::vector<MaternalRankRow>& births)
 {
     ExportTable t{"maternal_ranks",
@@ -215,6 +244,7 @@ std::vector<ExportTable> researchTables(const Colony& colony, const ResidenceInd
     out.push_back(maternalRankTable(births));
     out.push_back(sexRatioTable(analysis));
     out.push_back(rankThirdsTable(analysis));
+    out.push_back(discordanceByMonthTable(colony, where, o.selection, o.ranks.elo, o.maturityYears));
     return out;
 }
 

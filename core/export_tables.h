@@ -50,6 +50,14 @@ ExportTable metricsByPeriodTable(const Colony& colony, const ResidenceIndex& whe
                                  const std::vector<CalendarPeriod>& periods, int randomisations, std::uint64_t seed,
                                  unsigned threads);
 
+/// Discordance from the matrilineal inheritance prediction per month
+/// (monthlyConformity; Kawamura 1958 for the prediction, Kendall 1945 for
+/// tau-b): long format, one row per method (elo, ds) and month, columns as
+/// `inherit --monthly`. Months outside the selection's from/to are left out;
+/// group and draws come from the selection.
+ExportTable discordanceByMonthTable(const Colony& colony, const ResidenceIndex& where, const SelectionOptions& selection,
+                                    const EloSettings& elo, int maturityYears);
+
 /// The per-birth maternal rank table (Trivers & Willard 1973; methods.md):
 /// rank, ranked females and relative rank at conception and at birth,
 /// whether the birth is used and, if not, the reason code.
@@ -80,7 +88,7 @@ struct ResearchExportOptions {
 };
 
 /// Every research table: ranks by period, win matrix, metrics by period,
-/// maternal ranks, sex-ratio figures and rank thirds.
+/// maternal ranks, sex-ratio figures, rank thirds and discordance by month.
 std::vector<ExportTable> researchTables(const Colony& colony, const ResidenceIndex& where,
                                         const ResearchExportOptions& options);
 

@@ -6,6 +6,7 @@
 #include "ui/matrix_view.h"
 #include "ui/prediction_view.h"
 #include "ui/rank_timeline_view.h"
+#include "ui/sex_ratio_view.h"
 
 #include <QTabWidget>
 
@@ -27,6 +28,8 @@ AnalysisViews addAnalysisViews(QTabWidget* tabs, ColonyDocument* document, QObje
     tabs->addTab(v.prediction, QObject::tr("Prediction"));
     tabs->addTab(v.matrix, QObject::tr("Matrix"));
     tabs->addTab(v.hierarchy, QObject::tr("Hierarchy"));
+    v.sexRatio = new SexRatioView(document, tabs);
+    tabs->addTab(v.sexRatio, QObject::tr("Sex Ratio"));
     return v;
 }
 

@@ -11,6 +11,7 @@ class HierarchyPlotsView;
 class MatrixView;
 class PredictionView;
 class RankTimelineView;
+class SexRatioView;
 
 /// The plot views of the main window and the selection that links them.
 struct AnalysisViews {
@@ -19,10 +20,11 @@ struct AnalysisViews {
     PredictionView* prediction = nullptr;
     MatrixView* matrix = nullptr;
     HierarchyPlotsView* hierarchy = nullptr;
+    SexRatioView* sexRatio = nullptr;
 };
 
-/// Creates the Timeline, Prediction, Matrix and Hierarchy tabs (in that order,
-/// named by objectName "timeline", "prediction", "matrix", "hierarchy").
+/// Creates the Timeline, Prediction, Matrix, Hierarchy and Sex Ratio tabs (in that
+/// order, named by objectName "timeline", "prediction", "matrix", "hierarchy", "sex-ratio").
 AnalysisViews addAnalysisViews(QTabWidget* tabs, ColonyDocument* document, QObject* owner);
 
 } // namespace hierloom::ui

@@ -2,6 +2,7 @@
 #include "ui/hierarchy_plots_view.h"
 
 #include "ui/colony_document.h"
+#include "ui/help_button.h"
 #include "ui/visible_refresh.h"
 #include "ui/compute_runner.h"
 #include "ui/plot_export.h"
@@ -34,6 +35,9 @@ HierarchyPlotsView::HierarchyPlotsView(ColonyDocument* document, QWidget* parent
 {
     auto* controls = new QHBoxLayout;
     controls->addWidget(new QLabel(tr("Month by month over the whole record"), this));
+    // One "?" per figure plotted, in the order of the panels.
+    for (const char* key : {"h_prime", "steepness", "ttri", "conformity"})
+        controls->addWidget(new HelpButton(QString::fromLatin1(key), this));
     controls->addWidget(progress_, 1);
     controls->addStretch();
     controls->addWidget(makeExportButton(plot_, QStringLiteral("hierarchy-by-month"), this));

@@ -3,6 +3,7 @@
 
 #include "core/colony_file_error.h"
 #include "ui/animal_view.h"
+#include "ui/backup_actions.h"
 #include "ui/colony_document.h"
 #include "ui/colony_edit_facade.h"
 #include "ui/edit_menus.h"
@@ -11,11 +12,14 @@
 #include "ui/encounter_view.h"
 #include "ui/help_menu.h"
 #include "ui/import_dialog.h"
+#include "ui/record_history_dialog.h"
+#include "ui/research_export_dialog.h"
 #include "ui/welcome_panel.h"
 
 #include <QAction>
 #include <QApplication>
 #include <QCloseEvent>
+#include <QComboBox>
 #include <QDir>
 #include <QFileDialog>
 #include <QFileInfo>
@@ -71,6 +75,8 @@ MainWindow::MainWindow(const QString& colonyPath, QWidget* parent)
         showView(QStringLiteral("entry"));
         entry_->focusEntry();
     });
+    addHistoryActions(animals_, encounters_, document_);
+    connect(entry_->observerBox(), &QComboBox::currentTextChanged, backups_, &BackupActions::setSessionObserver);
     connect(document_, &ColonyDocument::writeFailed, this,
             [this](const QString& message) { reportError(tr("Cannot Save the Change"), message); });
     connect(welcome_, &WelcomePanel::openRequested, this, [this] { openDialog(false); });
@@ -111,6 +117,11 @@ void MainWindow::buildMenus()
     importAction_ = file->addAction(tr("&Import CSV..."), this, &MainWindow::importCsv);
     importAction_->setShortcut(QKeySequence(tr("Ctrl+I")));
     addReportActions(file, this, document_);
+    addResearchExportAction(file, this, document_);
+    file->addSeparator();
+    backups_ = new BackupActions(
+        file, this, document_, [this](const QString& title, const QString& message) { reportError(title, message); },
+        [this](const QString& title, const QString& message) { return askQuestion(title, message); });
     file->addSeparator();
     closeAction_ = file->addAction(tr("&Close"), this, &MainWindow::closeColony);
     closeAction_->setShortcut(QKeySequence::Close);
@@ -166,6 +177,11 @@ void MainWindow::reportError(const QString& title, const QString& message)
     QMessageBox::warning(this, title, message);
 }
 
+bool MainWindow::askQuestion(const QString& title, const QString& message)
+{
+    return QMessageBox::question(this, title, message) == QMessageBox::Yes;
+}
+
 bool MainWindow::openColony(const QString& path, bool readOnly)
 {
     // A large colony takes a few seconds to read; say so with the cursor.
@@ -175,13 +191,23 @@ bool MainWindow::openColony(const QString& path, bool readOnly)
         document_->open(path, readOnly);
     } catch (const core::ColonyFileError& error) {
         if (error.kind() == core::ColonyFileError::Kind::Missing) recent_.remove(path);
-        reportError(tr("Cannot Open Colony"), QString::fromUtf8(error.what()));
-        return false;
+        // A damaged file with backups: the person may take the newest backup instead.
+        if (!backups_->offerBackupFor(path, error)) {
+            reportError(tr("Cannot Open Colony"), QString::fromUtf8(error.what()));
+            return false;
+        }
+        try {
+            document_->open(path, readOnly);
+        } catch (const std::exception& again) {
+            reportError(tr("Cannot Open Colony"), QString::fromUtf8(again.what()));
+            return false;
+        }
     } catch (const std::exception& error) {
         reportError(tr("Cannot Open Colony"),
                     tr("%1 could not be read: %2").arg(QDir::toNativeSeparators(path), QString::fromUtf8(error.what())));
         return false;
     }
+    backups_->afterOpen();
     recent_.add(path);
     setLastFolder(path);
     return true;

@@ -15,6 +15,7 @@ class QTabWidget;
 namespace hierloom::ui {
 
 class AnimalView;
+class BackupActions;
 class ColonyDocument;
 class ColonyEditFacade;
 class EncounterEntryPanel;
@@ -48,6 +49,8 @@ public:
     const ColonyManagerViews& managerViews() const { return manager_; }
     /// Shows the tab named `name` (e.g. "timeline", "matrix"); false when there is none.
     bool showView(const QString& name);
+    /// File > Back Up Now, Restore from Backup..., Merge Another Colony... (issue 9).
+    BackupActions* backupActions() const { return backups_; }
 
 signals:
     /// Every error shown to the person, also as a signal (for tests and logs).
@@ -56,6 +59,8 @@ signals:
 protected:
     /// Shows an error; tests override it to observe errors without a modal box.
     virtual void reportError(const QString& title, const QString& message);
+    /// Asks a yes/no question (offer of a backup, restore confirmation); tests override it.
+    virtual bool askQuestion(const QString& title, const QString& message);
     void closeEvent(QCloseEvent* event) override;
 
 private:
@@ -79,6 +84,7 @@ private:
     AnalysisViews analysis_;
     ColonyManagerViews manager_;
     ColonyEditFacade* facade_ = nullptr;
+    BackupActions* backups_ = nullptr;
     EncounterEntryPanel* entry_ = nullptr;
     QLabel* fileLabel_;
     QLabel* animalCount_;

@@ -4,6 +4,7 @@
 #include "core/encounter_selection.h"
 #include "core/matriline.h"
 #include "ui/colony_document.h"
+#include "ui/help_button.h"
 #include "ui/visible_refresh.h"
 #include "ui/compute_runner.h"
 #include "ui/plot_export.h"
@@ -20,6 +21,7 @@
 #include <qcustomplot.h>
 
 #include <cmath>
+#include <utility>
 
 namespace hierloom::ui {
 
@@ -56,6 +58,15 @@ MatrixView::MatrixView(ColonyDocument* document, QWidget* parent)
     auto* controls = new QHBoxLayout;
     controls->addWidget(new QLabel(tr("Order by:"), this));
     controls->addWidget(methodBox_);
+    // The "?" follows the ordering method chosen (setMethod shows the matching one).
+    for (const auto& [method, key] : {std::pair{core::RankMethod::Elo, "elo"},
+                                      std::pair{core::RankMethod::DavidsScore, "davids_score"},
+                                      std::pair{core::RankMethod::Isi, "isi"}}) {
+        auto* help = new HelpButton(QString::fromLatin1(key), this);
+        help->setProperty("rankMethod", static_cast<int>(method));
+        help->setVisible(method == method_);
+        controls->addWidget(help);
+    }
     controls->addWidget(new QLabel(tr("From:"), this));
     controls->addWidget(fromEdit_);
     controls->addWidget(new QLabel(tr("To:"), this));
@@ -109,6 +120,8 @@ void MatrixView::setMethod(core::RankMethod method)
     method_ = method;
     const QSignalBlocker block(methodBox_);
     methodBox_->setCurrentIndex(methodBox_->findData(static_cast<int>(method)));
+    for (HelpButton* help : findChildren<HelpButton*>())
+        help->setVisible(help->property("rankMethod").toInt() == static_cast<int>(method));
     recompute();
 }
 

@@ -3,6 +3,7 @@
 
 #include "ui/animal_selection.h"
 #include "ui/colony_document.h"
+#include "ui/help_button.h"
 #include "ui/visible_refresh.h"
 #include "ui/compute_runner.h"
 #include "ui/plot_export.h"
@@ -55,6 +56,8 @@ PredictionView::PredictionView(ColonyDocument* document, AnimalSelection* select
     controls->addWidget(dateEdit_);
     controls->addWidget(new QLabel(tr("Rule:"), this));
     controls->addWidget(ruleBox_);
+    for (const char* key : {"conformity", "tau_b", "discordant_dyads"})
+        controls->addWidget(new HelpButton(QString::fromLatin1(key), this));
     controls->addWidget(progress_, 1);
     controls->addStretch();
     controls->addWidget(makeExportButton(plot_, QStringLiteral("predicted-vs-observed"), this));

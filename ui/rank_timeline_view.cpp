@@ -3,6 +3,7 @@
 
 #include "ui/animal_selection.h"
 #include "ui/colony_document.h"
+#include "ui/help_button.h"
 #include "ui/visible_refresh.h"
 #include "ui/compute_runner.h"
 #include "ui/pedigree_view.h"
@@ -76,6 +77,7 @@ RankTimelineView::RankTimelineView(ColonyDocument* document, AnimalSelection* se
     auto* controls = new QHBoxLayout;
     controls->addWidget(new QLabel(tr("Show:"), this));
     controls->addWidget(scaleBox_);
+    controls->addWidget(new HelpButton(QStringLiteral("elo"), this));
     controls->addWidget(stepBox_);
     controls->addWidget(lineBox_);
     controls->addWidget(groupBox_);

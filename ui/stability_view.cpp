@@ -5,6 +5,7 @@
 #include "core/stability_settings.h"
 #include "ui/caution_label.h"
 #include "ui/colony_document.h"
+#include "ui/help_button.h"
 #include "ui/visible_refresh.h"
 #include "ui/qt_convert.h"
 #include "ui/stability_thresholds_dialog.h"
@@ -86,6 +87,8 @@ StabilityView::StabilityView(ColonyDocument* document, QWidget* parent)
     controls->addWidget(group_);
     controls->addWidget(new QLabel(tr("Per:"), this));
     controls->addWidget(length_);
+    for (const char* key : {"counter_dominance", "severe_aggression", "rank_changes"})
+        controls->addWidget(new HelpButton(QString::fromLatin1(key), this));
     controls->addStretch();
     controls->addWidget(thresholdsButton_);
     banner_->setObjectName(QStringLiteral("stabilityBanner"));

@@ -2,6 +2,7 @@
 #include "core/export_tables.h"
 
 #include "core/csv_reader.h"
+#include "core/discordance.h"
 #include "core/demo_colony.h"
 #include "core/hierarchy_metrics.h"
 #include "core/number_format.h"
@@ -207,11 +208,51 @@ TEST(ExportTables, ResearchTablesHoldEveryTable)
     std::vector<std::string> names;
     for (const ExportTable& t : tables) names.push_back(t.name);
     EXPECT_EQ(names, (std::vector<std::string>{"ranks_by_period", "win_matrix", "metrics_by_period", "maternal_ranks",
-                                                "sex_ratio", "sex_ratio_by_rank_third"}));
+                                                "sex_ratio", "sex_ratio_by_rank_third", "discordance_by_month"}));
     // The maternal table and the sex-ratio figures agree: used births = births_used.
     int used = 0;
     for (const auto& row : tables[3].rows) used += row[11] == "1";
     EXPECT_EQ(tables[4].rows[0][0], "births_used");
     EXPECT_EQ(tables[4].rows[0][1], std::to_string(used));
     EXPECT_EQ(tables[3].rows.size(), d.colony.animals.size()); // every demo animal has a birth date
+}
+
+TEST(ExportTables, DiscordanceByMonthEqualsTheMonthlyConformitySeries)
+{
+    const Demo& d = demoData();
+    const ExportTable t = discordanceByMonthTable(d.colony, d.where, {}, EloSettings{}, 4);
+    // One code path: every row is the monthlyConformity point printed, Elo months first, then David's score.
+    InheritanceOptions o;
+    o.maturityYears = 4;
+    const ConformitySeries s = monthlyConformity(d.colony, d.where, Matrilines(d.colony), o);
+    ASSERT_FALSE(s.elo.empty());
+    ASSERT_EQ(t.rows.size(), s.elo.size() + s.davidsScore.size());
+    int withConformity = 0;
+    for (size_t i = 0; i < t.rows.size(); ++i) {
+        const bool isElo = i < s.elo.size();
+        const ConformityPoint& p = isElo ? s.elo[i] : s.davidsScore[i - s.elo.size()];
+        const auto& row = t.rows[i];
+        EXPECT_EQ(row[0], isElo ? "elo" : "ds");
+        EXPECT_EQ(row[1], formatDate(p.periodStart));
+        EXPECT_EQ(row[2], formatDate(p.periodEnd));
+        EXPECT_EQ(row[6], std::to_string(p.discordant));
+        EXPECT_EQ(row[5], std::to_string(p.comparable));
+        ASSERT_EQ(row[7].empty(), !p.conformity);
+        if (p.conformity) {
+            ++withConformity;
+            EXPECT_EQ(parseDouble(row[7]), *p.conformity); // round-trip form: the same double
+        }
+        ASSERT_EQ(row[8].empty(), !p.tauB);
+        if (p.tauB) {
+            EXPECT_EQ(parseDouble(row[8]), *p.tauB);
+        }
+    }
+    EXPECT_GT(withConformity, 0);
+    // A window keeps only the months it touches.
+    SelectionOptions sel;
+    sel.from = s.elo[2].periodStart;
+    sel.to = s.elo[3].periodEnd;
+    const ExportTable w = discordanceByMonthTable(d.colony, d.where, sel, EloSettings{}, 4);
+    ASSERT_EQ(w.rows.size(), 4U); // two months, two methods
+    EXPECT_EQ(w.rows[0][1], formatDate(s.elo[2].periodStart));
 }

@@ -7,6 +7,11 @@
 #include "ui/help_button.h"
 #include "ui/help_topics.h"
 #include "ui/main_window.h"
+#include "ui/hierarchy_plots_view.h"
+#include "ui/matrix_view.h"
+#include "ui/prediction_view.h"
+#include "ui/rank_timeline_view.h"
+#include "ui/stability_view.h"
 #include "ui/translations.h"
 
 #include <QAction>
@@ -195,4 +200,43 @@ TEST(Translations, EnglishCatalogueIsCompiledInAndLoads)
     EXPECT_TRUE(translator.load(QLocale(QLocale::English), QStringLiteral("hierloom"), QStringLiteral("_"),
                                 QString::fromLatin1(ui::translationsResource)));
     EXPECT_EQ(translator.language(), QStringLiteral("en"));
+}
+
+// Each figure view carries a "?" for its figures, keyed to an entry of the topic list.
+TEST(HelpButton, EveryFigureViewHasItsHelpButtons)
+{
+    ui::MainWindow window;
+    const ui::AnalysisViews& views = window.analysisViews();
+    const std::vector<std::pair<QWidget*, QStringList>> expected = {
+        {views.hierarchy, {"h_prime", "steepness", "ttri", "conformity"}},
+        {views.matrix, {"elo", "davids_score", "isi"}},
+        {views.prediction, {"conformity", "tau_b", "discordant_dyads"}},
+        {views.timeline, {"elo"}},
+        {window.managerViews().stability, {"counter_dominance", "severe_aggression", "rank_changes"}},
+    };
+    for (const auto& [view, keys] : expected) {
+        ASSERT_NE(view, nullptr);
+        QStringList found;
+        for (const ui::HelpButton* button : view->findChildren<ui::HelpButton*>()) {
+            EXPECT_NE(ui::findHelpTopic(button->anchor().toUtf8().constData()), nullptr)
+                << view->metaObject()->className() << ": " << button->anchor().toStdString();
+            found << button->anchor();
+        }
+        EXPECT_FALSE(found.isEmpty()) << view->metaObject()->className();
+        for (const QString& key : keys)
+            EXPECT_TRUE(found.contains(key)) << view->metaObject()->className() << " lacks " << key.toStdString();
+    }
+
+    // The matrix shows the "?" of the ordering method in use.
+    const auto visibleKeys = [&] {
+        QStringList shown;
+        for (const ui::HelpButton* b : views.matrix->findChildren<ui::HelpButton*>())
+            if (b->isVisibleTo(views.matrix)) shown << b->anchor();
+        return shown;
+    };
+    EXPECT_EQ(visibleKeys(), QStringList{QStringLiteral("elo")});
+    views.matrix->setMethod(core::RankMethod::DavidsScore);
+    EXPECT_EQ(visibleKeys(), QStringList{QStringLiteral("davids_score")});
+    views.matrix->setMethod(core::RankMethod::Isi);
+    EXPECT_EQ(visibleKeys(), QStringList{QStringLiteral("isi")});
 }
