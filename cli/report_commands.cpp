@@ -134,9 +134,9 @@ void runReport(CommandContext& ctx, const ReportOptions& o)
 
 void addStabilityCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
 {
-    auto* cmd = app.add_subcommand(
-        "stability",
-        "the stability watch of one group per week or month: counter-dominance (decided encounters won by the\n"
+    auto* cmd = app.add_subcommand("stability", "counter-dominance, severe aggression and rank changes per period, with alerts");
+    cmd->footer(
+        "The stability watch of one group per week or month: counter-dominance (decided encounters won by the\n"
         "lower-rated animal, Elo just before each encounter), the busiest pair of matrilines among them, mean rank\n"
         "change per animal, severe encounters per animal-day; alerts (thresholds from the colony file's settings)\n"
         "are described on standard error with their evidence.");
@@ -152,9 +152,9 @@ void addStabilityCommand(CLI::App& app, CommandContext& ctx, CommandAction& acti
 
 void addReportCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
 {
-    auto* cmd = app.add_subcommand(
-        "report",
-        "the printable hierarchy report of one group at one date as a PDF: observed order with matrilines,\n"
+    auto* cmd = app.add_subcommand("report", "the printable hierarchy report of one group at one date, as a PDF");
+    cmd->footer(
+        "Contents: observed order with matrilines,\n"
         "predicted order, discordances, recent rank changes, stability figures and plots, data window and methods.");
     auto o = std::make_shared<ReportOptions>();
     cmd->add_option("COLONY_FILE", o->colony, "the colony file")->required();
