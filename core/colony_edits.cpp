@@ -3,6 +3,7 @@
 
 #include "core/animal_check.h"
 #include "core/encounter_check.h"
+#include "core/record_binding.h"
 #include "core/residence_index.h"
 #include "core/sqlite_statement.h"
 
@@ -17,11 +18,6 @@ namespace {
 
 std::string quoted(std::string_view s) { return "'" + std::string(s) + "'"; }
 
-std::optional<std::string> dateText(const std::optional<Day>& d)
-{
-    if (!d) return std::nullopt;
-    return formatDate(*d);
-}
 
 /// Runs `body` inside one IMMEDIATE transaction, rolling back on any exception.
 template <typename F>
@@ -35,21 +31,6 @@ void inTransaction(ColonyStore& store, F&& body)
         sqlite3_exec(store.handle(), "ROLLBACK", nullptr, nullptr, nullptr);
         throw;
     }
-}
-
-void bindAnimal(SqliteStatement& q, const Animal& a)
-{
-    q.bind(1, a.uid);
-    q.bind(2, a.id);
-    q.bind(3, a.name);
-    q.bind(4, toString(a.sex));
-    q.bindOptional(5, dateText(a.birth));
-    q.bindNullableText(6, a.mother);
-    q.bindNullableText(7, a.father);
-    q.bindOptional(8, dateText(a.entry));
-    q.bindNullableText(9, toString(a.entryType));
-    q.bindOptional(10, dateText(a.exit));
-    q.bindNullableText(11, toString(a.exitType));
 }
 
 const Animal* findByUid(const Colony& colony, const std::string& uid)
@@ -252,7 +233,7 @@ void writeAnimalChange(ColonyStore& store, const std::optional<AnimalRecord>& fr
             SqliteStatement up(db, "UPDATE animal SET uid = ?1, id = ?2, name = ?3, sex = ?4, birth_date = ?5, "
                                    "mother = ?6, father = ?7, entry_date = ?8, entry_type = ?9, exit_date = ?10, "
                                    "exit_type = ?11 WHERE uid = ?12");
-            bindAnimal(up, to->animal);
+            bindAnimalColumns(up, to->animal);
             up.bind(12, from->animal.uid);
             up.run();
         } else if (from) {
@@ -260,19 +241,14 @@ void writeAnimalChange(ColonyStore& store, const std::optional<AnimalRecord>& fr
             del.bind(1, from->animal.uid);
             del.run();
         } else if (to) {
-            SqliteStatement ins(db, "INSERT INTO animal(uid, id, name, sex, birth_date, mother, father, entry_date, "
-                                    "entry_type, exit_date, exit_type) VALUES (?,?,?,?,?,?,?,?,?,?,?)");
-            bindAnimal(ins, to->animal);
+            SqliteStatement ins(db, kInsertAnimalSql);
+            bindAnimalColumns(ins, to->animal);
             ins.run();
         }
         if (to) {
-            SqliteStatement ins(db, "INSERT INTO residence(uid, animal, grp, from_date, to_date) VALUES (?,?,?,?,?)");
+            SqliteStatement ins(db, kInsertResidenceSql);
             for (const Residence& r : to->residences) {
-                ins.bind(1, r.uid);
-                ins.bind(2, r.animal);
-                ins.bind(3, r.group);
-                ins.bind(4, formatDate(r.from));
-                ins.bindOptional(5, dateText(r.to));
+                bindResidenceColumns(ins, r);
                 ins.run();
             }
         }
@@ -303,24 +279,14 @@ void writeEncounterChange(ColonyStore& store, const std::vector<Encounter>& remo
             q.step();
             seq = q.integer(0);
         }
-        SqliteStatement ins(db, "INSERT INTO encounter(seq, uid, date, time, winner, loser, outcome, behaviour, "
-                                "grp, observer, note) VALUES (?,?,?,?,?,?,?,?,?,?,?)");
+        SqliteStatement ins(db, kInsertEncounterSql);
         SqliteStatement obs(db, "INSERT OR IGNORE INTO observer(name) VALUES (?)");
+        std::string date;
         for (Encounter& e : insert) {
             if (e.uid.empty()) e.uid = newUid();
             if (e.seq <= 0) e.seq = ++seq;
-            ins.bind(1, e.seq);
-            ins.bind(2, e.uid);
-            ins.bind(3, formatDate(e.date));
-            if (e.time) ins.bind(4, static_cast<std::int64_t>(*e.time));
-            else ins.bindNull(4);
-            ins.bind(5, e.winner);
-            ins.bind(6, e.loser);
-            ins.bind(7, toString(e.outcome));
-            ins.bind(8, e.behaviour);
-            ins.bind(9, e.group);
-            ins.bind(10, e.observer);
-            ins.bind(11, e.note);
+            date = formatDate(e.date);
+            bindEncounterColumns(ins, e, date);
             ins.run();
             if (!e.observer.empty()) {
                 obs.bind(1, e.observer);

@@ -2,6 +2,7 @@
 #include "core/colony_store.h"
 
 #include "core/colony_schema.h"
+#include "core/record_binding.h"
 #include "core/sqlite_statement.h"
 
 #include <sqlite3.h>
@@ -19,11 +20,6 @@ namespace {
 
 using Kind = ColonyFileError::Kind;
 
-std::optional<std::string> dateText(const std::optional<Day>& d)
-{
-    if (!d) return std::nullopt;
-    return formatDate(*d);
-}
 
 std::optional<Day> dayOf(const std::optional<std::string>& text)
 {
@@ -408,33 +404,18 @@ void ColonyStore::append(std::vector<Animal>& animals, std::vector<Residence>& r
     exec(nested ? "SAVEPOINT append_records" : "BEGIN IMMEDIATE");
     try {
         {
-            SqliteStatement ins(db_, "INSERT INTO animal(uid, id, name, sex, birth_date, mother, father, entry_date, "
-                                     "entry_type, exit_date, exit_type) VALUES (?,?,?,?,?,?,?,?,?,?,?)");
+            SqliteStatement ins(db_, kInsertAnimalSql);
             for (Animal& a : animals) {
                 if (a.uid.empty()) a.uid = newUid();
-                ins.bind(1, a.uid);
-                ins.bind(2, a.id);
-                ins.bind(3, a.name);
-                ins.bind(4, toString(a.sex));
-                ins.bindOptional(5, dateText(a.birth));
-                ins.bindNullableText(6, a.mother);
-                ins.bindNullableText(7, a.father);
-                ins.bindOptional(8, dateText(a.entry));
-                ins.bindNullableText(9, toString(a.entryType));
-                ins.bindOptional(10, dateText(a.exit));
-                ins.bindNullableText(11, toString(a.exitType));
+                bindAnimalColumns(ins, a);
                 ins.run();
             }
         }
         {
-            SqliteStatement ins(db_, "INSERT INTO residence(uid, animal, grp, from_date, to_date) VALUES (?,?,?,?,?)");
+            SqliteStatement ins(db_, kInsertResidenceSql);
             for (Residence& r : residences) {
                 if (r.uid.empty()) r.uid = newUid();
-                ins.bind(1, r.uid);
-                ins.bind(2, r.animal);
-                ins.bind(3, r.group);
-                ins.bind(4, formatDate(r.from));
-                ins.bindOptional(5, dateText(r.to));
+                bindResidenceColumns(ins, r);
                 ins.run();
             }
         }
@@ -447,26 +428,13 @@ void ColonyStore::append(std::vector<Animal>& animals, std::vector<Residence>& r
             }
             // One audit row for a bulk append instead of a million (see DEVELOPERS.md).
             if (bulk) exec("INSERT INTO audit_pause(reason) VALUES ('bulk append')");
-            SqliteStatement ins(db_, "INSERT INTO encounter(seq, uid, date, time, winner, loser, outcome, behaviour, "
-                                     "grp, observer, note) VALUES (?,?,?,?,?,?,?,?,?,?,?)");
+            SqliteStatement ins(db_, kInsertEncounterSql);
             std::string date;
             for (Encounter& e : encounters) {
                 if (e.uid.empty()) e.uid = newUid();
                 e.seq = ++seq;
                 date = formatDate(e.date);
-                // Static binding: every bound string outlives the run() below.
-                ins.bind(1, e.seq);
-                ins.bindStatic(2, e.uid);
-                ins.bindStatic(3, date);
-                if (e.time) ins.bind(4, static_cast<std::int64_t>(*e.time));
-                else ins.bindNull(4);
-                ins.bindStatic(5, e.winner);
-                ins.bindStatic(6, e.loser);
-                ins.bindStatic(7, toString(e.outcome));
-                ins.bindStatic(8, e.behaviour);
-                ins.bindStatic(9, e.group);
-                ins.bindStatic(10, e.observer);
-                ins.bindStatic(11, e.note);
+                bindEncounterColumns(ins, e, date);
                 ins.run();
             }
             if (bulk) {
