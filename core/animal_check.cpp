@@ -11,11 +11,9 @@ namespace hierloom::core {
 
 namespace {
 
-std::string quoted(std::string_view s) { return "'" + std::string(s) + "'"; }
-
 void futureDate(const std::optional<Day>& d, Day today, const char* field, FieldProblems& out)
 {
-    if (d && *d > today) out.push_back({field, quoted(formatDate(*d)) + " is in the future"});
+    if (d && *d > today) out.push_back({field, quotedValue(formatDate(*d)) + " is in the future"});
 }
 
 } // namespace
@@ -30,8 +28,8 @@ FieldProblems checkAnimal(const Animal& a, const std::vector<Animal>& colony, Da
         if (a.uid.empty() || other.uid != a.uid) byId.emplace(other.id, &other);
 
     if (a.id.empty()) out.push_back({"id", "is empty; every animal needs an id"});
-    else if (!isValidAnimalId(a.id)) out.push_back({"id", quoted(a.id) + " must be 1-32 letters, digits, '_', '-' or '.'"});
-    else if (byId.count(a.id)) out.push_back({"id", quoted(a.id) + " is already in the colony"});
+    else if (!isValidAnimalId(a.id)) out.push_back({"id", quotedValue(a.id) + " must be 1-32 letters, digits, '_', '-' or '.'"});
+    else if (byId.count(a.id)) out.push_back({"id", quotedValue(a.id) + " is already in the colony"});
 
     futureDate(a.birth, today, "birth_date", out);
     futureDate(a.entry, today, "entry_date", out);
@@ -58,11 +56,11 @@ FieldProblems checkAnimal(const Animal& a, const std::vector<Animal>& colony, Da
                             Parent{a.father, "father", Sex::Male, "male", "his"}}) {
         if (p.id.empty()) continue;
         auto it = byId.find(p.id);
-        if (p.id == a.id) out.push_back({p.field, quoted(p.id) + " is the animal itself"});
-        else if (it == byId.end()) out.push_back({p.field, quoted(p.id) + " is not an animal of the colony"});
-        else if (it->second->sex != p.sex) out.push_back({p.field, quoted(p.id) + " is not recorded as " + p.word});
+        if (p.id == a.id) out.push_back({p.field, quotedValue(p.id) + " is the animal itself"});
+        else if (it == byId.end()) out.push_back({p.field, quotedValue(p.id) + " is not an animal of the colony"});
+        else if (it->second->sex != p.sex) out.push_back({p.field, quotedValue(p.id) + " is not recorded as " + p.word});
         else if (it->second->birth && a.birth && *it->second->birth >= *a.birth)
-            out.push_back({p.field, quoted(p.id) + " was born on " + formatDate(*it->second->birth) + ", not before " +
+            out.push_back({p.field, quotedValue(p.id) + " was born on " + formatDate(*it->second->birth) + ", not before " +
                                         p.pronoun + " offspring (" + formatDate(*a.birth) + ")"});
     }
 
@@ -85,7 +83,7 @@ FieldProblems checkAnimal(const Animal& a, const std::vector<Animal>& colony, Da
             todo.push_back(&it->second->father);
         }
         if (loop && a.mother != a.id && a.father != a.id)
-            out.push_back({"mother", quoted(a.id) + " would be its own ancestor (a loop of parent links)"});
+            out.push_back({"mother", quotedValue(a.id) + " would be its own ancestor (a loop of parent links)"});
     }
 
     // Edits must keep the animal a valid parent of its recorded offspring.
@@ -96,12 +94,12 @@ FieldProblems checkAnimal(const Animal& a, const std::vector<Animal>& colony, Da
         if (!mother && !father) continue;
         const Sex needed = mother ? Sex::Female : Sex::Male;
         if (a.sex != needed) {
-            out.push_back({"sex", quoted(a.id) + " is the " + (mother ? "mother" : "father") + " of " +
-                                      quoted(child.id) + " and must stay " + (mother ? "female" : "male")});
+            out.push_back({"sex", quotedValue(a.id) + " is the " + (mother ? "mother" : "father") + " of " +
+                                      quotedValue(child.id) + " and must stay " + (mother ? "female" : "male")});
             break;
         }
         if (a.birth && child.birth && *a.birth >= *child.birth) {
-            out.push_back({"birth_date", formatDate(*a.birth) + " is not before the birth of " + quoted(child.id) +
+            out.push_back({"birth_date", formatDate(*a.birth) + " is not before the birth of " + quotedValue(child.id) +
                                              " (" + formatDate(*child.birth) + "), whose parent " + a.id + " is"});
             break;
         }

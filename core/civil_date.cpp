@@ -80,6 +80,10 @@ std::string formatDate(Day d)
     return out;
 }
 
+std::string formatDate(const std::optional<Day>& d) { return d ? formatDate(*d) : std::string(); }
+
+std::string quotedValue(std::string_view value) { return "'" + std::string(value) + "'"; }
+
 std::optional<int> parseTimeOfDay(std::string_view s)
 {
     if (s.size() != 5 || s[2] != ':') return std::nullopt;

@@ -27,6 +27,12 @@ std::optional<Day> parseDate(std::string_view text);
 /// Formats a day as `YYYY-MM-DD`.
 std::string formatDate(Day d);
 
+/// Formats a day as `YYYY-MM-DD`, or empty text when the day is unknown.
+std::string formatDate(const std::optional<Day>& d);
+
+/// A value quoted for a message to a person: 'value'.
+std::string quotedValue(std::string_view value);
+
 /// Parses `HH:MM` (24 h) into minutes after midnight; nullopt otherwise.
 std::optional<int> parseTimeOfDay(std::string_view text);
 

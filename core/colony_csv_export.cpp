@@ -8,8 +8,6 @@
 namespace hierloom::core {
 namespace {
 
-std::string dateText(const std::optional<Day>& d) { return d ? formatDate(*d) : std::string(); }
-
 /// The uid column is written, last, only when the records carry uids (an
 /// exported colony does; the generated demo files do not), so that
 /// importing an export keeps every record's identity for later merges.
@@ -35,8 +33,8 @@ void writeAnimalsCsv(std::ostream& out, const Colony& colony)
                           "exit_date", "exit_type"},
                          uids, "uid"));
     for (const Animal& a : colony.animals)
-        csv.writeRow(withUid({a.id, a.name, toString(a.sex), dateText(a.birth), a.mother, a.father,
-                              dateText(a.entry), toString(a.entryType), dateText(a.exit), toString(a.exitType)},
+        csv.writeRow(withUid({a.id, a.name, toString(a.sex), formatDate(a.birth), a.mother, a.father,
+                              formatDate(a.entry), toString(a.entryType), formatDate(a.exit), toString(a.exitType)},
                              uids, a.uid));
 }
 
@@ -46,7 +44,7 @@ void writeResidencesCsv(std::ostream& out, const Colony& colony)
     const bool uids = hasUids(colony.residences);
     csv.writeRow(withUid({"animal", "group", "from", "to"}, uids, "uid"));
     for (const Residence& r : colony.residences)
-        csv.writeRow(withUid({r.animal, r.group, formatDate(r.from), dateText(r.to)}, uids, r.uid));
+        csv.writeRow(withUid({r.animal, r.group, formatDate(r.from), formatDate(r.to)}, uids, r.uid));
 }
 
 void writeEncountersCsv(std::ostream& out, const Colony& colony)

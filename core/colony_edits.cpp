@@ -16,7 +16,6 @@ namespace hierloom::core {
 
 namespace {
 
-std::string quoted(std::string_view s) { return "'" + std::string(s) + "'"; }
 
 
 /// Runs `body` inside one IMMEDIATE transaction, rolling back on any exception.
@@ -103,9 +102,9 @@ AnimalChange planBirth(const Colony& colony, Animal newborn, Day today)
     std::string group;
     if (m >= 0 && *newborn.birth <= today) {
         if (!where.presentOn(m, *newborn.birth))
-            return refused("mother", quoted(newborn.mother) + " was not alive in the colony on " + formatDate(*newborn.birth));
+            return refused("mother", quotedValue(newborn.mother) + " was not alive in the colony on " + formatDate(*newborn.birth));
         const int g = where.groupOn(m, *newborn.birth);
-        if (g < 0) return refused("mother", quoted(newborn.mother) + " was in no group on " + formatDate(*newborn.birth));
+        if (g < 0) return refused("mother", quotedValue(newborn.mother) + " was in no group on " + formatDate(*newborn.birth));
         group = where.groups()[static_cast<size_t>(g)];
     }
     AnimalChange c = planNewAnimal(colony, std::move(newborn), group, today);
@@ -115,7 +114,7 @@ AnimalChange planBirth(const Colony& colony, Animal newborn, Day today)
 AnimalChange planAnimalEdit(const Colony& colony, const Animal& input, Day today)
 {
     const Animal* old = findByUid(colony, input.uid);
-    if (!old) return refused("id", quoted(input.id) + " is not an animal of the colony");
+    if (!old) return refused("id", quotedValue(input.id) + " is not an animal of the colony");
     if (old->id != input.id)
         return refused("id", "cannot be changed (" + old->id + " is the id used in the notebooks and encounters)");
     Animal a = input;
@@ -138,10 +137,10 @@ AnimalChange planAnimalEdit(const Colony& colony, const Animal& input, Day today
         if (a.exit && e.date > *a.exit) ++afterExit;
     }
     if (before > 0)
-        c.problems.push_back({"entry_date", quoted(a.id) + " has " + std::to_string(before) + " encounter" +
+        c.problems.push_back({"entry_date", quotedValue(a.id) + " has " + std::to_string(before) + " encounter" +
                                                 (before == 1 ? "" : "s") + " before " + formatDate(*start)});
     if (afterExit > 0)
-        c.problems.push_back({"exit_date", quoted(a.id) + " has " + std::to_string(afterExit) + " encounter" +
+        c.problems.push_back({"exit_date", quotedValue(a.id) + " has " + std::to_string(afterExit) + " encounter" +
                                                (afterExit == 1 ? "" : "s") + " after " + formatDate(*a.exit)});
     if (c.ok()) c.after = std::move(after);
     else c.before.reset();
@@ -151,7 +150,7 @@ AnimalChange planAnimalEdit(const Colony& colony, const Animal& input, Day today
 AnimalChange planExit(const Colony& colony, const std::string& id, Day date, ExitType type, Day today)
 {
     const auto rec = animalRecord(colony, id);
-    if (!rec) return refused("id", quoted(id) + " is not an animal of the colony");
+    if (!rec) return refused("id", quotedValue(id) + " is not an animal of the colony");
     if (type == ExitType::None) return refused("exit_type", "is required when exit_date is given (died or removed)");
     Animal a = rec->animal;
     a.exit = date;
@@ -162,9 +161,9 @@ AnimalChange planExit(const Colony& colony, const std::string& id, Day date, Exi
 AnimalChange planMove(const Colony& colony, const std::string& id, const std::string& group, Day date, Day today)
 {
     auto rec = animalRecord(colony, id);
-    if (!rec) return refused("id", quoted(id) + " is not an animal of the colony");
+    if (!rec) return refused("id", quotedValue(id) + " is not an animal of the colony");
     if (group.empty()) return refused("group", "is empty");
-    if (date > today) return refused("from", quoted(formatDate(date)) + " is in the future");
+    if (date > today) return refused("from", quotedValue(formatDate(date)) + " is in the future");
     const Animal& a = rec->animal;
     AnimalChange c;
     c.before = rec;
@@ -181,7 +180,7 @@ AnimalChange planMove(const Colony& colony, const std::string& id, const std::st
     if (current < after.residences.size()) {
         Residence& s = after.residences[current];
         if (s.group == group)
-            return refused("group", quoted(id) + " was already in " + quoted(group) + " on " + formatDate(date));
+            return refused("group", quotedValue(id) + " was already in " + quotedValue(group) + " on " + formatDate(date));
         oldGroup = s.group;
         oldEnd = s.to;
         moved.to = s.to;
@@ -208,8 +207,8 @@ AnimalChange planMove(const Colony& colony, const std::string& id, const std::st
         for (const Encounter& e : colony.encounters)
             if ((e.winner == id || e.loser == id) && e.date >= date && e.date <= end) ++n;
         if (n > 0)
-            c.problems.push_back({"from", quoted(id) + " has " + std::to_string(n) + " encounter" + (n == 1 ? "" : "s") +
-                                              " in " + quoted(oldGroup) + " on or after " + formatDate(date)});
+            c.problems.push_back({"from", quotedValue(id) + " has " + std::to_string(n) + " encounter" + (n == 1 ? "" : "s") +
+                                              " in " + quotedValue(oldGroup) + " on or after " + formatDate(date)});
     }
     std::sort(after.residences.begin(), after.residences.end(),
               [](const Residence& x, const Residence& y) { return x.from < y.from; });
@@ -310,7 +309,7 @@ FieldProblems insertEncounters(ColonyStore& store, std::vector<Encounter>& encou
 FieldProblems updateEncounter(ColonyStore& store, Encounter& e, Day today)
 {
     const std::vector<Encounter> old = encountersByUid(store, {e.uid});
-    if (old.empty()) return {{"uid", quoted(e.uid) + " is not an encounter of the colony"}};
+    if (old.empty()) return {{"uid", quotedValue(e.uid) + " is not an encounter of the colony"}};
     e.seq = old.front().seq;
     const ResidenceIndex where(store.loadAnimals(), store.loadResidences());
     FieldProblems p = checkEncounter(e, where, today);
@@ -362,7 +361,7 @@ FieldProblems checkBehaviourCodes(const std::vector<ColonyStore::BehaviourCode>&
     std::unordered_set<std::string> seen;
     for (const auto& c : codes) {
         if (c.code.empty()) out.push_back({"code", "is empty; every behaviour needs a code"});
-        else if (!seen.insert(c.code).second) out.push_back({"code", quoted(c.code) + " appears twice"});
+        else if (!seen.insert(c.code).second) out.push_back({"code", quotedValue(c.code) + " appears twice"});
         if (c.severity < 0 || c.severity > 5)
             out.push_back({"severity", std::to_string(c.severity) + " must be a whole number from 0 to 5"});
     }
@@ -389,7 +388,7 @@ FieldProblems checkObservers(const std::vector<std::string>& names)
     std::unordered_set<std::string> seen;
     for (const std::string& n : names) {
         if (n.empty()) out.push_back({"observer", "is empty; every observer needs a name or initials"});
-        else if (!seen.insert(n).second) out.push_back({"observer", quoted(n) + " appears twice"});
+        else if (!seen.insert(n).second) out.push_back({"observer", quotedValue(n) + " appears twice"});
     }
     return out;
 }

@@ -37,7 +37,6 @@ bool isValidUid(std::string_view u)
 
 namespace {
 
-std::string quoted(std::string_view s) { return "'" + std::string(s) + "'"; }
 
 /// Checks an optional uid cell: its form, and that no record already has it.
 void checkUid(std::string_view uid, std::unordered_set<std::string>& seen, const std::string& file, int line,
@@ -45,11 +44,11 @@ void checkUid(std::string_view uid, std::unordered_set<std::string>& seen, const
 {
     if (uid.empty()) return;
     if (!isValidUid(uid)) {
-        problems.add(file, line, "uid", quoted(uid) + " is not a record uid (36 characters: 8-4-4-4-12 hex digits)");
+        problems.add(file, line, "uid", quotedValue(uid) + " is not a record uid (36 characters: 8-4-4-4-12 hex digits)");
         return;
     }
     if (!seen.insert(std::string(uid)).second) {
-        problems.add(file, line, "uid", quoted(uid) + " is already in the colony or earlier in this file");
+        problems.add(file, line, "uid", quotedValue(uid) + " is already in the colony or earlier in this file");
         return;
     }
     out = std::string(uid);
@@ -107,12 +106,12 @@ std::optional<Day> dateField(std::string_view text, Day today, const std::string
     if (text.empty()) return std::nullopt;
     auto d = parseDate(text);
     if (!d) {
-        problems.add(file, line, column, quoted(text) + " is not a real date in the form YYYY-MM-DD");
+        problems.add(file, line, column, quotedValue(text) + " is not a real date in the form YYYY-MM-DD");
         bad = true;
         return std::nullopt;
     }
     if (*d > today) {
-        problems.add(file, line, column, quoted(text) + " is in the future");
+        problems.add(file, line, column, quotedValue(text) + " is in the future");
         bad = true;
         return std::nullopt;
     }
@@ -142,13 +141,13 @@ void planAnimals(const std::vector<Animal>& existing, const ImportSource& src, D
             P.add(F, line, "id", "is empty; every animal needs an id");
             bad = true;
         } else if (!isValidAnimalId(id)) {
-            P.add(F, line, "id", quoted(id) + " must be 1-32 letters, digits, '_', '-' or '.'");
+            P.add(F, line, "id", quotedValue(id) + " must be 1-32 letters, digits, '_', '-' or '.'");
             bad = true;
         } else if (existingIds.count(id)) {
-            P.add(F, line, "id", quoted(id) + " is already in the colony");
+            P.add(F, line, "id", quotedValue(id) + " is already in the colony");
             bad = true;
         } else if (auto it = fileIds.find(id); it != fileIds.end()) {
-            P.add(F, line, "id", quoted(id) + " appears twice (first on line " +
+            P.add(F, line, "id", quotedValue(id) + " appears twice (first on line " +
                                      std::to_string(lines[static_cast<size_t>(it->second)]) + ")");
             bad = true;
         }
@@ -156,7 +155,7 @@ void planAnimals(const std::vector<Animal>& existing, const ImportSource& src, D
         a.name = std::string(cols.field(f, Name));
         const auto sex = parseSex(cols.field(f, SexCol));
         if (!sex || cols.field(f, SexCol).empty()) {
-            P.add(F, line, "sex", quoted(cols.field(f, SexCol)) + " must be F, M or U");
+            P.add(F, line, "sex", quotedValue(cols.field(f, SexCol)) + " must be F, M or U");
             bad = true;
         } else {
             a.sex = *sex;
@@ -168,7 +167,7 @@ void planAnimals(const std::vector<Animal>& existing, const ImportSource& src, D
         if (!a.entry) a.entry = a.birth;
         const auto et = parseEntryType(cols.field(f, EntryTypeCol));
         if (!et) {
-            P.add(F, line, "entry_type", quoted(cols.field(f, EntryTypeCol)) + " must be born, introduced or founder");
+            P.add(F, line, "entry_type", quotedValue(cols.field(f, EntryTypeCol)) + " must be born, introduced or founder");
             bad = true;
         } else {
             a.entryType = *et;
@@ -176,7 +175,7 @@ void planAnimals(const std::vector<Animal>& existing, const ImportSource& src, D
         a.exit = dateField(cols.field(f, Exit), today, F, line, "exit_date", P, bad);
         const auto xt = parseExitType(cols.field(f, ExitTypeCol));
         if (!xt) {
-            P.add(F, line, "exit_type", quoted(cols.field(f, ExitTypeCol)) + " must be died or removed");
+            P.add(F, line, "exit_type", quotedValue(cols.field(f, ExitTypeCol)) + " must be died or removed");
             bad = true;
         } else {
             a.exitType = *xt;
@@ -226,12 +225,12 @@ void planAnimals(const std::vector<Animal>& existing, const ImportSource& src, D
                                 Parent{a.father, "father", Sex::Male, "male"}}) {
             if (p.id.empty()) continue;
             const Animal* parent = find(p.id);
-            if (p.id == a.id) P.add(F, line, p.column, quoted(p.id) + " is the animal itself");
-            else if (!parent) P.add(F, line, p.column, quoted(p.id) + " is not an animal of this file or the colony");
+            if (p.id == a.id) P.add(F, line, p.column, quotedValue(p.id) + " is the animal itself");
+            else if (!parent) P.add(F, line, p.column, quotedValue(p.id) + " is not an animal of this file or the colony");
             else if (parent->sex != p.sex)
-                P.add(F, line, p.column, quoted(p.id) + " is not recorded as " + p.word);
+                P.add(F, line, p.column, quotedValue(p.id) + " is not recorded as " + p.word);
             else if (parent->birth && a.birth && *parent->birth >= *a.birth)
-                P.add(F, line, p.column, quoted(p.id) + " was born on " + formatDate(*parent->birth) +
+                P.add(F, line, p.column, quotedValue(p.id) + " was born on " + formatDate(*parent->birth) +
                                              ", not before her offspring (" + formatDate(*a.birth) + ")");
         }
     }
@@ -250,7 +249,7 @@ void planAnimals(const std::vector<Animal>& existing, const ImportSource& src, D
     };
     for (size_t i = 0; i < plan.animals.size() && !P.full(); ++i)
         if (state[i] == 0 && cyclic(i))
-            P.add(F, lines[i], "mother", quoted(plan.animals[i].id) + " would be its own ancestor (a loop of parent links)");
+            P.add(F, lines[i], "mother", quotedValue(plan.animals[i].id) + " would be its own ancestor (a loop of parent links)");
 }
 
 void planResidences(const std::vector<Animal>& allAnimals, const std::vector<Residence>& existing,
@@ -279,7 +278,7 @@ void planResidences(const std::vector<Animal>& allAnimals, const std::vector<Res
         const std::string_view id = cols.field(f, AnimalCol);
         auto it = ids.find(id);
         if (it == ids.end()) {
-            P.add(F, line, "animal", quoted(id) + " is not an animal of the colony or of the animals file");
+            P.add(F, line, "animal", quotedValue(id) + " is not an animal of the colony or of the animals file");
             bad = true;
         }
         r.animal = std::string(id);
@@ -358,7 +357,7 @@ void planEncounters(const ResidenceIndex& where, std::unordered_set<std::string>
         if (!timeText.empty()) {
             e.time = parseTimeOfDay(timeText);
             if (!e.time) {
-                P.add(F, line, "time", quoted(timeText) + " is not a time of day in the form HH:MM (24 h)");
+                P.add(F, line, "time", quotedValue(timeText) + " is not a time of day in the form HH:MM (24 h)");
                 bad = true;
             }
         }
@@ -366,13 +365,13 @@ void planEncounters(const ResidenceIndex& where, std::unordered_set<std::string>
         const std::string_view l = cols.field(f, Loser);
         const int wi = where.animal(w);
         const int li = where.animal(l);
-        if (wi < 0) P.add(F, line, "winner", w.empty() ? std::string("is empty") : quoted(w) + " is not an animal of the colony");
-        if (li < 0) P.add(F, line, "loser", l.empty() ? std::string("is empty") : quoted(l) + " is not an animal of the colony");
-        if (wi >= 0 && wi == li) P.add(F, line, "loser", quoted(l) + " is also the winner; an encounter needs two animals");
+        if (wi < 0) P.add(F, line, "winner", w.empty() ? std::string("is empty") : quotedValue(w) + " is not an animal of the colony");
+        if (li < 0) P.add(F, line, "loser", l.empty() ? std::string("is empty") : quotedValue(l) + " is not an animal of the colony");
+        if (wi >= 0 && wi == li) P.add(F, line, "loser", quotedValue(l) + " is also the winner; an encounter needs two animals");
         bad = bad || wi < 0 || li < 0 || wi == li;
         const auto outcome = parseOutcome(cols.field(f, OutcomeCol));
         if (!outcome) {
-            P.add(F, line, "outcome", quoted(cols.field(f, OutcomeCol)) + " must be decided or draw");
+            P.add(F, line, "outcome", quotedValue(cols.field(f, OutcomeCol)) + " must be decided or draw");
             bad = true;
         } else {
             e.outcome = *outcome;
@@ -385,24 +384,24 @@ void planEncounters(const ResidenceIndex& where, std::unordered_set<std::string>
             for (int k = 0; k < 2; ++k) {
                 const std::string_view id = k == 0 ? w : l;
                 if (!where.presentOn(who[k], *date)) {
-                    P.add(F, line, column[k], quoted(id) + " was not alive in the colony on " + formatDate(*date));
+                    P.add(F, line, column[k], quotedValue(id) + " was not alive in the colony on " + formatDate(*date));
                     bad = true;
                 } else if ((groups[k] = where.groupOn(who[k], *date)) < 0) {
-                    P.add(F, line, column[k], quoted(id) + " was in no group on " + formatDate(*date));
+                    P.add(F, line, column[k], quotedValue(id) + " was in no group on " + formatDate(*date));
                     bad = true;
                 }
             }
             if (!bad && groups[0] != groups[1]) {
-                P.add(F, line, "loser", quoted(l) + " was in group " + quoted(where.groups()[static_cast<size_t>(groups[1])]) +
+                P.add(F, line, "loser", quotedValue(l) + " was in group " + quotedValue(where.groups()[static_cast<size_t>(groups[1])]) +
                                             " on " + formatDate(*date) + ", not with " + std::string(w) + " in " +
-                                            quoted(where.groups()[static_cast<size_t>(groups[0])]));
+                                            quotedValue(where.groups()[static_cast<size_t>(groups[0])]));
                 bad = true;
             }
             if (!bad) {
                 const std::string& shared = where.groups()[static_cast<size_t>(groups[0])];
                 if (!groupText.empty() && groupText != shared) {
-                    P.add(F, line, "group", quoted(groupText) + " differs from the group both animals were in on " +
-                                                formatDate(*date) + " (" + quoted(shared) + ")");
+                    P.add(F, line, "group", quotedValue(groupText) + " differs from the group both animals were in on " +
+                                                formatDate(*date) + " (" + quotedValue(shared) + ")");
                     bad = true;
                 }
                 e.group = shared;

@@ -15,8 +15,6 @@ namespace hierloom::core {
 
 namespace {
 
-std::string dateText(const std::optional<Day>& d) { return d ? formatDate(*d) : std::string(); }
-
 using Fields = std::vector<std::pair<const char*, std::string>>;
 
 Fields fieldsOf(const Animal& a)
@@ -24,18 +22,18 @@ Fields fieldsOf(const Animal& a)
     return {{"id", a.id},
             {"name", a.name},
             {"sex", toString(a.sex)},
-            {"birth_date", dateText(a.birth)},
+            {"birth_date", formatDate(a.birth)},
             {"mother", a.mother},
             {"father", a.father},
-            {"entry_date", dateText(a.entry)},
+            {"entry_date", formatDate(a.entry)},
             {"entry_type", toString(a.entryType)},
-            {"exit_date", dateText(a.exit)},
+            {"exit_date", formatDate(a.exit)},
             {"exit_type", toString(a.exitType)}};
 }
 
 Fields fieldsOf(const Residence& r)
 {
-    return {{"animal", r.animal}, {"group", r.group}, {"from", formatDate(r.from)}, {"to", dateText(r.to)}};
+    return {{"animal", r.animal}, {"group", r.group}, {"from", formatDate(r.from)}, {"to", formatDate(r.to)}};
 }
 
 Fields fieldsOf(const Encounter& e)
@@ -91,12 +89,12 @@ void updateAnimal(sqlite3* db, const std::string& uid, const Animal& a)
     q.bind(1, a.id);
     q.bind(2, a.name);
     q.bind(3, toString(a.sex));
-    q.bindNullableText(4, dateText(a.birth));
+    q.bindNullableText(4, formatDate(a.birth));
     q.bindNullableText(5, a.mother);
     q.bindNullableText(6, a.father);
-    q.bindNullableText(7, dateText(a.entry));
+    q.bindNullableText(7, formatDate(a.entry));
     q.bindNullableText(8, toString(a.entryType));
-    q.bindNullableText(9, dateText(a.exit));
+    q.bindNullableText(9, formatDate(a.exit));
     q.bindNullableText(10, toString(a.exitType));
     q.bind(11, uid);
     q.run();
@@ -108,7 +106,7 @@ void updateResidence(sqlite3* db, const std::string& uid, const Residence& r)
     q.bind(1, r.animal);
     q.bind(2, r.group);
     q.bind(3, formatDate(r.from));
-    q.bindNullableText(4, dateText(r.to));
+    q.bindNullableText(4, formatDate(r.to));
     q.bind(5, uid);
     q.run();
 }
