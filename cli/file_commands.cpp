@@ -54,13 +54,13 @@ void addImportCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
             // The scheduled backup (backup_interval_hours) is taken before the file changes.
             if (backupIfDue(store, std::chrono::system_clock::now()))
                 ctx.err << "backed up " << o->colony << " into " << backupFolder(o->colony) << "\n";
-            const ImportPlan plan = importFiles(store, o->paths, today());
-            if (!plan.ok()) {
-                ctx.err << plan.problems.text();
+            const ImportResult result = importFiles(store, o->paths, today());
+            if (!result.ok()) {
+                ctx.err << result.problems.text();
                 throw BadInputError("nothing was imported; " + o->colony + " is unchanged");
             }
-            ctx.err << "imported " << plan.animals.size() << " animals, " << plan.residences.size()
-                    << " residences, " << plan.encounters.size() << " encounters into " << o->colony << "\n";
+            ctx.err << "imported " << result.animals << " animals, " << result.residences
+                    << " residences, " << result.encounters << " encounters into " << o->colony << "\n";
         };
     });
 }

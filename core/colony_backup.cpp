@@ -23,6 +23,12 @@ using Clock = std::chrono::system_clock;
 
 namespace {
 
+int pageSizeOf(sqlite3* db)
+{
+    SqliteStatement q(db, "PRAGMA page_size");
+    return q.step() ? static_cast<int>(q.integer(0)) : 0;
+}
+
 std::string stemOf(const std::string& colonyPath) { return fs::path(colonyPath).stem().string(); }
 
 std::string stamp(Clock::time_point t)
@@ -237,6 +243,14 @@ void restoreBackup(const std::string& backupPath, const std::string& colonyPath,
         if (sqlite3_open_v2(colonyPath.c_str(), &colony.db, SQLITE_OPEN_READWRITE, nullptr) != SQLITE_OK)
             throw ColonyFileError(Kind::Io, colonyPath + ": cannot be opened for writing");
         sqlite3_busy_timeout(colony.db, 5000);
+        // SQLite cannot copy pages of one size into a WAL file of another
+        // (colony files created by earlier builds use 4 KiB pages, newer ones 16 KiB).
+        if (const int from = pageSizeOf(backup.db), to = pageSizeOf(colony.db); from != to)
+            throw ColonyFileError(Kind::Io, backupPath + ": was made from a colony file with " +
+                                                std::to_string(from / 1024) + " KiB pages and cannot be restored over " +
+                                                colonyPath + " (" + std::to_string(to / 1024) +
+                                                " KiB pages); restore it into a new file instead; " + colonyPath +
+                                                " is unchanged");
         // The state being replaced stays recoverable, like any other backup.
         backupConnection(colony.db, colonyPath, now, defaultBackupsKept);
         sqlite3_backup* b = sqlite3_backup_init(colony.db, "main", backup.db, "main");

@@ -3,11 +3,15 @@
 
 #include "core/colony_store.h"
 #include "core/csv_columns.h"
+#include "core/bounded_queue.h"
 #include "core/csv_reader.h"
+#include "core/record_appender.h"
 #include "core/residence_index.h"
+#include "core/write_transaction.h"
 
 #include <algorithm>
 #include <functional>
+#include <thread>
 #include <unordered_set>
 
 namespace hierloom::core {
@@ -72,9 +76,10 @@ bool checkUtf8(const ImportSource& src, ImportProblems& problems)
     return false;
 }
 
-/// Reads every data row of a file, calling `row(fields, line)`; reports malformed CSV.
+/// Reads every data row of a file, calling `row(fields, line)` until it
+/// returns false; reports malformed CSV.
 void forEachRow(const ImportSource& src, CsvColumns& columns, ImportProblems& problems,
-                const std::function<void(const std::vector<std::string_view>&, int)>& row)
+                const std::function<bool(const std::vector<std::string_view>&, int)>& row)
 {
     if (!checkUtf8(src, problems)) return;
     CsvReader reader(src.text);
@@ -93,8 +98,7 @@ void forEachRow(const ImportSource& src, CsvColumns& columns, ImportProblems& pr
             if (problems.full()) return;
             continue;
         }
-        row(fields, reader.line());
-        if (problems.full()) return;
+        if (!row(fields, reader.line()) || problems.full()) return;
     }
     if (!reader.error().empty()) problems.add(src.name, reader.line(), "", reader.error());
 }
@@ -204,6 +208,7 @@ void planAnimals(const std::vector<Animal>& existing, const ImportSource& src, D
         if (!id.empty() && !fileIds.count(id)) fileIds.emplace(std::string(id), static_cast<int>(plan.animals.size()));
         lines.push_back(line);
         plan.animals.push_back(std::move(a));
+        return true;
     });
 
     // Parents: known, of the right sex, born before their offspring.
@@ -331,17 +336,19 @@ void planResidences(const std::vector<Animal>& allAnimals, const std::vector<Res
             mine.push_back({r.from, to, line});
         }
         plan.residences.push_back(std::move(r));
+        return true;
     });
 }
 
-void planEncounters(const ResidenceIndex& where, std::unordered_set<std::string> uids, const ImportSource& src,
-                    Day today, ImportPlan& plan)
+/// Checks every row of an encounters file, reporting problems into `P`.
+/// While no problem has been found each good row goes to `accept`, which
+/// returns false to stop reading.
+void checkEncounters(const ResidenceIndex& where, std::unordered_set<std::string>& uids, const ImportSource& src,
+                     Day today, ImportProblems& P, const std::function<bool(Encounter&)>& accept)
 {
     enum { DateCol, Time, Winner, Loser, OutcomeCol, Behaviour, GroupCol, Observer, Note, Uid };
     CsvColumns cols({{"date", true}, {"time", false}, {"winner", true}, {"loser", true}, {"outcome", false},
                      {"behaviour", false}, {"group", false}, {"observer", false}, {"note", false}, {"uid", false}});
-    plan.encounters.reserve(static_cast<size_t>(std::count(src.text.begin(), src.text.end(), '\n')));
-    ImportProblems& P = plan.problems;
     const std::string& F = src.name;
     forEachRow(src, cols, P, [&](const std::vector<std::string_view>& f, int line) {
         bool bad = false;
@@ -413,8 +420,25 @@ void planEncounters(const ResidenceIndex& where, std::unordered_set<std::string>
         e.observer = std::string(cols.field(f, Observer));
         e.note = std::string(cols.field(f, Note));
         checkUid(cols.field(f, Uid), uids, F, line, P, e.uid);
-        plan.encounters.push_back(std::move(e));
+        return !P.empty() || accept(e);
     });
+}
+
+/// Where every animal, old or new, lived on each day.
+ResidenceIndex residenceIndexOf(const std::vector<Animal>& existingAnimals,
+                                const std::vector<Residence>& existingResidences, const ImportPlan& plan)
+{
+    std::vector<Animal> animals = existingAnimals;
+    animals.insert(animals.end(), plan.animals.begin(), plan.animals.end());
+    std::vector<Residence> residences = existingResidences;
+    residences.insert(residences.end(), plan.residences.begin(), plan.residences.end());
+    return ResidenceIndex(animals, residences);
+}
+
+/// Number of lines of a text (an upper bound on its data rows).
+std::size_t lineCount(const std::string& text)
+{
+    return static_cast<std::size_t>(std::count(text.begin(), text.end(), '\n')) + 1;
 }
 
 } // namespace
@@ -424,9 +448,9 @@ ImportPlan planImport(const std::vector<Animal>& existingAnimals, const std::vec
 {
     ImportPlan plan;
     if (input.animals) planAnimals(existingAnimals, *input.animals, today, plan);
-    std::vector<Animal> all = existingAnimals;
-    all.insert(all.end(), plan.animals.begin(), plan.animals.end());
     if (input.residences) {
+        std::vector<Animal> all = existingAnimals;
+        all.insert(all.end(), plan.animals.begin(), plan.animals.end());
         planResidences(all, existingResidences, *input.residences, today, plan);
     } else {
         // Without a residences file every new animal lives in group "main" from entry to exit.
@@ -434,10 +458,13 @@ ImportPlan planImport(const std::vector<Animal>& existingAnimals, const std::vec
             if (const auto start = lifeStart(a)) plan.residences.push_back({a.id, "main", *start, a.exit, {}});
     }
     if (input.encounters && !plan.problems.full()) {
-        std::vector<Residence> residences = existingResidences;
-        residences.insert(residences.end(), plan.residences.begin(), plan.residences.end());
-        const ResidenceIndex where(all, residences);
-        planEncounters(where, encounterUids, *input.encounters, today, plan);
+        std::unordered_set<std::string> uids = encounterUids;
+        plan.encounters.reserve(lineCount(input.encounters->text));
+        checkEncounters(residenceIndexOf(existingAnimals, existingResidences, plan), uids, *input.encounters, today,
+                        plan.problems, [&](Encounter& e) {
+                            plan.encounters.push_back(std::move(e));
+                            return true;
+                        });
     }
     if (!plan.ok()) {
         plan.animals.clear();
@@ -447,30 +474,101 @@ ImportPlan planImport(const std::vector<Animal>& existingAnimals, const std::vec
     return plan;
 }
 
-ImportPlan importFiles(ColonyStore& store, const ImportPaths& paths, Day today)
+namespace {
+
+/// Checks the encounters file on a second thread while this one writes the
+/// rows that passed, in batches, through `out`. Rows stop flowing at the first
+/// problem; the caller then rolls the transaction back.
+void checkAndAppendEncounters(const ResidenceIndex& where, std::unordered_set<std::string>& uids,
+                              const ImportSource& src, Day today, ImportProblems& problems, EncounterAppender& out)
+{
+    constexpr std::size_t batchRows = 4096;
+    BoundedQueue<std::vector<Encounter>> queue(8);
+    std::thread checker([&] {
+        std::vector<Encounter> batch;
+        batch.reserve(batchRows);
+        checkEncounters(where, uids, src, today, problems, [&](Encounter& e) {
+            // The uid is made here, off the writing thread.
+            if (e.uid.empty()) e.uid = newUid();
+            batch.push_back(std::move(e));
+            if (batch.size() < batchRows) return true;
+            const bool open = queue.push(std::move(batch));
+            batch = {};
+            batch.reserve(batchRows);
+            return open;
+        });
+        if (!batch.empty()) queue.push(std::move(batch));
+        queue.close();
+    });
+    try {
+        while (auto batch = queue.pop())
+            for (Encounter& e : *batch) out.add(e);
+    } catch (...) {
+        queue.close();
+        checker.join();
+        throw;
+    }
+    checker.join();
+}
+
+} // namespace
+
+ImportResult importFiles(ColonyStore& store, const ImportPaths& paths, Day today)
 {
     ImportInput input;
-    ImportPlan failed;
+    ImportResult result;
     auto read = [&](const std::string& path, std::optional<ImportSource>& slot) {
         if (path.empty()) return;
         try {
             slot = ImportSource{path, readWholeFile(path)};
         } catch (const std::exception&) {
-            failed.problems.add(path, 0, "", "cannot be read (no such file, or no permission to read it)");
+            result.problems.add(path, 0, "", "cannot be read (no such file, or no permission to read it)");
         }
     };
     read(paths.animals, input.animals);
     read(paths.residences, input.residences);
     read(paths.encounters, input.encounters);
-    if (!failed.ok()) return failed;
-    // Encounter uids are read only when the file carries them (an export being re-imported).
-    std::unordered_set<std::string> encounterUids;
-    if (input.encounters && input.encounters->text.substr(0, input.encounters->text.find('\n')).find("uid") !=
-                                std::string::npos)
-        encounterUids = store.encounterUids();
-    ImportPlan plan = planImport(store.loadAnimals(), store.loadResidences(), input, today, encounterUids);
-    if (plan.ok()) store.append(plan.animals, plan.residences, plan.encounters, "import of " + paths.encounters);
-    return plan;
+    if (!result.ok()) return result;
+    std::optional<ImportSource> encounters = std::move(input.encounters);
+    input.encounters.reset();
+
+    const bool bulk = encounters && lineCount(encounters->text) > ColonyStore::kBulkEncounters;
+    // The colony is read inside the write transaction, so what the checks saw
+    // is what the rows are written against (no other program writes
+    // meanwhile): the checks of this file cover every rule of the schema.
+    WriteTransaction tx(store, bulk ? WriteTransaction::Size::CheckedBulk : WriteTransaction::Size::Small);
+    const std::vector<Animal> existingAnimals = store.loadAnimals();
+    const std::vector<Residence> existingResidences = store.loadResidences();
+    ImportPlan plan = planImport(existingAnimals, existingResidences, input, today);
+    if (plan.ok()) {
+        insertAnimals(store, plan.animals);
+        insertResidences(store, plan.residences);
+    }
+    if (encounters && !plan.problems.full()) {
+        // Encounter uids are read only when the file carries them (an export being re-imported).
+        std::unordered_set<std::string> uids;
+        if (std::string_view(encounters->text).substr(0, encounters->text.find('\n')).find("uid") != std::string::npos)
+            uids = store.encounterUids();
+        const ResidenceIndex where = residenceIndexOf(existingAnimals, existingResidences, plan);
+        if (plan.ok()) {
+            EncounterAppender out(store, tx);
+            checkAndAppendEncounters(where, uids, *encounters, today, plan.problems, out);
+            if (plan.ok()) out.finish("import of " + paths.encounters);
+            result.encounters = static_cast<std::size_t>(out.count());
+        } else {
+            // Only to report every problem in one pass; nothing will be written.
+            checkEncounters(where, uids, *encounters, today, plan.problems, [](Encounter&) { return true; });
+        }
+    }
+    result.problems = std::move(plan.problems);
+    if (!result.ok()) {
+        result.encounters = 0;
+        return result; // the transaction rolls back: nothing is written
+    }
+    tx.commit();
+    result.animals = plan.animals.size();
+    result.residences = plan.residences.size();
+    return result;
 }
 
 } // namespace hierloom::core

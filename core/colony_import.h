@@ -49,9 +49,20 @@ struct ImportPaths {
     std::string encounters;
 };
 
+/// What an import added, or the problems that stopped it (then nothing was written).
+struct ImportResult {
+    ImportProblems problems;
+    std::size_t animals = 0;
+    std::size_t residences = 0;
+    std::size_t encounters = 0;
+    bool ok() const { return problems.empty(); }
+};
+
 /// Reads, checks and, only when every row passes, writes the files in one
-/// transaction. The returned plan lists the problems (nothing written) or what was added.
-ImportPlan importFiles(ColonyStore& store, const ImportPaths& paths, Day today);
+/// transaction, checking against the colony as read inside that transaction.
+/// Encounters are checked on a second thread while the rows that passed are
+/// written; a problem rolls everything back.
+ImportResult importFiles(ColonyStore& store, const ImportPaths& paths, Day today);
 
 /// True when a uid has the 8-4-4-4-12 hexadecimal form.
 bool isValidUid(std::string_view uid);

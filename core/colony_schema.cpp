@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "core/colony_schema.h"
 
+#include <stdexcept>
 #include <string>
 #include <vector>
 
@@ -91,12 +92,33 @@ std::string jsonOf(const AuditedTable& t, const char* row)
     return out + ")";
 }
 
+const std::vector<AuditedTable>& auditedTables()
+{
+    static const std::vector<AuditedTable> tables = {
+        {"animal",
+         {"uid", "id", "name", "sex", "birth_date", "mother", "father", "entry_date", "entry_type", "exit_date",
+          "exit_type"}},
+        {"residence", {"uid", "animal", "grp", "from_date", "to_date"}},
+        {"encounter",
+         {"seq", "uid", "date", "time", "winner", "loser", "outcome", "behaviour", "grp", "observer", "note"}},
+    };
+    return tables;
+}
+
+const AuditedTable& auditedTable(const std::string& name)
+{
+    for (const AuditedTable& t : auditedTables())
+        if (name == t.name) return t;
+    throw std::invalid_argument("no audited table " + name);
+}
+
 std::string buildVersion2Sql()
 {
     // `user` is left empty here and stamped by the connection's TEMP trigger
     // (sessionSql); a change made with another tool keeps an empty user but is
-    // still recorded. Rows in audit_pause (only ever inside one bulk
-    // transaction) switch the per-row triggers off for that transaction.
+    // still recorded. Rows in audit_pause switch the per-row triggers off;
+    // version-2 files may hold the table, this program no longer uses it
+    // (bulk loads drop the encounter insert trigger inside their transaction).
     std::string sql = R"SQL(
 CREATE TABLE audit (
   id          INTEGER PRIMARY KEY,
@@ -111,31 +133,36 @@ CREATE TABLE audit (
 CREATE INDEX audit_by_uid ON audit(uid);
 CREATE TABLE audit_pause (reason TEXT NOT NULL);
 )SQL";
-    const std::vector<AuditedTable> tables = {
-        {"animal",
-         {"uid", "id", "name", "sex", "birth_date", "mother", "father", "entry_date", "entry_type", "exit_date",
-          "exit_type"}},
-        {"residence", {"uid", "animal", "grp", "from_date", "to_date"}},
-        {"encounter",
-         {"seq", "uid", "date", "time", "winner", "loser", "outcome", "behaviour", "grp", "observer", "note"}},
-    };
-    const std::string when = " WHEN NOT EXISTS (SELECT 1 FROM audit_pause) BEGIN\n";
-    for (const AuditedTable& t : tables) {
-        const std::string n = t.name;
-        sql += "CREATE TRIGGER audit_" + n + "_insert AFTER INSERT ON " + n + when +
-               "  INSERT INTO audit(tbl, uid, action, new_values) VALUES ('" + n + "', new.uid, 'insert', " +
-               jsonOf(t, "new") + ");\nEND;\n";
-        sql += "CREATE TRIGGER audit_" + n + "_update AFTER UPDATE ON " + n + when +
-               "  INSERT INTO audit(tbl, uid, action, old_values, new_values) VALUES ('" + n + "', new.uid, 'update', " +
-               jsonOf(t, "old") + ", " + jsonOf(t, "new") + ");\nEND;\n";
-        sql += "CREATE TRIGGER audit_" + n + "_delete AFTER DELETE ON " + n + when +
-               "  INSERT INTO audit(tbl, uid, action, old_values) VALUES ('" + n + "', old.uid, 'delete', " +
-               jsonOf(t, "old") + ");\nEND;\n";
-    }
+    for (const AuditedTable& t : auditedTables())
+        for (const char* action : {"insert", "update", "delete"}) sql += auditTriggerSql(t.name, action);
     return sql;
 }
 
 } // namespace
+
+std::string auditTriggerSql(const std::string& table, const std::string& action)
+{
+    const AuditedTable& t = auditedTable(table);
+    const std::string head = "CREATE TRIGGER audit_" + table + "_" + action + " AFTER " +
+                             (action == "insert" ? "INSERT" : action == "update" ? "UPDATE" : "DELETE") + " ON " +
+                             table + " WHEN NOT EXISTS (SELECT 1 FROM audit_pause) BEGIN\n";
+    if (action == "insert")
+        return head + "  INSERT INTO audit(tbl, uid, action, new_values) VALUES ('" + table + "', new.uid, 'insert', " +
+               jsonOf(t, "new") + ");\nEND;\n";
+    if (action == "update")
+        return head + "  INSERT INTO audit(tbl, uid, action, old_values, new_values) VALUES ('" + table +
+               "', new.uid, 'update', " + jsonOf(t, "old") + ", " + jsonOf(t, "new") + ");\nEND;\n";
+    if (action == "delete")
+        return head + "  INSERT INTO audit(tbl, uid, action, old_values) VALUES ('" + table + "', old.uid, 'delete', " +
+               jsonOf(t, "old") + ");\nEND;\n";
+    throw std::invalid_argument("no audit trigger for " + action);
+}
+
+std::string auditTriggerDropSql(const std::string& table, const std::string& action)
+{
+    auditedTable(table);
+    return "DROP TRIGGER audit_" + table + "_" + action;
+}
 
 const char* schemaVersion2Sql()
 {

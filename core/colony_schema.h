@@ -1,5 +1,6 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
+#include <string>
 
 namespace hierloom::core {
 
@@ -16,6 +17,12 @@ const char* schemaVersion1Sql();
 /// triggers that record every insert, update and delete of animals,
 /// residences and encounters (old and new values as JSON via json_object).
 const char* schemaVersion2Sql();
+
+/// The version-2 audit trigger of one table ("animal", "residence",
+/// "encounter") and action ("insert", "update", "delete"), exactly as the
+/// schema creates it, and the statement dropping it.
+std::string auditTriggerSql(const std::string& table, const std::string& action);
+std::string auditTriggerDropSql(const std::string& table, const std::string& action);
 
 /// SQL run on every connection to a version-2 file: the per-connection
 /// `session_user` (who is writing) and the TEMP trigger that stamps it on

@@ -2,7 +2,8 @@
 #include "core/colony_store.h"
 
 #include "core/colony_schema.h"
-#include "core/record_binding.h"
+#include "core/record_appender.h"
+#include "core/write_transaction.h"
 #include "core/sqlite_statement.h"
 
 #include <sqlite3.h>
@@ -19,6 +20,11 @@ namespace hierloom::core {
 namespace {
 
 using Kind = ColonyFileError::Kind;
+
+// A store's connection is used by one thread at a time (background jobs get
+// copies of the records, never the store), so SQLite's per-call locking is
+// not needed; it cost a tenth of a bulk import.
+constexpr int kOneThreadAtATime = SQLITE_OPEN_NOMUTEX;
 
 
 std::optional<Day> dayOf(const std::optional<std::string>& text)
@@ -133,7 +139,7 @@ ColonyStore ColonyStore::create(const std::string& path)
     if (std::filesystem::exists(path, ec))
         throw ColonyFileError(Kind::AlreadyExists, path + ": already exists; choose another name");
     sqlite3* db = nullptr;
-    const int rc = sqlite3_open_v2(path.c_str(), &db, SQLITE_OPEN_READWRITE | SQLITE_OPEN_CREATE, nullptr);
+    const int rc = sqlite3_open_v2(path.c_str(), &db, SQLITE_OPEN_READWRITE | SQLITE_OPEN_CREATE | kOneThreadAtATime, nullptr);
     if (rc != SQLITE_OK) {
         const std::string msg = db ? sqlite3_errmsg(db) : sqlite3_errstr(rc);
         sqlite3_close(db);
@@ -141,6 +147,10 @@ ColonyStore ColonyStore::create(const std::string& path)
     }
     ColonyStore store(db, path);
     configureConnection(db, path);
+    // 16 KiB pages rather than SQLite's 4 KiB: a quarter of the page writes
+    // and B-tree levels for large colonies (bulk imports ~15 % faster). Set
+    // before the first write; WAL keeps it fixed from then on.
+    store.exec("PRAGMA page_size = 16384");
     store.exec("PRAGMA journal_mode = WAL");
     store.exec("BEGIN IMMEDIATE");
     try {
@@ -192,7 +202,7 @@ ColonyStore ColonyStore::open(const std::string& path, Mode mode)
                                   ", this program reads up to " + std::to_string(currentSchemaVersion) +
                                   "); update the program to open it");
     sqlite3* db = nullptr;
-    const int flags = mode == Mode::ReadOnly ? SQLITE_OPEN_READONLY : SQLITE_OPEN_READWRITE;
+    const int flags = (mode == Mode::ReadOnly ? SQLITE_OPEN_READONLY : SQLITE_OPEN_READWRITE) | kOneThreadAtATime;
     const int rc = sqlite3_open_v2(path.c_str(), &db, flags, nullptr);
     if (rc != SQLITE_OK) {
         const std::string msg = db ? sqlite3_errmsg(db) : sqlite3_errstr(rc);
@@ -382,97 +392,16 @@ std::unordered_set<std::string> ColonyStore::encounterUids() const
 void ColonyStore::append(std::vector<Animal>& animals, std::vector<Residence>& residences,
                          std::vector<Encounter>& encounters, const std::string& source)
 {
-    // Bulk loads: a larger page cache, and the per-row foreign-key lookups of
-    // encounters replaced by one set-based check of the new rows before the
-    // commit (the per-row lookups cost half the import's time).
-    const bool bulk = encounters.size() > 10000;
-    // Inside a caller's transaction (a merge) this append is one savepoint of it;
-    // foreign keys then stay on (the pragma is a no-op inside a transaction).
-    const bool nested = sqlite3_get_autocommit(db_) == 0;
-    if (bulk && !nested) {
-        exec("PRAGMA cache_size = -65536");
-        exec("PRAGMA foreign_keys = OFF");
+    WriteTransaction tx(*this, encounters.size() > kBulkEncounters ? WriteTransaction::Size::Bulk
+                                                                   : WriteTransaction::Size::Small);
+    insertAnimals(*this, animals);
+    insertResidences(*this, residences);
+    if (!encounters.empty()) {
+        EncounterAppender out(*this, tx);
+        for (Encounter& e : encounters) out.add(e);
+        out.finish(source);
     }
-    struct RestoreForeignKeys {
-        const ColonyStore* store;
-        bool active;
-        ~RestoreForeignKeys()
-        {
-            if (active) sqlite3_exec(store->handle(), "PRAGMA foreign_keys = ON", nullptr, nullptr, nullptr);
-        }
-    } restore{this, bulk && !nested};
-    exec(nested ? "SAVEPOINT append_records" : "BEGIN IMMEDIATE");
-    try {
-        {
-            SqliteStatement ins(db_, kInsertAnimalSql);
-            for (Animal& a : animals) {
-                if (a.uid.empty()) a.uid = newUid();
-                bindAnimalColumns(ins, a);
-                ins.run();
-            }
-        }
-        {
-            SqliteStatement ins(db_, kInsertResidenceSql);
-            for (Residence& r : residences) {
-                if (r.uid.empty()) r.uid = newUid();
-                bindResidenceColumns(ins, r);
-                ins.run();
-            }
-        }
-        if (!encounters.empty()) {
-            std::int64_t seq = 0;
-            {
-                SqliteStatement q(db_, "SELECT coalesce(max(seq), 0) FROM encounter");
-                q.step();
-                seq = q.integer(0);
-            }
-            // One audit row for a bulk append instead of a million (see DEVELOPERS.md).
-            if (bulk) exec("INSERT INTO audit_pause(reason) VALUES ('bulk append')");
-            SqliteStatement ins(db_, kInsertEncounterSql);
-            std::string date;
-            for (Encounter& e : encounters) {
-                if (e.uid.empty()) e.uid = newUid();
-                e.seq = ++seq;
-                date = formatDate(e.date);
-                bindEncounterColumns(ins, e, date);
-                ins.run();
-            }
-            if (bulk) {
-                exec("DELETE FROM audit_pause");
-                SqliteStatement note(db_, "INSERT INTO audit(tbl, action, new_values) VALUES ('encounter', 'import', "
-                                          "json_object('source', ?, 'count', ?, 'first_seq', ?, 'last_seq', ?))");
-                note.bind(1, source);
-                note.bind(2, static_cast<std::int64_t>(encounters.size()));
-                note.bind(3, encounters.front().seq);
-                note.bind(4, encounters.back().seq);
-                note.run();
-            }
-            if (bulk && !nested) {
-                SqliteStatement check(db_, "SELECT count(*) FROM encounter WHERE seq > ? AND "
-                                           "(winner NOT IN (SELECT id FROM animal) OR loser NOT IN (SELECT id FROM animal))");
-                check.bind(1, static_cast<std::int64_t>(encounters.front().seq - 1));
-                check.step();
-                if (check.integer(0) != 0)
-                    throw ColonyFileError(Kind::Io, path_ + ": " + std::to_string(check.integer(0)) +
-                                                        " encounters name animals that are not in the colony");
-            }
-            SqliteStatement obs(db_, "INSERT OR IGNORE INTO observer(name) VALUES (?)");
-            std::string last;
-            for (const Encounter& e : encounters) {
-                if (e.observer.empty() || e.observer == last) continue;
-                last = e.observer;
-                obs.bind(1, e.observer);
-                obs.run();
-            }
-        }
-        exec(nested ? "RELEASE append_records" : "COMMIT");
-    } catch (...) {
-        if (nested)
-            sqlite3_exec(db_, "ROLLBACK TO append_records; RELEASE append_records", nullptr, nullptr, nullptr);
-        else
-            sqlite3_exec(db_, "ROLLBACK", nullptr, nullptr, nullptr);
-        throw;
-    }
+    tx.commit();
 }
 
 std::vector<std::string> ColonyStore::observers() const

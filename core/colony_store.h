@@ -14,8 +14,12 @@ namespace hierloom::core {
 /// A colony file: one SQLite database (WAL journal, foreign keys on) holding
 /// the animals, residences, encounters, observers, behaviour codes and
 /// settings. Every write runs in one transaction, so a write is whole or absent.
+/// A store may move between threads but is used by one thread at a time.
 class ColonyStore {
 public:
+    /// Above this many encounters a write is a bulk load (see WriteTransaction).
+    static constexpr std::size_t kBulkEncounters = 10000;
+
     enum class Mode { ReadOnly, ReadWrite };
 
     /// Creates a new, empty colony file; fails if the path exists.
@@ -46,9 +50,9 @@ public:
     /// to records without one (written back) and encounters get consecutive
     /// seq numbers (written back).
     /// Inside a transaction already open on this connection it runs as a
-    /// savepoint of that transaction. A bulk append (more than 10,000
-    /// encounters) is audited as one 'import' row naming `source` and the seq
-    /// range instead of one row per encounter.
+    /// savepoint of that transaction. A bulk append (more than
+    /// kBulkEncounters encounters) is audited as one 'import' row naming
+    /// `source` and the seq range instead of one row per encounter.
     void append(std::vector<Animal>& animals, std::vector<Residence>& residences, std::vector<Encounter>& encounters,
                 const std::string& source = {});
     void append(std::vector<Animal>&& animals, std::vector<Residence>&& residences, std::vector<Encounter>&& encounters,

@@ -108,29 +108,29 @@ bool ImportDialog::runImport()
     }
     const core::ImportPaths paths{toStdString(animals_->text().trimmed()), toStdString(residences_->text().trimmed()),
                                   toStdString(encounters_->text().trimmed())};
-    core::ImportPlan plan;
+    core::ImportResult result;
     try {
-        plan = core::importFiles(*store, paths, core::today());
+        result = core::importFiles(*store, paths, core::today());
     } catch (const core::ColonyFileError& error) {
         result_->setText(tr("The colony file could not be written; nothing was imported.\n%1")
                              .arg(toQString(error.what())));
         return false;
     }
-    if (!plan.ok()) {
-        const auto& list = plan.problems.list();
-        problemCount_ = static_cast<int>(list.size() + plan.problems.dropped());
+    if (!result.ok()) {
+        const auto& list = result.problems.list();
+        problemCount_ = static_cast<int>(list.size() + result.problems.dropped());
         QStringList lines;
         for (const core::ImportProblem& p : list) lines << toQString(p.text());
-        if (plan.problems.dropped() > 0)
-            lines << tr("... and %1 more problems not listed; fix these first.").arg(plan.problems.dropped());
+        if (result.problems.dropped() > 0)
+            lines << tr("... and %1 more problems not listed; fix these first.").arg(result.problems.dropped());
         problems_->setPlainText(lines.join(u'\n'));
         result_->setText(tr("Problems found: %1. Nothing was imported.").arg(problemCount_));
         return false;
     }
     result_->setText(tr("Imported %1 animals, %2 residences and %3 encounters.")
-                         .arg(plan.animals.size())
-                         .arg(plan.residences.size())
-                         .arg(plan.encounters.size()));
+                         .arg(result.animals)
+                         .arg(result.residences)
+                         .arg(result.encounters));
     try {
         document_->reload();
     } catch (const core::ColonyFileError& error) {

@@ -176,3 +176,29 @@ TEST(ColonyBackup, RestoreRefusesADamagedBackupAndAWritingProgram)
     writer.exec("COMMIT");
     EXPECT_EQ(writer.encounterCount(), 0);
 }
+
+TEST(ColonyBackup, ABackupWithAnotherPageSizeIsRefusedOverALiveFileButRestoresIntoANewOne)
+{
+    TempDir dir;
+    const std::string path = dir.file("c.hierloom");
+    const std::string backup = backupColony(smallColony(path), noon);
+    {
+        // Rewrite the backup with 4 KiB pages, as files of earlier builds have.
+        sqlite3* db = nullptr;
+        ASSERT_EQ(sqlite3_open(backup.c_str(), &db), SQLITE_OK);
+        ASSERT_EQ(sqlite3_exec(db, "PRAGMA page_size = 4096; VACUUM", nullptr, nullptr, nullptr), SQLITE_OK);
+        sqlite3_close(db);
+    }
+    const std::string before = fileBytes(path);
+    try {
+        restoreBackup(backup, path, noon + std::chrono::hours(1));
+        FAIL() << "restored pages of another size over a WAL file";
+    } catch (const ColonyFileError& e) {
+        EXPECT_NE(std::string(e.what()).find("4 KiB pages"), std::string::npos) << e.what();
+        EXPECT_NE(std::string(e.what()).find("restore it into a new file"), std::string::npos) << e.what();
+    }
+    EXPECT_EQ(fileBytes(path), before);
+    const std::string fresh = dir.file("restored.hierloom");
+    restoreBackup(backup, fresh, noon + std::chrono::hours(1));
+    EXPECT_EQ(ColonyStore::open(fresh).encounterCount(), 5);
+}

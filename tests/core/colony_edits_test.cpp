@@ -32,7 +32,7 @@ struct Fixture {
     Fixture() : store(ColonyStore::create(dir.file("c.hierloom")))
     {
         ImportPaths p{dir.write("a.csv", animalsCsv), dir.write("r.csv", residencesCsv), {}};
-        const ImportPlan plan = importFiles(store, p, today());
+        const ImportResult plan = importFiles(store, p, today());
         EXPECT_TRUE(plan.ok()) << plan.problems.text();
     }
 };

@@ -35,7 +35,7 @@ std::string importInto(const std::string& animals, const std::string& residences
     const std::string colony = dir.file("c.hierloom");
     {
         ColonyStore store = ColonyStore::create(colony);
-        const ImportPlan base = importFiles(store,
+        const ImportResult base = importFiles(store,
                                             {dir.write("base_animals.csv", kAnimals),
                                              dir.write("base_residences.csv", kResidences), ""},
                                             kToday);
@@ -50,7 +50,7 @@ std::string importInto(const std::string& animals, const std::string& residences
         if (!animals.empty()) paths.animals = dir.write("animals.csv", animals);
         if (!residences.empty()) paths.residences = dir.write("residences.csv", residences);
         if (!encounters.empty()) paths.encounters = dir.write("encounters.csv", encounters);
-        const ImportPlan plan = importFiles(store, paths, kToday);
+        const ImportResult plan = importFiles(store, paths, kToday);
         problems = plan.problems.text();
         animalCount = store.loadAnimals().size();
         if (!plan.ok()) {

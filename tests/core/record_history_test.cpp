@@ -123,7 +123,7 @@ TEST(RecordHistory, ABulkImportIsOneAuditRowThatStillCoversEachEncounter)
     EXPECT_EQ(h[0].user, "importer");
     EXPECT_NE(h[0].newValues.find("\"source\":\"import of big.csv\""), std::string::npos) << h[0].newValues;
     EXPECT_NE(h[0].newValues.find("\"count\":12000"), std::string::npos);
-    // The pause applies to that transaction only: a later single edit is audited row by row.
+    // The per-row trigger is back after the bulk append: a later single edit is audited row by row.
     store.exec("UPDATE encounter SET note = 'checked' WHERE seq = 1");
     EXPECT_EQ(recordHistory(store, many[0].uid).size(), 2U);
     EXPECT_EQ(count(store, "SELECT count(*) FROM audit_pause"), 0);

@@ -47,7 +47,7 @@ std::string makeColony(const TempDir& dir)
 {
     const std::string path = dir.file("entry.hierloom");
     core::ColonyStore store = core::ColonyStore::create(path);
-    const core::ImportPlan plan = core::importFiles(
+    const core::ImportResult plan = core::importFiles(
         store, {dir.write("a.csv", animalsCsv), dir.write("r.csv", residencesCsv), {}}, core::today());
     EXPECT_TRUE(plan.ok()) << plan.problems.text();
     return path;

@@ -46,7 +46,7 @@ std::string makeColony(const TempDir& dir)
     const std::string path = dir.file("small.hierloom");
     core::ColonyStore store = core::ColonyStore::create(path);
     core::ImportPaths paths{dir.write("animals.csv", animalsCsv), {}, dir.write("encounters.csv", encountersCsv)};
-    const core::ImportPlan plan = core::importFiles(store, paths, core::today());
+    const core::ImportResult plan = core::importFiles(store, paths, core::today());
     EXPECT_TRUE(plan.ok()) << plan.problems.text();
     return path;
 }

@@ -1,0 +1,75 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#include "core/record_appender.h"
+
+#include "core/colony_store.h"
+#include "core/record_binding.h"
+#include "core/write_transaction.h"
+
+namespace hierloom::core {
+
+void insertAnimals(ColonyStore& store, std::vector<Animal>& animals)
+{
+    if (animals.empty()) return;
+    SqliteStatement ins(store.handle(), kInsertAnimalSql);
+    for (Animal& a : animals) {
+        if (a.uid.empty()) a.uid = newUid();
+        bindAnimalColumns(ins, a);
+        ins.run();
+    }
+}
+
+void insertResidences(ColonyStore& store, std::vector<Residence>& residences)
+{
+    if (residences.empty()) return;
+    SqliteStatement ins(store.handle(), kInsertResidenceSql);
+    for (Residence& r : residences) {
+        if (r.uid.empty()) r.uid = newUid();
+        bindResidenceColumns(ins, r);
+        ins.run();
+    }
+}
+
+EncounterAppender::EncounterAppender(ColonyStore& store, const WriteTransaction& transaction)
+    : store_(store), bulk_(transaction.bulk()), insert_(store.handle(), kInsertEncounterSql)
+{
+    SqliteStatement q(store.handle(), "SELECT coalesce(max(seq), 0) FROM encounter");
+    q.step();
+    nextSeq_ = q.integer(0) + 1;
+    firstSeq_ = nextSeq_;
+}
+
+void EncounterAppender::add(Encounter& e)
+{
+    if (e.uid.empty()) e.uid = newUid();
+    e.seq = nextSeq_++;
+    if (count_ == 0 || e.date != lastDate_) {
+        date_ = formatDate(e.date);
+        lastDate_ = e.date;
+    }
+    bindEncounterColumns(insert_, e, date_);
+    insert_.run();
+    ++count_;
+    if (!e.observer.empty() && e.observer != lastObserver_) {
+        lastObserver_ = e.observer;
+        observers_.insert(e.observer);
+    }
+}
+
+void EncounterAppender::finish(const std::string& source)
+{
+    SqliteStatement obs(store_.handle(), "INSERT OR IGNORE INTO observer(name) VALUES (?)");
+    for (const std::string& name : observers_) {
+        obs.bind(1, name);
+        obs.run();
+    }
+    if (!bulk_ || count_ == 0) return;
+    SqliteStatement note(store_.handle(), "INSERT INTO audit(tbl, action, new_values) VALUES ('encounter', 'import', "
+                                          "json_object('source', ?, 'count', ?, 'first_seq', ?, 'last_seq', ?))");
+    note.bind(1, source);
+    note.bind(2, count_);
+    note.bind(3, firstSeq_);
+    note.bind(4, nextSeq_ - 1);
+    note.run();
+}
+
+} // namespace hierloom::core
