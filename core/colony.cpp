@@ -35,6 +35,8 @@ std::vector<size_t> chronologicalOrder(const std::vector<Encounter>& encounters)
 {
     std::vector<size_t> order(encounters.size());
     std::iota(order.begin(), order.end(), size_t{0});
+    // Records are mostly entered in date order: check in one pass before sorting.
+    if (std::is_sorted(encounters.begin(), encounters.end(), encounterBefore)) return order;
     std::stable_sort(order.begin(), order.end(), [&](size_t a, size_t b) {
         return encounterBefore(encounters[a], encounters[b]);
     });

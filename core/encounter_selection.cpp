@@ -2,6 +2,9 @@
 #include "core/encounter_selection.h"
 
 #include <algorithm>
+#include <string_view>
+#include <unordered_map>
+#include <unordered_set>
 
 namespace hierloom::core {
 
@@ -32,10 +35,11 @@ EncounterSelection selectEncounters(const Colony& colony, const ResidenceIndex& 
         }
         picked.push_back(i);
     }
-    std::vector<std::string> ids;
+    // Distinct ids first (a million encounters name a few hundred animals), then sorted.
+    std::unordered_set<std::string_view> distinct;
     for (size_t i : picked) {
-        ids.push_back(colony.encounters[i].winner);
-        ids.push_back(colony.encounters[i].loser);
+        distinct.insert(colony.encounters[i].winner);
+        distinct.insert(colony.encounters[i].loser);
     }
     if (o.includeResidents) {
         const Day from = o.from.value_or(-ResidenceIndex::openEnd);
@@ -43,16 +47,19 @@ EncounterSelection selectEncounters(const Colony& colony, const ResidenceIndex& 
         for (const Animal& a : colony.animals) {
             const int k = where.animal(a.id);
             if (k >= 0 && where.residentDuring(k, from, to, groupIndex) && (groupIndex >= 0 || o.group.empty()))
-                ids.push_back(a.id);
+                distinct.insert(a.id);
         }
     }
-    std::sort(ids.begin(), ids.end());
-    ids.erase(std::unique(ids.begin(), ids.end()), ids.end());
-    sel.ids = std::move(ids);
+    sel.ids.assign(distinct.begin(), distinct.end());
+    std::sort(sel.ids.begin(), sel.ids.end());
+    std::unordered_map<std::string_view, int> index;
+    for (size_t k = 0; k < sel.ids.size(); ++k) index.emplace(sel.ids[k], static_cast<int>(k));
     sel.bouts.reserve(picked.size());
+    sel.days.reserve(picked.size());
+    sel.source.reserve(picked.size());
     for (size_t i : picked) {
         const Encounter& e = colony.encounters[i];
-        sel.bouts.push_back({sel.indexOf(e.winner), sel.indexOf(e.loser), e.outcome == Outcome::Draw});
+        sel.bouts.push_back({index.at(e.winner), index.at(e.loser), e.outcome == Outcome::Draw});
         sel.days.push_back(e.date);
         sel.source.push_back(i);
     }

@@ -86,10 +86,18 @@ StabilitySeries stabilityWatch(const Colony& colony, const ResidenceIndex& where
     for (size_t p = 0; p < periods.size(); ++p) series.periods[p].period = periods[p];
 
     const int n = sel.size();
-    std::vector<std::string> lineOf(static_cast<size_t>(n));
-    for (int i = 0; i < n; ++i) {
-        const int node = lines.index(sel.ids[static_cast<size_t>(i)]);
-        lineOf[static_cast<size_t>(i)] = node >= 0 ? lines.id(lines.matriarch(node)) : sel.ids[static_cast<size_t>(i)];
+    // Each animal's matriline (its matriarch's id), as an index into lineNames.
+    std::vector<std::string> lineNames;
+    std::vector<int> lineOf(static_cast<size_t>(n));
+    {
+        std::map<std::string, int> known;
+        for (int i = 0; i < n; ++i) {
+            const int node = lines.index(sel.ids[static_cast<size_t>(i)]);
+            const std::string name = node >= 0 ? lines.id(lines.matriarch(node)) : sel.ids[static_cast<size_t>(i)];
+            const auto [it, added] = known.emplace(name, static_cast<int>(lineNames.size()));
+            if (added) lineNames.push_back(name);
+            lineOf[static_cast<size_t>(i)] = it->second;
+        }
     }
     std::vector<int> whereOf(static_cast<size_t>(n));
     for (int i = 0; i < n; ++i) whereOf[static_cast<size_t>(i)] = where.animal(sel.ids[static_cast<size_t>(i)]);
@@ -110,7 +118,7 @@ StabilitySeries stabilityWatch(const Colony& colony, const ResidenceIndex& where
     for (size_t p = 0; p < periods.size(); ++p) {
         StabilityPeriod& sp = series.periods[p];
         std::map<DyadKey, CounterDominantDyad> dyads;
-        std::map<std::pair<std::string, std::string>, int> pairs;
+        std::map<std::pair<int, int>, int> linePairs; // (winner's line, loser's line) -> count
         std::vector<Day> observedDays;
         for (; b < sel.bouts.size() && sel.days[b] <= periods[p].end; ++b) {
             const Bout& bout = sel.bouts[b];
@@ -131,13 +139,14 @@ StabilitySeries stabilityWatch(const Colony& colony, const ResidenceIndex& where
                     if (rating[w] < rating[l]) {
                         ++sp.counterDominant;
                         CounterDominantDyad& dy = dyads[{bout.winner, bout.loser}];
-                        dy.winner = sel.ids[w];
-                        dy.loser = sel.ids[l];
-                        dy.winnerLine = lineOf[w];
-                        dy.loserLine = lineOf[l];
-                        ++dy.count;
+                        if (dy.count++ == 0) {
+                            dy.winner = sel.ids[w];
+                            dy.loser = sel.ids[l];
+                            dy.winnerLine = lineNames[static_cast<size_t>(lineOf[w])];
+                            dy.loserLine = lineNames[static_cast<size_t>(lineOf[l])];
+                        }
                         if (dy.dates.empty() || dy.dates.back() != d) dy.dates.push_back(d);
-                        ++pairs[{lineOf[w], lineOf[l]}];
+                        ++linePairs[{lineOf[w], lineOf[l]}];
                     }
                 }
             }
@@ -149,7 +158,14 @@ StabilitySeries stabilityWatch(const Colony& colony, const ResidenceIndex& where
             }
         }
         if (sp.decided > 0) sp.counterShare = static_cast<double>(sp.counterDominant) / sp.decided;
+        sp.dyads.reserve(dyads.size());
         for (auto& [key, dy] : dyads) sp.dyads.push_back(std::move(dy));
+        // In line-name order, as before the lines were numbered (the sorts below are stable).
+        std::map<std::pair<std::string, std::string>, int> pairs;
+        for (const auto& [key, count] : linePairs)
+            pairs.emplace(std::make_pair(lineNames[static_cast<size_t>(key.first)],
+                                         lineNames[static_cast<size_t>(key.second)]),
+                          count);
         std::stable_sort(sp.dyads.begin(), sp.dyads.end(),
                          [](const CounterDominantDyad& x, const CounterDominantDyad& y) { return x.count > y.count; });
         for (const auto& [key, count] : pairs) sp.matrilinePairs.push_back({key.first, key.second, count});

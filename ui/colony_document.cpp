@@ -38,6 +38,7 @@ void ColonyDocument::adopt(core::ColonyStore store, const QString& path, bool re
     readOnly_ = readOnly;
     undoStack_->clear();
     lastChange_ = Change{};
+    snapshot_ = {};
     emit changed();
 }
 
@@ -50,6 +51,7 @@ void ColonyDocument::close()
     readOnly_ = false;
     undoStack_->clear();
     lastChange_ = Change{};
+    snapshot_ = {};
     emit changed();
 }
 
@@ -61,6 +63,7 @@ void ColonyDocument::reload()
     colony_ = std::move(colony);
     colony_.reindex();
     lastChange_ = Change{};
+    snapshot_ = {};
     emit changed();
 }
 
@@ -72,6 +75,7 @@ void ColonyDocument::reloadAnimals()
     colony_.reindex();
     residences_ = core::ResidenceIndex(colony_.animals, colony_.residences);
     lastChange_ = Change{Change::AnimalsChanged, 0};
+    snapshot_ = {};
     emit changed();
 }
 
@@ -98,12 +102,23 @@ void ColonyDocument::applyEncounterChange(const std::vector<core::Encounter>& re
         }
     }
     lastChange_ = appendedOnly ? Change{Change::EncountersAppended, first} : Change{Change::EncountersChanged, 0};
+    snapshot_ = {};
     emit changed();
+}
+
+ColonyDocument::Snapshot ColonyDocument::snapshot() const
+{
+    if (!snapshot_.colony) {
+        snapshot_.colony = std::make_shared<const core::Colony>(colony_);
+        snapshot_.residences = std::make_shared<const core::ResidenceIndex>(residences_);
+    }
+    return snapshot_;
 }
 
 void ColonyDocument::listsChanged()
 {
     lastChange_ = Change{Change::ListsChanged, 0};
+    snapshot_ = {};
     emit changed();
 }
 

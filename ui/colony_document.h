@@ -7,6 +7,7 @@
 #include <QObject>
 #include <QString>
 
+#include <memory>
 #include <optional>
 #include <vector>
 
@@ -61,6 +62,15 @@ public:
     const core::Colony& colony() const { return colony_; }
     const core::ResidenceIndex& residences() const { return residences_; }
 
+    /// An unchanging copy of colony() and residences() for background jobs:
+    /// made on the first request after a change and shared by every view
+    /// until the next change, so a change costs one copy, not one per view.
+    struct Snapshot {
+        std::shared_ptr<const core::Colony> colony;
+        std::shared_ptr<const core::ResidenceIndex> residences;
+    };
+    Snapshot snapshot() const;
+
 signals:
     /// Emitted once after any open, close, reload or edit.
     void changed();
@@ -77,6 +87,7 @@ private:
     bool readOnly_ = false;
     Change lastChange_;
     QUndoStack* undoStack_;
+    mutable Snapshot snapshot_; // empty until asked for after a change
 };
 
 } // namespace hierloom::ui

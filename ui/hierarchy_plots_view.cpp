@@ -117,8 +117,9 @@ void HierarchyPlotsView::recompute()
         adopt({});
         return;
     }
-    auto colony = std::make_shared<const core::Colony>(document_->colony());
-    auto where = std::make_shared<const core::ResidenceIndex>(document_->residences());
+    const ColonyDocument::Snapshot snapshot = document_->snapshot();
+    auto colony = snapshot.colony;
+    auto where = snapshot.residences;
     runner_->start([this, colony, where](const std::atomic<bool>& cancel, const ComputeRunner::Progress& progress) {
         const core::Matrilines lines(*colony);
         auto s = std::make_shared<core::HierarchySeries>(

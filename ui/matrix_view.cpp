@@ -154,8 +154,9 @@ void MatrixView::recompute()
     options.to = to_;
     options.group = toStdString(group_);
     const core::RankMethod method = method_;
-    auto colony = std::make_shared<const core::Colony>(document_->colony());
-    auto where = std::make_shared<const core::ResidenceIndex>(document_->residences());
+    const ColonyDocument::Snapshot snapshot = document_->snapshot();
+    auto colony = snapshot.colony;
+    auto where = snapshot.residences;
     runner_->start([this, colony, where, options, method](const std::atomic<bool>& cancel,
                                                           const ComputeRunner::Progress& progress) {
         progress(0, 3);

@@ -142,8 +142,9 @@ void PredictionView::recompute()
         const QSignalBlocker block(dateEdit_);
         dateEdit_->setDate(toQDate(*options.at));
     }
-    auto colony = std::make_shared<const core::Colony>(document_->colony());
-    auto where = std::make_shared<const core::ResidenceIndex>(document_->residences());
+    const ColonyDocument::Snapshot snapshot = document_->snapshot();
+    auto colony = snapshot.colony;
+    auto where = snapshot.residences;
     runner_->start([this, colony, where, options](const std::atomic<bool>& cancel, const ComputeRunner::Progress& progress) {
         const core::Matrilines lines(*colony);
         progress(0, 2);

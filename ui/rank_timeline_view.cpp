@@ -166,8 +166,9 @@ void RankTimelineView::recompute()
     options.step = step_;
     options.inheritance.group = toStdString(group_);
     // Copies: the worker must not read the document while an edit changes it.
-    auto colony = std::make_shared<const core::Colony>(document_->colony());
-    auto where = std::make_shared<const core::ResidenceIndex>(document_->residences());
+    const ColonyDocument::Snapshot snapshot = document_->snapshot();
+    auto colony = snapshot.colony;
+    auto where = snapshot.residences;
     runner_->start([this, colony, where, options](const std::atomic<bool>& cancel, const ComputeRunner::Progress& progress) {
         const core::Matrilines lines(*colony);
         auto result = std::make_shared<core::RankTimeline>(

@@ -43,7 +43,8 @@ QString signalName(core::StabilitySignal s)
 }
 } // namespace
 
-core::StabilitySeries documentStability(ColonyDocument* document, const std::string& group, core::PeriodLength length)
+core::StabilityOptions documentStabilityOptions(ColonyDocument* document, const std::string& group,
+                                                core::PeriodLength length)
 {
     core::StabilityOptions o;
     o.group = group;
@@ -52,18 +53,31 @@ core::StabilitySeries documentStability(ColonyDocument* document, const std::str
         o.thresholds = core::readStabilityThresholds(*store);
         o.severity = core::behaviourSeverities(*store);
     }
+    return o;
+}
+
+core::StabilitySeries documentStability(ColonyDocument* document, const std::string& group, core::PeriodLength length)
+{
     const core::Matrilines lines(document->colony());
-    return core::stabilityWatch(document->colony(), document->residences(), lines, o);
+    return core::stabilityWatch(document->colony(), document->residences(), lines,
+                                documentStabilityOptions(document, group, length));
+}
+
+std::vector<std::string> groupsWithEncounters(const core::Colony& colony, const core::ResidenceIndex& where)
+{
+    std::set<std::string> names;
+    for (const core::Encounter& e : colony.encounters)
+        if (!e.group.empty()) names.insert(e.group);
+    std::vector<std::string> out;
+    for (const std::string& g : names)
+        if (where.group(g) >= 0) out.push_back(g);
+    return out;
 }
 
 QStringList groupsWithEncounters(ColonyDocument* document)
 {
-    std::set<std::string> names;
-    for (const core::Encounter& e : document->colony().encounters)
-        if (!e.group.empty()) names.insert(e.group);
     QStringList out;
-    for (const std::string& g : names)
-        if (document->residences().group(g) >= 0) out << toQString(g);
+    for (const std::string& g : groupsWithEncounters(document->colony(), document->residences())) out << toQString(g);
     return out;
 }
 

@@ -15,10 +15,15 @@ namespace hierloom::ui {
 
 class ColonyDocument;
 
+/// The options of the stability watch of one group with the thresholds and
+/// behaviour severities stored in the open document's file.
+core::StabilityOptions documentStabilityOptions(ColonyDocument* document, const std::string& group,
+                                                core::PeriodLength length);
 /// The stability watch of one group (core/stability_watch.h) computed for the open document.
 core::StabilitySeries documentStability(ColonyDocument* document, const std::string& group, core::PeriodLength length);
 
-/// Groups of the open document that have encounters, by name.
+/// Groups that have encounters, by name.
+std::vector<std::string> groupsWithEncounters(const core::Colony& colony, const core::ResidenceIndex& where);
 QStringList groupsWithEncounters(ColonyDocument* document);
 
 /// The Stability tab: the weekly or monthly series plotted, the alerts with

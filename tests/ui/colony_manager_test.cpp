@@ -77,6 +77,7 @@ TEST(StabilityView, DemoRevoltMonthsAlertWithEvidenceAndCaution)
     EXPECT_EQ(view->alertList()->topLevelItemCount(), static_cast<int>(view->series().alerts.size()));
     // The record ends calm: no banner, no status-bar badge.
     EXPECT_TRUE(view->banner()->isHidden());
+    window.managerViews().badge->waitForCheck(); // the check runs on a worker thread
     EXPECT_TRUE(window.managerViews().badge->alertedGroups().isEmpty());
     EXPECT_TRUE(hasCaution(view));
     EXPECT_TRUE(window.showView(QStringLiteral("stability")));
@@ -98,6 +99,7 @@ TEST(StabilityView, AlertInTheLatestPeriodShowsTheBadge)
     QuietWindow window;
     ASSERT_TRUE(window.openColony(QString::fromStdString(path)));
     ui::StabilityBadge* badge = window.managerViews().badge;
+    badge->waitForCheck(); // the check runs on a worker thread
     EXPECT_EQ(badge->alertedGroups(), QStringList{QString::fromUtf8(core::demo::kGroup)});
     EXPECT_FALSE(badge->isHidden());
     EXPECT_TRUE(badge->toolTip().contains(QStringLiteral("veterinary")));
@@ -109,6 +111,7 @@ TEST(StabilityView, AlertInTheLatestPeriodShowsTheBadge)
     high.counterShare = 0.99;
     high.severeFactor = 100;
     view->applyThresholds(high);
+    badge->waitForCheck();
     EXPECT_TRUE(badge->alertedGroups().isEmpty());
     EXPECT_TRUE(view->banner()->isHidden());
 }
