@@ -1,7 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "ui/animal_table_model.h"
 
-#include "core/matriline_founder.h"
+#include "core/matriline.h"
 #include "ui/colony_document.h"
 #include "ui/qt_convert.h"
 
@@ -30,9 +30,12 @@ void AnimalTableModel::rebuild()
     const core::Day today = referenceDay_.value_or(core::today());
     rows_.clear();
     rows_.reserve(colony.animals.size());
+    // The same matriarchs as every other view (a looping mother link is dropped there, not here).
+    const core::Matrilines lines(colony);
     for (const core::Animal& a : colony.animals) {
         Row row;
-        row.founder = toQString(core::matrilineFounder(colony, a.id));
+        const int node = lines.index(a.id);
+        if (node >= 0) row.founder = toQString(lines.id(lines.matriarch(node)));
         const bool gone = a.exit && *a.exit <= today;
         row.present = !gone;
         if (a.birth) row.age = core::ageInYears(*a.birth, gone ? *a.exit : today);

@@ -95,7 +95,8 @@ EncounterEntryPanel::EncounterEntryPanel(ColonyEditFacade* facade, QWidget* pare
       list_(new QTableWidget(this)),
       count_(new QLabel(this)),
       summary_(new QLabel(this)),
-      undoSession_(new QPushButton(tr("&Undo Whole Session"), this))
+      undoSession_(new QPushButton(tr("&Undo Whole Session"), this)),
+      matcher_(document_)
 {
     date_->setDisplayFormat(QStringLiteral("yyyy-MM-dd"));
     date_->setCalendarPopup(true);
@@ -258,22 +259,7 @@ void EncounterEntryPanel::refreshResidents()
 {
     // The completions and the prefix matching offer only the animals in the
     // session's group on the session's day.
-    residents_.clear();
-    const auto& where = document_->residences();
-    const int g = where.group(toStdString(group_->currentText()));
-    const core::Day day = sessionDay();
-    QStringList words;
-    if (g >= 0)
-        for (const core::Animal& a : document_->colony().animals) {
-            const int i = where.animal(a.id);
-            if (i >= 0 && where.groupOn(i, day) == g) {
-                residents_.push_back({a.id, a.name});
-                words << toQString(a.id);
-                if (!a.name.empty()) words << toQString(a.name);
-            }
-        }
-    words.sort(Qt::CaseInsensitive);
-    completions_->setStringList(words);
+    completions_->setStringList(matcher_.setSession(toStdString(group_->currentText()), sessionDay()));
 }
 
 void EncounterEntryPanel::headerChanged()
@@ -286,50 +272,6 @@ void EncounterEntryPanel::headerChanged()
     checkAnimalField(loser_, loserInfo_);
 }
 
-EncounterEntryPanel::Resolved EncounterEntryPanel::resolve(const QString& typed) const
-{
-    Resolved r;
-    const QString text = typed.trimmed();
-    r.id = toStdString(text);
-    if (text.isEmpty()) return r;
-    const auto& animals = document_->colony().animals;
-    auto label = [](const std::string& id, const std::string& name) {
-        return name.empty() ? toQString(id) : toQString(id) + QStringLiteral(" ") + toQString(name);
-    };
-    // An exact id wins, resident or not, so the residence check can say where it was.
-    if (const int i = document_->colony().animalIndex(r.id); i >= 0) {
-        r.hint = label(r.id, animals[static_cast<size_t>(i)].name);
-        return r;
-    }
-    std::vector<const Resident*> byId, byName, exact;
-    for (const Resident& a : residents_) {
-        const QString id = toQString(a.id), name = toQString(a.name);
-        if (id.compare(text, Qt::CaseInsensitive) == 0 || (!a.name.empty() && name.compare(text, Qt::CaseInsensitive) == 0))
-            exact.push_back(&a);
-        if (id.startsWith(text, Qt::CaseInsensitive)) byId.push_back(&a);
-        else if (!a.name.empty() && name.startsWith(text, Qt::CaseInsensitive)) byName.push_back(&a);
-    }
-    const std::vector<const Resident*>& hits = exact.size() == 1 ? exact : (byId.size() + byName.size() == 1 ? (byId.empty() ? byName : byId) : exact);
-    if (hits.size() == 1) {
-        r.id = hits.front()->id;
-        r.hint = label(r.id, hits.front()->name);
-        return r;
-    }
-    if (byId.size() + byName.size() > 1) {
-        QStringList ids;
-        for (const auto* list : {&byId, &byName})
-            for (const Resident* a : *list) ids << toQString(a->id);
-        const qsizetype all = ids.size();
-        if (all > 4) ids = ids.mid(0, 4) << tr("... (%1 in all)").arg(all);
-        r.partial = true;
-        r.error = tr("'%1' matches %2; type more").arg(text, ids.join(QStringLiteral(", ")));
-        return r;
-    }
-    // Same words as the import for an id it does not know.
-    r.error = toQString(core::checkEncounterAnimal(r.id, {}, sessionDay(), document_->residences()).value_or(""));
-    return r;
-}
-
 void EncounterEntryPanel::checkAnimalField(QLineEdit* edit, QLabel* info)
 {
     const QString text = edit->text().trimmed();
@@ -337,7 +279,7 @@ void EncounterEntryPanel::checkAnimalField(QLineEdit* edit, QLabel* info)
         info->clear();
         return;
     }
-    const Resolved r = resolve(text);
+    const AnimalMatcher::Match r = matcher_.resolve(text);
     if (r.partial) {
         showHint(info, *r.error); // still typing: a hint, not a mistake
         return;
@@ -350,7 +292,7 @@ void EncounterEntryPanel::checkAnimalField(QLineEdit* edit, QLabel* info)
         showError(info, toQString(*m));
         return;
     }
-    const Resolved other = resolve(edit == winner_ ? loser_->text() : winner_->text());
+    const AnimalMatcher::Match other = matcher_.resolve(edit == winner_ ? loser_->text() : winner_->text());
     if (edit == loser_ && !winner_->text().trimmed().isEmpty() && other.id == r.id) {
         showError(info, toQString("'" + r.id + "' is also the winner; an encounter needs two animals"));
         return;
@@ -386,7 +328,7 @@ void EncounterEntryPanel::checkDate()
         showError(dateInfo_, toQString("'" + core::formatDate(sessionDay()) + "' is in the future"));
     else if (document_->isOpen() && group_->count() == 0)
         showHint(dateInfo_, tr("The colony has no groups yet: add animals first."));
-    else if (document_->isOpen() && residents_.empty())
+    else if (document_->isOpen() && matcher_.noResidents())
         showHint(dateInfo_, tr("No animal lived in this group on that day."));
     else dateInfo_->clear();
 }
@@ -425,8 +367,8 @@ bool EncounterEntryPanel::commitLine()
     e.date = sessionDay();
     bool badTime = false;
     e.time = parsedTime(badTime);
-    const Resolved w = resolve(winner_->text());
-    const Resolved l = resolve(loser_->text());
+    const AnimalMatcher::Match w = matcher_.resolve(winner_->text());
+    const AnimalMatcher::Match l = matcher_.resolve(loser_->text());
     e.winner = w.id;
     e.loser = l.id;
     e.outcome = draw_->isChecked() ? core::Outcome::Draw : core::Outcome::Decided;

@@ -1,5 +1,6 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
+#include "ui/animal_matcher.h"
 #include "core/colony.h"
 #include "core/field_problem.h"
 
@@ -78,13 +79,6 @@ protected:
     void showEvent(QShowEvent* event) override;
 
 private:
-    struct Resolved {
-        std::string id;       // the animal meant, or the text as typed
-        QString hint;         // shown beside the field when fine
-        std::optional<QString> error;
-        bool partial = false; // a prefix of several residents: keep typing
-    };
-    Resolved resolve(const QString& text) const;
     void refreshChoices();
     void refreshResidents();
     void refreshList();
@@ -127,11 +121,7 @@ private:
     QLabel* summary_;
     QPushButton* undoSession_;
 
-    struct Resident {
-        std::string id;
-        std::string name;
-    };
-    std::vector<Resident> residents_;
+    AnimalMatcher matcher_;
     std::vector<std::int64_t> sessionSeqs_;  // rows entered in this session (kept when undone, for redo)
     std::set<std::int64_t> warned_;          // rows saved despite a duplicate warning
     std::optional<core::Encounter> editing_; // the row being changed, if any
