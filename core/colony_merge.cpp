@@ -74,6 +74,17 @@ std::string differences(const Record& ours, const Record& theirs)
     return out;
 }
 
+/// An encounter without a group belongs to the group both animals shared that
+/// day, which the import and the merge fill in; so an empty group on either
+/// side is not a difference.
+std::string differences(const Encounter& ours, const Encounter& theirs)
+{
+    if (!ours.group.empty() && !theirs.group.empty()) return differences<Encounter>(ours, theirs);
+    Encounter same = theirs;
+    same.group = ours.group;
+    return differences<Encounter>(ours, same);
+}
+
 template <typename Record>
 std::unordered_map<std::string, const Record*> byUid(const std::vector<Record>& records)
 {
@@ -114,7 +125,7 @@ void updateResidence(sqlite3* db, const std::string& uid, const Residence& r)
 void updateEncounter(sqlite3* db, const std::string& uid, const Encounter& e)
 {
     SqliteStatement q(db, "UPDATE encounter SET date = ?, time = ?, winner = ?, loser = ?, outcome = ?, "
-                          "behaviour = ?, grp = ?, observer = ?, note = ? WHERE uid = ?");
+                          "behaviour = ?, grp = coalesce(nullif(?, ''), grp), observer = ?, note = ? WHERE uid = ?");
     q.bind(1, formatDate(e.date));
     if (e.time) q.bind(2, static_cast<std::int64_t>(*e.time));
     else q.bindNull(2);

@@ -229,3 +229,49 @@ TEST(ColonyMerge, TheSameIdForTwoDifferentAnimalsIsAConflict)
     EXPECT_NE(r.conflicts[0].what.find("same identity"), std::string::npos);
     EXPECT_NE(r.conflicts[0].what.find("sex: 'F' here, 'M' in the other file"), std::string::npos);
 }
+
+// An encounter without a group takes the group both animals shared that day
+// when it is written; the copy still without one in the other file is the same
+// record, not a conflict, and preferring the other file keeps the group.
+TEST(ColonyMerge, AnEmptyGroupFilledOnImportIsNotAConflict)
+{
+    TwoLaptops t;
+    Encounter loose = encounter("2014-07-01", "F1", "F2", "cy");
+    loose.group.clear();
+    loose.uid = newUid();
+    {
+        ColonyStore b = ColonyStore::open(t.b);
+        b.append({}, {}, {loose});
+    }
+    {
+        ColonyStore a = ColonyStore::open(t.a);
+        const ColonyStore b = ColonyStore::open(t.b, ColonyStore::Mode::ReadOnly);
+        const MergeReport r = mergeColonies(a, b, prefer(MergePreference::Ours));
+        EXPECT_TRUE(r.problems.empty()) << r.problems.text();
+        ASSERT_EQ(r.addedEncounters.size(), 4U);
+        EXPECT_EQ(r.addedEncounters.back().group, "main"); // filled on the way in
+    }
+    ColonyStore a = ColonyStore::open(t.a);
+    {
+        // Merged again: the filled group here against the empty one there is no conflict.
+        const ColonyStore b = ColonyStore::open(t.b, ColonyStore::Mode::ReadOnly);
+        const MergeReport r = mergeColonies(a, b, prefer(MergePreference::None));
+        ASSERT_EQ(r.conflicts.size(), 1U); // only the fixture's edit of F2's name on both laptops
+        EXPECT_EQ(r.conflicts[0].table, "animal");
+        EXPECT_TRUE(r.addedEncounters.empty());
+    }
+    {
+        // A real difference in the same record, preferring the other file: its note is
+        // taken, the group filled here stays.
+        ColonyStore b = ColonyStore::open(t.b);
+        b.exec(("UPDATE encounter SET note = 'seen twice' WHERE uid = '" + loose.uid + "'").c_str());
+    }
+    const ColonyStore b = ColonyStore::open(t.b, ColonyStore::Mode::ReadOnly);
+    const MergeReport r = mergeColonies(a, b, prefer(MergePreference::Theirs));
+    EXPECT_EQ(r.takenFromOther, (std::vector<std::string>{"animal F2", "encounter of 2014-07-01 F1 beat F2"}));
+    for (const Encounter& e : a.loadEncounters())
+        if (e.uid == loose.uid) {
+            EXPECT_EQ(e.note, "seen twice");
+            EXPECT_EQ(e.group, "main");
+        }
+}
