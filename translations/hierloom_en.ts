@@ -2,6 +2,17 @@
 <!DOCTYPE TS>
 <TS version="2.1" language="en" sourcelanguage="en">
 <context>
+    <name>AnimalMatcher</name>
+    <message>
+        <source>... (%1 in all)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&apos;%1&apos; matches %2; type more</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
     <name>QObject</name>
     <message>
         <source>Export</source>
@@ -85,6 +96,10 @@
     </message>
     <message>
         <source>Cannot Make the Report</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Sex Ratio</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -377,6 +392,81 @@
     </message>
 </context>
 <context>
+    <name>hierloom::ui::BackupActions</name>
+    <message>
+        <source>Restore from Backup</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Taken</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Size</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>File</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Restore...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>There are no backups of this colony yet.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Backups in %1, newest first:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Back Up Now</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Restore from Backup...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Merge Another Colony...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Cannot Back Up the Colony</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Replace every record of %1 with the backup %2?
+
+The colony as it is now is backed up first, so this can be reversed by restoring that backup.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Cannot Restore the Backup</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Cannot Open Colony</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Scheduled Backup Failed</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Colony File Damaged</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1
+
+The newest backup of this colony was taken %2. Restore it over the damaged file and open it? The damaged file is kept in the backup folder.</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
     <name>hierloom::ui::ColonyEditFacade</name>
     <message>
         <source>No colony is open.</source>
@@ -393,13 +483,6 @@
     <message>
         <source>Edit encounter %1 over %2</source>
         <translation type="unfinished"></translation>
-    </message>
-    <message numerus="yes">
-        <source>Delete %n encounter(s)</source>
-        <translation type="unfinished">
-            <numerusform></numerusform>
-            <numerusform></numerusform>
-        </translation>
     </message>
     <message>
         <source>Add animal %1</source>
@@ -435,6 +518,14 @@
     </message>
     <message>
         <source>Edit observers</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Delete 1 encounter</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Delete %1 encounters</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -539,10 +630,6 @@
         <translation type="unfinished"></translation>
     </message>
     <message>
-        <source>&amp;End Session</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
         <source>Dra&amp;w</source>
         <translation type="unfinished"></translation>
     </message>
@@ -639,10 +726,6 @@
         <translation type="unfinished"></translation>
     </message>
     <message>
-        <source>&apos;%1&apos; matches %2; type more</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
         <source>&apos;%1&apos; is not a time of day in the form HH:MM (24 h)</source>
         <translation type="unfinished"></translation>
     </message>
@@ -692,6 +775,10 @@
     </message>
     <message>
         <source>(none)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>End &amp;Session</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -1415,6 +1502,109 @@
     </message>
 </context>
 <context>
+    <name>hierloom::ui::MergeDialog</name>
+    <message>
+        <source>No file chosen</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Records edited differently in the two files</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Decide nothing: do not merge</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Keep &amp;this colony&apos;s version</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Take the &amp;other file&apos;s version</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Merge Another Colony</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Choose File...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Merge</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Hierloom colonies (*.hierloom);;All files (*)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Open a colony for writing first.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>This is the colony already open; choose another file.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Merging would add:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Added:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message numerus="yes">
+        <source>  %n animal(s)</source>
+        <translation type="unfinished">
+            <numerusform></numerusform>
+            <numerusform></numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>  %n stay(s) in groups</source>
+        <translation type="unfinished">
+            <numerusform></numerusform>
+            <numerusform></numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>  %n encounter(s)</source>
+        <translation type="unfinished">
+            <numerusform></numerusform>
+            <numerusform></numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>Already here, skipped: %1 animals, %2 stays, %3 encounters</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>  + animal %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message numerus="yes">
+        <source>Edited differently in the two files (%n):</source>
+        <translation type="unfinished">
+            <numerusform></numerusform>
+            <numerusform></numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>  taken from the other file: %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Records that cannot be added:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Choose the other colony file; nothing is written until you press Merge.</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
     <name>hierloom::ui::PedigreeView</name>
     <message>
         <source>%1 (%2)%3</source>
@@ -1728,11 +1918,11 @@
         <translation type="unfinished"></translation>
     </message>
     <message>
-        <source>line %1</source>
+        <source>Order on %1 (%2)</source>
         <translation type="unfinished"></translation>
     </message>
     <message>
-        <source>Order on %1 (%2)</source>
+        <source>line of %1</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -1885,6 +2075,77 @@
         <source>Discordant dyads: %1</source>
         <translation type="unfinished"></translation>
     </message>
+    <message>
+        <source>Discordance: selected female</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Discordance: all females</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Discordance: none</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::RecordHistoryDialog</name>
+    <message>
+        <source>added</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>changed</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>removed</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>imported</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>restored from backup</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;History...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>History of %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>When</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Who</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Action</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Changes</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>(another program)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>No changes are recorded for %1.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>encounter %1 over %2 on %3</source>
+        <translation type="unfinished"></translation>
+    </message>
 </context>
 <context>
     <name>hierloom::ui::ReportDialog</name>
@@ -1898,6 +2159,170 @@
     </message>
     <message>
         <source>At:</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::ResearchExportDialog</name>
+    <message>
+        <source>Spreadsheet-friendly (UTF-8 byte-order mark in each file)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Export Research Tables</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Whole window as one period</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Days</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Weeks</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Months</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Years</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Custom windows</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>One window per line: YYYY-MM-DD,YYYY-MM-DD</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Elo rating</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>David&apos;s score</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>I&amp;&amp;SI order</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>All groups</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>YYYY-MM-DD (empty: from the start)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>YYYY-MM-DD (empty: to the end)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Randomisations of the per-period tests in the metrics table (0: tests skipped)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Browse...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Periods:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Custom windows:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Rank method:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Group:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>From:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>To:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Randomisations:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Folder:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Export</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Gestation length and maturity age come from the colony&apos;s species setting (Sex Ratio tab).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Folder for the Research Tables</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1: &apos;%2&apos; is not a date YYYY-MM-DD.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>From</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>To</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>From is after To.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Custom window &apos;%1&apos; is not FROM,TO with two dates YYYY-MM-DD, FROM not after TO.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Enter at least one custom window, or choose regular periods.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>The colony&apos;s species setting is not valid: %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Choose a folder for the tables.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1.csv (%2 rows)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Wrote %1 files to %2:
+%3</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>The tables could not be written: %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Export &amp;Research Tables...</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -2044,6 +2469,148 @@
     </message>
     <message>
         <source>NEW%1</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::SexRatioView</name>
+    <message>
+        <source>Save Species Setting</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 (%2)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source> days</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source> years</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Store the species, gestation length and maturity age in the colony file</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Species:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Gestation:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Females ranked from:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Group:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Offspring</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Mother</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Born</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Reason left out</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Figures</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Proportion of sons by maternal rank third</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Births left out</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Maternal rank at conception and at birth</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Proportion of sons</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Wilson 95 % interval</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Low
+(rel. rank &lt; 1/3)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Middle
+(1/3 to &lt; 2/3)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>High
+(2/3 and above)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Mother&apos;s relative rank at conception</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>The colony&apos;s species setting is not valid (%1); the default species applies.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>All groups</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Figure</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Value</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>No colony is open.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>No births with a recorded birth date: every figure is empty.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 births used, %2 left out.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>No birth could be used: every figure is empty.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>The offspring are all of one sex: the logistic regression is undefined.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>The logistic regression is undefined (fewer than two births, one maternal rank only, or complete separation).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 sons / %2 births</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -2282,7 +2849,7 @@ Without a colony file it opens on a start screen that offers the demo colony.</s
         <translation type="unfinished"></translation>
     </message>
     <message>
-        <source>Open on this view: animals, encounters, timeline, prediction, matrix, hierarchy, entry, planner or stability.</source>
+        <source>Open on this view: animals, encounters, timeline, prediction, matrix, hierarchy, sex-ratio, entry, planner or stability.</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
