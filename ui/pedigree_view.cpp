@@ -57,12 +57,12 @@ protected:
             const QColor colour = MatrilinePalette::colourAt(n.line);
             p.setPen(QPen(n.present ? colour.darker(140) : colour, n.recorded ? 1.5 : 1,
                           n.recorded ? Qt::SolidLine : Qt::DashLine));
-            p.setBrush(n.present ? QBrush(colour) : QBrush(Qt::white));
+            p.setBrush(n.present ? QBrush(colour) : palette().base()); // hollow: no longer present
             const QRectF box(n.at.x() - radius, n.at.y() - radius, 2 * radius, 2 * radius);
             if (n.female) p.drawEllipse(box);
             else p.drawRect(box);
             if (n.id == selected) {
-                p.setPen(QPen(Qt::black, 2.5));
+                p.setPen(QPen(palette().text().color(), 2.5));
                 p.setBrush(Qt::NoBrush);
                 p.drawEllipse(n.at, radius + 4, radius + 4);
             }
