@@ -10,6 +10,7 @@
 #include "core/write_transaction.h"
 
 #include <algorithm>
+#include <exception>
 #include <functional>
 #include <thread>
 #include <unordered_set>
@@ -484,20 +485,25 @@ void checkAndAppendEncounters(const ResidenceIndex& where, std::unordered_set<st
 {
     constexpr std::size_t batchRows = 4096;
     BoundedQueue<std::vector<Encounter>> queue(8);
+    std::exception_ptr checkFailed; // an exception must not escape the thread (std::terminate)
     std::thread checker([&] {
-        std::vector<Encounter> batch;
-        batch.reserve(batchRows);
-        checkEncounters(where, uids, src, today, problems, [&](Encounter& e) {
-            // The uid is made here, off the writing thread.
-            if (e.uid.empty()) e.uid = newUid();
-            batch.push_back(std::move(e));
-            if (batch.size() < batchRows) return true;
-            const bool open = queue.push(std::move(batch));
-            batch = {};
+        try {
+            std::vector<Encounter> batch;
             batch.reserve(batchRows);
-            return open;
-        });
-        if (!batch.empty()) queue.push(std::move(batch));
+            checkEncounters(where, uids, src, today, problems, [&](Encounter& e) {
+                // The uid is made here, off the writing thread.
+                if (e.uid.empty()) e.uid = newUid();
+                batch.push_back(std::move(e));
+                if (batch.size() < batchRows) return true;
+                const bool open = queue.push(std::move(batch));
+                batch = {};
+                batch.reserve(batchRows);
+                return open;
+            });
+            if (!batch.empty()) queue.push(std::move(batch));
+        } catch (...) {
+            checkFailed = std::current_exception();
+        }
         queue.close();
     });
     try {
@@ -509,6 +515,7 @@ void checkAndAppendEncounters(const ResidenceIndex& where, std::unordered_set<st
         throw;
     }
     checker.join();
+    if (checkFailed) std::rethrow_exception(checkFailed);
 }
 
 } // namespace
