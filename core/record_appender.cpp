@@ -7,26 +7,30 @@
 
 namespace hierloom::core {
 
-void insertAnimals(ColonyStore& store, std::vector<Animal>& animals)
+namespace {
+
+template <typename Record, typename Bind>
+void insertRecords(ColonyStore& store, const char* sql, std::vector<Record>& records, const Bind& bind)
 {
-    if (animals.empty()) return;
-    SqliteStatement ins(store.handle(), kInsertAnimalSql);
-    for (Animal& a : animals) {
-        if (a.uid.empty()) a.uid = newUid();
-        bindAnimalColumns(ins, a);
+    if (records.empty()) return;
+    SqliteStatement ins(store.handle(), sql);
+    for (Record& r : records) {
+        if (r.uid.empty()) r.uid = newUid();
+        bind(ins, r);
         ins.run();
     }
 }
 
+} // namespace
+
+void insertAnimals(ColonyStore& store, std::vector<Animal>& animals)
+{
+    insertRecords(store, kInsertAnimalSql, animals, bindAnimalColumns);
+}
+
 void insertResidences(ColonyStore& store, std::vector<Residence>& residences)
 {
-    if (residences.empty()) return;
-    SqliteStatement ins(store.handle(), kInsertResidenceSql);
-    for (Residence& r : residences) {
-        if (r.uid.empty()) r.uid = newUid();
-        bindResidenceColumns(ins, r);
-        ins.run();
-    }
+    insertRecords(store, kInsertResidenceSql, residences, bindResidenceColumns);
 }
 
 EncounterAppender::EncounterAppender(ColonyStore& store, const WriteTransaction& transaction)
