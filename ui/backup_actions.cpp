@@ -20,6 +20,7 @@
 #include <QMenu>
 #include <QPushButton>
 #include <QScopeGuard>
+#include <QTimer>
 #include <QTreeWidget>
 #include <QUndoStack>
 #include <QVBoxLayout>
@@ -89,6 +90,10 @@ BackupActions::BackupActions(QMenu* file, QWidget* window, ColonyDocument* docum
     merge_ = file->addAction(tr("&Merge Another Colony..."), this, &BackupActions::mergeAnotherColony);
     connect(document_, &ColonyDocument::changed, this, &BackupActions::updateEnabled);
     updateEnabled();
+    auto* schedule = new QTimer(this);
+    schedule->setInterval(15 * 60 * 1000);
+    connect(schedule, &QTimer::timeout, this, [this] { checkSchedule(std::chrono::system_clock::now()); });
+    schedule->start();
 }
 
 void BackupActions::updateEnabled()
@@ -171,11 +176,19 @@ void BackupActions::afterOpen()
 {
     if (!document_->isOpen() || document_->isReadOnly()) return;
     applyUserName();
+    scheduleFailureReported_ = false;
+    checkSchedule(std::chrono::system_clock::now());
+}
+
+void BackupActions::checkSchedule(std::chrono::system_clock::time_point now)
+{
+    if (!document_->isOpen() || document_->isReadOnly()) return;
     try {
-        core::backupIfDue(*document_->store(), std::chrono::system_clock::now());
+        core::backupIfDue(*document_->store(), now);
     } catch (const std::exception& e) {
-        // The colony is open and usable; only the safety copy failed, so say so and carry on.
-        reportError_(tr("Scheduled Backup Failed"), QString::fromUtf8(e.what()));
+        // The colony is open and usable; only the safety copy failed, so say so (once) and carry on.
+        if (!scheduleFailureReported_) reportError_(tr("Scheduled Backup Failed"), QString::fromUtf8(e.what()));
+        scheduleFailureReported_ = true;
     }
 }
 

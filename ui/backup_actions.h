@@ -5,6 +5,7 @@
 #include <QObject>
 #include <QString>
 
+#include <chrono>
 #include <functional>
 
 class QAction;
@@ -38,6 +39,10 @@ public:
     /// After a colony opened: stamps the audit user name (the session
     /// observer, else the OS user) and takes the scheduled backup when due.
     void afterOpen();
+    /// Takes the scheduled backup if it is due at `now` (also run every 15
+    /// minutes, so a colony kept open for days still gets its backups). A
+    /// failure is reported once per opened file, not at every check.
+    void checkSchedule(std::chrono::system_clock::time_point now);
     /// The evening entry's observer, used as the audit user name while set.
     void setSessionObserver(const QString& observer);
     /// When opening `path` failed as damaged or not a colony file and backups
@@ -59,6 +64,7 @@ private:
     ReportError reportError_;
     AskQuestion ask_;
     QString observer_;
+    bool scheduleFailureReported_ = false;
     QAction* backUp_;
     QAction* restore_;
     QAction* merge_;

@@ -146,6 +146,25 @@ TEST(ReliabilityUi, OpeningTakesTheScheduledBackupAndBackUpNowAddsOne)
     EXPECT_TRUE(window.errors.isEmpty()) << window.errors.join('\n').toStdString();
 }
 
+// A colony kept open for days: the periodic check takes the next backup once
+// the 24-hour interval has passed, and only then.
+TEST(ReliabilityUi, AColonyKeptOpenGetsItsScheduledBackups)
+{
+    TempDir dir;
+    const std::string path = makeColony(dir, "colony.hierloom");
+    TestWindow window;
+    ASSERT_TRUE(window.openColony(QString::fromStdString(path)));
+    ASSERT_EQ(core::listBackups(path).size(), 1u);
+    const auto now = std::chrono::system_clock::now();
+    window.backupActions()->checkSchedule(now + std::chrono::hours(23));
+    EXPECT_EQ(core::listBackups(path).size(), 1u);
+    window.backupActions()->checkSchedule(now + std::chrono::hours(25));
+    EXPECT_EQ(core::listBackups(path).size(), 2u);
+    window.backupActions()->checkSchedule(now + std::chrono::hours(26));
+    EXPECT_EQ(core::listBackups(path).size(), 2u);
+    EXPECT_TRUE(window.errors.isEmpty()) << window.errors.join('\n').toStdString();
+}
+
 TEST(ReliabilityUi, MergeDialogAddsTheOtherFilesNewEncounter)
 {
     TempDir dir;
