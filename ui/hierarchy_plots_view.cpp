@@ -8,9 +8,12 @@
 #include "ui/plot_export.h"
 #include "ui/progress_strip.h"
 #include "ui/qt_convert.h"
+#include "ui/stability_view.h"
 
+#include <QComboBox>
 #include <QHBoxLayout>
 #include <QLabel>
+#include <QSignalBlocker>
 #include <QVBoxLayout>
 
 #include <qcustomplot.h>
@@ -31,10 +34,15 @@ HierarchyPlotsView::HierarchyPlotsView(ColonyDocument* document, QWidget* parent
       document_(document),
       runner_(new ComputeRunner(this)),
       progress_(new ProgressStrip(runner_, tr("the monthly hierarchy figures"), this)),
-      plot_(new QCustomPlot(this))
+      plot_(new QCustomPlot(this)),
+      group_(new QComboBox(this))
 {
     auto* controls = new QHBoxLayout;
-    controls->addWidget(new QLabel(tr("Month by month over the whole record"), this));
+    controls->addWidget(new QLabel(tr("Month by month over the whole record of"), this));
+    group_->setObjectName(QStringLiteral("hierarchyGroup"));
+    group_->setToolTip(tr("Every group's encounters, or one group's (an encounter without a group counts for "
+                          "the group both animals shared that day)"));
+    controls->addWidget(group_);
     // One "?" per figure plotted, in the order of the panels.
     for (const char* key : {"h_prime", "steepness", "ttri", "conformity"})
         controls->addWidget(new HelpButton(QString::fromLatin1(key), this));
@@ -104,8 +112,28 @@ HierarchyPlotsView::HierarchyPlotsView(ColonyDocument* document, QWidget* parent
     connect(progress_, &ProgressStrip::retry, this, &HierarchyPlotsView::recompute);
     // Recomputed only while on screen; a hidden tab catches up when shown.
     auto* refresh = new VisibleRefresh(this, [this] { recompute(); });
+    connect(document_, &ColonyDocument::changed, this, &HierarchyPlotsView::refillGroups);
     connect(document_, &ColonyDocument::changed, refresh, &VisibleRefresh::request);
+    connect(group_, &QComboBox::currentIndexChanged, this, &HierarchyPlotsView::recompute);
+    refillGroups();
     recompute();
+}
+
+void HierarchyPlotsView::refillGroups()
+{
+    const QSignalBlocker block(group_);
+    const QString current = group_->currentData().toString();
+    group_->clear();
+    group_->addItem(tr("all groups"), QString());
+    if (document_->isOpen())
+        for (const QString& g : groupsWithEncounters(document_)) group_->addItem(g, g);
+    group_->setCurrentIndex(std::max(0, group_->findData(current)));
+}
+
+void HierarchyPlotsView::setGroup(const QString& group)
+{
+    const int i = group_->findData(group);
+    if (i >= 0) group_->setCurrentIndex(i);
 }
 
 HierarchyPlotsView::~HierarchyPlotsView() = default;
@@ -120,10 +148,13 @@ void HierarchyPlotsView::recompute()
     const ColonyDocument::Snapshot snapshot = document_->snapshot();
     auto colony = snapshot.colony;
     auto where = snapshot.residences;
-    runner_->start([this, colony, where](const std::atomic<bool>& cancel, const ComputeRunner::Progress& progress) {
+    core::InheritanceOptions options;
+    options.group = toStdString(group_->currentData().toString());
+    runner_->start([this, colony, where, options](const std::atomic<bool>& cancel,
+                                                  const ComputeRunner::Progress& progress) {
         const core::Matrilines lines(*colony);
         auto s = std::make_shared<core::HierarchySeries>(
-            core::computeHierarchySeries(*colony, *where, lines, {}, &cancel, progress));
+            core::computeHierarchySeries(*colony, *where, lines, options, &cancel, progress));
         return ComputeRunner::Apply([this, s] { adopt(std::move(*s)); });
     });
 }

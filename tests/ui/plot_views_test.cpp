@@ -5,7 +5,9 @@
 #include "ui/matrix_view.h"
 
 #include "core/encounter_selection.h"
+#include "core/colony_store.h"
 #include "core/export_tables.h"
+#include "core/hierarchy_series.h"
 #include "core/matriline.h"
 #include "plot_test_support.h"
 #include "ui/main_window.h"
@@ -13,6 +15,7 @@
 #include "ui/rank_timeline_view.h"
 #include "ui/qt_convert.h"
 
+#include <QComboBox>
 #include <QFile>
 #include <QImage>
 #include <QRegularExpression>
@@ -99,6 +102,68 @@ TEST(HierarchyPlotsView, OnePointPerMonthInEveryPanel)
     ASSERT_NE(bars, nullptr);
     for (auto it = bars->data()->constBegin(); it != bars->data()->constEnd(); ++it) sum += it->value;
     EXPECT_DOUBLE_EQ(sum, static_cast<double>(core::selectEncounters(c, where, {}).bouts.size()));
+}
+
+// Two groups with encounters counted by hand: 2020-01 has 6 in A and 3 in B,
+// 2020-02 has 2 in A and 5 in B. All groups: 9 and 7; group B alone: 3 and 5.
+TEST(HierarchyPlotsView, OneGroupOrAll)
+{
+    TempDir dir;
+    const std::string path = dir.file("two-groups.hierloom");
+    {
+        core::ColonyStore store = core::ColonyStore::create(path);
+        std::vector<core::Animal> animals;
+        std::vector<core::Residence> stays;
+        for (const char* id : {"A1", "A2", "A3", "B1", "B2", "B3"}) {
+            core::Animal a;
+            a.id = id;
+            a.sex = core::Sex::Female;
+            a.entry = core::dayFromCivil(2010, 1, 1);
+            a.entryType = core::EntryType::Founder;
+            animals.push_back(a);
+            stays.push_back({id, id[0] == 'A' ? "A" : "B", *a.entry, std::nullopt, {}});
+        }
+        std::vector<core::Encounter> encounters;
+        auto add = [&](int month, const char* group, int count) {
+            for (int i = 0; i < count; ++i) {
+                core::Encounter e;
+                e.date = core::dayFromCivil(2020, month, 1 + i);
+                e.winner = std::string(group) + "1";
+                e.loser = std::string(group) + (i % 2 ? "2" : "3");
+                e.group = group;
+                encounters.push_back(e);
+            }
+        };
+        add(1, "A", 6);
+        add(1, "B", 3);
+        add(2, "A", 2);
+        add(2, "B", 5);
+        store.append(animals, stays, encounters);
+    }
+    ui::ColonyDocument document;
+    document.open(QString::fromStdString(path));
+    ui::HierarchyPlotsView view(&document);
+    finish(view.runner());
+    ASSERT_EQ(view.groupBox()->count(), 3); // all groups, A, B
+    auto counts = [&] {
+        std::vector<long long> out;
+        for (const core::HierarchyMonth& m : view.series().months) out.push_back(m.encounters);
+        return out;
+    };
+    EXPECT_EQ(counts(), (std::vector<long long>{9, 7}));
+    view.setGroup(QStringLiteral("B"));
+    finish(view.runner());
+    EXPECT_EQ(counts(), (std::vector<long long>{3, 5}));
+    // The same figures as the core's for that group.
+    core::InheritanceOptions options;
+    options.group = "B";
+    const core::Matrilines lines(document.colony());
+    const core::HierarchySeries expected = core::computeHierarchySeries(document.colony(), document.residences(), lines, options);
+    ASSERT_EQ(view.series().months.size(), expected.months.size());
+    for (size_t m = 0; m < expected.months.size(); ++m) {
+        EXPECT_EQ(view.series().months[m].hPrime, expected.months[m].hPrime);
+        EXPECT_EQ(view.series().months[m].steepness, expected.months[m].steepness);
+    }
 }
 
 TEST(PlotExport, PublicationSizedPngAndPdf)
