@@ -7,11 +7,14 @@
 #include "ui/visible_refresh.h"
 #include "ui/qt_convert.h"
 
+#include <QAction>
 #include <QMouseEvent>
 #include <QPainter>
 #include <QToolTip>
+#include <QWheelEvent>
 
 #include <algorithm>
+#include <cmath>
 #include <functional>
 
 namespace hierloom::ui {
@@ -34,6 +37,7 @@ protected:
         QPainter p(this);
         p.setRenderHint(QPainter::Antialiasing);
         p.fillRect(rect(), palette().base());
+        p.scale(owner_->zoom_, owner_->zoom_); // the layout is in unzoomed canvas units
         const auto& nodes = owner_->nodes_;
         QFont small = font();
         small.setPointSizeF(small.pointSizeF() * 0.82);
@@ -92,8 +96,9 @@ protected:
     }
 
 public:
-    int nodeAt(QPointF at) const
+    int nodeAt(QPointF pixel) const
     {
+        const QPointF at = pixel / owner_->zoom_;
         const auto& nodes = owner_->nodes_;
         for (size_t i = 0; i < nodes.size(); ++i)
             if (QLineF(nodes[i].at, at).length() <= radius + 3) return static_cast<int>(i);
@@ -118,11 +123,49 @@ PedigreeView::PedigreeView(ColonyDocument* document, AnimalSelection* selection,
         canvas_->update();
         const int i = find(id);
         if (i >= 0) {
-            const QPointF at = nodes_[static_cast<size_t>(i)].at;
+            const QPointF at = nodes_[static_cast<size_t>(i)].at * zoom_;
             ensureVisible(static_cast<int>(at.x()), static_cast<int>(at.y()), 60, 60);
         }
     });
+    // Zoom: Ctrl + wheel, or the context menu.
+    setContextMenuPolicy(Qt::ActionsContextMenu);
+    auto addZoomAction = [this](const QString& text, const QKeySequence& keys, std::function<void()> act) {
+        auto* a = new QAction(text, this);
+        a->setShortcut(keys);
+        a->setShortcutContext(Qt::WidgetWithChildrenShortcut);
+        connect(a, &QAction::triggered, this, std::move(act));
+        addAction(a);
+    };
+    // (Ctrl+1..6 belong to the window: they switch views.)
+    addZoomAction(tr("Zoom to Fit Width"), QKeySequence(), [this] { zoomToFitWidth(); });
+    addZoomAction(tr("Actual Size"), QKeySequence(Qt::CTRL | Qt::Key_0), [this] { setZoom(1.0); });
+    addZoomAction(tr("Zoom In"), QKeySequence::ZoomIn, [this] { setZoom(zoom_ * 1.25); });
+    addZoomAction(tr("Zoom Out"), QKeySequence::ZoomOut, [this] { setZoom(zoom_ / 1.25); });
     rebuild();
+}
+
+void PedigreeView::setZoom(double zoom)
+{
+    zoom_ = std::clamp(zoom, minZoom, maxZoom);
+    canvas_->resize(static_cast<int>(std::ceil(natural_.width() * zoom_)),
+                    static_cast<int>(std::ceil(natural_.height() * zoom_)));
+    canvas_->update();
+}
+
+void PedigreeView::zoomToFitWidth()
+{
+    if (natural_.width() <= 0) return;
+    setZoom(std::min(1.0, (viewport()->width() - 2) / natural_.width()));
+}
+
+void PedigreeView::wheelEvent(QWheelEvent* event)
+{
+    if (event->modifiers() & Qt::ControlModifier) {
+        setZoom(zoom_ * std::pow(1.15, event->angleDelta().y() / 120.0));
+        event->accept();
+        return;
+    }
+    QScrollArea::wheelEvent(event);
 }
 
 PedigreeView::~PedigreeView() = default;
@@ -143,7 +186,7 @@ QPoint PedigreeView::viewportPosition(const QString& id) const
 {
     const int i = find(id);
     if (i < 0) return {};
-    return canvas_->mapTo(viewport(), nodes_[static_cast<size_t>(i)].at.toPoint());
+    return canvas_->mapTo(viewport(), (nodes_[static_cast<size_t>(i)].at * zoom_).toPoint());
 }
 
 bool PedigreeView::clickAt(QPoint viewportPoint)
@@ -209,7 +252,8 @@ void PedigreeView::rebuild()
         widest = std::max(widest, nextLeaf);
         top = y0 + deepest * level + radius + 30;
     }
-    canvas_->resize(static_cast<int>(std::max(widest + margin, 200.0)), static_cast<int>(top + margin));
+    natural_ = QSizeF(std::max(widest + margin, 200.0), top + margin);
+    setZoom(zoom_);
     updatePresence();
 }
 

@@ -5,6 +5,7 @@
 #include "ui/matriline_palette.h"
 
 #include <QScrollArea>
+#include <QSizeF>
 #include <QString>
 
 #include <memory>
@@ -20,7 +21,9 @@ class ColonyDocument;
 /// mothers above their offspring, sisters left to right in birth order
 /// (females round, males square). Animals alive in the colony on the
 /// selected date are filled in their line's colour, the others hollow; a
-/// click selects an animal in the shared AnimalSelection.
+/// click selects an animal in the shared AnimalSelection. Ctrl + wheel,
+/// Ctrl++ and Ctrl+- zoom, Ctrl+0 returns to actual size, and the context
+/// menu also fits the whole width into the view.
 class PedigreeView : public QScrollArea {
     Q_OBJECT
 public:
@@ -48,6 +51,17 @@ public:
     /// Selects the animal drawn at a viewport point, if any (what a click does).
     bool clickAt(QPoint viewportPoint);
 
+    static constexpr double minZoom = 0.2;
+    static constexpr double maxZoom = 3.0;
+    double zoom() const { return zoom_; }
+    /// Scales the drawing (clamped to minZoom..maxZoom); 1 is actual size.
+    void setZoom(double zoom);
+    /// Shrinks the drawing so its whole width fits the view (never enlarges it).
+    void zoomToFitWidth();
+
+protected:
+    void wheelEvent(QWheelEvent* event) override;
+
 private:
     class Canvas;
     void rebuild();
@@ -60,6 +74,8 @@ private:
     MatrilinePalette palette_;
     std::vector<Node> nodes_;
     std::vector<std::pair<QString, QPointF>> titles_; ///< line headings
+    QSizeF natural_;   ///< the drawing's size at zoom 1
+    double zoom_ = 1.0;
     friend class Canvas;
 };
 

@@ -18,6 +18,8 @@
 #include <QMouseEvent>
 #include <QTableWidget>
 
+#include <QWheelEvent>
+
 #include <gtest/gtest.h>
 #include <qcustomplot.h>
 
@@ -245,6 +247,36 @@ TEST_F(TimelineViewTest, PedigreeDrawsMothersAboveDaughtersAndPresence)
     selection.setDay(core::toDay(core::demo::kRemoval) + 1);
     EXPECT_FALSE(present(facts.removedAnimal));
     EXPECT_GT(tree.presentCount(), 20);
+}
+
+// Zoom to fit: the whole width of the drawing fits the view, and a click on a
+// node still selects that animal; Ctrl+wheel zooms within bounds.
+TEST_F(TimelineViewTest, PedigreeZoomsToFitAndClicksStillSelect)
+{
+    ui::PedigreeView tree(demo.document(), &selection);
+    tree.resize(320, 500);
+    tree.show();
+    const int naturalWidth = tree.widget()->width();
+    ASSERT_GT(naturalWidth, tree.viewport()->width()); // the demo's lines do not fit 320 px at actual size
+    tree.zoomToFitWidth();
+    EXPECT_LT(tree.zoom(), 1.0);
+    EXPECT_LE(tree.widget()->width(), tree.viewport()->width());
+    EXPECT_NEAR(tree.widget()->width(), naturalWidth * tree.zoom(), 1.5);
+    const Planted p = daughterOverMother();
+    const QString daughter = ui::toQString(p.daughter);
+    tree.ensureVisible(tree.viewportPosition(daughter).x(), tree.viewportPosition(daughter).y());
+    ASSERT_TRUE(tree.clickAt(tree.viewportPosition(daughter)));
+    EXPECT_EQ(selection.animal(), daughter);
+    // Ctrl + wheel: one notch up enlarges by 15 %, and the zoom stays within its bounds.
+    const double before = tree.zoom();
+    QWheelEvent up(QPointF(10, 10), tree.mapToGlobal(QPointF(10, 10)), QPoint(), QPoint(0, 120), Qt::NoButton,
+                   Qt::ControlModifier, Qt::NoScrollPhase, false);
+    QCoreApplication::sendEvent(tree.viewport(), &up);
+    EXPECT_NEAR(tree.zoom(), before * 1.15, 1e-9);
+    tree.setZoom(100);
+    EXPECT_EQ(tree.zoom(), ui::PedigreeView::maxZoom);
+    tree.setZoom(1.0);
+    EXPECT_EQ(tree.widget()->width(), naturalWidth);
 }
 
 TEST_F(TimelineViewTest, UpdatesOnDocumentChangeAndCancelKeepsTheOldResult)
