@@ -556,15 +556,18 @@ ImportResult importFiles(ColonyStore& store, const ImportPaths& paths, Day today
         std::unordered_set<std::string> uids;
         if (std::string_view(encounters->text).substr(0, encounters->text.find('\n')).find("uid") != std::string::npos)
             uids = store.encounterUids();
-        const ResidenceIndex where = residenceIndexOf(existingAnimals, existingResidences, plan);
         if (plan.ok()) {
             EncounterAppender out(store, tx);
-            checkAndAppendEncounters(where, uids, *encounters, today, plan.problems, out);
+            checkAndAppendEncounters(residenceIndexOf(existingAnimals, existingResidences, plan), uids, *encounters,
+                                     today, plan.problems, out);
             if (plan.ok()) out.finish("import of " + paths.encounters);
             result.encounters = static_cast<std::size_t>(out.count());
         } else {
             // Only to report every problem in one pass; nothing will be written.
-            checkEncounters(where, uids, *encounters, today, plan.problems, [](Encounter&) { return true; });
+            // planImport's encounter checks see the file's new animals (the
+            // failed plan above has dropped them).
+            input.encounters = std::move(encounters);
+            plan = planImport(existingAnimals, existingResidences, input, today, uids);
         }
     }
     result.problems = std::move(plan.problems);

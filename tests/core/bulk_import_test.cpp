@@ -166,6 +166,8 @@ TEST(BulkImport, ProblemsInAnimalsAndInABulkEncountersFileAreReportedTogether)
     Fixture f;
     std::string bad = readWholeFile(f.encounters);
     bad += "2012-02-30,,A1,A2,,,,,\n";
+    // A good row naming the new animal of the (failing) animals file: not a problem.
+    bad += "2012-06-01,,NEW,A1,,,,,\n";
     f.dir.write("encounters.csv", bad);
     const std::string animals = f.dir.write("more.csv", "id,sex,birth_date\nNEW,X,2011-01-01\n");
     const std::string before = fileBytes(f.colony);
@@ -176,6 +178,7 @@ TEST(BulkImport, ProblemsInAnimalsAndInABulkEncountersFileAreReportedTogether)
         EXPECT_NE(r.problems.text().find(":" + std::to_string(kRows + 2) + ": date: '2012-02-30'"),
                   std::string::npos)
             << r.problems.text();
+        EXPECT_EQ(r.problems.list().size(), 2U) << r.problems.text();
         f.expectRestored(store);
     }
     EXPECT_EQ(fileBytes(f.colony), before);
