@@ -1087,10 +1087,6 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <translation type="unfinished"></translation>
     </message>
     <message>
-        <source>Month by month over the whole record</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
         <source>h&apos;</source>
         <translation type="unfinished"></translation>
     </message>
@@ -1132,6 +1128,18 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
     <message>
         <source>Month</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Month by month over the whole record of</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Every group&apos;s encounters, or one group&apos;s (an encounter without a group counts for the group both animals shared that day)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>all groups</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -1616,6 +1624,22 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
     <message>
         <source>Line of %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Zoom to Fit Width</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Actual Size</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Zoom In</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Zoom Out</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
