@@ -6,6 +6,7 @@
 #include "core/record_binding.h"
 #include "core/residence_index.h"
 #include "core/sqlite_statement.h"
+#include "core/write_transaction.h"
 
 #include <sqlite3.h>
 
@@ -18,18 +19,13 @@ namespace {
 
 
 
-/// Runs `body` inside one IMMEDIATE transaction, rolling back on any exception.
+/// Runs `body` inside one write transaction, rolled back on any exception.
 template <typename F>
 void inTransaction(ColonyStore& store, F&& body)
 {
-    store.exec("BEGIN IMMEDIATE");
-    try {
-        body();
-        store.exec("COMMIT");
-    } catch (...) {
-        sqlite3_exec(store.handle(), "ROLLBACK", nullptr, nullptr, nullptr);
-        throw;
-    }
+    WriteTransaction tx(store);
+    body();
+    tx.commit();
 }
 
 const Animal* findByUid(const Colony& colony, const std::string& uid)

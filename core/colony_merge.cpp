@@ -5,6 +5,7 @@
 #include "core/colony_import.h"
 #include "core/colony_store.h"
 #include "core/sqlite_statement.h"
+#include "core/write_transaction.h"
 
 #include <sqlite3.h>
 
@@ -183,63 +184,54 @@ MergeReport mergeColonies(ColonyStore& target, const ColonyStore& other, const M
     sqlite3* db = target.handle();
     // Reads and writes in one write transaction, so that nobody changes the
     // file between the checks and the write.
-    target.exec("BEGIN IMMEDIATE");
-    try {
-        const Colony ours = target.load();
-        const Colony theirs = other.load();
-        Colony fresh;
-        classify(
-            ours.animals, theirs.animals, "animal", options.prefer, report, report.skippedAnimals, fresh.animals,
-            [&](const std::string& uid, const Animal& a) { updateAnimal(db, uid, a); },
-            [&](const Animal& a) -> const Animal* {
-                const int i = ours.animalIndex(a.id);
-                return i < 0 ? nullptr : &ours.animals[static_cast<size_t>(i)];
-            });
-        classify(
-            ours.residences, theirs.residences, "residence", options.prefer, report, report.skippedResidences,
-            fresh.residences, [&](const std::string& uid, const Residence& r) { updateResidence(db, uid, r); },
-            [](const Residence&) -> const Residence* { return nullptr; });
-        // New encounters in the other file's chronological order, so their seq here follows it.
-        std::vector<Encounter> theirsInOrder;
-        for (size_t i : chronologicalOrder(theirs.encounters)) theirsInOrder.push_back(theirs.encounters[i]);
-        classify(
-            ours.encounters, theirsInOrder, "encounter", options.prefer, report, report.skippedEncounters,
-            fresh.encounters, [&](const std::string& uid, const Encounter& e) { updateEncounter(db, uid, e); },
-            [](const Encounter&) -> const Encounter* { return nullptr; });
-        if (!report.conflicts.empty()) {
-            target.exec("ROLLBACK");
-            return report;
-        }
-        // Every record to add goes through the import's checks, against the
-        // colony as it stands after any overwrite above.
-        for (Encounter& e : fresh.encounters) e.seq = 0;
-        std::ostringstream animals, residences, encounters;
-        writeAnimalsCsv(animals, fresh);
-        writeResidencesCsv(residences, fresh);
-        writeEncountersCsv(encounters, fresh);
-        const std::string from = other.path();
-        ImportInput input;
-        if (!fresh.animals.empty()) input.animals = ImportSource{from + " (animals)", animals.str()};
-        // Always given, so that new animals are not placed in a default group.
-        input.residences = ImportSource{from + " (residences)", residences.str()};
-        if (!fresh.encounters.empty()) input.encounters = ImportSource{from + " (encounters)", encounters.str()};
-        ImportPlan plan =
-            planImport(target.loadAnimals(), target.loadResidences(), input, options.today, target.encounterUids());
-        if (!plan.ok()) {
-            report.problems = plan.problems;
-            target.exec("ROLLBACK");
-            return report;
-        }
-        target.append(plan.animals, plan.residences, plan.encounters, "merge from " + from);
-        report.addedAnimals = std::move(plan.animals);
-        report.addedResidences = std::move(plan.residences);
-        report.addedEncounters = std::move(plan.encounters);
-        target.exec(options.dryRun ? "ROLLBACK" : "COMMIT");
-        report.written = !options.dryRun;
-    } catch (...) {
-        sqlite3_exec(db, "ROLLBACK", nullptr, nullptr, nullptr);
-        throw;
+    WriteTransaction tx(target); // rolled back unless committed below
+    const Colony ours = target.load();
+    const Colony theirs = other.load();
+    Colony fresh;
+    classify(
+        ours.animals, theirs.animals, "animal", options.prefer, report, report.skippedAnimals, fresh.animals,
+        [&](const std::string& uid, const Animal& a) { updateAnimal(db, uid, a); },
+        [&](const Animal& a) -> const Animal* {
+            const int i = ours.animalIndex(a.id);
+            return i < 0 ? nullptr : &ours.animals[static_cast<size_t>(i)];
+        });
+    classify(
+        ours.residences, theirs.residences, "residence", options.prefer, report, report.skippedResidences,
+        fresh.residences, [&](const std::string& uid, const Residence& r) { updateResidence(db, uid, r); },
+        [](const Residence&) -> const Residence* { return nullptr; });
+    // New encounters in the other file's chronological order, so their seq here follows it.
+    std::vector<Encounter> theirsInOrder;
+    for (size_t i : chronologicalOrder(theirs.encounters)) theirsInOrder.push_back(theirs.encounters[i]);
+    classify(
+        ours.encounters, theirsInOrder, "encounter", options.prefer, report, report.skippedEncounters,
+        fresh.encounters, [&](const std::string& uid, const Encounter& e) { updateEncounter(db, uid, e); },
+        [](const Encounter&) -> const Encounter* { return nullptr; });
+    if (!report.conflicts.empty()) return report;
+    // Every record to add goes through the import's checks, against the
+    // colony as it stands after any overwrite above.
+    for (Encounter& e : fresh.encounters) e.seq = 0;
+    std::ostringstream animals, residences, encounters;
+    writeAnimalsCsv(animals, fresh);
+    writeResidencesCsv(residences, fresh);
+    writeEncountersCsv(encounters, fresh);
+    const std::string from = other.path();
+    ImportInput input;
+    if (!fresh.animals.empty()) input.animals = ImportSource{from + " (animals)", animals.str()};
+    // Always given, so that new animals are not placed in a default group.
+    input.residences = ImportSource{from + " (residences)", residences.str()};
+    if (!fresh.encounters.empty()) input.encounters = ImportSource{from + " (encounters)", encounters.str()};
+    ImportPlan plan =
+        planImport(target.loadAnimals(), target.loadResidences(), input, options.today, target.encounterUids());
+    if (!plan.ok()) {
+        report.problems = plan.problems;
+        return report;
     }
+    target.append(plan.animals, plan.residences, plan.encounters, "merge from " + from);
+    report.addedAnimals = std::move(plan.animals);
+    report.addedResidences = std::move(plan.residences);
+    report.addedEncounters = std::move(plan.encounters);
+    if (!options.dryRun) tx.commit(); // a dry run is rolled back
+    report.written = !options.dryRun;
     return report;
 }
 

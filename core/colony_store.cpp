@@ -152,16 +152,13 @@ ColonyStore ColonyStore::create(const std::string& path)
     // before the first write; WAL keeps it fixed from then on.
     store.exec("PRAGMA page_size = 16384");
     store.exec("PRAGMA journal_mode = WAL");
-    store.exec("BEGIN IMMEDIATE");
-    try {
+    {
+        WriteTransaction tx(store);
         store.exec(schemaVersion1Sql());
         store.exec(schemaVersion2Sql());
         store.exec(("PRAGMA application_id = " + std::to_string(colonyApplicationId)).c_str());
         store.exec(("PRAGMA user_version = " + std::to_string(currentSchemaVersion)).c_str());
-        store.exec("COMMIT");
-    } catch (...) {
-        sqlite3_exec(db, "ROLLBACK", nullptr, nullptr, nullptr);
-        throw;
+        tx.commit();
     }
     store.startSession();
     return store;
@@ -259,8 +256,8 @@ void ColonyStore::migrate(int fromVersion)
     sqlite3_close(dest);
     if (brc != SQLITE_OK) throw ColonyFileError(Kind::Io, backup + ": the backup before updating the file failed");
 
-    exec("BEGIN IMMEDIATE");
-    try {
+    {
+        WriteTransaction tx(*this);
         // Each step takes the file from version v to v + 1.
         for (int v = fromVersion; v < currentSchemaVersion; ++v) {
             if (v == 0) {
@@ -272,10 +269,7 @@ void ColonyStore::migrate(int fromVersion)
             }
             exec(("PRAGMA user_version = " + std::to_string(v + 1)).c_str());
         }
-        exec("COMMIT");
-    } catch (...) {
-        sqlite3_exec(db_, "ROLLBACK", nullptr, nullptr, nullptr);
-        throw;
+        tx.commit();
     }
     exec("PRAGMA journal_mode = WAL");
 }

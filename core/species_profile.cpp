@@ -2,6 +2,7 @@
 #include "core/species_profile.h"
 
 #include "core/colony_store.h"
+#include "core/write_transaction.h"
 
 #include <charconv>
 #include <stdexcept>
@@ -103,16 +104,11 @@ void writeSpeciesSettings(ColonyStore& store, const std::string& species, std::o
     const std::string m = maturityYears ? std::to_string(*maturityYears) : std::string();
     resolveSpeciesSettings(species, g, m); // validate before writing anything
     // One transaction, so a species never pairs with a stale override.
-    store.exec("BEGIN IMMEDIATE");
-    try {
-        store.setSetting(kSpeciesSettingKey, species);
-        store.setSetting(kGestationSettingKey, g);
-        store.setSetting(kMaturitySettingKey, m);
-        store.exec("COMMIT");
-    } catch (...) {
-        store.exec("ROLLBACK");
-        throw;
-    }
+    WriteTransaction tx(store);
+    store.setSetting(kSpeciesSettingKey, species);
+    store.setSetting(kGestationSettingKey, g);
+    store.setSetting(kMaturitySettingKey, m);
+    tx.commit();
 }
 
 } // namespace hierloom::core
