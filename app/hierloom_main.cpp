@@ -1,8 +1,8 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 // The desktop program: argument handling only; everything else lives in ui/.
-#include "ui/about_dialog.h"
-#include "ui/main_window.h"
-#include "ui/translations.h"
+#include "ui/shell/about_dialog.h"
+#include "ui/shell/main_window.h"
+#include "ui/shell/translations.h"
 
 #include <QApplication>
 #include <QCommandLineParser>

@@ -3,11 +3,11 @@
 #include "cli/colony_loading.h"
 #include "cli/commands.h"
 
-#include "core/hierarchy_metrics.h"
-#include "core/number_format.h"
-#include "core/parallel_randomisation.h"
-#include "core/rank_table.h"
-#include "core/win_matrix.h"
+#include "core/ranks/hierarchy_metrics.h"
+#include "core/base/number_format.h"
+#include "core/ranks/parallel_randomisation.h"
+#include "core/ranks/rank_table.h"
+#include "core/ranks/win_matrix.h"
 
 #include <CLI/CLI.hpp>
 

@@ -1,7 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "cli/colony_loading.h"
 
-#include "core/colony_store.h"
+#include "core/store/colony_store.h"
 
 namespace hierloom::cli {
 

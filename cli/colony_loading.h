@@ -1,10 +1,10 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
 #include "cli/command_context.h"
-#include "core/colony.h"
-#include "core/csv_writer.h"
-#include "core/encounter_selection.h"
-#include "core/residence_index.h"
+#include "core/base/colony.h"
+#include "core/base/csv_writer.h"
+#include "core/ranks/encounter_selection.h"
+#include "core/base/residence_index.h"
 
 #include <string>
 

@@ -1,6 +1,6 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
-#include "core/civil_date.h"
+#include "core/base/civil_date.h"
 
 #include <iosfwd>
 #include <optional>

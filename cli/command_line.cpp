@@ -3,7 +3,7 @@
 
 #include "cli/commands.h"
 #include "cli/option_defaults.h"
-#include "core/colony_file_error.h"
+#include "core/base/colony_file_error.h"
 
 #include <CLI/CLI.hpp>
 

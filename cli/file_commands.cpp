@@ -2,11 +2,11 @@
 // init, import, export and demo: the commands that move records in and out.
 #include "cli/commands.h"
 
-#include "core/colony_backup.h"
-#include "core/colony_csv_export.h"
-#include "core/colony_import.h"
-#include "core/colony_store.h"
-#include "core/demo_colony_file.h"
+#include "core/store/colony_backup.h"
+#include "core/store/colony_csv_export.h"
+#include "core/store/colony_import.h"
+#include "core/store/colony_store.h"
+#include "core/demo/demo_colony_file.h"
 
 #include <CLI/CLI.hpp>
 

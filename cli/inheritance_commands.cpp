@@ -3,13 +3,13 @@
 #include "cli/colony_loading.h"
 #include "cli/commands.h"
 
-#include "core/discordance.h"
-#include "core/inheritance_prediction.h"
-#include "core/matriline.h"
-#include "core/number_format.h"
-#include "core/rank_acquisition.h"
-#include "core/scenario.h"
-#include "core/scenario_file.h"
+#include "core/pedigree/discordance.h"
+#include "core/pedigree/inheritance_prediction.h"
+#include "core/pedigree/matriline.h"
+#include "core/base/number_format.h"
+#include "core/pedigree/rank_acquisition.h"
+#include "core/planning/scenario.h"
+#include "core/planning/scenario_file.h"
 
 #include <CLI/CLI.hpp>
 

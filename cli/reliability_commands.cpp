@@ -2,11 +2,11 @@
 // backup, restore, merge and history: keeping a colony file's records safe.
 #include "cli/commands.h"
 
-#include "core/colony_backup.h"
-#include "core/colony_merge.h"
-#include "core/colony_store.h"
-#include "core/csv_writer.h"
-#include "core/record_history.h"
+#include "core/store/colony_backup.h"
+#include "core/store/colony_merge.h"
+#include "core/store/colony_store.h"
+#include "core/base/csv_writer.h"
+#include "core/store/record_history.h"
 
 #include <CLI/CLI.hpp>
 

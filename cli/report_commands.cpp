@@ -3,11 +3,11 @@
 #include "cli/colony_loading.h"
 #include "cli/commands.h"
 
-#include "core/colony_store.h"
-#include "core/matriline.h"
-#include "core/number_format.h"
-#include "core/stability_settings.h"
-#include "core/stability_watch.h"
+#include "core/store/colony_store.h"
+#include "core/pedigree/matriline.h"
+#include "core/base/number_format.h"
+#include "core/store/stability_settings.h"
+#include "core/planning/stability_watch.h"
 
 #include <CLI/CLI.hpp>
 

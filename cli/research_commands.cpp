@@ -5,12 +5,13 @@
 #include "cli/colony_loading.h"
 #include "cli/commands.h"
 
-#include "core/colony_store.h"
-#include "core/export_tables.h"
-#include "core/maternal_rank.h"
-#include "core/number_format.h"
-#include "core/sex_ratio_analysis.h"
-#include "core/species_profile.h"
+#include "core/store/colony_store.h"
+#include "core/research/export_tables.h"
+#include "core/research/maternal_rank.h"
+#include "core/base/number_format.h"
+#include "core/research/sex_ratio_analysis.h"
+#include "core/research/species_profile.h"
+#include "core/store/species_settings.h"
 
 #include <CLI/CLI.hpp>
 

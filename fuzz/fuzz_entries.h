@@ -4,8 +4,8 @@
 // GoogleTest replay of tests/fuzz-regressions/ runs exactly the same code in
 // the normal test suite. Each returns false when an invariant of its parser's
 // result is broken (the fuzz targets turn that into a crash).
-#include "core/colony_import.h"
-#include "core/scenario_file.h"
+#include "core/store/colony_import.h"
+#include "core/planning/scenario_file.h"
 
 #include <string>
 #include <string_view>

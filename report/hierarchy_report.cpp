@@ -1,11 +1,11 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "report/hierarchy_report.h"
 
-#include "core/discordance.h"
-#include "core/matriline.h"
-#include "core/planning_caution.h"
-#include "core/rank_table.h"
-#include "core/residence_index.h"
+#include "core/pedigree/discordance.h"
+#include "core/pedigree/matriline.h"
+#include "core/planning/planning_caution.h"
+#include "core/ranks/rank_table.h"
+#include "core/base/residence_index.h"
 #include "report/report_layout.h"
 #include "report/report_text.h"
 

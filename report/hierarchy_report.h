@@ -1,9 +1,9 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
-#include "core/colony.h"
-#include "core/elo_rating.h"
-#include "core/inheritance_prediction.h"
-#include "core/stability_watch.h"
+#include "core/base/colony.h"
+#include "core/ranks/elo_rating.h"
+#include "core/pedigree/inheritance_prediction.h"
+#include "core/planning/stability_watch.h"
 
 #include <QString>
 

@@ -1,8 +1,8 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
 // Texts shared by the reports: methods with their references, and conversions.
-#include "core/elo_rating.h"
-#include "core/stability_watch.h"
+#include "core/ranks/elo_rating.h"
+#include "core/planning/stability_watch.h"
 
 #include <QString>
 #include <QStringList>

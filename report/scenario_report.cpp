@@ -1,9 +1,9 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "report/scenario_report.h"
 
-#include "core/group_composition.h"
-#include "core/planning_caution.h"
-#include "core/scenario_file.h"
+#include "core/pedigree/group_composition.h"
+#include "core/planning/planning_caution.h"
+#include "core/planning/scenario_file.h"
 #include "report/report_layout.h"
 #include "report/report_text.h"
 

@@ -1,7 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
-#include "core/colony.h"
-#include "core/scenario.h"
+#include "core/base/colony.h"
+#include "core/planning/scenario.h"
 
 #include <QString>
 

@@ -1,8 +1,8 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 // Writes the bundled demo colony as the three import files into a directory:
 //   make_demo_colony DIR [SEED]
-#include "core/colony_csv_export.h"
-#include "core/demo_colony.h"
+#include "core/store/colony_csv_export.h"
+#include "core/demo/demo_colony.h"
 
 #include <cstdint>
 #include <cstdlib>

@@ -1,9 +1,9 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 // Elo engine throughput: plain runs with log-likelihood, randomised Elo,
 // optimised k, and a bare exp+log loop as the floor to compare against.
-#include "core/elo_optimisation.h"
-#include "core/elo_rating.h"
-#include "core/randomised_elo.h"
+#include "core/ranks/elo_optimisation.h"
+#include "core/ranks/elo_rating.h"
+#include "core/ranks/randomised_elo.h"
 
 #include <benchmark/benchmark.h>
 

@@ -8,8 +8,8 @@
 // HIERLOOM_BENCH_AUDIT=1 also times the import with one audit row per
 // encounter (what the bulk load's single audit row saves);
 // HIERLOOM_BENCH_KEEP=1 keeps the files in /tmp/hierloom-bench-import.
-#include "core/colony_import.h"
-#include "core/colony_store.h"
+#include "core/store/colony_import.h"
+#include "core/store/colony_store.h"
 #include "tests/core/generated_import.h"
 
 #include <unistd.h>

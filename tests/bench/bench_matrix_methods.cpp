@@ -3,10 +3,10 @@
 // 10,000-randomisation test (h', steepness, t_tri) on a sparse-ish random
 // matrix (about 70% of dyads known), and the I&SI order of a noisy linear
 // hierarchy. Aims: under 1 s per test, under 2 s for I&SI.
-#include "core/isi_order.h"
-#include "core/linearity.h"
-#include "core/steepness_test.h"
-#include "core/triangle_transitivity.h"
+#include "core/ranks/isi_order.h"
+#include "core/ranks/linearity.h"
+#include "core/ranks/steepness_test.h"
+#include "core/ranks/triangle_transitivity.h"
 
 #include <benchmark/benchmark.h>
 

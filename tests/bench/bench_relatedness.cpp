@@ -1,9 +1,9 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 // Relatedness among all dyads of 100 resident females in a multi-generation colony
 // pedigree (the desktop's kinship view), and the sex-ratio statistics for scale.
-#include "core/fisher_exact.h"
-#include "core/logistic_regression.h"
-#include "core/relatedness.h"
+#include "core/stats/fisher_exact.h"
+#include "core/stats/logistic_regression.h"
+#include "core/pedigree/relatedness.h"
 
 #include <benchmark/benchmark.h>
 

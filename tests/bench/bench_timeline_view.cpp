@@ -3,13 +3,13 @@
 // (large_colony.h): the core computation alone, the time from opening the
 // view to its first drawn frame, and the time of one frame while panning.
 // Run on demand under QT_QPA_PLATFORM=offscreen; figures, not assertions.
-#include "core/colony_store.h"
-#include "core/rank_timeline.h"
+#include "core/store/colony_store.h"
+#include "core/pedigree/rank_timeline.h"
 #include "large_colony.h"
-#include "ui/animal_selection.h"
-#include "ui/colony_document.h"
-#include "ui/compute_runner.h"
-#include "ui/rank_timeline_view.h"
+#include "ui/document/animal_selection.h"
+#include "ui/document/colony_document.h"
+#include "ui/document/compute_runner.h"
+#include "ui/analysis/rank_timeline_view.h"
 
 #include <QApplication>
 

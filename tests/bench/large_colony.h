@@ -3,8 +3,8 @@
 // 15 years with daily encounters, deterministic from a seed. Not a scenario
 // to analyse (the latent order is crude); only its size matters.
 #pragma once
-#include "core/civil_date.h"
-#include "core/colony.h"
+#include "core/base/civil_date.h"
+#include "core/base/colony.h"
 
 #include <random>
 #include <string>

@@ -1,7 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "cli_test_support.h"
-#include "core/colony_backup.h"
-#include "core/colony_store.h"
+#include "core/store/colony_backup.h"
+#include "core/store/colony_store.h"
 
 #include <gtest/gtest.h>
 

@@ -1,6 +1,6 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
-#include "core/demo_colony.h"
+#include "core/demo/demo_colony.h"
 
 namespace hierloom::test {
 

@@ -3,7 +3,7 @@
 // Import files of a large invented colony: `animals` founders in group
 // "main" and `rows` random encounters among them over ~14 years. Shared by
 // the import benchmark and the crash and concurrency tests.
-#include "core/civil_date.h"
+#include "core/base/civil_date.h"
 
 #include <cstdint>
 #include <fstream>

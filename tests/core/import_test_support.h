@@ -1,7 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
-#include "core/colony_import.h"
-#include "core/colony_store.h"
+#include "core/store/colony_import.h"
+#include "core/store/colony_store.h"
 
 #include <filesystem>
 #include <fstream>

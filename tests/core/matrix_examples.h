@@ -2,7 +2,7 @@
 // Shared inputs for the matrix-method tests: the hand examples of
 // shared/check-values.md and seeded random matrices.
 #pragma once
-#include "core/win_matrix.h"
+#include "core/ranks/win_matrix.h"
 
 #include <cstdint>
 #include <random>

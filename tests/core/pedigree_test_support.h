@@ -1,8 +1,8 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 // Small hand-built colonies for the matriline, prediction and scenario tests.
 #pragma once
-#include "core/civil_date.h"
-#include "core/colony.h"
+#include "core/base/civil_date.h"
+#include "core/base/colony.h"
 
 #include <string>
 

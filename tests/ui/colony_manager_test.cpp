@@ -1,24 +1,24 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 // The colony manager's screens: planner, stability view and badge, and the
 // printable hierarchy report, on the demo colony (demo_colony.h scenario facts).
-#include "ui/main_window.h"
+#include "ui/shell/main_window.h"
 
-#include "core/colony_store.h"
-#include "core/demo_colony.h"
-#include "core/demo_colony_file.h"
-#include "core/matriline.h"
-#include "core/planning_caution.h"
-#include "core/scenario_file.h"
+#include "core/store/colony_store.h"
+#include "core/demo/demo_colony.h"
+#include "core/demo/demo_colony_file.h"
+#include "core/pedigree/matriline.h"
+#include "core/planning/planning_caution.h"
+#include "core/planning/scenario_file.h"
 #include "report/hierarchy_report.h"
 #include "tests/core/import_test_support.h"
-#include "ui/caution_label.h"
-#include "ui/colony_document.h"
-#include "ui/colony_manager_views.h"
-#include "ui/planner_view.h"
-#include "ui/report_dialog.h"
-#include "ui/scenario_composer.h"
-#include "ui/stability_badge.h"
-#include "ui/stability_view.h"
+#include "ui/widgets/caution_label.h"
+#include "ui/document/colony_document.h"
+#include "ui/planning/colony_manager_views.h"
+#include "ui/planning/planner_view.h"
+#include "ui/planning/report_dialog.h"
+#include "ui/planning/scenario_composer.h"
+#include "ui/planning/stability_badge.h"
+#include "ui/planning/stability_view.h"
 
 #include <QComboBox>
 #include <QFile>

@@ -1,17 +1,17 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 // Evening entry driven through the real widgets with simulated keystrokes;
 // every check reads the colony file back through a separate store.
-#include "ui/encounter_entry_panel.h"
+#include "ui/entry/encounter_entry_panel.h"
 
-#include "core/colony_import.h"
-#include "core/colony_store.h"
-#include "core/matriline.h"
-#include "core/residence_index.h"
+#include "core/store/colony_import.h"
+#include "core/store/colony_store.h"
+#include "core/pedigree/matriline.h"
+#include "core/base/residence_index.h"
 #include "tests/core/import_test_support.h"
-#include "ui/animal_editor_dialog.h"
-#include "ui/colony_document.h"
-#include "ui/colony_edit_facade.h"
-#include "ui/qt_convert.h"
+#include "ui/records/animal_editor_dialog.h"
+#include "ui/document/colony_document.h"
+#include "ui/document/colony_edit_facade.h"
+#include "ui/document/qt_convert.h"
 
 #include <QApplication>
 #include <QCheckBox>
@@ -163,7 +163,7 @@ TEST(EncounterEntry, UnknownAndNonResidentAnimalsAreRefusedBesideTheField)
 {
     Entry e;
     e.line("", "ZZ", "D1");
-    // The import's wording (core/colony_import.cpp) for an unknown id.
+    // The import's wording (core/store/colony_import.cpp) for an unknown id.
     EXPECT_EQ(e.panel->fieldMessage("winner"), QStringLiteral("'ZZ' is not an animal of the colony"));
     EXPECT_TRUE(inFile(e.path).empty());
     e.panel->winnerEdit()->clear();

@@ -2,11 +2,11 @@
 // First run (issue 10): with an empty settings file the window offers the
 // demo colony, a new colony and CSV import, and the demo opens read-only as
 // a copy in the per-user data folder.
-#include "core/demo_colony.h"
-#include "ui/colony_document.h"
-#include "ui/demo_colony_copy.h"
-#include "ui/main_window.h"
-#include "ui/welcome_panel.h"
+#include "core/demo/demo_colony.h"
+#include "ui/document/colony_document.h"
+#include "ui/shell/demo_colony_copy.h"
+#include "ui/shell/main_window.h"
+#include "ui/shell/welcome_panel.h"
 
 #include <QCommandLinkButton>
 #include <QDir>

@@ -2,17 +2,17 @@
 // Help inside the program (issue 10): every figure key has a methods entry,
 // the "?" buttons and the Help menu open the right place, the About box
 // names every licence, and the icon and the English catalogue are compiled in.
-#include "ui/about_dialog.h"
-#include "ui/help_browser.h"
-#include "ui/help_button.h"
-#include "ui/help_topics.h"
-#include "ui/main_window.h"
-#include "ui/hierarchy_plots_view.h"
-#include "ui/matrix_view.h"
-#include "ui/prediction_view.h"
-#include "ui/rank_timeline_view.h"
-#include "ui/stability_view.h"
-#include "ui/translations.h"
+#include "ui/shell/about_dialog.h"
+#include "ui/widgets/help_browser.h"
+#include "ui/widgets/help_button.h"
+#include "ui/widgets/help_topics.h"
+#include "ui/shell/main_window.h"
+#include "ui/analysis/hierarchy_plots_view.h"
+#include "ui/analysis/matrix_view.h"
+#include "ui/analysis/prediction_view.h"
+#include "ui/analysis/rank_timeline_view.h"
+#include "ui/planning/stability_view.h"
+#include "ui/shell/translations.h"
 
 #include <QAction>
 #include <QApplication>

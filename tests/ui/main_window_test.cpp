@@ -1,17 +1,17 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
-#include "ui/main_window.h"
+#include "ui/shell/main_window.h"
 
-#include "core/colony_csv_export.h"
-#include "core/colony_import.h"
-#include "core/colony_store.h"
-#include "core/demo_colony_file.h"
+#include "core/store/colony_csv_export.h"
+#include "core/store/colony_import.h"
+#include "core/store/colony_store.h"
+#include "core/demo/demo_colony_file.h"
 #include "tests/core/import_test_support.h"
-#include "ui/animal_table_model.h"
-#include "ui/animal_view.h"
-#include "ui/colony_document.h"
-#include "ui/encounter_table_model.h"
-#include "ui/encounter_view.h"
-#include "ui/import_dialog.h"
+#include "ui/records/animal_table_model.h"
+#include "ui/records/animal_view.h"
+#include "ui/document/colony_document.h"
+#include "ui/records/encounter_table_model.h"
+#include "ui/records/encounter_view.h"
+#include "ui/shell/import_dialog.h"
 
 #include <QDate>
 

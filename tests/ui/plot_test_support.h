@@ -1,11 +1,11 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 // The demo colony opened once for the plot view tests.
 #pragma once
-#include "core/demo_colony.h"
-#include "core/demo_colony_file.h"
+#include "core/demo/demo_colony.h"
+#include "core/demo/demo_colony_file.h"
 #include "tests/core/import_test_support.h"
-#include "ui/colony_document.h"
-#include "ui/compute_runner.h"
+#include "ui/document/colony_document.h"
+#include "ui/document/compute_runner.h"
 
 #include <QString>
 

@@ -1,19 +1,19 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 // The matrix and hierarchy views on the demo colony against the core
 // computations they show, the figure export and the main window's tabs.
-#include "ui/hierarchy_plots_view.h"
-#include "ui/matrix_view.h"
+#include "ui/analysis/hierarchy_plots_view.h"
+#include "ui/analysis/matrix_view.h"
 
-#include "core/encounter_selection.h"
-#include "core/colony_store.h"
-#include "core/export_tables.h"
-#include "core/hierarchy_series.h"
-#include "core/matriline.h"
+#include "core/ranks/encounter_selection.h"
+#include "core/store/colony_store.h"
+#include "core/research/export_tables.h"
+#include "core/pedigree/hierarchy_series.h"
+#include "core/pedigree/matriline.h"
 #include "plot_test_support.h"
-#include "ui/main_window.h"
-#include "ui/plot_export.h"
-#include "ui/rank_timeline_view.h"
-#include "ui/qt_convert.h"
+#include "ui/shell/main_window.h"
+#include "ui/widgets/plot_export.h"
+#include "ui/analysis/rank_timeline_view.h"
+#include "ui/document/qt_convert.h"
 
 #include <QComboBox>
 #include <QFile>

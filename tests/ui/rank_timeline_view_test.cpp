@@ -1,19 +1,19 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 // The timeline, pedigree and prediction views on the demo colony, against the
 // core computations they show and the scenario planted in the demo
-// (demo-colony/README.md, core/demo_colony.h).
-#include "ui/rank_timeline_view.h"
+// (demo-colony/README.md, core/demo/demo_colony.h).
+#include "ui/analysis/rank_timeline_view.h"
 
-#include "core/calendar_period.h"
-#include "core/discordance.h"
-#include "core/encounter_selection.h"
-#include "core/inheritance_prediction.h"
-#include "core/matriline.h"
+#include "core/base/calendar_period.h"
+#include "core/pedigree/discordance.h"
+#include "core/ranks/encounter_selection.h"
+#include "core/pedigree/inheritance_prediction.h"
+#include "core/pedigree/matriline.h"
 #include "plot_test_support.h"
-#include "ui/animal_selection.h"
-#include "ui/pedigree_view.h"
-#include "ui/prediction_view.h"
-#include "ui/qt_convert.h"
+#include "ui/document/animal_selection.h"
+#include "ui/analysis/pedigree_view.h"
+#include "ui/analysis/prediction_view.h"
+#include "ui/document/qt_convert.h"
 
 #include <QMouseEvent>
 #include <QTableWidget>

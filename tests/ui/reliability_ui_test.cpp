@@ -3,19 +3,19 @@
 // opening takes the scheduled backup, Back Up Now writes one, a merge driven
 // through its dialog adds the other file's records, and History lists the
 // audit trail of the selected animal.
-#include "core/colony_backup.h"
-#include "core/colony_import.h"
-#include "core/colony_store.h"
+#include "core/store/colony_backup.h"
+#include "core/store/colony_import.h"
+#include "core/store/colony_store.h"
 #include "tests/core/import_test_support.h"
-#include "ui/animal_table_model.h"
-#include "ui/animal_view.h"
-#include "ui/backup_actions.h"
-#include "ui/colony_document.h"
-#include "ui/encounter_entry_panel.h"
-#include "ui/encounter_view.h"
-#include "ui/main_window.h"
-#include "ui/merge_dialog.h"
-#include "ui/record_history_dialog.h"
+#include "ui/records/animal_table_model.h"
+#include "ui/records/animal_view.h"
+#include "ui/shell/backup_actions.h"
+#include "ui/document/colony_document.h"
+#include "ui/entry/encounter_entry_panel.h"
+#include "ui/records/encounter_view.h"
+#include "ui/shell/main_window.h"
+#include "ui/shell/merge_dialog.h"
+#include "ui/records/record_history_dialog.h"
 
 #include <QAction>
 #include <QComboBox>

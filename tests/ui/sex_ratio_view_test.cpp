@@ -2,14 +2,15 @@
 // The Sex Ratio tab and the research export dialog on the demo colony, against
 // the core computations they call (one code path: the figures on screen and in
 // the files are the core's figures).
-#include "ui/sex_ratio_view.h"
+#include "ui/analysis/sex_ratio_view.h"
 
-#include "core/colony_store.h"
-#include "core/export_tables.h"
-#include "core/species_profile.h"
+#include "core/store/colony_store.h"
+#include "core/research/export_tables.h"
+#include "core/research/species_profile.h"
+#include "core/store/species_settings.h"
 #include "plot_test_support.h"
-#include "ui/qt_convert.h"
-#include "ui/research_export_dialog.h"
+#include "ui/document/qt_convert.h"
+#include "ui/analysis/research_export_dialog.h"
 
 #include <QLabel>
 #include <QTableWidget>

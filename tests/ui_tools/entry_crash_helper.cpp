@@ -3,10 +3,10 @@
 // no chance to flush or close anything: the test that runs it checks that
 // every committed line is already in the colony file.
 // Usage: entry_crash_helper COLONY DATE WINNER:LOSER...
-#include "core/colony_store.h"
-#include "ui/colony_document.h"
-#include "ui/colony_edit_facade.h"
-#include "ui/qt_convert.h"
+#include "core/store/colony_store.h"
+#include "ui/document/colony_document.h"
+#include "ui/document/colony_edit_facade.h"
+#include "ui/document/qt_convert.h"
 
 #include <QApplication>
 

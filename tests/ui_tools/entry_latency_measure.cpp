@@ -3,14 +3,14 @@
 // line to the new row shown in the session list, in the real main window over
 // a colony of 1,000,000 encounters, and the time of a full reload for contrast.
 // Usage: entry_latency_measure [COLONY]  (built on first use when missing)
-#include "core/colony_edits.h"
-#include "core/colony_store.h"
-#include "ui/colony_document.h"
-#include "ui/colony_edit_facade.h"
-#include "ui/encounter_entry_panel.h"
-#include "ui/encounter_view.h"
-#include "ui/main_window.h"
-#include "ui/qt_convert.h"
+#include "core/store/colony_edits.h"
+#include "core/store/colony_store.h"
+#include "ui/document/colony_document.h"
+#include "ui/document/colony_edit_facade.h"
+#include "ui/entry/encounter_entry_panel.h"
+#include "ui/records/encounter_view.h"
+#include "ui/shell/main_window.h"
+#include "ui/document/qt_convert.h"
 
 #include <QApplication>
 #include <QComboBox>

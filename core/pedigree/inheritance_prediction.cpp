@@ -1,0 +1,197 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#include "core/pedigree/inheritance_prediction.h"
+
+#include "core/ranks/encounter_selection.h"
+#include "core/ranks/ordinal_ranks.h"
+
+#include <algorithm>
+#include <set>
+#include <stdexcept>
+
+namespace hierloom::core {
+
+std::optional<SiblingRule> parseSiblingRule(std::string_view t)
+{
+    if (t == "youngest") return SiblingRule::Youngest;
+    if (t == "eldest") return SiblingRule::Eldest;
+    return std::nullopt;
+}
+
+const char* toString(SiblingRule rule) { return rule == SiblingRule::Youngest ? "youngest" : "eldest"; }
+
+int InheritancePrediction::find(std::string_view id) const
+{
+    for (size_t i = 0; i < females.size(); ++i)
+        if (females[i].animal == id) return static_cast<int>(i);
+    return -1;
+}
+
+RankedFemales rankedFemalesOn(const Matrilines& lines, const ResidenceIndex& where, Day d, const std::string& group,
+                              int maturityYears)
+{
+    RankedFemales out;
+    out.ranked.assign(static_cast<size_t>(lines.size()), false);
+    const int g = group.empty() ? -1 : where.group(group);
+    if (!group.empty() && g < 0) return out;
+    for (int i = 0; i < lines.recordedCount(); ++i) {
+        if (lines.sex(i) != Sex::Female) continue;
+        const int k = where.animal(lines.id(i));
+        if (k < 0) continue;
+        const int on = where.groupOn(k, d);
+        if (on < 0 || (g >= 0 && on != g)) continue;
+        const std::optional<Day> birth = lines.birth(i);
+        if (birth && d < anniversary(*birth, maturityYears)) continue;
+        out.ranked[static_cast<size_t>(i)] = true;
+        if (!birth) out.unknownBirth.push_back(lines.id(i));
+    }
+    std::sort(out.unknownBirth.begin(), out.unknownBirth.end());
+    return out;
+}
+
+std::vector<int> orderSiblings(const Matrilines& lines, std::vector<int> siblings, SiblingRule rule)
+{
+    std::sort(siblings.begin(), siblings.end(), [&](int a, int b) {
+        const std::optional<Day> ba = lines.birth(a), bb = lines.birth(b);
+        if (ba.has_value() != bb.has_value()) {
+            // An unknown birth date counts as the eldest: last when the youngest lead.
+            const bool aFirst = rule == SiblingRule::Youngest ? ba.has_value() : !ba.has_value();
+            return aFirst;
+        }
+        if (ba && *ba != *bb) return rule == SiblingRule::Youngest ? *ba > *bb : *ba < *bb;
+        return lines.id(a) < lines.id(b);
+    });
+    return siblings;
+}
+
+std::vector<int> matrilineWalk(const Matrilines& lines, int matriarch, const std::vector<bool>& ranked,
+                               SiblingRule rule)
+{
+    std::vector<int> out;
+    // Explicit stack (children pushed in reverse) keeps long lines off the call stack.
+    std::vector<int> stack{matriarch};
+    while (!stack.empty()) {
+        const int at = stack.back();
+        stack.pop_back();
+        if (ranked[static_cast<size_t>(at)]) out.push_back(at);
+        const std::vector<int> kids = orderSiblings(lines, lines.offspring(at), rule);
+        for (auto it = kids.rbegin(); it != kids.rend(); ++it) stack.push_back(*it);
+    }
+    return out;
+}
+
+InheritancePrediction predictOrder(const Matrilines& lines, const RankedFemales& ranked, const ObservedScores& observed,
+                                   SiblingRule rule, const std::vector<std::string>& explicitOrder)
+{
+    InheritancePrediction p;
+    p.rule = rule;
+    p.unknownBirthCountedMature = ranked.unknownBirth;
+    const int n = lines.size();
+    // Observed ranks: ranked females with a score, ordered by score, ties by id.
+    std::vector<int> scored;
+    for (int i = 0; i < n; ++i)
+        if (ranked.ranked[static_cast<size_t>(i)] && observed.count(lines.id(i))) scored.push_back(i);
+    std::sort(scored.begin(), scored.end(), [&](int a, int b) { return lines.id(a) < lines.id(b); });
+    std::vector<double> scores;
+    for (int i : scored) scores.push_back(observed.find(lines.id(i))->second);
+    const std::vector<int> ordinal = ordinalRanks(scores, std::vector<bool>(scores.size(), true));
+    std::vector<int> observedRank(static_cast<size_t>(n), 0);
+    for (size_t k = 0; k < scored.size(); ++k) observedRank[static_cast<size_t>(scored[k])] = ordinal[k];
+
+    // Each line with ranked members and its best observed rank (0: none).
+    std::map<int, int> best; // matriarch -> best observed rank
+    for (int i = 0; i < n; ++i) {
+        if (!ranked.ranked[static_cast<size_t>(i)]) continue;
+        const int m = lines.matriarch(i);
+        const int r = observedRank[static_cast<size_t>(i)];
+        auto [it, added] = best.emplace(m, r);
+        if (!added && r > 0 && (it->second == 0 || r < it->second)) it->second = r;
+    }
+    std::vector<int> order;
+    for (const auto& [m, r] : best) order.push_back(m);
+    std::sort(order.begin(), order.end(), [&](int a, int b) {
+        const int ra = best[a], rb = best[b];
+        if ((ra > 0) != (rb > 0)) return ra > 0;
+        if (ra > 0 && ra != rb) return ra < rb;
+        return lines.id(a) < lines.id(b);
+    });
+    if (!explicitOrder.empty()) {
+        std::vector<int> listed;
+        std::set<int> seen;
+        for (const std::string& id : explicitOrder) {
+            const int m = lines.index(id);
+            if (m < 0) throw std::invalid_argument("matriline order: no animal '" + id + "' in the pedigree");
+            if (lines.mother(m) >= 0)
+                throw std::invalid_argument("matriline order: " + id + " is not a matriarch (her matriarch is " +
+                                            lines.id(lines.matriarch(m)) + ")");
+            if (!seen.insert(m).second) throw std::invalid_argument("matriline order: " + id + " is listed twice");
+            if (best.count(m)) listed.push_back(m);
+        }
+        for (int m : order)
+            if (!seen.count(m)) listed.push_back(m);
+        order = std::move(listed);
+    }
+    for (int m : order) {
+        p.matrilineOrder.push_back(lines.id(m));
+        for (int f : matrilineWalk(lines, m, ranked.ranked, rule)) {
+            PredictedFemale row;
+            row.animal = lines.id(f);
+            row.matriarch = lines.id(m);
+            row.predictedRank = static_cast<int>(p.females.size()) + 1;
+            if (observedRank[static_cast<size_t>(f)] > 0) {
+                row.observedRank = observedRank[static_cast<size_t>(f)];
+                row.observedScore = observed.find(row.animal)->second;
+            }
+            p.females.push_back(std::move(row));
+            if (!lines.birth(f) && !lines.sisters(f).empty()) p.unorderable.push_back(lines.id(f));
+        }
+    }
+    std::sort(p.unorderable.begin(), p.unorderable.end());
+    // Discordant dyads: both observed, observed order the reverse of the predicted one.
+    for (size_t i = 0; i < p.females.size(); ++i) {
+        if (!p.females[i].observedRank) continue;
+        for (size_t j = i + 1; j < p.females.size(); ++j) {
+            if (p.females[j].observedRank && *p.females[j].observedRank < *p.females[i].observedRank) {
+                ++p.females[i].discordantDyads;
+                ++p.females[j].discordantDyads;
+            }
+        }
+    }
+    return p;
+}
+
+ObservedScores eloScoresAt(const Colony& colony, const ResidenceIndex& where, Day d, const std::string& group,
+                           const EloSettings& settings)
+{
+    SelectionOptions s;
+    s.to = d;
+    s.group = group;
+    s.draws = settings.draws;
+    const EncounterSelection sel = selectEncounters(colony, where, s);
+    const EloRun run = runElo(sel.size(), sel.bouts, settings);
+    ObservedScores out;
+    for (int i = 0; i < sel.size(); ++i)
+        if (run.rated[static_cast<size_t>(i)]) out.emplace(sel.ids[static_cast<size_t>(i)], run.rating[static_cast<size_t>(i)]);
+    return out;
+}
+
+std::optional<Day> lastEncounterDay(const Colony& colony)
+{
+    std::optional<Day> last;
+    for (const Encounter& e : colony.encounters)
+        if (!last || e.date > *last) last = e.date;
+    return last;
+}
+
+InheritancePrediction predictInheritance(const Colony& colony, const ResidenceIndex& where, const Matrilines& lines,
+                                         const InheritanceOptions& o)
+{
+    const std::optional<Day> at = o.at ? o.at : lastEncounterDay(colony);
+    if (!at) throw std::invalid_argument("the colony has no encounters; give a date");
+    const RankedFemales ranked = rankedFemalesOn(lines, where, *at, o.group, o.maturityYears);
+    const ObservedScores observed = eloScoresAt(colony, where, *at, o.group, o.elo);
+    InheritancePrediction p = predictOrder(lines, ranked, observed, o.rule, o.matrilineOrder);
+    p.at = *at;
+    return p;
+}
+
+} // namespace hierloom::core

@@ -1,0 +1,114 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#pragma once
+#include "core/base/colony.h"
+#include "core/ranks/elo_rating.h"
+#include "core/pedigree/matriline.h"
+#include "core/base/residence_index.h"
+
+#include <map>
+#include <optional>
+#include <string>
+#include <string_view>
+#include <vector>
+
+namespace hierloom::core {
+
+/// Order of a mother's daughters in the inheritance walk (methods.md "Matrilineal
+/// rank prediction"): youngest ascendancy (Kawamura 1958; Datta 1988), birth date
+/// descending, or the eldest first, birth date ascending.
+enum class SiblingRule { Youngest, Eldest };
+
+/// Reads `youngest` or `eldest` (the sibling rules of methods.md); empty otherwise.
+std::optional<SiblingRule> parseSiblingRule(std::string_view text);
+/// `youngest` or `eldest`, as the `--rule` option spells them.
+const char* toString(SiblingRule rule);
+
+/// Observed standing of animals at one date, higher score = higher rank (an Elo
+/// rating, a David's score); animals without a score are absent.
+using ObservedScores = std::map<std::string, double, std::less<>>;
+
+/// Settings of the predicted order; the defaults are those of methods.md.
+struct InheritanceOptions {
+    std::optional<Day> at; ///< default: the date of the record's last encounter
+    SiblingRule rule = SiblingRule::Youngest;
+    int maturityYears = 4;
+    std::string group; ///< empty: every resident female of the colony
+    /// Matriarch ids, top line first, overriding the observed matriline order; lines
+    /// not listed follow in the observed order.
+    std::vector<std::string> matrilineOrder;
+    EloSettings elo; ///< observed ranks: Elo over the record up to the date (draws included)
+};
+
+/// Who takes part in the predicted order at one date (methods.md): females
+/// resident at D (in the group, if one is chosen) aged at least the maturity age.
+struct RankedFemales {
+    std::vector<bool> ranked;              ///< per node of the Matrilines
+    std::vector<std::string> unknownBirth; ///< ranked females whose birth date is unknown (counted mature)
+};
+
+/// The ranked females at day d (methods.md "Small choices": a female is mature on
+/// and after her maturity-age birthday; an unknown birth date counts as mature).
+RankedFemales rankedFemalesOn(const Matrilines& lines, const ResidenceIndex& where, Day d, const std::string& group,
+                              int maturityYears);
+
+/// Offspring ordered by the sibling rule (Kawamura 1958): youngest rule birth date
+/// descending, eldest rule ascending; unknown birth dates count as the eldest, and
+/// equal dates (or several unknown ones) are ordered by id ascending under both rules.
+std::vector<int> orderSiblings(const Matrilines& lines, std::vector<int> siblings, SiblingRule rule);
+
+/// The ranked members of one matriline in inheritance order (Kawamura 1958; Datta
+/// 1988): depth-first from the matriarch, each mother directly before her
+/// offspring's subtrees in sibling-rule order; unranked animals are skipped while
+/// their descendants keep their places.
+std::vector<int> matrilineWalk(const Matrilines& lines, int matriarch, const std::vector<bool>& ranked,
+                               SiblingRule rule);
+
+/// One ranked female of a predicted order.
+struct PredictedFemale {
+    std::string animal;
+    std::string matriarch; ///< her matriline, named after its matriarch
+    int predictedRank = 0; ///< 1 = top
+    std::optional<int> observedRank; ///< 1..m among ranked females with an observed score
+    std::optional<double> observedScore;
+    int discordantDyads = 0; ///< pairs with her whose observed order reverses the predicted one
+};
+
+/// The predicted order at one date (methods.md "Matrilineal rank prediction").
+struct InheritancePrediction {
+    Day at = 0;
+    SiblingRule rule = SiblingRule::Youngest;
+    std::vector<PredictedFemale> females; ///< predicted order, top first
+    std::vector<std::string> matrilineOrder; ///< matriarchs of the lines laid end to end
+    std::vector<std::string> unknownBirthCountedMature;
+    /// Ranked females with an unknown birth date and at least one sister: they
+    /// cannot be ordered among their sisters and are placed as the eldest.
+    std::vector<std::string> unorderable;
+
+    /// Position of an animal in `females`, or -1.
+    int find(std::string_view id) const;
+};
+
+/// The predicted order laid end to end (methods.md): matrilines by the best
+/// observed rank among their ranked members, lines without one last by matriarch
+/// id, unless `explicitOrder` (matriarch ids) sets the order; then each line's walk.
+/// Throws std::invalid_argument naming an explicit id that is unknown, not a
+/// matriarch, or listed twice.
+InheritancePrediction predictOrder(const Matrilines& lines, const RankedFemales& ranked, const ObservedScores& observed,
+                                   SiblingRule rule, const std::vector<std::string>& explicitOrder = {});
+
+/// Elo ratings (Elo 1978; Neumann et al. 2011) after the last encounter dated on
+/// or before d, over the record from its first encounter (only the group's
+/// encounters when a group is given), for every animal that has a rating.
+ObservedScores eloScoresAt(const Colony& colony, const ResidenceIndex& where, Day d, const std::string& group,
+                           const EloSettings& settings);
+
+/// Date of the record's last encounter, if any (the default date of a prediction).
+std::optional<Day> lastEncounterDay(const Colony& colony);
+
+/// The predicted order at options.at with observed ranks by Elo at that date
+/// (methods.md "Small choices", `inherit`). Throws std::invalid_argument for a
+/// colony without encounters and no date, or a bad explicit matriline order.
+InheritancePrediction predictInheritance(const Colony& colony, const ResidenceIndex& where, const Matrilines& lines,
+                                         const InheritanceOptions& options);
+
+} // namespace hierloom::core

@@ -1,0 +1,68 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#pragma once
+#include "core/base/colony.h"
+#include "core/base/import_problems.h"
+#include "core/rules/identifier_rules.h"
+
+#include <optional>
+#include <string>
+#include <string_view>
+#include <unordered_set>
+#include <vector>
+
+namespace hierloom::core {
+
+class ColonyStore;
+
+/// One import file's name (used in messages) and its whole text.
+struct ImportSource {
+    std::string name;
+    std::string text;
+};
+
+/// The files of one import; any of them may be absent.
+struct ImportInput {
+    std::optional<ImportSource> animals;
+    std::optional<ImportSource> residences;
+    std::optional<ImportSource> encounters;
+};
+
+/// What an import would add, or the problems that stop it.
+struct ImportPlan {
+    std::vector<Animal> animals;
+    std::vector<Residence> residences;
+    std::vector<Encounter> encounters;
+    ImportProblems problems;
+    bool ok() const { return problems.empty(); }
+};
+
+/// Checks import files against the colony's existing animals and residences
+/// under every rule of interfaces.md; writes nothing. `today` bounds dates.
+/// `encounterUids` holds the uids of the colony's encounters, needed only
+/// when the encounters file has a uid column.
+ImportPlan planImport(const std::vector<Animal>& existingAnimals, const std::vector<Residence>& existingResidences,
+                      const ImportInput& input, Day today, const std::unordered_set<std::string>& encounterUids = {});
+
+/// Paths of the files to import; empty means not given.
+struct ImportPaths {
+    std::string animals;
+    std::string residences;
+    std::string encounters;
+};
+
+/// What an import added, or the problems that stopped it (then nothing was written).
+struct ImportResult {
+    ImportProblems problems;
+    std::size_t animals = 0;
+    std::size_t residences = 0;
+    std::size_t encounters = 0;
+    bool ok() const { return problems.empty(); }
+};
+
+/// Reads, checks and, only when every row passes, writes the files in one
+/// transaction, checking against the colony as read inside that transaction.
+/// Encounters are checked on a second thread while the rows that passed are
+/// written; a problem rolls everything back.
+ImportResult importFiles(ColonyStore& store, const ImportPaths& paths, Day today);
+
+} // namespace hierloom::core

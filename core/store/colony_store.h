@@ -1,0 +1,106 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#pragma once
+#include "core/base/colony.h"
+#include "core/base/colony_file_error.h"
+
+#include <string>
+#include <unordered_set>
+#include <vector>
+
+struct sqlite3;
+
+namespace hierloom::core {
+
+/// A colony file: one SQLite database (WAL journal, foreign keys on) holding
+/// the animals, residences, encounters, observers, behaviour codes and
+/// settings. Every write runs in one transaction, so a write is whole or absent.
+/// A store may move between threads but is used by one thread at a time.
+class ColonyStore {
+public:
+    /// Above this many encounters a write is a bulk load (see WriteTransaction).
+    static constexpr std::size_t kBulkEncounters = 10000;
+
+    enum class Mode { ReadOnly, ReadWrite };
+
+    /// Creates a new, empty colony file; fails if the path exists.
+    static ColonyStore create(const std::string& path);
+    /// Opens an existing colony file, migrating an older schema (ReadWrite only).
+    static ColonyStore open(const std::string& path, Mode mode = Mode::ReadWrite);
+
+    ColonyStore(ColonyStore&& other) noexcept;
+    ColonyStore& operator=(ColonyStore&& other) noexcept;
+    ColonyStore(const ColonyStore&) = delete;
+    ColonyStore& operator=(const ColonyStore&) = delete;
+    ~ColonyStore();
+
+    const std::string& path() const { return path_; }
+    int schemaVersion() const;
+
+    std::vector<Animal> loadAnimals() const;
+    std::vector<Residence> loadResidences() const;
+    /// Encounters in entry order (seq ascending).
+    std::vector<Encounter> loadEncounters() const;
+    /// Everything: animals, residences and encounters.
+    Colony load() const;
+    std::int64_t encounterCount() const;
+    /// Uids of every encounter (for checking a re-imported export).
+    std::unordered_set<std::string> encounterUids() const;
+
+    /// Appends validated records in one transaction; new uids are assigned
+    /// to records without one (written back) and encounters get consecutive
+    /// seq numbers (written back).
+    /// Inside a transaction already open on this connection it runs as a
+    /// savepoint of that transaction. A bulk append (more than
+    /// kBulkEncounters encounters) is audited as one 'import' row naming
+    /// `source` and the seq range instead of one row per encounter.
+    void append(std::vector<Animal>& animals, std::vector<Residence>& residences, std::vector<Encounter>& encounters,
+                const std::string& source = {});
+    void append(std::vector<Animal>&& animals, std::vector<Residence>&& residences, std::vector<Encounter>&& encounters,
+                const std::string& source = {})
+    {
+        append(animals, residences, encounters, source);
+    }
+
+    /// Observers and behaviour codes kept in the file.
+    std::vector<std::string> observers() const;
+    void addObserver(const std::string& name);
+    struct BehaviourCode {
+        std::string code;
+        int severity = 1;
+        std::string description;
+    };
+    std::vector<BehaviourCode> behaviourCodes() const;
+
+    /// Key-value settings (species, gestation length, maturity age, ...).
+    std::string setting(const std::string& key, const std::string& fallback = {}) const;
+    void setSetting(const std::string& key, const std::string& value);
+
+    /// The name stamped on audit rows of this connection's changes (default:
+    /// the USER environment variable, else "unknown").
+    void setUserName(const std::string& name);
+    std::string userName() const;
+
+    /// How long a write waits for another program's write to finish before
+    /// failing with ColonyFileError::Kind::Busy (default 5000 ms).
+    void setBusyTimeout(int milliseconds);
+
+    /// The raw handle, for the few store modules (edits, backups, merges).
+    sqlite3* handle() const { return db_; }
+
+    /// Runs `sql` (no results) or throws ColonyFileError naming the file.
+    void exec(const char* sql) const;
+
+private:
+    ColonyStore(sqlite3* db, std::string path) : db_(db), path_(std::move(path)) {}
+    void migrate(int fromVersion);
+    void startSession();
+
+    sqlite3* db_ = nullptr;
+    std::string path_;
+};
+
+/// Reads the schema version and application id of a file without changing it;
+/// throws ColonyFileError when it is not a colony file.
+int probeColonyFile(const std::string& path);
+
+} // namespace hierloom::core

@@ -1,0 +1,79 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#include "core/store/record_appender.h"
+
+#include "core/store/colony_store.h"
+#include "core/store/record_binding.h"
+#include "core/store/write_transaction.h"
+
+namespace hierloom::core {
+
+namespace {
+
+template <typename Record, typename Bind>
+void insertRecords(ColonyStore& store, const char* sql, std::vector<Record>& records, const Bind& bind)
+{
+    if (records.empty()) return;
+    SqliteStatement ins(store.handle(), sql);
+    for (Record& r : records) {
+        if (r.uid.empty()) r.uid = newUid();
+        bind(ins, r);
+        ins.run();
+    }
+}
+
+} // namespace
+
+void insertAnimals(ColonyStore& store, std::vector<Animal>& animals)
+{
+    insertRecords(store, kInsertAnimalSql, animals, bindAnimalColumns);
+}
+
+void insertResidences(ColonyStore& store, std::vector<Residence>& residences)
+{
+    insertRecords(store, kInsertResidenceSql, residences, bindResidenceColumns);
+}
+
+EncounterAppender::EncounterAppender(ColonyStore& store, const WriteTransaction& transaction)
+    : store_(store), bulk_(transaction.bulk()), insert_(store.handle(), kInsertEncounterSql)
+{
+    SqliteStatement q(store.handle(), "SELECT coalesce(max(seq), 0) FROM encounter");
+    q.step();
+    nextSeq_ = q.integer(0) + 1;
+    firstSeq_ = nextSeq_;
+}
+
+void EncounterAppender::add(Encounter& e)
+{
+    if (e.uid.empty()) e.uid = newUid();
+    e.seq = nextSeq_++;
+    if (count_ == 0 || e.date != lastDate_) {
+        date_ = formatDate(e.date);
+        lastDate_ = e.date;
+    }
+    bindEncounterColumns(insert_, e, date_);
+    insert_.run();
+    ++count_;
+    if (!e.observer.empty() && e.observer != lastObserver_) {
+        lastObserver_ = e.observer;
+        observers_.insert(e.observer);
+    }
+}
+
+void EncounterAppender::finish(const std::string& source)
+{
+    SqliteStatement obs(store_.handle(), "INSERT OR IGNORE INTO observer(name) VALUES (?)");
+    for (const std::string& name : observers_) {
+        obs.bind(1, name);
+        obs.run();
+    }
+    if (!bulk_ || count_ == 0) return;
+    SqliteStatement note(store_.handle(), "INSERT INTO audit(tbl, action, new_values) VALUES ('encounter', 'import', "
+                                          "json_object('source', ?, 'count', ?, 'first_seq', ?, 'last_seq', ?))");
+    note.bind(1, source);
+    note.bind(2, count_);
+    note.bind(3, firstSeq_);
+    note.bind(4, nextSeq_ - 1);
+    note.run();
+}
+
+} // namespace hierloom::core

@@ -1,0 +1,34 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#pragma once
+#include "core/base/colony.h"
+#include "core/store/sqlite_statement.h"
+
+#include <optional>
+#include <string>
+
+namespace hierloom::core {
+
+// The one way records are written to the colony file's tables, shared by the
+// bulk append (import, merge) and the single-record edits.
+
+inline constexpr const char* kInsertAnimalSql =
+    "INSERT INTO animal(uid, id, name, sex, birth_date, mother, father, entry_date, entry_type, exit_date, exit_type) "
+    "VALUES (?,?,?,?,?,?,?,?,?,?,?)";
+inline constexpr const char* kInsertResidenceSql =
+    "INSERT INTO residence(uid, animal, grp, from_date, to_date) VALUES (?,?,?,?,?)";
+inline constexpr const char* kInsertEncounterSql =
+    "INSERT INTO encounter(seq, uid, date, time, winner, loser, outcome, behaviour, grp, observer, note) "
+    "VALUES (?,?,?,?,?,?,?,?,?,?,?)";
+
+/// A stored date: ISO text, or NULL when unknown.
+std::optional<std::string> storedDate(const std::optional<Day>& d);
+
+/// Binds parameters 1-11 of kInsertAnimalSql (an UPDATE may use the same order).
+void bindAnimalColumns(SqliteStatement& q, const Animal& a);
+/// Binds parameters 1-5 of kInsertResidenceSql.
+void bindResidenceColumns(SqliteStatement& q, const Residence& r);
+/// Binds parameters 1-11 of kInsertEncounterSql without copying: `e` and
+/// `dateText` (the formatted date) must stay unchanged until the statement runs.
+void bindEncounterColumns(SqliteStatement& q, const Encounter& e, const std::string& dateText);
+
+} // namespace hierloom::core

@@ -1,0 +1,204 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#include "ui/analysis/hierarchy_plots_view.h"
+
+#include "ui/document/colony_document.h"
+#include "ui/widgets/help_button.h"
+#include "ui/document/visible_refresh.h"
+#include "ui/document/compute_runner.h"
+#include "ui/widgets/plot_export.h"
+#include "ui/widgets/progress_strip.h"
+#include "ui/document/qt_convert.h"
+#include "ui/document/document_queries.h"
+
+#include <QComboBox>
+#include <QHBoxLayout>
+#include <QLabel>
+#include <QSignalBlocker>
+#include <QVBoxLayout>
+
+#include <qcustomplot.h>
+
+#include <algorithm>
+
+namespace hierloom::ui {
+
+namespace {
+// Okabe-Ito colours, one per panel.
+const QColor panelColours[] = {QColor(0x00, 0x72, 0xB2), QColor(0xE6, 0x9F, 0x00), QColor(0x00, 0x9E, 0x73),
+                               QColor(0xCC, 0x79, 0xA7), QColor(0x56, 0x56, 0x56)};
+constexpr double secondsPerDay = 86400.0;
+} // namespace
+
+HierarchyPlotsView::HierarchyPlotsView(ColonyDocument* document, QWidget* parent)
+    : QWidget(parent),
+      document_(document),
+      runner_(new ComputeRunner(this)),
+      progress_(new ProgressStrip(runner_, tr("the monthly hierarchy figures"), this)),
+      plot_(new QCustomPlot(this)),
+      group_(new QComboBox(this))
+{
+    auto* controls = new QHBoxLayout;
+    controls->addWidget(new QLabel(tr("Month by month over the whole record of"), this));
+    group_->setObjectName(QStringLiteral("hierarchyGroup"));
+    group_->setToolTip(tr("Every group's encounters, or one group's (an encounter without a group counts for "
+                          "the group both animals shared that day)"));
+    controls->addWidget(group_);
+    // One "?" per figure plotted, in the order of the panels.
+    for (const char* key : {"h_prime", "steepness", "ttri", "conformity"})
+        controls->addWidget(new HelpButton(QString::fromLatin1(key), this));
+    controls->addWidget(progress_, 1);
+    controls->addStretch();
+    controls->addWidget(makeExportButton(plot_, QStringLiteral("hierarchy-by-month"), this));
+    auto* layout = new QVBoxLayout(this);
+    layout->addLayout(controls);
+    layout->addWidget(plot_, 1);
+
+    // Five stacked panels sharing the date axis; a legend row on top.
+    plot_->plotLayout()->clear();
+    auto* legendRow = new QCPLayoutGrid;
+    plot_->plotLayout()->addElement(0, 0, legendRow);
+    // clear() deleted the default legend with the default axis rect: make a new one.
+    plot_->legend = new QCPLegend;
+    legendRow->addElement(0, 0, plot_->legend);
+    plot_->legend->setLayer(QStringLiteral("legend"));
+    plot_->legend->setFillOrder(QCPLegend::foColumnsFirst);
+    plot_->legend->setVisible(true);
+    plot_->plotLayout()->setRowStretchFactor(0, 0.001);
+    auto* margins = new QCPMarginGroup(plot_);
+    const QString labels[] = {tr("h'"), tr("Steepness"), tr("t_tri"), tr("Conformity"), tr("Encounters")};
+    const QString names[] = {tr("h' (de Vries 1995)"), tr("steepness (David's score, Dij)"),
+                             tr("triangle transitivity t_tri"), tr("conformity with the inheritance rule (Elo)"),
+                             tr("encounters per month")};
+    auto ticker = QSharedPointer<QCPAxisTickerDateTime>::create();
+    ticker->setDateTimeSpec(Qt::UTC);
+    ticker->setDateTimeFormat(QStringLiteral("MMM\nyyyy"));
+    std::vector<QCPAxisRect*> rects;
+    for (int p = 0; p < PanelCount; ++p) {
+        auto* rect = new QCPAxisRect(plot_);
+        plot_->plotLayout()->addElement(p + 1, 0, rect);
+        rect->setMarginGroup(QCP::msLeft | QCP::msRight, margins);
+        rect->axis(QCPAxis::atLeft)->setLabel(labels[p]);
+        rect->axis(QCPAxis::atBottom)->setTicker(ticker);
+        rect->axis(QCPAxis::atBottom)->setTickLabels(p == PanelCount - 1);
+        rect->setRangeDrag(Qt::Horizontal);
+        rect->setRangeZoom(Qt::Horizontal);
+        for (QCPAxis* a : rect->axes()) a->setLayer(QStringLiteral("axes"));
+        QCPAbstractPlottable* plottable = nullptr;
+        if (p == Encounters) {
+            auto* bars = new QCPBars(rect->axis(QCPAxis::atBottom), rect->axis(QCPAxis::atLeft));
+            bars->setWidth(26 * secondsPerDay);
+            bars->setPen(Qt::NoPen);
+            bars->setBrush(panelColours[p]);
+            plottable = bars;
+        } else {
+            auto* graph = new QCPGraph(rect->axis(QCPAxis::atBottom), rect->axis(QCPAxis::atLeft));
+            graph->setPen(QPen(panelColours[p], 1.5));
+            graph->setScatterStyle(QCPScatterStyle(QCPScatterStyle::ssDisc, panelColours[p], 3.5));
+            plottable = graph;
+        }
+        plottable->setName(names[p]);
+        plottables_[static_cast<size_t>(p)] = plottable;
+        rects.push_back(rect);
+    }
+    rects.back()->axis(QCPAxis::atBottom)->setLabel(tr("Month"));
+    // One pan or zoom moves every panel.
+    for (QCPAxisRect* a : rects)
+        for (QCPAxisRect* b : rects)
+            if (a != b)
+                connect(a->axis(QCPAxis::atBottom), qOverload<const QCPRange&>(&QCPAxis::rangeChanged),
+                        b->axis(QCPAxis::atBottom), qOverload<const QCPRange&>(&QCPAxis::setRange));
+    plot_->setInteractions(QCP::iRangeDrag | QCP::iRangeZoom);
+
+    connect(progress_, &ProgressStrip::retry, this, &HierarchyPlotsView::recompute);
+    // Recomputed only while on screen; a hidden tab catches up when shown.
+    auto* refresh = new VisibleRefresh(this, [this] { recompute(); });
+    connect(document_, &ColonyDocument::changed, this, &HierarchyPlotsView::refillGroups);
+    connect(document_, &ColonyDocument::changed, refresh, &VisibleRefresh::request);
+    connect(group_, &QComboBox::currentIndexChanged, this, &HierarchyPlotsView::recompute);
+    refillGroups();
+    recompute();
+}
+
+void HierarchyPlotsView::refillGroups()
+{
+    const QSignalBlocker block(group_);
+    const QString current = group_->currentData().toString();
+    group_->clear();
+    group_->addItem(tr("all groups"), QString());
+    if (document_->isOpen())
+        for (const QString& g : groupsWithEncounters(document_)) group_->addItem(g, g);
+    group_->setCurrentIndex(std::max(0, group_->findData(current)));
+}
+
+void HierarchyPlotsView::setGroup(const QString& group)
+{
+    const int i = group_->findData(group);
+    if (i >= 0) group_->setCurrentIndex(i);
+}
+
+HierarchyPlotsView::~HierarchyPlotsView() = default;
+
+void HierarchyPlotsView::recompute()
+{
+    if (!document_->isOpen()) {
+        runner_->cancel();
+        adopt({});
+        return;
+    }
+    const ColonyDocument::Snapshot snapshot = document_->snapshot();
+    auto colony = snapshot.colony;
+    auto where = snapshot.residences;
+    core::InheritanceOptions options;
+    options.group = toStdString(group_->currentData().toString());
+    runner_->start([this, colony, where, options](const std::atomic<bool>& cancel,
+                                                  const ComputeRunner::Progress& progress) {
+        const core::Matrilines lines(*colony);
+        auto s = std::make_shared<core::HierarchySeries>(
+            core::computeHierarchySeries(*colony, *where, lines, options, &cancel, progress));
+        return ComputeRunner::Apply([this, s] { adopt(std::move(*s)); });
+    });
+}
+
+int HierarchyPlotsView::pointCount(Panel panel) const
+{
+    const QCPAbstractPlottable* p = plottables_[static_cast<size_t>(panel)];
+    if (const auto* g = qobject_cast<const QCPGraph*>(p)) return g->data()->size();
+    if (const auto* b = qobject_cast<const QCPBars*>(p)) return b->data()->size();
+    return 0;
+}
+
+void HierarchyPlotsView::adopt(core::HierarchySeries series)
+{
+    series_ = std::move(series);
+    QVector<double> keys;
+    std::array<QVector<double>, PanelCount> values;
+    auto orGap = [](const std::optional<double>& v) { return v ? *v : qQNaN(); }; // NaN: QCustomPlot's gap
+    for (const core::HierarchyMonth& m : series_.months) {
+        keys << (m.period.start + m.period.end) / 2.0 * secondsPerDay;
+        values[HPrime] << orGap(m.hPrime);
+        values[Steepness] << orGap(m.steepness);
+        values[TTri] << orGap(m.tTri);
+        values[Conformity] << orGap(m.conformity);
+        values[Encounters] << static_cast<double>(m.encounters);
+    }
+    for (int p = 0; p < PanelCount; ++p) {
+        QCPAbstractPlottable* plottable = plottables_[static_cast<size_t>(p)];
+        if (auto* g = qobject_cast<QCPGraph*>(plottable)) g->setData(keys, values[static_cast<size_t>(p)], true);
+        if (auto* b = qobject_cast<QCPBars*>(plottable)) b->setData(keys, values[static_cast<size_t>(p)], true);
+        QCPAxis* y = plottable->valueAxis();
+        // Each panel scaled to its own values (with zero in view for the counts),
+        // so a change such as a drop in conformity is visible.
+        bool found = false;
+        const QCPRange r = plottable->getValueRange(found);
+        if (!found) y->setRange(0, 1);
+        else if (p == Encounters) y->setRange(0, r.upper * 1.08);
+        else {
+            const double pad = std::max(0.1 * r.size(), 0.01);
+            y->setRange(r.lower - pad, r.upper + pad);
+        }
+        if (!keys.isEmpty()) plottable->keyAxis()->setRange(keys.front() - 20 * secondsPerDay, keys.back() + 20 * secondsPerDay);
+    }
+    plot_->replot(QCustomPlot::rpQueuedReplot);
+}
+
+} // namespace hierloom::ui

@@ -1,0 +1,378 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#include "ui/analysis/matrix_view.h"
+
+#include "core/ranks/encounter_selection.h"
+#include "core/pedigree/matriline.h"
+#include "ui/document/colony_document.h"
+#include "ui/widgets/help_button.h"
+#include "ui/document/visible_refresh.h"
+#include "ui/document/compute_runner.h"
+#include "ui/widgets/plot_export.h"
+#include "ui/widgets/progress_strip.h"
+#include "ui/document/qt_convert.h"
+
+#include <QComboBox>
+#include <QDateEdit>
+#include <QHBoxLayout>
+#include <QLabel>
+#include <QToolTip>
+#include <QVBoxLayout>
+
+#include <qcustomplot.h>
+
+#include <cmath>
+#include <utility>
+
+namespace hierloom::ui {
+
+namespace {
+// Okabe-Ito vermillion: stands out on the blue count scale.
+const QColor againstOrder(0xD5, 0x5E, 0x00);
+
+QString countText(double v)
+{
+    return std::floor(v) == v ? QString::number(static_cast<long long>(v)) : QString::number(v, 'f', 1);
+}
+} // namespace
+
+MatrixView::MatrixView(ColonyDocument* document, QWidget* parent)
+    : QWidget(parent),
+      document_(document),
+      runner_(new ComputeRunner(this)),
+      progress_(new ProgressStrip(runner_, tr("the matrix"), this)),
+      plot_(new QCustomPlot(this)),
+      methodBox_(new QComboBox(this)),
+      groupBox_(new QComboBox(this)),
+      fromEdit_(new QDateEdit(this)),
+      toEdit_(new QDateEdit(this)),
+      summary_(new QLabel(this))
+{
+    methodBox_->addItem(tr("Elo rating"), static_cast<int>(core::RankMethod::Elo));
+    methodBox_->addItem(tr("David's score"), static_cast<int>(core::RankMethod::DavidsScore));
+    methodBox_->addItem(tr("I&&SI"), static_cast<int>(core::RankMethod::Isi));
+    groupBox_->addItem(tr("All groups"), QString());
+    for (QDateEdit* e : {fromEdit_, toEdit_}) {
+        e->setCalendarPopup(true);
+        e->setDisplayFormat(QStringLiteral("yyyy-MM-dd"));
+    }
+    auto* controls = new QHBoxLayout;
+    controls->addWidget(new QLabel(tr("Order by:"), this));
+    controls->addWidget(methodBox_);
+    // The "?" follows the ordering method chosen (setMethod shows the matching one).
+    for (const auto& [method, key] : {std::pair{core::RankMethod::Elo, "elo"},
+                                      std::pair{core::RankMethod::DavidsScore, "davids_score"},
+                                      std::pair{core::RankMethod::Isi, "isi"}}) {
+        auto* help = new HelpButton(QString::fromLatin1(key), this);
+        help->setProperty("rankMethod", static_cast<int>(method));
+        help->setVisible(method == method_);
+        controls->addWidget(help);
+    }
+    controls->addWidget(new QLabel(tr("From:"), this));
+    controls->addWidget(fromEdit_);
+    controls->addWidget(new QLabel(tr("To:"), this));
+    controls->addWidget(toEdit_);
+    controls->addWidget(groupBox_);
+    controls->addWidget(progress_, 1);
+    controls->addStretch();
+    controls->addWidget(makeExportButton(plot_, QStringLiteral("win-matrix"), this));
+    auto* layout = new QVBoxLayout(this);
+    layout->addLayout(controls);
+    layout->addWidget(plot_, 1);
+    layout->addWidget(summary_);
+
+    plot_->yAxis->setRangeReversed(true);
+    plot_->xAxis2->setVisible(true);
+    plot_->xAxis->setTickLabels(false);
+    plot_->xAxis2->setTickLabelRotation(-90);
+    plot_->xAxis2->setLabel(tr("Loser"));
+    plot_->yAxis->setLabel(tr("Winner"));
+    for (QCPAxis* a : {plot_->xAxis, plot_->xAxis2, plot_->yAxis}) {
+        a->grid()->setVisible(false);
+        a->setSubTicks(false);
+    }
+    // The legend in a row under the matrix, where it hides no cell.
+    auto* legendRow = new QCPLayoutGrid;
+    plot_->plotLayout()->addElement(1, 0, legendRow);
+    plot_->plotLayout()->setRowStretchFactor(1, 0.001);
+    legendRow->addElement(0, 0, plot_->legend);
+    plot_->legend->setFillOrder(QCPLegend::foColumnsFirst);
+    plot_->setMouseTracking(true);
+    plot_->setInteractions(QCP::iRangeDrag | QCP::iRangeZoom);
+
+    connect(methodBox_, &QComboBox::currentIndexChanged, this,
+            [this] { setMethod(static_cast<core::RankMethod>(methodBox_->currentData().toInt())); });
+    connect(groupBox_, &QComboBox::currentIndexChanged, this, [this] { setGroup(groupBox_->currentData().toString()); });
+    connect(fromEdit_, &QDateEdit::editingFinished, this, [this] { setWindow(toDay(fromEdit_->date()), to_); });
+    connect(toEdit_, &QDateEdit::editingFinished, this, [this] { setWindow(from_, toDay(toEdit_->date())); });
+    connect(progress_, &ProgressStrip::retry, this, &MatrixView::recompute);
+    connect(plot_, &QCustomPlot::mouseMove, this, &MatrixView::hover);
+    // Recomputed only while on screen; a hidden tab catches up when shown.
+    auto* refresh = new VisibleRefresh(this, [this] { recompute(); });
+    connect(document_, &ColonyDocument::changed, refresh, &VisibleRefresh::request);
+    recompute();
+}
+
+MatrixView::~MatrixView() = default;
+
+void MatrixView::setMethod(core::RankMethod method)
+{
+    if (method == method_) return;
+    method_ = method;
+    const QSignalBlocker block(methodBox_);
+    methodBox_->setCurrentIndex(methodBox_->findData(static_cast<int>(method)));
+    for (HelpButton* help : findChildren<HelpButton*>())
+        help->setVisible(help->property("rankMethod").toInt() == static_cast<int>(method));
+    recompute();
+}
+
+void MatrixView::setWindow(std::optional<core::Day> from, std::optional<core::Day> to)
+{
+    if (from == from_ && to == to_) return;
+    from_ = from;
+    to_ = to;
+    recompute();
+}
+
+void MatrixView::setGroup(const QString& group)
+{
+    if (group == group_) return;
+    group_ = group;
+    const QSignalBlocker block(groupBox_);
+    groupBox_->setCurrentIndex(std::max(groupBox_->findData(group), 0));
+    recompute();
+}
+
+void MatrixView::recompute()
+{
+    if (!document_->isOpen()) {
+        runner_->cancel();
+        adopt({});
+        return;
+    }
+    core::SelectionOptions options;
+    options.from = from_;
+    options.to = to_;
+    options.group = toStdString(group_);
+    const core::RankMethod method = method_;
+    const ColonyDocument::Snapshot snapshot = document_->snapshot();
+    auto colony = snapshot.colony;
+    auto where = snapshot.residences;
+    runner_->start([this, colony, where, options, method](const std::atomic<bool>& cancel,
+                                                          const ComputeRunner::Progress& progress) {
+        progress(0, 3);
+        const core::EncounterSelection sel = core::selectEncounters(*colony, *where, options);
+        if (cancel) return ComputeRunner::Apply();
+        progress(1, 3);
+        const std::vector<int> order = core::orderByMethod(sel, method, options.draws);
+        if (cancel) return ComputeRunner::Apply();
+        progress(2, 3);
+        const core::WinMatrix all = core::WinMatrix::fromBouts(sel.size(), sel.bouts, options.draws);
+        const core::Matrilines lines(*colony);
+        auto r = std::make_shared<Result>();
+        r->palette = MatrilinePalette(lines);
+        r->firstDay = sel.firstDay;
+        r->lastDay = sel.lastDay;
+        r->matrix = core::WinMatrix(static_cast<int>(order.size()));
+        for (size_t i = 0; i < order.size(); ++i) {
+            const std::string& id = sel.ids[static_cast<size_t>(order[i])];
+            r->ids.push_back(id);
+            const int a = colony->animalIndex(id);
+            r->names.push_back(a >= 0 && !colony->animals[static_cast<size_t>(a)].name.empty()
+                                   ? colony->animals[static_cast<size_t>(a)].name
+                                   : id);
+            const int node = lines.index(id);
+            r->matriarchs.push_back(node >= 0 ? lines.id(lines.matriarch(node)) : id);
+            for (size_t j = 0; j < order.size(); ++j)
+                r->matrix.s(static_cast<int>(i), static_cast<int>(j)) = all.s(order[i], order[j]);
+        }
+        progress(3, 3);
+        return ComputeRunner::Apply([this, r] { adopt(std::move(*r)); });
+    });
+}
+
+void MatrixView::adopt(Result r)
+{
+    ids_ = std::move(r.ids);
+    names_ = std::move(r.names);
+    matriarchs_ = std::move(r.matriarchs);
+    matrix_ = std::move(r.matrix);
+    palette_ = std::move(r.palette);
+    {
+        const QSignalBlocker a(fromEdit_), b(toEdit_);
+        if (r.firstDay) fromEdit_->setDate(toQDate(from_.value_or(*r.firstDay)));
+        if (r.lastDay) toEdit_->setDate(toQDate(to_.value_or(*r.lastDay)));
+    }
+    {
+        const QSignalBlocker block(groupBox_);
+        groupBox_->clear();
+        groupBox_->addItem(tr("All groups"), QString());
+        for (const std::string& g : document_->residences().groups()) groupBox_->addItem(toQString(g), toQString(g));
+        groupBox_->setCurrentIndex(std::max(groupBox_->findData(group_), 0));
+    }
+    rebuildPlot();
+}
+
+void MatrixView::rebuildPlot()
+{
+    plot_->clearPlottables();
+    plot_->clearItems();
+    const int n = matrix_.n;
+    boundaries_ = 0;
+    marks_ = nullptr;
+    if (n == 0) {
+        summary_->setText(tr("No encounters in this window."));
+        plot_->replot(QCustomPlot::rpQueuedReplot);
+        return;
+    }
+    // Counts on a square-root colour scale: a few heavy dyads would otherwise wash out the rest.
+    auto* map = new QCPColorMap(plot_->xAxis, plot_->yAxis);
+    map->data()->setSize(n, n);
+    map->data()->setRange(QCPRange(0, n - 1), QCPRange(0, n - 1));
+    double most = 0;
+    QVector<double> markX, markY;
+    for (int i = 0; i < n; ++i)
+        for (int j = 0; j < n; ++j) {
+            const double v = matrix_.s(i, j);
+            most = std::max(most, v);
+            map->data()->setCell(j, i, std::sqrt(v));
+            if (i > j && v > 0) {
+                markX << j;
+                markY << i;
+            }
+        }
+    QCPColorGradient gradient;
+    gradient.setColorStopAt(0, Qt::white);
+    gradient.setColorStopAt(0.0001, QColor(0xEF, 0xF3, 0xFF));
+    gradient.setColorStopAt(0.5, QColor(0x6B, 0xAE, 0xD6));
+    gradient.setColorStopAt(1, QColor(0x08, 0x30, 0x6B));
+    map->setGradient(gradient);
+    map->setInterpolate(false);
+    map->setDataRange(QCPRange(0, std::max(1.0, std::sqrt(most))));
+    map->setName(tr("wins (cell shade, square-root scale)"));
+
+    marks_ = new QCPGraph(plot_->xAxis, plot_->yAxis);
+    marks_->setData(markX, markY);
+    marks_->setLineStyle(QCPGraph::lsNone);
+    const double cellPixels = std::min(plot_->axisRect()->width(), plot_->axisRect()->height()) / (n + 2.0);
+    marks_->setScatterStyle(QCPScatterStyle(QCPScatterStyle::ssCross, QPen(againstOrder, 1.3), QBrush(),
+                                            std::clamp(cellPixels * 0.6, 3.0, 9.0)));
+    marks_->setName(tr("wins against the order (below the diagonal)"));
+
+    // Diagonal, matriline boundaries and colour strips.
+    auto segment = [this](double x1, double y1, double x2, double y2, const QPen& pen) {
+        auto* line = new QCPItemLine(plot_);
+        line->start->setCoords(x1, y1);
+        line->end->setCoords(x2, y2);
+        line->setPen(pen);
+    };
+    segment(-0.5, -0.5, n - 0.5, n - 0.5, QPen(QColor(0xAA, 0xAA, 0xAA), 1, Qt::DotLine));
+    for (int i = 0; i + 1 < n; ++i) {
+        if (matriarchs_[static_cast<size_t>(i)] == matriarchs_[static_cast<size_t>(i) + 1]) continue;
+        ++boundaries_;
+        const QPen pen(QColor(0x55, 0x55, 0x55), 0.8);
+        segment(-0.5, i + 0.5, n - 0.5, i + 0.5, pen);
+        segment(i + 0.5, -0.5, i + 0.5, n - 0.5, pen);
+    }
+    for (int i = 0; i < n; ++i) {
+        const QColor c = palette_.colour(matriarchs_[static_cast<size_t>(i)]);
+        for (const auto& [x1, y1, x2, y2] : {std::tuple{-1.3, i - 0.5, -0.7, i + 0.5}, std::tuple{i - 0.5, -1.3, i + 0.5, -0.7}}) {
+            auto* strip = new QCPItemRect(plot_);
+            strip->topLeft->setCoords(x1, y1);
+            strip->bottomRight->setCoords(x2, y2);
+            strip->setPen(Qt::NoPen);
+            strip->setBrush(c);
+        }
+    }
+    // Totals: wins at the end of each row, losses under each column.
+    QFont small = font();
+    small.setPointSizeF(small.pointSizeF() * (n > 40 ? 0.6 : 0.8));
+    auto text = [&](double x, double y, const QString& s, Qt::Alignment align) {
+        auto* t = new QCPItemText(plot_);
+        t->position->setCoords(x, y);
+        t->setPositionAlignment(align);
+        t->setText(s);
+        t->setFont(small);
+        t->setClipToAxisRect(false);
+    };
+    double all = 0;
+    for (int i = 0; i < n; ++i) {
+        double won = 0, lost = 0;
+        for (int j = 0; j < n; ++j) {
+            won += matrix_.s(i, j);
+            lost += matrix_.s(j, i);
+        }
+        all += won;
+        text(n - 0.2, i, countText(won), Qt::AlignLeft | Qt::AlignVCenter);
+        // Column totals turned upright so wide numbers of neighbouring columns do not collide.
+        auto* t = new QCPItemText(plot_);
+        t->position->setCoords(i, n - 0.2);
+        t->setPositionAlignment(Qt::AlignRight | Qt::AlignVCenter);
+        t->setRotation(-90);
+        t->setText(countText(lost));
+        t->setFont(small);
+        t->setClipToAxisRect(false);
+    }
+    text(n + 0.3, -1, tr("Won"), Qt::AlignHCenter | Qt::AlignBottom);
+    text(-0.6, n + 1, tr("Lost"), Qt::AlignRight | Qt::AlignVCenter);
+    if (n <= 30)
+        for (int i = 0; i < n; ++i)
+            for (int j = 0; j < n; ++j)
+                if (matrix_.s(i, j) > 0) {
+                    text(j, i, countText(matrix_.s(i, j)), Qt::AlignCenter);
+                }
+
+    auto ticker = QSharedPointer<QCPAxisTickerText>::create();
+    for (int i = 0; i < n; ++i) ticker->addTick(i, toQString(names_[static_cast<size_t>(i)]));
+    QFont tickFont = font();
+    tickFont.setPointSizeF(tickFont.pointSizeF() * (n > 60 ? 0.6 : (n > 30 ? 0.7 : 0.85)));
+    for (QCPAxis* a : {plot_->xAxis, plot_->xAxis2, plot_->yAxis}) {
+        a->setTicker(ticker);
+        a->setTickLabelFont(tickFont);
+    }
+    plot_->xAxis->setRange(-1.5, n + 2);
+    plot_->xAxis2->setRange(-1.5, n + 2);
+    plot_->yAxis->setRange(-1.5, n + 3.5);
+    connect(plot_->xAxis, qOverload<const QCPRange&>(&QCPAxis::rangeChanged), plot_->xAxis2,
+            qOverload<const QCPRange&>(&QCPAxis::setRange), Qt::UniqueConnection);
+    plot_->legend->setVisible(true);
+    const char* method = method_ == core::RankMethod::Elo ? "Elo rating"
+                         : method_ == core::RankMethod::DavidsScore ? "David's score" : "I&SI";
+    int below = static_cast<int>(markX.size());
+    summary_->setText(tr("%1 animals, %2 encounters counted; ordered by %3; %4 cells with wins against the order.")
+                          .arg(n)
+                          .arg(countText(all))
+                          .arg(tr(method))
+                          .arg(below));
+    plot_->replot(QCustomPlot::rpQueuedReplot);
+}
+
+QStringList MatrixView::order() const
+{
+    QStringList out;
+    for (const std::string& id : ids_) out << toQString(id);
+    return out;
+}
+
+int MatrixView::markedCount() const { return marks_ ? marks_->data()->size() : 0; }
+
+QString MatrixView::describeCell(int row, int column) const
+{
+    const int n = matrix_.n;
+    if (row < 0 || column < 0 || row >= n || column >= n || row == column) return {};
+    const QString a = toQString(names_[static_cast<size_t>(row)]), b = toQString(names_[static_cast<size_t>(column)]);
+    QString s = tr("%1 beat %2: %3\n%2 beat %1: %4")
+                    .arg(a, b, countText(matrix_.s(row, column)), countText(matrix_.s(column, row)));
+    if (row > column && matrix_.s(row, column) > 0) s += tr("\n(wins against the order)");
+    return s;
+}
+
+void MatrixView::hover(QMouseEvent* event)
+{
+    const int column = static_cast<int>(std::lround(plot_->xAxis->pixelToCoord(event->pos().x())));
+    const int row = static_cast<int>(std::lround(plot_->yAxis->pixelToCoord(event->pos().y())));
+    const QString text = describeCell(row, column);
+    if (text.isEmpty()) QToolTip::hideText();
+    else QToolTip::showText(event->globalPosition().toPoint(), text, plot_);
+}
+
+} // namespace hierloom::ui

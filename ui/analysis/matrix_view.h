@@ -1,0 +1,96 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#pragma once
+#include "core/base/civil_date.h"
+#include "core/ranks/rank_table.h"
+#include "core/ranks/win_matrix.h"
+#include "ui/widgets/matriline_palette.h"
+
+#include <QStringList>
+#include <QWidget>
+
+#include <optional>
+#include <string>
+#include <vector>
+
+class QCPColorMap;
+class QCPGraph;
+class QComboBox;
+class QCustomPlot;
+class QDateEdit;
+class QLabel;
+class QMouseEvent;
+
+namespace hierloom::ui {
+
+class ColonyDocument;
+class ComputeRunner;
+class ProgressStrip;
+
+/// The win matrix of a window (rows winners, columns losers) with the animals
+/// in the order of a rank method (core::orderByMethod: Elo, David's score or
+/// I&SI), cells shaded by count, wins against that order (below the
+/// diagonal) marked, lines between consecutive animals of different
+/// matrilines, a colour strip per matriline and the row (won) and column
+/// (lost) totals.
+class MatrixView : public QWidget {
+    Q_OBJECT
+public:
+    explicit MatrixView(ColonyDocument* document, QWidget* parent = nullptr);
+    ~MatrixView() override;
+
+    QCustomPlot* plot() const { return plot_; }
+    ComputeRunner* runner() const { return runner_; }
+
+    void setMethod(core::RankMethod method);
+    /// Inclusive window; an empty end means the record's first or last day.
+    void setWindow(std::optional<core::Day> from, std::optional<core::Day> to);
+    void setGroup(const QString& group);
+
+    /// Animal ids in the displayed order, top row first.
+    QStringList order() const;
+    /// The displayed matrix: s(i, j) = wins of order()[i] over order()[j].
+    const core::WinMatrix& matrix() const { return matrix_; }
+    /// Cells below the diagonal with a win, each marked.
+    int markedCount() const;
+    /// Matriline boundaries drawn (between consecutive rows).
+    int boundaryCount() const { return boundaries_; }
+    /// The hover text of a cell.
+    QString describeCell(int row, int column) const;
+
+public slots:
+    void recompute();
+
+private:
+    struct Result {
+        std::vector<std::string> ids;
+        std::vector<std::string> names;
+        std::vector<std::string> matriarchs;
+        core::WinMatrix matrix;
+        MatrilinePalette palette;
+        std::optional<core::Day> firstDay, lastDay;
+    };
+    void adopt(Result result);
+    void rebuildPlot();
+    void hover(QMouseEvent* event);
+
+    ColonyDocument* document_;
+    ComputeRunner* runner_;
+    ProgressStrip* progress_;
+    QCustomPlot* plot_;
+    QComboBox* methodBox_;
+    QComboBox* groupBox_;
+    QDateEdit* fromEdit_;
+    QDateEdit* toEdit_;
+    QLabel* summary_;
+
+    core::RankMethod method_ = core::RankMethod::Elo;
+    std::optional<core::Day> from_, to_;
+    QString group_;
+    std::vector<std::string> ids_, names_, matriarchs_;
+    core::WinMatrix matrix_;
+    MatrilinePalette palette_;
+    QCPGraph* marks_ = nullptr;
+    int boundaries_ = 0;
+};
+
+} // namespace hierloom::ui

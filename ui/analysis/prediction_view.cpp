@@ -1,0 +1,295 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#include "ui/analysis/prediction_view.h"
+
+#include "ui/document/animal_selection.h"
+#include "ui/document/colony_document.h"
+#include "ui/widgets/help_button.h"
+#include "ui/document/visible_refresh.h"
+#include "ui/document/compute_runner.h"
+#include "ui/widgets/plot_export.h"
+#include "ui/widgets/progress_strip.h"
+#include "ui/document/qt_convert.h"
+
+#include <QComboBox>
+#include <QDateEdit>
+#include <QHBoxLayout>
+#include <QHeaderView>
+#include <QLabel>
+#include <QSplitter>
+#include <QTableWidget>
+#include <QVBoxLayout>
+
+#include <qcustomplot.h>
+
+namespace hierloom::ui {
+
+namespace {
+QString categoryText(core::DiscordanceCategory c)
+{
+    switch (c) {
+    case core::DiscordanceCategory::DaughterOverMother: return PredictionView::tr("daughter over mother");
+    case core::DiscordanceCategory::SiblingOrder: return PredictionView::tr("sibling order");
+    case core::DiscordanceCategory::WithinMatriline: return PredictionView::tr("within matriline");
+    case core::DiscordanceCategory::CrossMatriline: return PredictionView::tr("across matrilines");
+    }
+    return {};
+}
+} // namespace
+
+PredictionView::PredictionView(ColonyDocument* document, AnimalSelection* selection, QWidget* parent)
+    : QWidget(parent),
+      document_(document),
+      selection_(selection),
+      runner_(new ComputeRunner(this)),
+      progress_(new ProgressStrip(runner_, tr("the prediction"), this)),
+      plot_(new QCustomPlot(this)),
+      dyads_(new QTableWidget(0, 3, this)),
+      ruleBox_(new QComboBox(this)),
+      dateEdit_(new QDateEdit(this)),
+      summaryLabel_(new QLabel(this))
+{
+    ruleBox_->addItems({tr("Youngest ascendancy"), tr("Eldest first")});
+    dateEdit_->setCalendarPopup(true);
+    dateEdit_->setDisplayFormat(QStringLiteral("yyyy-MM-dd"));
+    auto* controls = new QHBoxLayout;
+    controls->addWidget(new QLabel(tr("Date:"), this));
+    controls->addWidget(dateEdit_);
+    controls->addWidget(new QLabel(tr("Rule:"), this));
+    controls->addWidget(ruleBox_);
+    for (const char* key : {"conformity", "tau_b", "discordant_dyads"})
+        controls->addWidget(new HelpButton(QString::fromLatin1(key), this));
+    controls->addWidget(progress_, 1);
+    controls->addStretch();
+    controls->addWidget(makeExportButton(plot_, QStringLiteral("predicted-vs-observed"), this));
+
+    dyads_->setHorizontalHeaderLabels({tr("Observed above"), tr("Observed below"), tr("Category")});
+    dyads_->horizontalHeader()->setStretchLastSection(true);
+    dyads_->verticalHeader()->hide();
+    dyads_->setEditTriggers(QAbstractItemView::NoEditTriggers);
+    dyads_->setSelectionBehavior(QAbstractItemView::SelectRows);
+    auto* side = new QWidget(this);
+    auto* sideLayout = new QVBoxLayout(side);
+    sideLayout->setContentsMargins(0, 0, 0, 0);
+    sideLayout->addWidget(summaryLabel_);
+    sideLayout->addWidget(dyads_, 1);
+    summaryLabel_->setWordWrap(true);
+    auto* split = new QSplitter(Qt::Horizontal, this);
+    split->addWidget(plot_);
+    split->addWidget(side);
+    split->setStretchFactor(0, 3);
+    split->setStretchFactor(1, 2);
+    split->setSizes({900, 560});
+    split->setChildrenCollapsible(false);
+    auto* layout = new QVBoxLayout(this);
+    layout->addLayout(controls);
+    layout->addWidget(split, 1);
+
+    plot_->yAxis->setRangeReversed(true);
+    plot_->yAxis->setLabel(tr("Rank (1 = top)"));
+    plot_->xAxis->setRange(-0.75, 1.75);
+    auto ticker = QSharedPointer<QCPAxisTickerText>::create();
+    ticker->addTick(0, tr("Predicted"));
+    ticker->addTick(1, tr("Observed (Elo)"));
+    plot_->xAxis->setTicker(ticker);
+    plot_->xAxis->grid()->setVisible(false);
+    plot_->yAxis->grid()->setVisible(false);
+    auto* legendRow = new QCPLayoutGrid;
+    plot_->plotLayout()->addElement(1, 0, legendRow);
+    plot_->plotLayout()->setRowStretchFactor(1, 0.001);
+    legendRow->addElement(0, 0, plot_->legend);
+    plot_->legend->setFillOrder(QCPLegend::foColumnsFirst);
+    plot_->legend->setVisible(true);
+
+    connect(ruleBox_, &QComboBox::currentIndexChanged, this,
+            [this](int i) { setRule(i == 0 ? core::SiblingRule::Youngest : core::SiblingRule::Eldest); });
+    connect(dateEdit_, &QDateEdit::dateChanged, this, [this](const QDate& d) { selection_->setDay(toDay(d)); });
+    connect(dyads_, &QTableWidget::cellClicked, this, [this](int row, int column) {
+        if (QTableWidgetItem* item = dyads_->item(row, column == 1 ? 1 : 0))
+            selection_->setAnimal(item->data(Qt::UserRole).toString());
+    });
+    connect(progress_, &ProgressStrip::retry, this, &PredictionView::recompute);
+    // Recomputed only while on screen; a hidden tab catches up when shown.
+    auto* refresh = new VisibleRefresh(this, [this] { recompute(); });
+    connect(document_, &ColonyDocument::changed, refresh, &VisibleRefresh::request);
+    connect(selection_, &AnimalSelection::dayChanged, this, &PredictionView::recompute);
+    connect(selection_, &AnimalSelection::animalChanged, this, &PredictionView::rebuildPlot);
+    recompute();
+}
+
+PredictionView::~PredictionView() = default;
+
+void PredictionView::setRule(core::SiblingRule rule)
+{
+    if (rule == rule_) return;
+    rule_ = rule;
+    const QSignalBlocker block(ruleBox_);
+    ruleBox_->setCurrentIndex(rule == core::SiblingRule::Youngest ? 0 : 1);
+    recompute();
+}
+
+void PredictionView::recompute()
+{
+    if (!document_->isOpen() || document_->colony().encounters.empty()) {
+        runner_->cancel();
+        adopt({}, {}, {}, {});
+        return;
+    }
+    core::InheritanceOptions options;
+    options.rule = rule_;
+    if (selection_->day()) options.at = *selection_->day();
+    else options.at = core::lastEncounterDay(document_->colony());
+    {
+        const QSignalBlocker block(dateEdit_);
+        dateEdit_->setDate(toQDate(*options.at));
+    }
+    const ColonyDocument::Snapshot snapshot = document_->snapshot();
+    auto colony = snapshot.colony;
+    auto where = snapshot.residences;
+    runner_->start([this, colony, where, options](const std::atomic<bool>& cancel, const ComputeRunner::Progress& progress) {
+        const core::Matrilines lines(*colony);
+        progress(0, 2);
+        auto p = std::make_shared<core::InheritancePrediction>(core::predictInheritance(*colony, *where, lines, options));
+        if (cancel) return ComputeRunner::Apply();
+        progress(1, 2);
+        auto s = std::make_shared<core::DiscordanceSummary>(core::summariseDiscordance(lines, *p));
+        auto palette = std::make_shared<MatrilinePalette>(lines);
+        auto names = std::make_shared<std::vector<std::string>>();
+        auto lineNames = std::make_shared<std::map<std::string, std::string>>();
+        for (const std::string& m : palette->matriarchs()) {
+            const int a = colony->animalIndex(m);
+            (*lineNames)[m] = a >= 0 && !colony->animals[static_cast<size_t>(a)].name.empty()
+                                  ? colony->animals[static_cast<size_t>(a)].name
+                                  : m;
+        }
+        for (const core::PredictedFemale& f : p->females) {
+            const int a = colony->animalIndex(f.animal);
+            names->push_back(a >= 0 && !colony->animals[static_cast<size_t>(a)].name.empty()
+                                 ? colony->animals[static_cast<size_t>(a)].name
+                                 : f.animal);
+        }
+        progress(2, 2);
+        return ComputeRunner::Apply([this, p, s, palette, names, lineNames] {
+            lineNames_ = *lineNames;
+            adopt(std::move(*p), std::move(*s), *palette, *names);
+        });
+    });
+}
+
+void PredictionView::adopt(core::InheritancePrediction prediction, core::DiscordanceSummary summary,
+                           MatrilinePalette palette, std::vector<std::string> names)
+{
+    prediction_ = std::move(prediction);
+    summary_ = std::move(summary);
+    palette_ = std::move(palette);
+    names_ = std::move(names);
+    auto nameOf = [this](const std::string& id) {
+        const int i = prediction_.find(id);
+        return i >= 0 ? toQString(names_[static_cast<size_t>(i)]) : toQString(id);
+    };
+    dyads_->setRowCount(static_cast<int>(summary_.dyads.size()));
+    for (int r = 0; r < dyads_->rowCount(); ++r) {
+        const core::DiscordantDyad& d = summary_.dyads[static_cast<size_t>(r)];
+        const std::string* ids[] = {&d.above, &d.below};
+        for (int c = 0; c < 2; ++c) {
+            auto* item = new QTableWidgetItem(tr("%1 (%2)").arg(nameOf(*ids[c]), toQString(*ids[c])));
+            item->setData(Qt::UserRole, toQString(*ids[c]));
+            dyads_->setItem(r, c, item);
+        }
+        dyads_->setItem(r, 2, new QTableWidgetItem(categoryText(d.category)));
+    }
+    dyads_->resizeColumnsToContents();
+    if (prediction_.females.empty()) summaryLabel_->setText(tr("No ranked females on this date."));
+    else
+        summaryLabel_->setText(
+            tr("%1 ranked females, %2 with an observed rank. Discordant dyads: %3 of %4 comparable; conformity %5, "
+               "Kendall's tau-b %6.")
+                .arg(summary_.ranked)
+                .arg(summary_.observed)
+                .arg(summary_.discordant)
+                .arg(summary_.comparable)
+                .arg(summary_.conformity ? QString::number(*summary_.conformity, 'f', 3) : tr("undefined"))
+                .arg(summary_.tauB ? QString::number(*summary_.tauB, 'f', 3) : tr("undefined")));
+    rebuildPlot();
+}
+
+void PredictionView::rebuildPlot()
+{
+    plot_->clearGraphs();
+    plot_->clearItems();
+    connectors_.assign(prediction_.females.size(), nullptr);
+    const QString selected = selection_->animal();
+    QFont labelFont = font();
+    labelFont.setPointSizeF(labelFont.pointSizeF() * 0.8);
+    for (size_t i = 0; i < prediction_.females.size(); ++i) {
+        const core::PredictedFemale& f = prediction_.females[i];
+        const bool me = toQString(f.animal) == selected;
+        const QColor colour = palette_.colour(f.matriarch);
+        auto label = [&](double x, double y, Qt::Alignment align) {
+            auto* text = new QCPItemText(plot_);
+            text->position->setCoords(x, y);
+            text->setPositionAlignment(align | Qt::AlignVCenter);
+            text->setText(toQString(names_[i]));
+            QFont fnt = labelFont;
+            fnt.setBold(me);
+            text->setFont(fnt);
+            text->setColor(f.observedRank ? colour.darker(130) : QColor(0x99, 0x99, 0x99));
+            text->setClipToAxisRect(true);
+        };
+        label(-0.04, f.predictedRank, Qt::AlignRight);
+        if (!f.observedRank) continue;
+        label(1.04, *f.observedRank, Qt::AlignLeft);
+        QCPGraph* g = plot_->addGraph();
+        g->setData({0.0, 1.0}, {static_cast<double>(f.predictedRank), static_cast<double>(*f.observedRank)}, true);
+        QColor c = colour;
+        if (f.discordantDyads == 0) c.setAlpha(110);
+        QPen pen(c, me ? 4 : (f.discordantDyads > 0 ? 2.4 : 1));
+        g->setPen(pen);
+        g->setScatterStyle(QCPScatterStyle(QCPScatterStyle::ssDisc, 4));
+        g->setName(toQString(f.animal));
+        g->removeFromLegend();
+        connectors_[i] = g;
+    }
+    // Legend: the two line styles and the matrilines.
+    QCPGraph* bold = plot_->addGraph();
+    bold->setPen(QPen(QColor(0x44, 0x44, 0x44), 2.4));
+    bold->setName(tr("in a discordant dyad"));
+    QCPGraph* faint = plot_->addGraph();
+    QColor grey(0x44, 0x44, 0x44);
+    grey.setAlpha(110);
+    faint->setPen(QPen(grey, 1));
+    faint->setName(tr("concordant"));
+    for (int l = 0; l < palette_.lineCount(); ++l) {
+        const std::string& m = palette_.matriarchs()[static_cast<size_t>(l)];
+        bool shown = false;
+        for (const core::PredictedFemale& f : prediction_.females) shown = shown || f.matriarch == m;
+        if (!shown) continue;
+        QCPGraph* key = plot_->addGraph();
+        key->setPen(MatrilinePalette::penAt(l, 3));
+        const auto name = lineNames_.find(m);
+        key->setName(tr("line of %1").arg(name != lineNames_.end() ? toQString(name->second) : toQString(m)));
+    }
+    plot_->yAxis->setRange(0.3, std::max<size_t>(prediction_.females.size(), 1) + 0.7);
+    plot_->xAxis->setLabel(prediction_.females.empty()
+                               ? QString()
+                               : tr("Order on %1 (%2)").arg(formatDay(prediction_.at), toQString(core::toString(prediction_.rule))));
+    plot_->replot(QCustomPlot::rpQueuedReplot);
+}
+
+QCPGraph* PredictionView::connectorOf(const QString& id) const
+{
+    const int i = prediction_.find(toStdString(id));
+    return i < 0 || static_cast<size_t>(i) >= connectors_.size() ? nullptr : connectors_[static_cast<size_t>(i)];
+}
+
+int PredictionView::connectorCount() const
+{
+    return static_cast<int>(std::count_if(connectors_.begin(), connectors_.end(), [](QCPGraph* g) { return g != nullptr; }));
+}
+
+bool PredictionView::isEmphasised(const QString& id) const
+{
+    const QCPGraph* g = connectorOf(id);
+    return g && g->pen().widthF() > 2;
+}
+
+} // namespace hierloom::ui

@@ -1,0 +1,80 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#pragma once
+#include "core/pedigree/discordance.h"
+#include "core/pedigree/inheritance_prediction.h"
+#include "ui/widgets/matriline_palette.h"
+
+#include <QWidget>
+
+#include <map>
+#include <string>
+#include <vector>
+
+class QCPGraph;
+class QComboBox;
+class QCustomPlot;
+class QDateEdit;
+class QLabel;
+class QTableWidget;
+
+namespace hierloom::ui {
+
+class AnimalSelection;
+class ColonyDocument;
+class ComputeRunner;
+class ProgressStrip;
+
+/// Predicted against observed order at the selected date: the inheritance
+/// rule's order (core::predictInheritance) in the left column, the observed
+/// Elo order in the right, a line joining each female's two places; lines of
+/// females in a discordant dyad are drawn bold, the others faint, so the
+/// crossings stand out. Below, the discordant dyads with their categories
+/// (core::summariseDiscordance).
+class PredictionView : public QWidget {
+    Q_OBJECT
+public:
+    PredictionView(ColonyDocument* document, AnimalSelection* selection, QWidget* parent = nullptr);
+    ~PredictionView() override;
+
+    QCustomPlot* plot() const { return plot_; }
+    ComputeRunner* runner() const { return runner_; }
+    QTableWidget* dyadTable() const { return dyads_; }
+    const core::InheritancePrediction& prediction() const { return prediction_; }
+    const core::DiscordanceSummary& summary() const { return summary_; }
+
+    void setRule(core::SiblingRule rule);
+    /// The connector of a female, or nullptr when she has no observed rank.
+    QCPGraph* connectorOf(const QString& id) const;
+    /// Connectors drawn (females with both a predicted and an observed rank).
+    int connectorCount() const;
+    /// True when her connector is drawn in the discordant (bold) style.
+    bool isEmphasised(const QString& id) const;
+
+public slots:
+    void recompute();
+
+private:
+    void adopt(core::InheritancePrediction prediction, core::DiscordanceSummary summary, MatrilinePalette palette,
+               std::vector<std::string> names);
+    void rebuildPlot();
+
+    ColonyDocument* document_;
+    AnimalSelection* selection_;
+    ComputeRunner* runner_;
+    ProgressStrip* progress_;
+    QCustomPlot* plot_;
+    QTableWidget* dyads_;
+    QComboBox* ruleBox_;
+    QDateEdit* dateEdit_;
+    QLabel* summaryLabel_;
+
+    core::SiblingRule rule_ = core::SiblingRule::Youngest;
+    core::InheritancePrediction prediction_;
+    core::DiscordanceSummary summary_;
+    MatrilinePalette palette_;
+    std::vector<std::string> names_; ///< display name of each female of prediction_
+    std::map<std::string, std::string> lineNames_; ///< matriarch id -> name
+    std::vector<QCPGraph*> connectors_; ///< per female of prediction_, nullptr without an observed rank
+};
+
+} // namespace hierloom::ui

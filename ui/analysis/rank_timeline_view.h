@@ -1,0 +1,125 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#pragma once
+#include "core/pedigree/rank_timeline.h"
+#include "ui/widgets/matriline_palette.h"
+
+#include <QWidget>
+
+#include <map>
+#include <vector>
+
+class QCPGraph;
+class QCPItemStraightLine;
+class QComboBox;
+class QCustomPlot;
+class QLabel;
+class QSlider;
+class QMouseEvent;
+
+namespace hierloom::ui {
+
+class AnimalSelection;
+class ColonyDocument;
+class ComputeRunner;
+class PedigreeView;
+class ProgressStrip;
+
+/// The pedigree-and-rank timeline: every ranked female's observed rank (or
+/// Elo rating) over the record as a line in her matriline's colour, with her
+/// life events and the checkpoints where she is part of a discordant dyad
+/// (observed order against the inheritance prediction), the pedigree panel
+/// beside it and a date slider below. The timeline is computed off the
+/// interface thread (core::computeRankTimeline) whenever the colony changes.
+class RankTimelineView : public QWidget {
+    Q_OBJECT
+public:
+    enum class Scale { Rank, Elo };
+    /// Age at the selected date; classes start at the maturity age (4 years).
+    enum class AgeClass { All, Young, Prime, Old };
+    /// Whose discordance markers are drawn: every female's crowd the plot, so
+    /// by default only the selected female's.
+    enum class Marks { Selected, All, None };
+
+    RankTimelineView(ColonyDocument* document, AnimalSelection* selection, QWidget* parent = nullptr);
+    ~RankTimelineView() override;
+
+    QCustomPlot* plot() const { return plot_; }
+    ComputeRunner* runner() const { return runner_; }
+    PedigreeView* pedigree() const { return pedigree_; }
+    const core::RankTimeline& timeline() const { return timeline_; }
+
+    void setScale(Scale scale);
+    void setStep(core::TimelineStep step);
+    /// Shows one matriline (matriarch id) or, with an empty id, every line.
+    void setMatriline(const QString& matriarch);
+    /// Ranks within one group (recomputes), or the whole colony with an empty name.
+    void setGroup(const QString& group);
+    void setAgeClass(AgeClass ageClass);
+    void setMarks(Marks marks);
+
+    /// Female lines shown after the filters.
+    int visibleLineCount() const;
+    /// The line of a female, or nullptr.
+    QCPGraph* lineOf(const QString& id) const;
+    /// The discordance markers of a female (keys in seconds), or nullptr when she has none.
+    QCPGraph* discordanceOf(const QString& id) const;
+    /// Event markers of one kind (all females).
+    QCPGraph* eventsOf(core::LifeEventKind kind) const;
+    /// The hover text for a female at the checkpoint nearest `day`, empty if she has no point there.
+    QString describe(const QString& id, core::Day day) const;
+    /// Plot key of a day (seconds since 1970, as the date axis counts).
+    static double keyOf(core::Day day) { return day * 86400.0; }
+
+public slots:
+    void recompute();
+
+private:
+    struct Line {
+        int female = 0;           // index in timeline_.females
+        QCPGraph* graph = nullptr;
+        QCPGraph* marks = nullptr;
+        std::vector<int> pointAt; // checkpoint -> point index, or -1
+    };
+    void adopt(core::RankTimeline timeline, MatrilinePalette palette);
+    void rebuildPlot();
+    void applyFilters();
+    void applySelection();
+    void showDay(core::Day day);
+    void hover(QMouseEvent* event);
+    void click(QMouseEvent* event);
+    int nearestCheckpoint(double key) const;
+    std::optional<double> valueOf(const core::RankTimelinePoint& p) const;
+    int lineIndexOf(const QString& id) const;
+    bool marksShown(const Line& line) const;
+
+    ColonyDocument* document_;
+    AnimalSelection* selection_;
+    ComputeRunner* runner_;
+    ProgressStrip* progress_;
+    QCustomPlot* plot_;
+    PedigreeView* pedigree_;
+    QComboBox* scaleBox_;
+    QComboBox* stepBox_;
+    QComboBox* lineBox_;
+    QComboBox* groupBox_;
+    QComboBox* ageBox_;
+    QComboBox* marksBox_;
+    QSlider* slider_;
+    QLabel* dateLabel_;
+    QCPItemStraightLine* dayLine_ = nullptr;
+    std::map<core::LifeEventKind, QCPGraph*> events_;
+
+    core::RankTimeline timeline_;
+    MatrilinePalette palette_;
+    std::vector<Line> lines_;
+    Scale scale_ = Scale::Rank;
+    core::TimelineStep step_ = core::TimelineStep::Month;
+    QString matriline_;
+    QString group_;
+    AgeClass ageClass_ = AgeClass::All;
+    Marks marks_ = Marks::Selected;
+    double stripValue_ = 0; ///< where events far from her line are drawn (below the lines)
+    QPoint pressedAt_;
+};
+
+} // namespace hierloom::ui

@@ -1,0 +1,125 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#include "ui/document/colony_document.h"
+
+#include "ui/document/qt_convert.h"
+
+#include <QUndoStack>
+
+#include <algorithm>
+
+namespace hierloom::ui {
+
+ColonyDocument::ColonyDocument(QObject* parent) : QObject(parent), undoStack_(new QUndoStack(this)) {}
+
+ColonyDocument::~ColonyDocument() = default;
+
+void ColonyDocument::open(const QString& path, bool readOnly)
+{
+    using Mode = core::ColonyStore::Mode;
+    adopt(core::ColonyStore::open(toStdString(path), readOnly ? Mode::ReadOnly : Mode::ReadWrite), path, readOnly);
+}
+
+void ColonyDocument::create(const QString& path)
+{
+    adopt(core::ColonyStore::create(toStdString(path)), path, false);
+}
+
+void ColonyDocument::adopt(core::ColonyStore store, const QString& path, bool readOnly)
+{
+    // Load before replacing anything, so a file that fails to load leaves
+    // the previous colony open and intact.
+    core::Colony colony = store.load();
+    core::ResidenceIndex residences(colony.animals, colony.residences);
+    store_.emplace(std::move(store));
+    colony_ = std::move(colony);
+    colony_.reindex();
+    residences_ = std::move(residences);
+    path_ = path;
+    readOnly_ = readOnly;
+    undoStack_->clear();
+    lastChange_ = Change{};
+    snapshot_ = {};
+    emit changed();
+}
+
+void ColonyDocument::close()
+{
+    store_.reset();
+    colony_ = core::Colony{};
+    residences_ = core::ResidenceIndex{};
+    path_.clear();
+    readOnly_ = false;
+    undoStack_->clear();
+    lastChange_ = Change{};
+    snapshot_ = {};
+    emit changed();
+}
+
+void ColonyDocument::reload()
+{
+    if (!store_) return;
+    core::Colony colony = store_->load();
+    residences_ = core::ResidenceIndex(colony.animals, colony.residences);
+    colony_ = std::move(colony);
+    colony_.reindex();
+    lastChange_ = Change{};
+    snapshot_ = {};
+    emit changed();
+}
+
+void ColonyDocument::reloadAnimals()
+{
+    if (!store_) return;
+    colony_.animals = store_->loadAnimals();
+    colony_.residences = store_->loadResidences();
+    colony_.reindex();
+    residences_ = core::ResidenceIndex(colony_.animals, colony_.residences);
+    lastChange_ = Change{Change::AnimalsChanged, 0};
+    snapshot_ = {};
+    emit changed();
+}
+
+void ColonyDocument::applyEncounterChange(const std::vector<core::Encounter>& removed,
+                                          const std::vector<core::Encounter>& inserted)
+{
+    // The cache is in seq order, so each record is found by binary search.
+    auto& cache = colony_.encounters;
+    const auto bySeq = [](const core::Encounter& e, std::int64_t seq) { return e.seq < seq; };
+    for (const core::Encounter& r : removed) {
+        auto it = std::lower_bound(cache.begin(), cache.end(), r.seq, bySeq);
+        if (it != cache.end() && it->seq == r.seq) cache.erase(it);
+    }
+    const size_t first = cache.size();
+    bool appendedOnly = removed.empty();
+    std::vector<core::Encounter> sorted = inserted;
+    std::sort(sorted.begin(), sorted.end(), [](const auto& a, const auto& b) { return a.seq < b.seq; });
+    for (core::Encounter& e : sorted) {
+        if (cache.empty() || e.seq > cache.back().seq) {
+            cache.push_back(std::move(e));
+        } else {
+            appendedOnly = false;
+            cache.insert(std::lower_bound(cache.begin(), cache.end(), e.seq, bySeq), std::move(e));
+        }
+    }
+    lastChange_ = appendedOnly ? Change{Change::EncountersAppended, first} : Change{Change::EncountersChanged, 0};
+    snapshot_ = {};
+    emit changed();
+}
+
+ColonyDocument::Snapshot ColonyDocument::snapshot() const
+{
+    if (!snapshot_.colony) {
+        snapshot_.colony = std::make_shared<const core::Colony>(colony_);
+        snapshot_.residences = std::make_shared<const core::ResidenceIndex>(residences_);
+    }
+    return snapshot_;
+}
+
+void ColonyDocument::listsChanged()
+{
+    lastChange_ = Change{Change::ListsChanged, 0};
+    snapshot_ = {};
+    emit changed();
+}
+
+} // namespace hierloom::ui

@@ -1,0 +1,29 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#include "ui/document/document_queries.h"
+
+#include "ui/document/colony_document.h"
+#include "ui/document/qt_convert.h"
+
+#include <set>
+
+namespace hierloom::ui {
+
+std::vector<std::string> groupsWithEncounters(const core::Colony& colony, const core::ResidenceIndex& where)
+{
+    std::set<std::string> names;
+    for (const core::Encounter& e : colony.encounters)
+        if (!e.group.empty()) names.insert(e.group);
+    std::vector<std::string> out;
+    for (const std::string& g : names)
+        if (where.group(g) >= 0) out.push_back(g);
+    return out;
+}
+
+QStringList groupsWithEncounters(ColonyDocument* document)
+{
+    QStringList out;
+    for (const std::string& g : groupsWithEncounters(document->colony(), document->residences())) out << toQString(g);
+    return out;
+}
+
+} // namespace hierloom::ui

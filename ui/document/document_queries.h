@@ -1,0 +1,19 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#pragma once
+#include "core/base/colony.h"
+#include "core/base/residence_index.h"
+
+#include <QStringList>
+
+#include <string>
+#include <vector>
+
+namespace hierloom::ui {
+
+class ColonyDocument;
+
+/// Groups that have encounters and a resident today or earlier, by name.
+std::vector<std::string> groupsWithEncounters(const core::Colony& colony, const core::ResidenceIndex& where);
+QStringList groupsWithEncounters(ColonyDocument* document);
+
+} // namespace hierloom::ui

@@ -1,0 +1,600 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#include "ui/entry/encounter_entry_panel.h"
+
+#include "core/rules/encounter_rules.h"
+#include "ui/document/colony_document.h"
+#include "ui/document/colony_edit_facade.h"
+#include "ui/document/qt_convert.h"
+
+#include <QApplication>
+#include <QCheckBox>
+#include <QComboBox>
+#include <QCompleter>
+#include <QDateEdit>
+#include <QGridLayout>
+#include <QHBoxLayout>
+#include <QHeaderView>
+#include <QKeyEvent>
+#include <QLabel>
+#include <QLineEdit>
+#include <QMessageBox>
+#include <QPushButton>
+#include <QShortcut>
+#include <QSignalBlocker>
+#include <QStringListModel>
+#include <QTableWidget>
+#include <QVBoxLayout>
+
+#include <algorithm>
+
+namespace hierloom::ui {
+
+namespace {
+
+QLabel* infoLabel(QWidget* parent)
+{
+    auto* label = new QLabel(parent);
+    label->setWordWrap(true);
+    label->setTextFormat(Qt::PlainText);
+    label->setMinimumHeight(label->fontMetrics().height() * 2);
+    label->setAlignment(Qt::AlignLeft | Qt::AlignTop);
+    return label;
+}
+
+void showError(QLabel* label, const QString& text)
+{
+    label->setStyleSheet(QStringLiteral("color: #b00020;"));
+    label->setText(text);
+}
+
+void showHint(QLabel* label, const QString& text)
+{
+    label->setStyleSheet(QStringLiteral("color: palette(mid);"));
+    label->setText(text);
+}
+
+// Counts in words; spelled out so the English reads right without a translation file.
+QString lines(int n) { return n == 1 ? EncounterEntryPanel::tr("1 line") : EncounterEntryPanel::tr("%1 lines").arg(n); }
+QString animalsText(int n) { return n == 1 ? EncounterEntryPanel::tr("1 animal") : EncounterEntryPanel::tr("%1 animals").arg(n); }
+QString warningsText(int n) { return n == 1 ? EncounterEntryPanel::tr("1 warning") : EncounterEntryPanel::tr("%1 warnings").arg(n); }
+
+bool isError(const QLabel* label) { return label->styleSheet().contains(QLatin1String("b00020")); }
+
+QString samePairKey(const std::string& a, const std::string& b)
+{
+    return a < b ? toQString(a + '\n' + b) : toQString(b + '\n' + a);
+}
+
+} // namespace
+
+EncounterEntryPanel::EncounterEntryPanel(ColonyEditFacade* facade, QWidget* parent)
+    : QWidget(parent),
+      facade_(facade),
+      document_(facade->document()),
+      askDuplicate_([this](const QString& q) {
+          return QMessageBox::question(this, tr("Possible Duplicate"), q) == QMessageBox::Yes;
+      }),
+      date_(new QDateEdit(QDate::currentDate(), this)),
+      group_(new QComboBox(this)),
+      observer_(new QComboBox(this)),
+      endButton_(new QPushButton(tr("End &Session"), this)),
+      dateInfo_(infoLabel(this)),
+      time_(new QLineEdit(this)),
+      winner_(new QLineEdit(this)),
+      loser_(new QLineEdit(this)),
+      draw_(new QCheckBox(tr("Dra&w"), this)),
+      behaviour_(new QComboBox(this)),
+      note_(new QLineEdit(this)),
+      addButton_(new QPushButton(tr("Add Line (Enter)"), this)),
+      timeInfo_(infoLabel(this)),
+      winnerInfo_(infoLabel(this)),
+      loserInfo_(infoLabel(this)),
+      lineInfo_(infoLabel(this)),
+      mode_(new QLabel(this)),
+      completions_(new QStringListModel(this)),
+      list_(new QTableWidget(this)),
+      count_(new QLabel(this)),
+      summary_(new QLabel(this)),
+      undoSession_(new QPushButton(tr("&Undo Whole Session"), this)),
+      matcher_(document_)
+{
+    date_->setDisplayFormat(QStringLiteral("yyyy-MM-dd"));
+    date_->setCalendarPopup(true);
+    observer_->setEditable(true);
+    observer_->setInsertPolicy(QComboBox::NoInsert);
+    observer_->setMinimumContentsLength(8);
+    group_->setMinimumContentsLength(8);
+    time_->setPlaceholderText(tr("HH:MM"));
+    time_->setMaximumWidth(time_->fontMetrics().horizontalAdvance(QStringLiteral("00:00")) * 2);
+    winner_->setPlaceholderText(tr("id or name"));
+    loser_->setPlaceholderText(tr("id or name"));
+    note_->setPlaceholderText(tr("note"));
+    for (QLineEdit* edit : {winner_, loser_}) {
+        auto* completer = new QCompleter(completions_, edit);
+        completer->setCaseSensitivity(Qt::CaseInsensitive);
+        completer->setCompletionMode(QCompleter::PopupCompletion);
+        edit->setCompleter(completer);
+    }
+    summary_->setWordWrap(true);
+    mode_->setStyleSheet(QStringLiteral("font-weight: bold;"));
+
+    // Session header.
+    auto* header = new QHBoxLayout;
+    auto addLabelled = [&](QHBoxLayout* row, const QString& text, QWidget* field) {
+        auto* label = new QLabel(text, this);
+        label->setBuddy(field);
+        row->addWidget(label);
+        row->addWidget(field);
+    };
+    addLabelled(header, tr("&Date:"), date_);
+    addLabelled(header, tr("&Group:"), group_);
+    addLabelled(header, tr("O&bserver:"), observer_);
+    header->addWidget(endButton_);
+    header->addStretch(1);
+
+    // The entry line, in the notebook's column order, with a message under each field.
+    auto* line = new QGridLayout;
+    const QList<QPair<QString, QWidget*>> fields{{tr("&Time"), time_},          {tr("W&inner"), winner_},
+                                                 {tr("&Loser"), loser_},        {QString(), draw_},
+                                                 {tr("Be&haviour"), behaviour_}, {tr("N&ote"), note_}};
+    for (int c = 0; c < fields.size(); ++c) {
+        if (!fields[c].first.isEmpty()) {
+            auto* label = new QLabel(fields[c].first, this);
+            label->setBuddy(fields[c].second);
+            line->addWidget(label, 0, c);
+        }
+        line->addWidget(fields[c].second, 1, c);
+    }
+    line->addWidget(addButton_, 1, fields.size());
+    line->addWidget(timeInfo_, 2, 0);
+    line->addWidget(winnerInfo_, 2, 1);
+    line->addWidget(loserInfo_, 2, 2);
+    line->addWidget(lineInfo_, 2, 3, 1, 4);
+    line->setColumnStretch(1, 2);
+    line->setColumnStretch(2, 2);
+    line->setColumnStretch(5, 4);
+
+    list_->setColumnCount(7);
+    list_->setHorizontalHeaderLabels({tr("Line"), tr("Time"), tr("Winner"), tr("Loser"), tr("Outcome"),
+                                      tr("Behaviour"), tr("Note")});
+    list_->setEditTriggers(QAbstractItemView::NoEditTriggers);
+    list_->setSelectionBehavior(QAbstractItemView::SelectRows);
+    list_->verticalHeader()->hide();
+    list_->horizontalHeader()->setStretchLastSection(true);
+    list_->setAlternatingRowColors(true);
+
+    auto* footer = new QHBoxLayout;
+    footer->addWidget(count_, 1);
+    auto* editButton = new QPushButton(tr("Edit Line (F2)"), this);
+    auto* deleteButton = new QPushButton(tr("Delete Line (Del)"), this);
+    footer->addWidget(editButton);
+    footer->addWidget(deleteButton);
+    footer->addWidget(undoSession_);
+
+    auto* layout = new QVBoxLayout(this);
+    layout->addLayout(header);
+    layout->addWidget(dateInfo_);
+    layout->addWidget(mode_);
+    layout->addLayout(line);
+    layout->addWidget(new QLabel(tr("This session (each line is saved as it is entered):"), this));
+    layout->addWidget(list_, 1);
+    layout->addLayout(footer);
+    layout->addWidget(summary_);
+
+    setTabOrder(date_, group_);
+    setTabOrder(group_, observer_);
+    setTabOrder(observer_, time_);
+    setTabOrder(time_, winner_);
+    setTabOrder(winner_, loser_);
+    setTabOrder(loser_, draw_);
+    setTabOrder(draw_, behaviour_);
+    setTabOrder(behaviour_, note_);
+    setTabOrder(note_, list_);
+    for (QWidget* w : {static_cast<QWidget*>(time_), static_cast<QWidget*>(winner_), static_cast<QWidget*>(loser_),
+                       static_cast<QWidget*>(draw_), static_cast<QWidget*>(behaviour_), static_cast<QWidget*>(note_)})
+        w->installEventFilter(this);
+    list_->installEventFilter(this);
+    addButton_->setAutoDefault(false);
+    endButton_->setAutoDefault(false);
+    endButton_->setFocusPolicy(Qt::NoFocus); // Alt+S; keeps Tab going from the header straight to the line
+    addButton_->setFocusPolicy(Qt::NoFocus);
+
+    connect(addButton_, &QPushButton::clicked, this, &EncounterEntryPanel::commitLine);
+    // Enter on an open completion list reaches the field directly (not through the filter).
+    for (QLineEdit* edit : {winner_, loser_}) connect(edit, &QLineEdit::returnPressed, this, &EncounterEntryPanel::commitLine);
+    connect(endButton_, &QPushButton::clicked, this, &EncounterEntryPanel::endSession);
+    connect(editButton, &QPushButton::clicked, this, &EncounterEntryPanel::editSelectedRow);
+    connect(deleteButton, &QPushButton::clicked, this, &EncounterEntryPanel::deleteSelectedRows);
+    connect(undoSession_, &QPushButton::clicked, this, &EncounterEntryPanel::undoWholeSession);
+    connect(list_, &QTableWidget::cellDoubleClicked, this, &EncounterEntryPanel::editSelectedRow);
+    connect(date_, &QDateEdit::dateChanged, this, &EncounterEntryPanel::headerChanged);
+    connect(group_, &QComboBox::currentTextChanged, this, &EncounterEntryPanel::headerChanged);
+    connect(observer_, &QComboBox::currentTextChanged, this, &EncounterEntryPanel::headerChanged);
+    connect(winner_, &QLineEdit::textChanged, this, [this] { checkAnimalField(winner_, winnerInfo_); });
+    connect(loser_, &QLineEdit::textChanged, this, [this] { checkAnimalField(loser_, loserInfo_); });
+    connect(time_, &QLineEdit::textChanged, this, &EncounterEntryPanel::checkTime);
+    connect(document_, &ColonyDocument::changed, this, [this] {
+        // Encounter-only changes leave the groups, residents and lists as they were.
+        const auto kind = document_->lastChange().kind;
+        if (kind != ColonyDocument::Change::EncountersAppended && kind != ColonyDocument::Change::EncountersChanged)
+            refreshChoices();
+        refreshList();
+    });
+    refreshChoices();
+    refreshList();
+}
+
+core::Day EncounterEntryPanel::sessionDay() const { return toDay(date_->date()); }
+
+void EncounterEntryPanel::refreshChoices()
+{
+    const QSignalBlocker b1(group_), b2(observer_);
+    const QString group = group_->currentText();
+    group_->clear();
+    QStringList groups;
+    for (const std::string& g : document_->residences().groups()) groups << toQString(g);
+    groups.sort();
+    group_->addItems(groups);
+    if (!group.isEmpty() && groups.contains(group)) group_->setCurrentText(group);
+
+    const QString observer = observer_->currentText();
+    const QString code = behaviour_->currentText();
+    observer_->clear();
+    behaviour_->clear();
+    behaviour_->addItem(QString());
+    if (core::ColonyStore* store = document_->store()) {
+        for (const std::string& o : store->observers()) observer_->addItem(toQString(o));
+        for (const auto& c : store->behaviourCodes()) {
+            behaviour_->addItem(toQString(c.code));
+            behaviour_->setItemData(behaviour_->count() - 1, toQString(c.description), Qt::ToolTipRole);
+        }
+    }
+    observer_->setCurrentText(observer);
+    behaviour_->setCurrentText(code);
+    refreshResidents();
+    checkDate();
+}
+
+void EncounterEntryPanel::refreshResidents()
+{
+    // The completions and the prefix matching offer only the animals in the
+    // session's group on the session's day.
+    completions_->setStringList(matcher_.setSession(toStdString(group_->currentText()), sessionDay()));
+}
+
+void EncounterEntryPanel::headerChanged()
+{
+    // A new date, group or observer is a new notebook page: close the session.
+    if (sessionRowCount() > 0) endSession();
+    refreshResidents();
+    checkDate();
+    checkAnimalField(winner_, winnerInfo_);
+    checkAnimalField(loser_, loserInfo_);
+}
+
+void EncounterEntryPanel::checkAnimalField(QLineEdit* edit, QLabel* info)
+{
+    const QString text = edit->text().trimmed();
+    if (text.isEmpty()) {
+        info->clear();
+        return;
+    }
+    const AnimalMatcher::Match r = matcher_.resolve(text);
+    if (r.partial) {
+        showHint(info, *r.error); // still typing: a hint, not a mistake
+        return;
+    }
+    if (r.error) {
+        showError(info, *r.error);
+        return;
+    }
+    if (auto m = core::checkEncounterAnimal(r.id, toStdString(group_->currentText()), sessionDay(), document_->residences())) {
+        showError(info, toQString(*m));
+        return;
+    }
+    const AnimalMatcher::Match other = matcher_.resolve(edit == winner_ ? loser_->text() : winner_->text());
+    if (edit == loser_ && !winner_->text().trimmed().isEmpty() && other.id == r.id) {
+        showError(info, toQString("'" + r.id + "' is also the winner; an encounter needs two animals"));
+        return;
+    }
+    showHint(info, r.hint);
+}
+
+std::optional<int> EncounterEntryPanel::parsedTime(bool& bad) const
+{
+    bad = false;
+    QString t = time_->text().trimmed();
+    if (t.isEmpty()) return std::nullopt;
+    // "930" and "0930" save the colon key on a long evening.
+    if (!t.contains(QLatin1Char(':')) && (t.size() == 3 || t.size() == 4)) t.insert(t.size() - 2, QLatin1Char(':'));
+    if (t.size() == 4) t.prepend(QLatin1Char('0'));
+    const auto minutes = core::parseTimeOfDay(toStdString(t));
+    bad = !minutes;
+    return minutes;
+}
+
+void EncounterEntryPanel::checkTime()
+{
+    bool bad = false;
+    const auto minutes = parsedTime(bad);
+    if (bad) showError(timeInfo_, tr("'%1' is not a time of day in the form HH:MM (24 h)").arg(time_->text().trimmed()));
+    else if (minutes) showHint(timeInfo_, toQString(core::formatTimeOfDay(*minutes)));
+    else timeInfo_->clear();
+}
+
+void EncounterEntryPanel::checkDate()
+{
+    if (sessionDay() > facade_->today())
+        showError(dateInfo_, toQString("'" + core::formatDate(sessionDay()) + "' is in the future"));
+    else if (document_->isOpen() && group_->count() == 0)
+        showHint(dateInfo_, tr("The colony has no groups yet: add animals first."));
+    else if (document_->isOpen() && matcher_.noResidents())
+        showHint(dateInfo_, tr("No animal lived in this group on that day."));
+    else dateInfo_->clear();
+}
+
+void EncounterEntryPanel::clearMessages()
+{
+    for (QLabel* l : {timeInfo_, winnerInfo_, loserInfo_, lineInfo_}) l->clear();
+}
+
+void EncounterEntryPanel::showProblems(const core::FieldProblems& problems)
+{
+    for (const core::FieldProblem& p : problems) {
+        QLabel* target = p.field == "winner" ? winnerInfo_
+                         : p.field == "loser" ? loserInfo_
+                         : p.field == "time"  ? timeInfo_
+                         : p.field == "date"  ? dateInfo_
+                                              : lineInfo_;
+        showError(target, toQString(p.field == "group" || p.field.empty() ? p.message : p.message));
+    }
+}
+
+QString EncounterEntryPanel::fieldMessage(const QString& field) const
+{
+    const QLabel* label = field == QLatin1String("date")     ? dateInfo_
+                          : field == QLatin1String("time")   ? timeInfo_
+                          : field == QLatin1String("winner") ? winnerInfo_
+                          : field == QLatin1String("loser")  ? loserInfo_
+                                                             : lineInfo_;
+    return isError(label) ? label->text() : QString();
+}
+
+bool EncounterEntryPanel::commitLine()
+{
+    lineInfo_->clear();
+    core::Encounter e;
+    e.date = sessionDay();
+    bool badTime = false;
+    e.time = parsedTime(badTime);
+    const AnimalMatcher::Match w = matcher_.resolve(winner_->text());
+    const AnimalMatcher::Match l = matcher_.resolve(loser_->text());
+    e.winner = w.id;
+    e.loser = l.id;
+    e.outcome = draw_->isChecked() ? core::Outcome::Draw : core::Outcome::Decided;
+    e.behaviour = toStdString(behaviour_->currentText());
+    e.group = toStdString(group_->currentText());
+    e.observer = toStdString(observer_->currentText().trimmed());
+    e.note = toStdString(note_->text().trimmed());
+
+    core::FieldProblems problems;
+    if (badTime) problems.push_back({"time", toStdString(tr("'%1' is not a time of day in the form HH:MM (24 h)").arg(time_->text().trimmed()))});
+    if (w.partial) problems.push_back({"winner", toStdString(*w.error)});
+    if (l.partial) problems.push_back({"loser", toStdString(*l.error)});
+    // The session's group: each animal must be in it that day (same words as the import otherwise).
+    for (const auto& [id, field] : {std::pair{e.winner, "winner"}, std::pair{e.loser, "loser"}})
+        if (!id.empty() && problemFor(problems, field).empty())
+            if (auto m = core::checkEncounterAnimal(id, e.group, e.date, document_->residences()))
+                problems.push_back({field, *m});
+    if (problems.empty()) problems = facade_->checkEncounter(e);
+    if (!problems.empty()) {
+        clearMessages();
+        showProblems(problems);
+        ++refusals_;
+        return false;
+    }
+
+    // Same pair at the same time in this session: probably entered twice.
+    bool warned = false;
+    for (const core::Encounter* row : sessionRows()) {
+        if (editing_ && row->seq == editing_->seq) continue;
+        if (samePairKey(row->winner, row->loser) == samePairKey(e.winner, e.loser) && row->time == e.time) {
+            const QString when = e.time ? tr("at %1").arg(toQString(core::formatTimeOfDay(*e.time))) : tr("without a time");
+            if (!askDuplicate_(tr("%1 and %2 %3 are already in this session. Save this line as another encounter?")
+                                   .arg(toQString(e.winner), toQString(e.loser), when))) {
+                showError(lineInfo_, tr("Not saved: a possible duplicate."));
+                return false;
+            }
+            warned = true;
+            break;
+        }
+    }
+
+    core::FieldProblems written;
+    if (editing_) {
+        e.seq = editing_->seq;
+        e.uid = editing_->uid;
+        e.observer = editing_->observer;
+        written = facade_->editEncounter(e);
+    } else {
+        written = facade_->addEncounter(e);
+        if (written.empty()) sessionSeqs_.push_back(e.seq);
+    }
+    if (!written.empty()) {
+        showProblems(written);
+        return false;
+    }
+    if (warned) warned_.insert(e.seq);
+    const bool hadTime = e.time.has_value();
+    editing_.reset();
+    mode_->clear();
+    clearLine();
+    refreshList();
+    (hadTime ? time_ : winner_)->setFocus();
+    return true;
+}
+
+void EncounterEntryPanel::clearLine()
+{
+    for (QLineEdit* edit : {time_, winner_, loser_, note_}) edit->clear();
+    draw_->setChecked(false);
+    clearMessages();
+}
+
+void EncounterEntryPanel::cancelEdit()
+{
+    editing_.reset();
+    mode_->clear();
+    clearLine();
+    focusEntry();
+}
+
+void EncounterEntryPanel::focusEntry() { time_->setFocus(); }
+
+void EncounterEntryPanel::showEvent(QShowEvent* event)
+{
+    QWidget::showEvent(event);
+    // Coming to this tab means typing a notebook: start on the entry line.
+    if (!isAncestorOf(QApplication::focusWidget())) focusEntry();
+}
+
+std::vector<const core::Encounter*> EncounterEntryPanel::sessionRows() const
+{
+    // The cache is in seq order: each session row is found by binary search.
+    std::vector<const core::Encounter*> out;
+    const auto& cache = document_->colony().encounters;
+    for (std::int64_t seq : sessionSeqs_) {
+        auto it = std::lower_bound(cache.begin(), cache.end(), seq,
+                                   [](const core::Encounter& e, std::int64_t s) { return e.seq < s; });
+        if (it != cache.end() && it->seq == seq) out.push_back(&*it);
+    }
+    return out;
+}
+
+int EncounterEntryPanel::sessionRowCount() const { return static_cast<int>(sessionRows().size()); }
+
+void EncounterEntryPanel::refreshList()
+{
+    const auto rows = sessionRows();
+    list_->setRowCount(static_cast<int>(rows.size()));
+    std::set<std::string> animals;
+    int warnings = 0;
+    for (int r = 0; r < static_cast<int>(rows.size()); ++r) {
+        const core::Encounter& e = *rows[static_cast<size_t>(r)];
+        const QStringList cells{QString::number(r + 1),
+                                e.time ? toQString(core::formatTimeOfDay(*e.time)) : QString(),
+                                toQString(e.winner),
+                                toQString(e.loser),
+                                e.outcome == core::Outcome::Draw ? tr("draw") : tr("decided"),
+                                toQString(e.behaviour),
+                                toQString(e.note)};
+        for (int c = 0; c < cells.size(); ++c) {
+            auto* item = new QTableWidgetItem(cells[c]);
+            item->setData(Qt::UserRole, QVariant::fromValue<qlonglong>(e.seq));
+            list_->setItem(r, c, item);
+        }
+        animals.insert(e.winner);
+        animals.insert(e.loser);
+        warnings += warned_.count(e.seq) ? 1 : 0;
+    }
+    if (!rows.empty()) list_->scrollToBottom();
+    count_->setText(lines(static_cast<int>(rows.size())) + QStringLiteral(" · ") +
+                    animalsText(static_cast<int>(animals.size())) + QStringLiteral(" · ") +
+                    warningsText(warnings + refusals_));
+    undoSession_->setEnabled(!rows.empty());
+}
+
+QString EncounterEntryPanel::countText() const { return count_->text(); }
+
+QString EncounterEntryPanel::summaryText() const { return summary_->text(); }
+
+void EncounterEntryPanel::editSelectedRow()
+{
+    const int row = list_->currentRow();
+    const auto rows = sessionRows();
+    if (row < 0 || row >= static_cast<int>(rows.size())) return;
+    const core::Encounter& e = *rows[static_cast<size_t>(row)];
+    editing_ = e;
+    time_->setText(e.time ? toQString(core::formatTimeOfDay(*e.time)) : QString());
+    winner_->setText(toQString(e.winner));
+    loser_->setText(toQString(e.loser));
+    draw_->setChecked(e.outcome == core::Outcome::Draw);
+    behaviour_->setCurrentText(toQString(e.behaviour));
+    note_->setText(toQString(e.note));
+    mode_->setText(tr("Changing line %1: Enter saves it, Esc cancels.").arg(row + 1));
+    time_->setFocus();
+}
+
+void EncounterEntryPanel::deleteSelectedRows()
+{
+    const auto rows = sessionRows();
+    std::vector<core::Encounter> gone;
+    for (const QModelIndex& index : list_->selectionModel()->selectedRows())
+        if (index.row() < static_cast<int>(rows.size())) gone.push_back(*rows[static_cast<size_t>(index.row())]);
+    if (gone.empty()) return;
+    const auto problems = facade_->deleteEncounters(gone);
+    if (!problems.empty()) showProblems(problems);
+}
+
+void EncounterEntryPanel::undoWholeSession()
+{
+    std::vector<core::Encounter> all;
+    for (const core::Encounter* e : sessionRows()) all.push_back(*e);
+    if (all.empty()) return;
+    const auto problems = facade_->deleteEncounters(
+        all, tr("Take back the session of %1 (%2)").arg(date_->date().toString(Qt::ISODate), lines(static_cast<int>(all.size()))));
+    if (!problems.empty()) showProblems(problems);
+    focusEntry();
+}
+
+void EncounterEntryPanel::endSession()
+{
+    const auto rows = sessionRows();
+    std::set<std::string> animals;
+    int warnings = 0;
+    for (const core::Encounter* e : rows) {
+        animals.insert(e->winner);
+        animals.insert(e->loser);
+        warnings += warned_.count(e->seq) ? 1 : 0;
+    }
+    summary_->setText(tr("Session ended: %1, group %2, observer %3: %4, %5, %6.")
+                          .arg(date_->date().toString(Qt::ISODate), group_->currentText(),
+                               observer_->currentText().isEmpty() ? tr("(none)") : observer_->currentText(),
+                               lines(static_cast<int>(rows.size())),
+                               animalsText(static_cast<int>(animals.size())),
+                               warningsText(warnings + refusals_)));
+    sessionSeqs_.clear();
+    warned_.clear();
+    refusals_ = 0;
+    editing_.reset();
+    mode_->clear();
+    refreshList();
+}
+
+bool EncounterEntryPanel::eventFilter(QObject* watched, QEvent* event)
+{
+    if (event->type() != QEvent::KeyPress) return QWidget::eventFilter(watched, event);
+    const auto* key = static_cast<QKeyEvent*>(event);
+    if (watched == list_) {
+        if (key->key() == Qt::Key_Delete || key->key() == Qt::Key_Backspace) {
+            deleteSelectedRows();
+            return true;
+        }
+        if (key->key() == Qt::Key_F2 || key->key() == Qt::Key_Return || key->key() == Qt::Key_Enter) {
+            editSelectedRow();
+            return true;
+        }
+        return QWidget::eventFilter(watched, event);
+    }
+    if ((key->key() == Qt::Key_Return || key->key() == Qt::Key_Enter) && key->modifiers() == Qt::NoModifier) {
+        commitLine();
+        return true;
+    }
+    if (key->key() == Qt::Key_Escape && key->modifiers() == Qt::NoModifier && editing_) {
+        cancelEdit();
+        return true;
+    }
+    return QWidget::eventFilter(watched, event);
+}
+
+} // namespace hierloom::ui

@@ -1,0 +1,81 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#include "ui/planning/stability_badge.h"
+
+#include "core/pedigree/matriline.h"
+#include "ui/widgets/caution_label.h"
+#include "ui/document/colony_document.h"
+#include "ui/document/compute_runner.h"
+#include "ui/document/qt_convert.h"
+#include "ui/document/document_queries.h"
+#include "ui/planning/stability_view.h"
+
+namespace hierloom::ui {
+
+StabilityBadge::StabilityBadge(ColonyDocument* document, QWidget* parent)
+    : QToolButton(parent), document_(document), runner_(new ComputeRunner(this))
+{
+    setObjectName(QStringLiteral("stabilityBadge"));
+    setAutoRaise(true);
+    setStyleSheet(QStringLiteral("QToolButton { color: white; background: #c00000; border-radius: 3px;"
+                                 " padding: 1px 8px; font-weight: bold; }"));
+    setVisible(false);
+    // A burst of edits (an evening's typing) re-checks the alerts once, after a pause.
+    debounce_.setSingleShot(true);
+    debounce_.setInterval(3000);
+    connect(&debounce_, &QTimer::timeout, this, &StabilityBadge::refresh);
+    connect(document_, &ColonyDocument::changed, this, [this] {
+        if (document_->lastChange().kind == ColonyDocument::Change::Reset) refresh();
+        else debounce_.start();
+    });
+    refresh();
+}
+
+StabilityBadge::~StabilityBadge() = default;
+
+void StabilityBadge::refresh()
+{
+    debounce_.stop();
+    if (!document_->isOpen()) {
+        runner_->cancel();
+        show({}, {});
+        return;
+    }
+    // Options are read from the file here; the records are the shared snapshot.
+    const ColonyDocument::Snapshot snapshot = document_->snapshot();
+    std::vector<std::pair<std::string, std::vector<core::StabilityOptions>>> checks;
+    for (const std::string& g : groupsWithEncounters(*snapshot.colony, *snapshot.residences))
+        checks.push_back({g,
+                          {documentStabilityOptions(document_, g, core::PeriodLength::Week),
+                           documentStabilityOptions(document_, g, core::PeriodLength::Month)}});
+    runner_->start([this, snapshot, checks](const std::atomic<bool>& cancel, const ComputeRunner::Progress& progress) {
+        const core::Matrilines lines(*snapshot.colony);
+        QStringList groups, evidence;
+        int done = 0;
+        for (const auto& [group, options] : checks) {
+            bool alerted = false;
+            for (const core::StabilityOptions& o : options) {
+                if (cancel) return ComputeRunner::Apply{};
+                const core::StabilitySeries s = core::stabilityWatch(*snapshot.colony, *snapshot.residences, lines, o);
+                for (const core::StabilityAlert& a : s.latestAlerts()) {
+                    alerted = true;
+                    evidence << QStringLiteral("%1: %2").arg(toQString(group), toQString(core::describeAlert(s, a)));
+                }
+            }
+            if (alerted) groups << toQString(group);
+            progress(++done, static_cast<int>(checks.size()));
+        }
+        return ComputeRunner::Apply([this, groups, evidence] { show(groups, evidence); });
+    });
+}
+
+void StabilityBadge::waitForCheck() { runner_->wait(); }
+
+void StabilityBadge::show(const QStringList& groups, const QStringList& evidence)
+{
+    groups_ = groups;
+    setVisible(!groups_.isEmpty());
+    setText(tr("Stability alert: %1").arg(groups_.join(QStringLiteral(", "))));
+    setToolTip(evidence.join(QStringLiteral("\n\n")) + QStringLiteral("\n\n") + planningCaution());
+}
+
+} // namespace hierloom::ui

@@ -1,0 +1,305 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#include "ui/records/animal_editor_dialog.h"
+
+#include "core/base/residence_index.h"
+#include "ui/document/colony_document.h"
+#include "ui/document/colony_edit_facade.h"
+#include "ui/document/qt_convert.h"
+
+#include <QComboBox>
+#include <QCompleter>
+#include <QDialogButtonBox>
+#include <QFormLayout>
+#include <QLabel>
+#include <QLineEdit>
+#include <QVBoxLayout>
+
+namespace hierloom::ui {
+
+namespace {
+
+QLabel* messageLabel(QWidget* parent)
+{
+    auto* l = new QLabel(parent);
+    l->setStyleSheet(QStringLiteral("color: #b00020;"));
+    l->setWordWrap(true);
+    l->setTextFormat(Qt::PlainText);
+    l->hide();
+    return l;
+}
+
+QLineEdit* newDateEdit(QWidget* parent)
+{
+    auto* e = new QLineEdit(parent);
+    e->setPlaceholderText(QStringLiteral("YYYY-MM-DD"));
+    return e;
+}
+
+QString dayText(const std::optional<core::Day>& d) { return d ? formatDay(*d) : QString(); }
+
+QStringList groupNames(const ColonyDocument* document)
+{
+    QStringList out;
+    for (const std::string& g : document->residences().groups()) out << toQString(g);
+    out.sort();
+    return out;
+}
+
+} // namespace
+
+AnimalEditorDialog::AnimalEditorDialog(ColonyEditFacade* facade, Mode mode, QWidget* parent)
+    : QDialog(parent),
+      facade_(facade),
+      mode_(mode),
+      id_(new QLineEdit(this)),
+      name_(new QLineEdit(this)),
+      sex_(new QComboBox(this)),
+      birth_(newDateEdit(this)),
+      mother_(new QComboBox(this)),
+      father_(new QComboBox(this)),
+      entry_(newDateEdit(this)),
+      entryType_(new QComboBox(this)),
+      group_(new QComboBox(this)),
+      exit_(newDateEdit(this)),
+      exitType_(new QComboBox(this)),
+      general_(messageLabel(this)),
+      form_(new QFormLayout)
+{
+    const QStringList titles{tr("Add Animal"), tr("Edit Animal"), tr("Record Birth"), tr("Record Introduction")};
+    setWindowTitle(titles[static_cast<int>(mode)]);
+    sex_->addItem(tr("female"), QStringLiteral("F"));
+    sex_->addItem(tr("male"), QStringLiteral("M"));
+    sex_->addItem(tr("unknown"), QStringLiteral("U"));
+    entryType_->addItem(tr("founder"), QStringLiteral("founder"));
+    entryType_->addItem(tr("born"), QStringLiteral("born"));
+    entryType_->addItem(tr("introduced"), QStringLiteral("introduced"));
+    entryType_->addItem(tr("(not recorded)"), QString());
+    exitType_->addItem(tr("(still present)"), QString());
+    exitType_->addItem(tr("died"), QStringLiteral("died"));
+    exitType_->addItem(tr("removed"), QStringLiteral("removed"));
+    group_->setEditable(true);
+    group_->addItems(groupNames(facade_->document()));
+    group_->setCurrentText(QString());
+
+    addRow(tr("&Id:"), id_, QStringLiteral("id"));
+    addRow(tr("&Name:"), name_, QStringLiteral("name"));
+    addRow(tr("&Sex:"), sex_, QStringLiteral("sex"));
+    addRow(mode == Mode::Birth ? tr("&Born on:") : tr("&Birth date:"), birth_, QStringLiteral("birth_date"));
+    addRow(tr("&Mother:"), mother_, QStringLiteral("mother"));
+    addRow(tr("&Father:"), father_, QStringLiteral("father"));
+    if (mode == Mode::Add || mode == Mode::Edit || mode == Mode::Introduction)
+        addRow(mode == Mode::Introduction ? tr("&Introduced on:") : tr("&Entry date:"), entry_, QStringLiteral("entry_date"));
+    if (mode == Mode::Add || mode == Mode::Edit) addRow(tr("Entry &type:"), entryType_, QStringLiteral("entry_type"));
+    if (mode == Mode::Add || mode == Mode::Introduction) addRow(tr("&Group:"), group_, QStringLiteral("group"));
+    if (mode == Mode::Edit) {
+        addRow(tr("E&xit date:"), exit_, QStringLiteral("exit_date"));
+        addRow(tr("Exit t&ype:"), exitType_, QStringLiteral("exit_type"));
+        // Edit: the id picks the animal (ids are fixed; they are the notebooks' names).
+        QStringList ids;
+        for (const core::Animal& a : facade_->document()->colony().animals) ids << toQString(a.id);
+        auto* completer = new QCompleter(ids, id_);
+        completer->setCaseSensitivity(Qt::CaseInsensitive);
+        id_->setCompleter(completer);
+        connect(id_, &QLineEdit::editingFinished, this, [this] {
+            if (toStdString(id_->text()) != loaded_.id) loadAnimal(id_->text());
+        });
+    }
+    if (mode == Mode::Birth) {
+        auto* note = new QLabel(tr("The newborn lives in the group its mother was in on that day."), this);
+        note->setWordWrap(true);
+        form_->addRow(note);
+    }
+
+    auto* buttons = new QDialogButtonBox(QDialogButtonBox::Ok | QDialogButtonBox::Cancel, this);
+    connect(buttons, &QDialogButtonBox::accepted, this, &AnimalEditorDialog::accept);
+    connect(buttons, &QDialogButtonBox::rejected, this, &QDialog::reject);
+    auto* layout = new QVBoxLayout(this);
+    layout->addLayout(form_);
+    layout->addWidget(general_);
+    layout->addWidget(buttons);
+
+    connect(birth_, &QLineEdit::textChanged, this, &AnimalEditorDialog::refillParents);
+    connect(id_, &QLineEdit::textChanged, this, &AnimalEditorDialog::refillParents);
+    refillParents();
+    if (mode == Mode::Birth) {
+        birth_->setText(formatDay(facade_->today()));
+        entryType_->setCurrentIndex(1);
+    }
+    if (mode == Mode::Introduction) entryType_->setCurrentIndex(2);
+}
+
+void AnimalEditorDialog::addRow(const QString& label, QWidget* field, const QString& key)
+{
+    auto* box = new QWidget(this);
+    auto* v = new QVBoxLayout(box);
+    v->setContentsMargins(0, 0, 0, 0);
+    v->setSpacing(1);
+    v->addWidget(field);
+    QLabel* message = messageLabel(box);
+    v->addWidget(message);
+    messages_.insert(key, message);
+    auto* l = new QLabel(label, this);
+    l->setBuddy(field);
+    form_->addRow(l, box);
+}
+
+void AnimalEditorDialog::refillParents()
+{
+    // Only valid candidates: right sex, not the animal itself, born before it.
+    const auto birth = core::parseDate(toStdString(birth_->text().trimmed()));
+    const std::string self = toStdString(id_->text().trimmed());
+    for (auto [box, sex] : {std::pair{mother_, core::Sex::Female}, std::pair{father_, core::Sex::Male}}) {
+        const QString current = box->currentData().toString();
+        box->clear();
+        box->addItem(tr("(unknown)"), QString());
+        for (const core::Animal& a : facade_->document()->colony().animals) {
+            if (a.sex != sex || a.id == self) continue;
+            if (birth && a.birth && *a.birth >= *birth) continue;
+            box->addItem(a.name.empty() ? toQString(a.id) : toQString(a.id) + QStringLiteral(" (") + toQString(a.name) + ')',
+                         toQString(a.id));
+        }
+        const int i = box->findData(current);
+        box->setCurrentIndex(i < 0 ? 0 : i);
+    }
+}
+
+void AnimalEditorDialog::loadAnimal(const QString& id)
+{
+    const auto& colony = facade_->document()->colony();
+    const int i = colony.animalIndex(toStdString(id.trimmed()));
+    if (i < 0) {
+        show({{"id", "'" + toStdString(id.trimmed()) + "' is not an animal of the colony"}});
+        return;
+    }
+    loaded_ = colony.animals[static_cast<size_t>(i)];
+    uid_ = loaded_.uid;
+    id_->setText(toQString(loaded_.id));
+    name_->setText(toQString(loaded_.name));
+    sex_->setCurrentIndex(sex_->findData(QString::fromLatin1(core::toString(loaded_.sex))));
+    birth_->setText(dayText(loaded_.birth));
+    entry_->setText(dayText(loaded_.entry));
+    entryType_->setCurrentIndex(std::max(0, entryType_->findData(QString::fromLatin1(core::toString(loaded_.entryType)))));
+    exit_->setText(dayText(loaded_.exit));
+    exitType_->setCurrentIndex(std::max(0, exitType_->findData(QString::fromLatin1(core::toString(loaded_.exitType)))));
+    refillParents();
+    mother_->setCurrentIndex(std::max(0, mother_->findData(toQString(loaded_.mother))));
+    father_->setCurrentIndex(std::max(0, father_->findData(toQString(loaded_.father))));
+    show({});
+}
+
+std::optional<core::Day> AnimalEditorDialog::dateOf(QLineEdit* edit, const char* field, core::FieldProblems& problems) const
+{
+    const QString text = edit->text().trimmed();
+    if (text.isEmpty()) return std::nullopt;
+    const auto d = core::parseDate(toStdString(text));
+    if (!d) problems.push_back({field, "'" + toStdString(text) + "' is not a real date in the form YYYY-MM-DD"});
+    return d;
+}
+
+void AnimalEditorDialog::show(const core::FieldProblems& problems)
+{
+    for (QLabel* l : messages_) l->hide();
+    general_->hide();
+    for (const core::FieldProblem& p : problems) {
+        QLabel* l = messages_.value(QString::fromStdString(p.field), general_);
+        l->setText(!l->isHidden() ? l->text() + '\n' + toQString(p.message) : toQString(p.message));
+        l->show();
+    }
+}
+
+QString AnimalEditorDialog::fieldMessage(const QString& field) const
+{
+    const QLabel* l = messages_.value(field, general_);
+    return !l->isHidden() ? l->text() : QString();
+}
+
+void AnimalEditorDialog::accept()
+{
+    core::FieldProblems problems;
+    core::Animal a = mode_ == Mode::Edit ? loaded_ : core::Animal{};
+    if (mode_ == Mode::Edit && uid_.empty()) problems.push_back({"id", "is empty; choose the animal to edit"});
+    a.id = toStdString(id_->text().trimmed());
+    a.name = toStdString(name_->text().trimmed());
+    a.sex = core::parseSex(toStdString(sex_->currentData().toString())).value_or(core::Sex::Unknown);
+    a.birth = dateOf(birth_, "birth_date", problems);
+    a.mother = toStdString(mother_->currentData().toString());
+    a.father = toStdString(father_->currentData().toString());
+    a.entry = dateOf(entry_, "entry_date", problems);
+    a.entryType = core::parseEntryType(toStdString(entryType_->currentData().toString())).value_or(core::EntryType::None);
+    if (mode_ == Mode::Edit) {
+        a.exit = dateOf(exit_, "exit_date", problems);
+        a.exitType = core::parseExitType(toStdString(exitType_->currentData().toString())).value_or(core::ExitType::None);
+    }
+    if (problems.empty()) {
+        const std::string group = toStdString(group_->currentText().trimmed());
+        switch (mode_) {
+        case Mode::Add: problems = facade_->addAnimal(a, group); break;
+        case Mode::Edit: problems = facade_->editAnimal(a); break;
+        case Mode::Birth: problems = facade_->recordBirth(a); break;
+        case Mode::Introduction: problems = facade_->introduceAnimal(a, group); break;
+        }
+    }
+    show(problems);
+    if (problems.empty()) QDialog::accept();
+}
+
+LifeEventDialog::LifeEventDialog(ColonyEditFacade* facade, Event event, QWidget* parent)
+    : QDialog(parent),
+      facade_(facade),
+      event_(event),
+      animal_(new QComboBox(this)),
+      date_(newDateEdit(this)),
+      group_(new QComboBox(this)),
+      message_(messageLabel(this))
+{
+    const QStringList titles{tr("Record Death"), tr("Record Removal"), tr("Move Between Groups")};
+    setWindowTitle(titles[static_cast<int>(event)]);
+    // Only animals still in the colony can die, leave or move.
+    for (const core::Animal& a : facade_->document()->colony().animals)
+        if (!a.exit) animal_->addItem(toQString(a.id));
+    animal_->setEditable(true);
+    animal_->setInsertPolicy(QComboBox::NoInsert);
+    date_->setText(formatDay(facade_->today()));
+    group_->setEditable(true);
+    group_->addItems(groupNames(facade_->document()));
+    auto* form = new QFormLayout;
+    auto row = [&](const QString& text, QWidget* w) {
+        auto* l = new QLabel(text, this);
+        l->setBuddy(w);
+        form->addRow(l, w);
+    };
+    row(tr("&Animal:"), animal_);
+    row(tr("&Date:"), date_);
+    if (event == Event::Move) row(tr("To &group:"), group_);
+    else group_->hide();
+    auto* buttons = new QDialogButtonBox(QDialogButtonBox::Ok | QDialogButtonBox::Cancel, this);
+    connect(buttons, &QDialogButtonBox::accepted, this, &LifeEventDialog::accept);
+    connect(buttons, &QDialogButtonBox::rejected, this, &QDialog::reject);
+    auto* layout = new QVBoxLayout(this);
+    layout->addLayout(form);
+    layout->addWidget(message_);
+    layout->addWidget(buttons);
+}
+
+QString LifeEventDialog::message() const { return !message_->isHidden() ? message_->text() : QString(); }
+
+void LifeEventDialog::accept()
+{
+    const std::string id = toStdString(animal_->currentText().trimmed());
+    const QString text = date_->text().trimmed();
+    const auto day = core::parseDate(toStdString(text));
+    core::FieldProblems problems;
+    if (!day) problems.push_back({"date", "'" + toStdString(text) + "' is not a real date in the form YYYY-MM-DD"});
+    else if (event_ == Event::Move) problems = facade_->moveAnimal(id, toStdString(group_->currentText().trimmed()), *day);
+    else problems = facade_->recordExit(id, *day, event_ == Event::Death ? core::ExitType::Died : core::ExitType::Removed);
+    if (problems.empty()) {
+        QDialog::accept();
+        return;
+    }
+    QStringList lines;
+    for (const auto& p : problems) lines << toQString(p.field.empty() ? p.message : p.field + ": " + p.message);
+    message_->setText(lines.join('\n'));
+    message_->show();
+}
+
+} // namespace hierloom::ui

@@ -1,0 +1,127 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#include "ui/records/encounter_table_model.h"
+
+#include "ui/document/colony_document.h"
+#include "ui/document/qt_convert.h"
+
+#include <algorithm>
+#include <set>
+#include <string_view>
+
+namespace hierloom::ui {
+
+EncounterTableModel::EncounterTableModel(const ColonyDocument* document, QObject* parent)
+    : QAbstractTableModel(parent), document_(document)
+{
+    connect(document_, &ColonyDocument::changed, this, &EncounterTableModel::rebuild);
+    rebuild();
+}
+
+void EncounterTableModel::rebuild()
+{
+    const auto& encounters = document_->colony().encounters;
+    const ColonyDocument::Change& change = document_->lastChange();
+    if (change.kind == ColonyDocument::Change::EncountersAppended && change.firstAppended == newestFirst_.size()) {
+        // An evening entry appends a row: place it (and tell the view of one
+        // inserted row) instead of re-sorting and resetting a million.
+        const auto newer = [&](size_t a, size_t b) { return core::encounterBefore(encounters[b], encounters[a]); };
+        for (size_t i = change.firstAppended; i < encounters.size(); ++i) {
+            newestFirst_.insert(std::upper_bound(newestFirst_.begin(), newestFirst_.end(), i, newer), i);
+            if (filter_ == EncounterFilter{} || filter_.accepts(encounters[i])) {
+                const auto at = std::upper_bound(rows_.begin(), rows_.end(), i, newer);
+                const int row = static_cast<int>(at - rows_.begin());
+                beginInsertRows(QModelIndex(), row, row);
+                rows_.insert(at, i);
+                endInsertRows();
+            }
+            const QString name = toQString(encounters[i].observer);
+            const auto o = std::lower_bound(observers_.begin(), observers_.end(), name);
+            if (o == observers_.end() || *o != name) observers_.insert(o, name);
+        }
+        return;
+    }
+    if (change.kind == ColonyDocument::Change::AnimalsChanged || change.kind == ColonyDocument::Change::ListsChanged) {
+        if (newestFirst_.size() == encounters.size()) return; // the encounters are as they were
+    }
+    beginResetModel();
+    newestFirst_ = core::chronologicalOrder(encounters);
+    std::reverse(newestFirst_.begin(), newestFirst_.end());
+    std::set<std::string_view> names;
+    for (const core::Encounter& e : encounters) names.insert(e.observer);
+    observers_.clear();
+    for (std::string_view n : names) observers_.append(QString::fromUtf8(n.data(), static_cast<qsizetype>(n.size())));
+    applyFilter();
+    endResetModel();
+}
+
+void EncounterTableModel::setFilter(const EncounterFilter& filter)
+{
+    if (filter == filter_) return;
+    beginResetModel();
+    filter_ = filter;
+    applyFilter();
+    endResetModel();
+}
+
+void EncounterTableModel::applyFilter()
+{
+    const auto& encounters = document_->colony().encounters;
+    rows_.clear();
+    if (filter_ == EncounterFilter{}) {
+        rows_ = newestFirst_;
+        return;
+    }
+    for (size_t i : newestFirst_)
+        if (filter_.accepts(encounters[i])) rows_.push_back(i);
+}
+
+const core::Encounter& EncounterTableModel::encounterAt(int row) const
+{
+    return document_->colony().encounters[rows_.at(static_cast<size_t>(row))];
+}
+
+int EncounterTableModel::rowCount(const QModelIndex& parent) const
+{
+    return parent.isValid() ? 0 : static_cast<int>(rows_.size());
+}
+
+int EncounterTableModel::columnCount(const QModelIndex& parent) const { return parent.isValid() ? 0 : ColumnCount; }
+
+QVariant EncounterTableModel::data(const QModelIndex& index, int role) const
+{
+    if (!index.isValid() || index.row() >= rowCount()) return {};
+    if (role == Qt::ToolTipRole && index.column() == Note) return toQString(encounterAt(index.row()).note);
+    if (role != Qt::DisplayRole) return {};
+    const core::Encounter& e = encounterAt(index.row());
+    switch (index.column()) {
+    case Date: return formatDay(e.date);
+    case Time: return e.time ? toQString(core::formatTimeOfDay(*e.time)) : QString();
+    case Winner: return toQString(e.winner);
+    case Loser: return toQString(e.loser);
+    case Outcome: return e.outcome == core::Outcome::Draw ? tr("draw") : tr("decided");
+    case Behaviour: return toQString(e.behaviour);
+    case Group: return toQString(e.group);
+    case Observer: return toQString(e.observer);
+    case Note: return toQString(e.note);
+    default: return {};
+    }
+}
+
+QVariant EncounterTableModel::headerData(int section, Qt::Orientation orientation, int role) const
+{
+    if (orientation != Qt::Horizontal || role != Qt::DisplayRole) return {};
+    switch (section) {
+    case Date: return tr("Date");
+    case Time: return tr("Time");
+    case Winner: return tr("Winner");
+    case Loser: return tr("Loser");
+    case Outcome: return tr("Outcome");
+    case Behaviour: return tr("Behaviour");
+    case Group: return tr("Group");
+    case Observer: return tr("Observer");
+    case Note: return tr("Note");
+    default: return {};
+    }
+}
+
+} // namespace hierloom::ui

@@ -1,0 +1,51 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#pragma once
+#include "ui/records/encounter_filter.h"
+
+#include <QAbstractTableModel>
+#include <QStringList>
+
+#include <vector>
+
+namespace hierloom::ui {
+
+class ColonyDocument;
+
+/// The colony's encounters, newest first (the reverse of the analysis order:
+/// date, time, entry order). Built for a million rows: cells are formatted
+/// only when a view asks for them, and the filter keeps a vector of row
+/// indices instead of testing rows one by one through a proxy.
+class EncounterTableModel : public QAbstractTableModel {
+    Q_OBJECT
+public:
+    enum Column { Date, Time, Winner, Loser, Outcome, Behaviour, Group, Observer, Note, ColumnCount };
+
+    explicit EncounterTableModel(const ColonyDocument* document, QObject* parent = nullptr);
+
+    int rowCount(const QModelIndex& parent = {}) const override;
+    int columnCount(const QModelIndex& parent = {}) const override;
+    QVariant data(const QModelIndex& index, int role = Qt::DisplayRole) const override;
+    QVariant headerData(int section, Qt::Orientation orientation, int role = Qt::DisplayRole) const override;
+
+    void setFilter(const EncounterFilter& filter);
+    const EncounterFilter& filter() const { return filter_; }
+
+    /// Every encounter of the colony, whether shown or not.
+    int totalCount() const { return static_cast<int>(newestFirst_.size()); }
+    /// The encounter shown in a row.
+    const core::Encounter& encounterAt(int row) const;
+    /// Distinct observers, sorted, for the observer choice.
+    const QStringList& observers() const { return observers_; }
+
+private:
+    void rebuild();
+    void applyFilter();
+
+    const ColonyDocument* document_;
+    EncounterFilter filter_;
+    std::vector<size_t> newestFirst_; // indices into colony().encounters
+    std::vector<size_t> rows_;        // the filtered subset, still newest first
+    QStringList observers_;
+};
+
+} // namespace hierloom::ui
