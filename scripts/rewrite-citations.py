@@ -56,9 +56,9 @@ DOCS_CITATION = re.compile(r"(?<![\w.-])docs/[a-z-]+\.md\b")
 CHECK_VALUES = re.compile(
     r"(?<![\w./-])(?:(?:/work/)?shared/)?check-values(?:\.md)?"
     r"(?P<tail>(?:,?[ \t]+(?:section[ \t]+)?(?P<num>\d{1,2}[a-z]?)\b)?)")
-# A quoted section right after the note's name: `, "X"`, ` "X"`, ` ("X"`. The
-# quote may run over a line break with a comment leader (///, //, *, #).
-SECTION = re.compile(r'(?P<lead>,?[ \t]*\(?[ \t]*)"(?P<name>[^"\n]{1,80}(?:\n[ \t]*(?:///|//|\*|#)?[ \t]*[^"\n]{1,80})?)"')
+# A quoted section right after the note's name: `, "X"`, ` "X"`, ` ("X"`. A line
+# break with a comment leader (///, //, *, #) may come before or inside the quote.
+SECTION = re.compile(r'(?P<lead>,?(?:[ \t]*\n[ \t]*(?:///|//|\*|#))?[ \t]*\(?[ \t]*)"(?P<name>[^"\n]{1,80}(?:\n[ \t]*(?:///|//|\*|#)?[ \t]*[^"\n]{1,80})?)"')
 LEADER = re.compile(r"\s*\n\s*(?:///|//|\*|#)?\s*")
 
 
