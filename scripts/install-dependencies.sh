@@ -5,7 +5,7 @@ set -euo pipefail
 packages=(
   build-essential cmake ninja-build pkg-config
   qt6-base-dev qt6-svg-dev libqt6svg6-dev qt6-tools-dev qt6-tools-dev-tools qt6-l10n-tools
-  libqcustomplot-dev libsqlite3-dev sqlite3 libcli11-dev
+  libqcustomplot-dev libsqlite3-dev sqlite3 libcli11-dev libboost-dev
   libgtest-dev libgmock-dev libbenchmark-dev
   clang libclang-rt-14-dev
   xvfb xauth imagemagick poppler-utils

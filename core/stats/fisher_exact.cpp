@@ -1,22 +1,19 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "core/stats/fisher_exact.h"
 
+#include <boost/math/distributions/hypergeometric.hpp>
+
 #include <algorithm>
-#include <cmath>
+#include <limits>
 #include <vector>
 
 namespace hierloom::core {
 
 namespace {
 
-double logFactorial(std::int64_t n)
-{
-    return std::lgamma(static_cast<double>(n) + 1.0);
-}
-
 // Tables that differ from the observed one only by rounding error count as equally
 // probable; without this the two-sided p of symmetric tables would depend on the
-// last bit of lgamma.
+// last bit of the probabilities.
 constexpr double kRelativeTolerance = 1e-7;
 
 } // namespace
@@ -27,7 +24,7 @@ std::optional<FisherExactResult> fisherExact(std::int64_t a, std::int64_t b, std
     if (a < 0 || b < 0 || c < 0 || d < 0)
         return std::nullopt;
     const std::int64_t n = a + b + c + d;
-    if (n == 0)
+    if (n == 0 || n > std::numeric_limits<unsigned>::max())
         return std::nullopt;
     const std::int64_t row1 = a + b;
     const std::int64_t row2 = c + d;
@@ -35,30 +32,22 @@ std::optional<FisherExactResult> fisherExact(std::int64_t a, std::int64_t b, std
     const std::int64_t lo = std::max<std::int64_t>(0, col1 - row2);
     const std::int64_t hi = std::min(row1, col1);
 
-    // log P(A = x) = log C(row1, x) + log C(row2, col1 - x) - log C(n, col1).
-    const double logDenominator = logFactorial(n) - logFactorial(col1) - logFactorial(n - col1);
-    const double logRowConstant = logFactorial(row1) + logFactorial(row2);
-    std::vector<double> logP;
-    logP.reserve(static_cast<std::size_t>(hi - lo + 1));
-    for (std::int64_t x = lo; x <= hi; ++x) {
-        const double v = logRowConstant - logFactorial(x) - logFactorial(row1 - x)
-                         - logFactorial(col1 - x) - logFactorial(row2 - col1 + x) - logDenominator;
-        logP.push_back(v);
-    }
-    // Scale by the most probable table so that no term underflows before summing.
-    const double logMax = *std::max_element(logP.begin(), logP.end());
-    std::vector<double> p(logP.size());
-    double total = 0.0;
-    for (std::size_t i = 0; i < p.size(); ++i) {
-        p[i] = std::exp(logP[i] - logMax);
-        total += p[i];
-    }
+    // Given the margins, `a` is hypergeometric: row1 draws from n tables' worth of
+    // items of which col1 are in the first column (Boost.Math's parameters r, n, N).
+    const boost::math::hypergeometric_distribution<double> h(
+        static_cast<unsigned>(col1), static_cast<unsigned>(row1), static_cast<unsigned>(n));
+    std::vector<double> p;
+    p.reserve(static_cast<std::size_t>(hi - lo + 1));
+    for (std::int64_t x = lo; x <= hi; ++x)
+        p.push_back(boost::math::pdf(h, static_cast<unsigned>(x)));
     const std::size_t obs = static_cast<std::size_t>(a - lo);
     const double threshold = p[obs] * (1.0 + kRelativeTolerance);
     double less = 0.0;
     double greater = 0.0;
     double two = 0.0;
+    double total = 0.0;
     for (std::size_t i = 0; i < p.size(); ++i) {
+        total += p[i];
         if (i <= obs)
             less += p[i];
         if (i >= obs)
@@ -66,6 +55,7 @@ std::optional<FisherExactResult> fisherExact(std::int64_t a, std::int64_t b, std
         if (p[i] <= threshold)
             two += p[i];
     }
+    // Dividing by the sum (1 up to rounding) keeps the three p values consistent.
     FisherExactResult r;
     r.less = std::min(1.0, less / total);
     r.greater = std::min(1.0, greater / total);

@@ -42,3 +42,11 @@ TEST(NormalDistribution, TwoSidedAndChiSquareAgree)
     EXPECT_DOUBLE_EQ(chiSquare1UpperP(-1.0), 1.0);
     EXPECT_DOUBLE_EQ(twoSidedNormalP(0.0), 1.0);
 }
+
+TEST(NormalDistribution, TwoSidedPToTheLastDigitsOfArbitraryPrecision)
+{
+    // Reference: erfc(|z| / sqrt 2) evaluated with 40 digits by mpmath [computed].
+    EXPECT_NEAR(twoSidedNormalP(-1.4179520454417285), 0.1562047658522882149340862055566593381048, 1e-16);
+    EXPECT_NEAR(twoSidedNormalP(3.5) / 0.0004652581580710500726998517734559695470975, 1.0, 1e-15);
+    EXPECT_NEAR(twoSidedNormalP(0.25), 0.8025873486341525515182924168379325214359, 1e-15);
+}
