@@ -94,6 +94,7 @@ TEST(EditFacade, EveryKindOfWriteIsOneCommandAndOneChangeAndUndoRestoresTheFile)
 {
     Facade f;
     core::Encounter e = encounter("2020-05-01", "F1", "D1");
+    e.observer = "ZZ"; // not on the observer list yet: the write adds it, the undo takes it off again
     {
         SCOPED_TRACE("add encounter");
         checkUndoableWrite(f, Kind::EncountersAppended, [&] { return f.facade.addEncounter(e); });

@@ -2,7 +2,7 @@
 // A small hand-made colony for the edit facade tests, and the whole content
 // of a colony file read back by a fresh connection, as one comparable text.
 #pragma once
-#include "core/base/date.h"
+#include "core/base/civil_date.h"
 #include "core/store/colony_import.h"
 #include "core/store/colony_store.h"
 #include "core/store/saved_scenarios.h"

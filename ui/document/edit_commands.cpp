@@ -40,7 +40,17 @@ void EncounterChangeCommand::apply(bool forward)
     // redos write them with the same, so later commands still find them.
     std::vector<core::Encounter> in = forward ? inserted_ : removed_;
     const std::vector<core::Encounter>& out = forward ? removed_ : inserted_;
+    // Writing an encounter adds its observer to the observer list; later
+    // undos and redos put the list back as it was on their side of the command.
+    const bool first = !observersKnown_;
+    if (first) observersBefore_ = store().observers();
     core::writeEncounterChange(store(), out, in);
+    if (first) {
+        observersAfter_ = store().observers();
+        observersKnown_ = true;
+    } else if (const Names& list = forward ? observersAfter_ : observersBefore_; store().observers() != list) {
+        core::writeObservers(store(), list);
+    }
     if (forward) inserted_ = in;
     applyEncounterChange(out, in);
 }

@@ -58,8 +58,11 @@ protected:
     void apply(bool forward) override;
 
 private:
+    using Names = std::vector<std::string>;
     std::vector<core::Encounter> removed_;
     std::vector<core::Encounter> inserted_;
+    bool observersKnown_ = false; // set by the first redo()
+    Names observersBefore_, observersAfter_;
 };
 
 /// Replaces one animal's record and stays (add, edit, birth, exit, introduction, move).
