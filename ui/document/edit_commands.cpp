@@ -18,7 +18,12 @@ void ColonyCommand::run(bool forward)
         apply(forward);
     } catch (const std::exception& error) {
         // The file is whole (each write is one transaction); show what it holds.
-        document_->reload();
+        // No exception may leave redo()/undo() through QUndoStack, so a file
+        // that cannot be read either keeps the cache and the message below says why.
+        try {
+            document_->reload();
+        } catch (const std::exception&) {
+        }
         if (first) {
             first->push_back({"", error.what()});
             setObsolete(true); // never written, so nothing to undo: QUndoStack::push drops it
