@@ -3,7 +3,8 @@
 # Checks the direction of the layers (docs/architecture.md) from the #include
 # lines of the sources: a folder may include only itself and the folders
 # listed for it. Also: no SQLite outside core/store (and the tests), no Qt in
-# core/. Prints every violation as FILE:LINE: what; exits 1 if there is any.
+# core/, no colony writes in ui/ outside ui/document. Prints every violation
+# as FILE:LINE: what; exits 1 if there is any.
 set -uo pipefail
 cd "${1:-$(dirname "$0")/../..}"
 declare -A allowed=(
@@ -50,5 +51,15 @@ while IFS= read -r hit; do echo "$hit: SQLite outside core/store"; status=1; don
 # core/ knows nothing of Qt.
 while IFS= read -r hit; do echo "$hit: Qt in core/"; status=1; done \
   < <(grep -rn '#include <Q' core --include=*.h --include=*.cpp)
-[ $status -eq 0 ] && echo "layers: every #include follows docs/architecture.md"
+# In the desktop only ui/document writes to a colony file: ColonyDocument
+# hands out a const store, so the compiler refuses a write elsewhere; this
+# catches the ways around that (casting const away, the writer side of the
+# document, a second connection of one's own, core writes on a path).
+while IFS= read -r hit; do echo "$hit: writes outside ui/document (go through ColonyEditFacade)"; status=1; done \
+  < <(grep -rnE 'const_cast|writableStore|ColonyStore::(open|create)\(|core::(writeEncounterChange|writeAnimalChange|commitAnimalChange|insertEncounters|updateEncounter|deleteEncounters|writeBehaviourCodes|writeObservers|writeStabilityThresholds|writeSpeciesSettings|saveScenarioText|deleteSavedScenario|writeSettingValues|importFiles|mergeColonies|restoreBackup)\b|setSetting\(|setUserName\(' \
+        ui --include=*.h --include=*.cpp | grep -v '^ui/document/')
+# ... and the store it hands out stays const.
+grep -qE '^ *const core::ColonyStore\* store\(\) const' ui/document/colony_document.h ||
+  { echo "ui/document/colony_document.h: store() must return a const store"; status=1; }
+[ $status -eq 0 ] && echo "layers: every #include follows docs/architecture.md; only ui/document writes"
 exit $status

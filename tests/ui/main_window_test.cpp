@@ -190,7 +190,7 @@ TEST(MainWindow, FailedImportListsProblemsAndChangesNothing)
     const std::string bad = dir.write("bad.csv", "date,winner,loser\n"
                                                  "2021-06-01,F1,ZZ\n"   // unknown loser
                                                  "2021-06-02,F2,F2\n"); // winner is loser
-    ui::ImportDialog dialog(window.document(), &window);
+    ui::ImportDialog dialog(window.editFacade(), &window);
     dialog.setEncountersPath(QString::fromStdString(bad));
     EXPECT_FALSE(dialog.runImport());
     EXPECT_GE(dialog.problemCount(), 2);
@@ -209,7 +209,7 @@ TEST(MainWindow, SuccessfulImportUpdatesTheViews)
     TestWindow window;
     ASSERT_TRUE(window.openColony(QString::fromStdString(makeColony(dir))));
     const std::string more = dir.write("more.csv", "date,time,winner,loser\n2023-03-03,07:15,D2,F2\n");
-    ui::ImportDialog dialog(window.document(), &window);
+    ui::ImportDialog dialog(window.editFacade(), &window);
     dialog.setEncountersPath(QString::fromStdString(more));
     EXPECT_TRUE(dialog.runImport()) << dialog.problemText().toStdString();
     EXPECT_EQ(dialog.problemCount(), 0);
@@ -243,7 +243,7 @@ TEST(MainWindow, ReadOnlyColonyRefusesImport)
     TestWindow window;
     ASSERT_TRUE(window.openColony(QString::fromStdString(makeColony(dir)), true));
     EXPECT_TRUE(window.document()->isReadOnly());
-    ui::ImportDialog dialog(window.document(), &window);
+    ui::ImportDialog dialog(window.editFacade(), &window);
     dialog.setEncountersPath(QString::fromStdString(dir.write("more.csv", "date,winner,loser\n2023-03-03,D2,F2\n")));
     EXPECT_FALSE(dialog.runImport());
     EXPECT_EQ(window.document()->store()->encounterCount(), 5);

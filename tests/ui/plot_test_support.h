@@ -5,6 +5,7 @@
 #include "core/demo/demo_colony_file.h"
 #include "tests/core/import_test_support.h"
 #include "ui/document/colony_document.h"
+#include "ui/document/colony_edit_facade.h"
 #include "ui/document/compute_runner.h"
 
 #include <QString>
@@ -22,12 +23,15 @@ public:
         document_.open(QString::fromStdString(path_));
     }
     ui::ColonyDocument* document() { return &document_; }
+    /// The one writer of the document, for views that store settings.
+    ui::ColonyEditFacade* facade() { return &facade_; }
     const std::string& path() const { return path_; }
 
 private:
     TempDir dir_;
     std::string path_;
     ui::ColonyDocument document_;
+    ui::ColonyEditFacade facade_{&document_};
 };
 
 /// Lets a view's computation end and its result be shown, as the event loop would.

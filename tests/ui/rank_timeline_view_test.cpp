@@ -284,7 +284,7 @@ TEST_F(TimelineViewTest, UpdatesOnDocumentChangeAndCancelKeepsTheOldResult)
     ui::RankTimelineView view(demo.document(), &selection);
     finish(view.runner());
     const size_t females = view.timeline().females.size();
-    // An encounter in a new month, written through the store, then the one change signal.
+    // An encounter in a new month, written by another connection, then the document re-reads the file.
     core::Encounter e;
     e.date = core::dayFromCivil(2026, 1, 20);
     e.winner = core::demoColonyFacts().matriarchs.at('A');
@@ -292,7 +292,7 @@ TEST_F(TimelineViewTest, UpdatesOnDocumentChangeAndCancelKeepsTheOldResult)
     std::vector<core::Animal> noAnimals;
     std::vector<core::Residence> noResidences;
     std::vector<core::Encounter> one{e};
-    demo.document()->store()->append(noAnimals, noResidences, one);
+    core::ColonyStore::open(demo.path()).append(noAnimals, noResidences, one);
     demo.document()->reload();
     finish(view.runner());
     EXPECT_EQ(view.timeline().checkpoints.size(), 85u); // one more month

@@ -11,6 +11,7 @@
 #include "ui/records/animal_view.h"
 #include "ui/shell/backup_actions.h"
 #include "ui/document/colony_document.h"
+#include "ui/document/colony_edit_facade.h"
 #include "ui/entry/encounter_entry_panel.h"
 #include "ui/records/encounter_view.h"
 #include "ui/shell/main_window.h"
@@ -19,6 +20,7 @@
 
 #include <QAction>
 #include <QComboBox>
+#include <QStatusBar>
 #include <QTableView>
 #include <QTableWidget>
 #include <QUndoStack>
@@ -185,8 +187,11 @@ TEST(ReliabilityUi, MergeDialogAddsTheOtherFilesNewEncounter)
     TestWindow window;
     ASSERT_TRUE(window.openColony(QString::fromStdString(ours)));
     ASSERT_EQ(window.encounterView()->visibleRowCount(), 3);
+    // An edit in the undo history, which the merge will have to clear.
+    ASSERT_TRUE(window.editFacade()->setObservers({"GW"}).empty());
+    ASSERT_EQ(window.document()->undoStack()->count(), 1);
 
-    ui::MergeDialog dialog(window.document(), &window);
+    ui::MergeDialog dialog(window.editFacade(), &window);
     ASSERT_TRUE(dialog.check(QString::fromStdString(theirs))) << dialog.errorText().toStdString();
     // The dry run: one new encounter, everything else already here, nothing written yet.
     EXPECT_FALSE(dialog.report().written);
@@ -203,12 +208,14 @@ TEST(ReliabilityUi, MergeDialogAddsTheOtherFilesNewEncounter)
     EXPECT_EQ(window.document()->colony().encounters.size(), 4u);
     EXPECT_EQ(window.encounterView()->visibleRowCount(), 4);
     EXPECT_EQ(window.document()->undoStack()->count(), 0);
+    EXPECT_TRUE(window.statusBar()->currentMessage().contains(QStringLiteral("merge")))
+        << window.statusBar()->currentMessage().toStdString();
     const auto& added = window.document()->colony().encounters.back();
     EXPECT_EQ(added.winner, "D1");
     EXPECT_EQ(added.loser, "F2");
 
     // Merging the same file again adds nothing.
-    ui::MergeDialog again(window.document(), &window);
+    ui::MergeDialog again(window.editFacade(), &window);
     ASSERT_TRUE(again.check(QString::fromStdString(theirs)));
     EXPECT_TRUE(again.report().addedEncounters.empty());
     EXPECT_EQ(again.report().skippedEncounters, 4u) << again.reportText().toStdString();
@@ -231,8 +238,8 @@ TEST(ReliabilityUi, HistoryListsTheInsertOfANewAnimal)
     a.sex = core::Sex::Female;
     a.entry = core::parseDate("2023-01-01");
     a.entryType = core::EntryType::Founder;
-    window.document()->store()->append({a}, {}, {});
-    window.document()->reload();
+    const core::FieldProblems added = window.editFacade()->addAnimal(a, "");
+    ASSERT_TRUE(added.empty()) << added.front().message;
 
     ui::AnimalView* view = window.animalView();
     QAbstractItemModel* model = view->table()->model();
@@ -290,8 +297,8 @@ TEST(ReliabilityUi, RestoreFromBackupAsksThenPutsTheBackupBack)
     a.sex = core::Sex::Male;
     a.entry = core::parseDate("2023-01-01");
     a.entryType = core::EntryType::Founder;
-    window.document()->store()->append({a}, {}, {});
-    window.document()->reload();
+    const core::FieldProblems added = window.editFacade()->addAnimal(a, "");
+    ASSERT_TRUE(added.empty()) << added.front().message;
     ASSERT_EQ(window.document()->colony().animals.size(), 4u);
 
     // Declined: nothing changes.
@@ -308,4 +315,8 @@ TEST(ReliabilityUi, RestoreFromBackupAsksThenPutsTheBackupBack)
     EXPECT_EQ(window.document()->colony().animals.size(), 3u);
     EXPECT_EQ(window.animalView()->visibleRowCount(), 3);
     EXPECT_TRUE(window.errors.isEmpty()) << window.errors.join('\n').toStdString();
+    // The added animal's undo step is gone, and the status bar says why.
+    EXPECT_EQ(window.document()->undoStack()->count(), 0);
+    EXPECT_TRUE(window.statusBar()->currentMessage().contains(QStringLiteral("restored from a backup")))
+        << window.statusBar()->currentMessage().toStdString();
 }

@@ -49,7 +49,7 @@ std::string readFile(const std::string& path)
 TEST(SexRatioView, FiguresAreTheCoreFigures)
 {
     DemoDocument demo;
-    ui::SexRatioView view(demo.document());
+    ui::SexRatioView view(demo.facade());
     const core::SpeciesProfile* rhesus = core::findSpecies(core::kDefaultSpeciesKey);
     ASSERT_NE(rhesus, nullptr);
     const auto births = coreBirths(demo.document(), rhesus->gestationDays, rhesus->maturityYears);
@@ -103,7 +103,7 @@ TEST(SexRatioView, FiguresAreTheCoreFigures)
 TEST(SexRatioView, SpeciesSettingChangesTheFiguresAndIsSaved)
 {
     DemoDocument demo;
-    ui::SexRatioView view(demo.document());
+    ui::SexRatioView view(demo.facade());
     // Another species brings its own defaults (species_profile.h), and the figures follow.
     const core::SpeciesProfile& other = core::knownSpecies().at(1);
     view.setSpecies(ui::toQString(other.key));

@@ -2,6 +2,7 @@
 #include "ui/analysis/analysis_views.h"
 
 #include "ui/document/animal_selection.h"
+#include "ui/document/colony_edit_facade.h"
 #include "ui/analysis/hierarchy_plots_view.h"
 #include "ui/analysis/matrix_view.h"
 #include "ui/analysis/prediction_view.h"
@@ -12,8 +13,9 @@
 
 namespace hierloom::ui {
 
-AnalysisViews addAnalysisViews(QTabWidget* tabs, ColonyDocument* document, QObject* owner)
+AnalysisViews addAnalysisViews(QTabWidget* tabs, ColonyEditFacade* facade, QObject* owner)
 {
+    ColonyDocument* document = facade->document();
     AnalysisViews v;
     v.selection = new AnimalSelection(owner);
     v.timeline = new RankTimelineView(document, v.selection, tabs);
@@ -28,7 +30,7 @@ AnalysisViews addAnalysisViews(QTabWidget* tabs, ColonyDocument* document, QObje
     tabs->addTab(v.prediction, QObject::tr("Prediction"));
     tabs->addTab(v.matrix, QObject::tr("Matrix"));
     tabs->addTab(v.hierarchy, QObject::tr("Hierarchy"));
-    v.sexRatio = new SexRatioView(document, tabs);
+    v.sexRatio = new SexRatioView(facade, tabs);
     tabs->addTab(v.sexRatio, QObject::tr("Sex Ratio"));
     return v;
 }

@@ -6,7 +6,7 @@ class QTabWidget;
 namespace hierloom::ui {
 
 class AnimalSelection;
-class ColonyDocument;
+class ColonyEditFacade;
 class HierarchyPlotsView;
 class MatrixView;
 class PredictionView;
@@ -25,6 +25,7 @@ struct AnalysisViews {
 
 /// Creates the Timeline, Prediction, Matrix, Hierarchy and Sex Ratio tabs (in that
 /// order, named by objectName "timeline", "prediction", "matrix", "hierarchy", "sex-ratio").
-AnalysisViews addAnalysisViews(QTabWidget* tabs, ColonyDocument* document, QObject* owner);
+/// The Sex Ratio tab stores its species setting through `facade`.
+AnalysisViews addAnalysisViews(QTabWidget* tabs, ColonyEditFacade* facade, QObject* owner);
 
 } // namespace hierloom::ui

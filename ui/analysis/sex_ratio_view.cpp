@@ -4,6 +4,7 @@
 #include "core/research/export_tables.h"
 #include "core/store/species_settings.h"
 #include "ui/document/colony_document.h"
+#include "ui/document/colony_edit_facade.h"
 #include "ui/widgets/help_button.h"
 #include "ui/widgets/plot_export.h"
 #include "ui/document/qt_convert.h"
@@ -84,9 +85,10 @@ core::MaternalRankOptions documentMaternalOptions(const std::string& group, int 
     return m;
 }
 
-SexRatioView::SexRatioView(ColonyDocument* document, QWidget* parent)
+SexRatioView::SexRatioView(ColonyEditFacade* facade, QWidget* parent)
     : QWidget(parent),
-      document_(document),
+      facade_(facade),
+      document_(facade->document()),
       species_(new QComboBox(this)),
       gestation_(new QSpinBox(this)),
       maturity_(new QSpinBox(this)),
@@ -260,16 +262,16 @@ void SexRatioView::setGroup(const QString& group) { group_->setCurrentIndex(std:
 
 bool SexRatioView::saveSpeciesSetting()
 {
-    core::ColonyStore* store = document_->store();
-    if (!store || document_->isReadOnly()) return false;
+    if (!document_->isOpen() || document_->isReadOnly()) return false;
     const std::string key = toStdString(species_->currentData().toString());
     const core::SpeciesProfile* p = core::findSpecies(key);
     if (!p) return false;
     // Only values that differ from the species default are stored as overrides.
     const std::optional<int> g = gestation_->value() != p->gestationDays ? std::optional<int>(gestation_->value()) : std::nullopt;
     const std::optional<int> m = maturity_->value() != p->maturityYears ? std::optional<int>(maturity_->value()) : std::nullopt;
-    core::writeSpeciesSettings(*store, key, g, m);
-    return true;
+    const core::FieldProblems problems = facade_->setSpeciesSetting(key, g, m);
+    if (!problems.empty()) message_->setText(toQString(problems.front().message));
+    return problems.empty();
 }
 
 void SexRatioView::recompute()

@@ -17,6 +17,7 @@ class QTreeWidget;
 namespace hierloom::ui {
 
 class ColonyDocument;
+class ColonyEditFacade;
 
 /// The maternal rank options of the open document for these settings, as the
 /// `sex-ratio` command builds them (one code path for screen and exports).
@@ -29,7 +30,7 @@ core::MaternalRankOptions documentMaternalOptions(const std::string& group, int 
 class SexRatioView : public QWidget {
     Q_OBJECT
 public:
-    explicit SexRatioView(ColonyDocument* document, QWidget* parent = nullptr);
+    explicit SexRatioView(ColonyEditFacade* facade, QWidget* parent = nullptr);
 
     /// Chooses the species (its defaults fill gestation and maturity) and recomputes.
     void setSpecies(const QString& key);
@@ -38,7 +39,8 @@ public:
     /// Empty: every group.
     void setGroup(const QString& group);
     /// Stores species, gestation and maturity in the colony file (overrides only
-    /// where they differ from the species default); false for a read-only file.
+    /// where they differ from the species default) through the edit facade;
+    /// false for a read-only file or a setting that cannot be stored.
     bool saveSpeciesSetting();
 
     const std::vector<core::MaternalRankRow>& births() const { return births_; }
@@ -56,6 +58,7 @@ private:
     void recompute();
     void showPlot();
 
+    ColonyEditFacade* facade_;
     ColonyDocument* document_;
     QComboBox* species_;
     QSpinBox* gestation_;

@@ -6,6 +6,7 @@
 #include <QUndoStack>
 
 #include <algorithm>
+#include <cassert>
 
 namespace hierloom::ui {
 
@@ -30,29 +31,33 @@ void ColonyDocument::adopt(core::ColonyStore store, const QString& path, bool re
     // the previous colony open and intact.
     core::Colony colony = store.load();
     core::ResidenceIndex residences(colony.animals, colony.residences);
+    // The commands of the previous file would write to this one.
+    clearHistory(tr("another colony file was opened"));
     store_.emplace(std::move(store));
     colony_ = std::move(colony);
     colony_.reindex();
     residences_ = std::move(residences);
     path_ = path;
     readOnly_ = readOnly;
-    undoStack_->clear();
-    lastChange_ = Change{};
-    snapshot_ = {};
-    emit changed();
+    emitChange({});
 }
 
 void ColonyDocument::close()
 {
+    clearHistory(tr("the colony was closed"));
     store_.reset();
     colony_ = core::Colony{};
     residences_ = core::ResidenceIndex{};
     path_.clear();
     readOnly_ = false;
+    emitChange({});
+}
+
+void ColonyDocument::clearHistory(const QString& reason)
+{
+    const bool hadHistory = undoStack_->count() > 0;
     undoStack_->clear();
-    lastChange_ = Change{};
-    snapshot_ = {};
-    emit changed();
+    if (hadHistory) emit historyCleared(reason);
 }
 
 void ColonyDocument::reload()
@@ -62,9 +67,18 @@ void ColonyDocument::reload()
     residences_ = core::ResidenceIndex(colony.animals, colony.residences);
     colony_ = std::move(colony);
     colony_.reindex();
-    lastChange_ = Change{};
-    snapshot_ = {};
-    emit changed();
+    emitChange({});
+}
+
+core::ColonyStore& ColonyDocument::writableStore()
+{
+    assert(store_ && !readOnly_);
+    return *store_;
+}
+
+void ColonyDocument::setAuditUserName(const std::string& name)
+{
+    if (store_) store_->setUserName(name);
 }
 
 void ColonyDocument::reloadAnimals()
@@ -74,9 +88,7 @@ void ColonyDocument::reloadAnimals()
     colony_.residences = store_->loadResidences();
     colony_.reindex();
     residences_ = core::ResidenceIndex(colony_.animals, colony_.residences);
-    lastChange_ = Change{Change::AnimalsChanged, 0};
-    snapshot_ = {};
-    emit changed();
+    emitChange({ChangeKind::AnimalsChanged, 0});
 }
 
 void ColonyDocument::applyEncounterChange(const std::vector<core::Encounter>& removed,
@@ -101,9 +113,16 @@ void ColonyDocument::applyEncounterChange(const std::vector<core::Encounter>& re
             cache.insert(std::lower_bound(cache.begin(), cache.end(), e.seq, bySeq), std::move(e));
         }
     }
-    lastChange_ = appendedOnly ? Change{Change::EncountersAppended, first} : Change{Change::EncountersChanged, 0};
+    emitChange(appendedOnly ? Change{ChangeKind::EncountersAppended, first} : Change{ChangeKind::EncountersChanged, 0});
+}
+
+void ColonyDocument::announce(ChangeKind kind) { emitChange({kind, 0}); }
+
+void ColonyDocument::emitChange(Change change)
+{
+    lastChange_ = change;
     snapshot_ = {};
-    emit changed();
+    emit changed(change.kind);
 }
 
 ColonyDocument::Snapshot ColonyDocument::snapshot() const
@@ -113,13 +132,6 @@ ColonyDocument::Snapshot ColonyDocument::snapshot() const
         snapshot_.residences = std::make_shared<const core::ResidenceIndex>(residences_);
     }
     return snapshot_;
-}
-
-void ColonyDocument::listsChanged()
-{
-    lastChange_ = Change{Change::ListsChanged, 0};
-    snapshot_ = {};
-    emit changed();
 }
 
 } // namespace hierloom::ui

@@ -15,13 +15,28 @@ class QUndoStack;
 
 namespace hierloom::ui {
 
+class ColonyEditFacade;
+class ColonyCommand;
+
 /// The one open colony file and a cached copy of its records. Models and
-/// views read the cache and listen to changed(); every writer (import now,
-/// undo commands later) calls reload() after changing the store, so nothing
-/// can be left showing stale data. Errors are thrown as core::ColonyFileError.
+/// views read the cache (and the file through the const store()) and listen
+/// to changed(kind). Only the edit facade and its undo commands
+/// (colony_edit_facade.h, edit_commands.h) may write to the file: they alone
+/// see the writable store. Errors are thrown as core::ColonyFileError.
 class ColonyDocument : public QObject {
     Q_OBJECT
 public:
+    /// What a change was about, so a listener may update only what changed.
+    enum class ChangeKind {
+        Reset,              ///< another file, a close, an import, a merge, a restore: re-read everything
+        EncountersAppended, ///< encounters added after the last one (Change::firstAppended)
+        EncountersChanged,  ///< encounters edited, deleted or inserted elsewhere
+        AnimalsChanged,     ///< animals or residences; encounters unchanged
+        ListsChanged,       ///< the behaviour code or observer lists
+        SettingsChanged,    ///< key-value settings (thresholds, species, saved scenarios...)
+    };
+    Q_ENUM(ChangeKind)
+
     explicit ColonyDocument(QObject* parent = nullptr);
     ~ColonyDocument() override;
 
@@ -30,37 +45,34 @@ public:
     /// Creates a new, empty colony file and opens it for writing.
     void create(const QString& path);
     void close();
-    /// Re-reads the records from the file; called after anything wrote to it.
+    /// Re-reads every record from the file (after a failed write, or when another program wrote to it).
     void reload();
-    /// Re-reads animals and residences only (encounters unchanged), after a pedigree or life-history edit.
-    void reloadAnimals();
-    /// Brings the cached encounters up to date after `removed` were deleted from
-    /// the file and `inserted` written (seq order kept), without re-reading a
-    /// million rows; used by the undo commands of encounter edits.
-    void applyEncounterChange(const std::vector<core::Encounter>& removed, const std::vector<core::Encounter>& inserted);
-    /// Announces a change of the behaviour code or observer lists.
-    void listsChanged();
 
-    /// What the last changed() was about, so a listener may update only what changed.
+    /// The details of the last changed(): its kind and, for appended encounters, where they start.
     struct Change {
-        enum Kind { Reset, EncountersAppended, EncountersChanged, AnimalsChanged, ListsChanged };
-        Kind kind = Reset;
+        ChangeKind kind = ChangeKind::Reset;
         size_t firstAppended = 0; // EncountersAppended: index of the first new encounter
     };
     const Change& lastChange() const { return lastChange_; }
 
-    /// The undo history of edits to this file (cleared when another file opens
-    /// or something outside the history, such as an import, writes to it).
+    /// The undo history of edits to this file. Cleared only through clearHistory().
     QUndoStack* undoStack() const { return undoStack_; }
+    /// Empties the undo history, the one place that does; when it held
+    /// anything, historyCleared(reason) tells the person why.
+    void clearHistory(const QString& reason);
 
     bool isOpen() const { return store_.has_value(); }
     bool isReadOnly() const { return readOnly_; }
     QString path() const { return path_; }
 
-    /// The open store, or nullptr; writers must call reload() afterwards.
-    core::ColonyStore* store() { return store_ ? &*store_ : nullptr; }
+    /// The open store for reading, or nullptr; writes go through ColonyEditFacade.
+    const core::ColonyStore* store() const { return store_ ? &*store_ : nullptr; }
     const core::Colony& colony() const { return colony_; }
     const core::ResidenceIndex& residences() const { return residences_; }
+
+    /// The name stamped on the audit rows of this connection's writes (not a
+    /// change to the file itself); ignored when no colony is open.
+    void setAuditUserName(const std::string& name);
 
     /// An unchanging copy of colony() and residences() for background jobs:
     /// made on the first request after a change and shared by every view
@@ -72,13 +84,31 @@ public:
     Snapshot snapshot() const;
 
 signals:
-    /// Emitted once after any open, close, reload or edit.
-    void changed();
+    /// Emitted once after any open, close, reload or write; lastChange() has the details.
+    void changed(hierloom::ui::ColonyDocument::ChangeKind kind);
     /// An edit or its undo could not be written (disk full, file locked...).
     void writeFailed(const QString& message);
+    /// The undo history was emptied; `reason` says why, for the status bar.
+    void historyCleared(const QString& reason);
 
 private:
+    // The writers: the facade and the undo commands reach the store and the
+    // cache updates below; nothing else can.
+    friend class ColonyEditFacade;
+    friend class ColonyCommand;
+
+    core::ColonyStore& writableStore();
+    /// Re-reads animals and residences only (encounters unchanged).
+    void reloadAnimals();
+    /// Brings the cached encounters up to date after `removed` were deleted from
+    /// the file and `inserted` written (seq order kept), without re-reading a
+    /// million rows.
+    void applyEncounterChange(const std::vector<core::Encounter>& removed, const std::vector<core::Encounter>& inserted);
+    /// Announces a change that leaves the cached records as they are (lists, settings).
+    void announce(ChangeKind kind);
+
     void adopt(core::ColonyStore store, const QString& path, bool readOnly);
+    void emitChange(Change change);
 
     std::optional<core::ColonyStore> store_;
     core::Colony colony_;

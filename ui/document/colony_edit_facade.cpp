@@ -1,13 +1,20 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "ui/document/colony_edit_facade.h"
 
-#include "core/store/colony_edits.h"
+#include "core/research/species_profile.h"
 #include "core/rules/encounter_rules.h"
+#include "core/store/colony_backup.h"
+#include "core/store/colony_edits.h"
+#include "core/store/species_settings.h"
+#include "core/store/stability_settings.h"
 #include "ui/document/colony_document.h"
 #include "ui/document/edit_commands.h"
 #include "ui/document/qt_convert.h"
+#include "ui/document/record_equality.h"
 
 #include <QUndoStack>
+
+#include <chrono>
 
 namespace hierloom::ui {
 
@@ -23,6 +30,16 @@ core::FieldProblems ColonyEditFacade::writable() const
     return {};
 }
 
+core::FieldProblems ColonyEditFacade::push(ColonyCommand* command)
+{
+    core::FieldProblems problems;
+    command->reportFirstFailureTo(&problems);
+    // push() runs redo(), which writes; a command whose write failed made
+    // itself obsolete and QUndoStack deletes it instead of keeping it.
+    document_->undoStack()->push(command);
+    return problems;
+}
+
 core::FieldProblems ColonyEditFacade::checkEncounter(core::Encounter& e) const
 {
     return core::checkEncounter(e, document_->residences(), today());
@@ -31,14 +48,10 @@ core::FieldProblems ColonyEditFacade::checkEncounter(core::Encounter& e) const
 core::FieldProblems ColonyEditFacade::pushEncounterChange(std::vector<core::Encounter> removed,
                                                           std::vector<core::Encounter>& inserted, const QString& text)
 {
-    try {
-        EncounterChangeCommand::write(document_, removed, inserted);
-    } catch (const std::exception& error) {
-        document_->reload();
-        return {{"", error.what()}};
-    }
-    document_->undoStack()->push(new EncounterChangeCommand(document_, std::move(removed), inserted, text));
-    return {};
+    auto* command = new EncounterChangeCommand(document_, std::move(removed), inserted, text);
+    core::FieldProblems problems = push(command);
+    if (problems.empty()) inserted = command->inserted(); // kept by the stack, now with seq and uid
+    return problems;
 }
 
 core::FieldProblems ColonyEditFacade::addEncounter(core::Encounter& e)
@@ -63,6 +76,7 @@ core::FieldProblems ColonyEditFacade::editEncounter(core::Encounter e)
     if (it == cache.end() || it->uid != e.uid) return {{"uid", "'" + e.uid + "' is not an encounter of the colony"}};
     e.group.clear(); // re-derived from the residences of the (possibly new) animals
     if (auto p = checkEncounter(e); !p.empty()) return p;
+    if (sameRecord(*it, e)) return {}; // nothing changed: nothing to write or undo
     std::vector<core::Encounter> one{e};
     return pushEncounterChange({*it}, one, tr("Edit encounter %1 over %2").arg(toQString(e.winner), toQString(e.loser)));
 }
@@ -78,15 +92,8 @@ core::FieldProblems ColonyEditFacade::deleteEncounters(const std::vector<core::E
 core::FieldProblems ColonyEditFacade::pushAnimalChange(const core::AnimalChange& change, const QString& text)
 {
     if (!change.ok()) return change.problems;
-    try {
-        core::writeAnimalChange(*document_->store(), change.before, change.after);
-    } catch (const std::exception& error) {
-        document_->reload();
-        return {{"", error.what()}};
-    }
-    document_->reloadAnimals();
-    document_->undoStack()->push(new AnimalChangeCommand(document_, change, text));
-    return {};
+    if (sameRecord(change.before, change.after)) return {};
+    return push(new AnimalChangeCommand(document_, change, text));
 }
 
 core::FieldProblems ColonyEditFacade::addAnimal(const core::Animal& a, const std::string& group)
@@ -135,14 +142,8 @@ core::FieldProblems ColonyEditFacade::setBehaviourCodes(const std::vector<core::
     if (auto p = writable(); !p.empty()) return p;
     if (auto p = core::checkBehaviourCodes(codes); !p.empty()) return p;
     auto before = document_->store()->behaviourCodes();
-    try {
-        core::writeBehaviourCodes(*document_->store(), codes);
-    } catch (const std::exception& error) {
-        return {{"", error.what()}};
-    }
-    document_->listsChanged();
-    document_->undoStack()->push(new ListChangeCommand(document_, std::move(before), codes, tr("Edit behaviour codes")));
-    return {};
+    if (sameRecords(before, codes)) return {};
+    return push(new ListChangeCommand(document_, std::move(before), codes, tr("Edit behaviour codes")));
 }
 
 core::FieldProblems ColonyEditFacade::setObservers(const std::vector<std::string>& names)
@@ -150,14 +151,119 @@ core::FieldProblems ColonyEditFacade::setObservers(const std::vector<std::string
     if (auto p = writable(); !p.empty()) return p;
     if (auto p = core::checkObservers(names); !p.empty()) return p;
     auto before = document_->store()->observers();
+    if (before == names) return {};
+    return push(new ListChangeCommand(document_, std::move(before), names, tr("Edit observers")));
+}
+
+core::FieldProblems ColonyEditFacade::setSettings(const core::SettingValues& values, const QString& text)
+{
+    if (auto p = writable(); !p.empty()) return p;
+    core::SettingValues before = core::readSettingValues(*document_->store(), values);
+    if (before == values) return {};
+    return push(new SettingsChangeCommand(document_, std::move(before), values, text));
+}
+
+core::FieldProblems ColonyEditFacade::setStabilityThresholds(const core::StabilityThresholds& thresholds)
+{
+    if (auto p = writable(); !p.empty()) return p;
+    const core::SettingValues values = core::stabilityThresholdValues(thresholds);
+    // Thresholds equal to those in effect (stored or default) change nothing.
+    if (core::stabilityThresholdValues(core::readStabilityThresholds(*document_->store())) == values) return {};
+    return setSettings(values, tr("Change stability thresholds"));
+}
+
+core::FieldProblems ColonyEditFacade::setSpeciesSetting(const std::string& species, std::optional<int> gestationDays,
+                                                        std::optional<int> maturityYears)
+{
+    if (auto p = writable(); !p.empty()) return p;
+    core::SettingValues values;
     try {
-        core::writeObservers(*document_->store(), names);
-    } catch (const std::exception& error) {
-        return {{"", error.what()}};
+        values = core::speciesSettingValues(species, gestationDays, maturityYears);
+    } catch (const std::invalid_argument& error) {
+        return {{"species", error.what()}};
     }
-    document_->listsChanged();
-    document_->undoStack()->push(new ListChangeCommand(document_, std::move(before), names, tr("Edit observers")));
-    return {};
+    // A setting that resolves to the species and figures in effect changes nothing.
+    try {
+        const core::SpeciesSettings now = core::readSpeciesSettings(*document_->store());
+        const core::SpeciesSettings then = core::resolveSpeciesSettings(
+            species, values[core::kGestationSettingKey].value_or(""), values[core::kMaturitySettingKey].value_or(""));
+        if (now.species == then.species && now.gestationDays == then.gestationDays && now.maturityYears == then.maturityYears)
+            return {};
+    } catch (const std::invalid_argument&) {
+        // The stored setting is not valid: writing a valid one is a change.
+    }
+    return setSettings(values, tr("Set species %1").arg(toQString(species)));
+}
+
+core::FieldProblems ColonyEditFacade::saveScenario(const std::string& name, const std::string& text)
+{
+    if (name.empty()) return {{"name", tr("A saved scenario needs a name.").toStdString()}};
+    return setSettings(core::savedScenarioValue(name, text), tr("Save scenario %1").arg(toQString(name)));
+}
+
+core::FieldProblems ColonyEditFacade::deleteScenario(const std::string& name)
+{
+    if (name.empty()) return {{"name", tr("A saved scenario needs a name.").toStdString()}};
+    return setSettings(core::savedScenarioValue(name, std::nullopt), tr("Delete scenario %1").arg(toQString(name)));
+}
+
+core::ImportResult ColonyEditFacade::importFiles(const core::ImportPaths& paths, QString* readBackError)
+{
+    core::ImportResult result;
+    if (auto p = writable(); !p.empty()) {
+        result.problems.add("", 0, "", p.front().message);
+        return result;
+    }
+    result = core::importFiles(document_->writableStore(), paths, today());
+    if (!result.ok() || result.animals + result.residences + result.encounters == 0) return result;
+    document_->clearHistory(tr("an import added records outside the undo history"));
+    try {
+        document_->reload();
+    } catch (const core::ColonyFileError& error) {
+        if (readBackError) *readBackError = toQString(error.what());
+    }
+    return result;
+}
+
+core::MergeReport ColonyEditFacade::checkMerge(const QString& otherPath)
+{
+    if (auto p = writable(); !p.empty()) throw std::runtime_error(p.front().message);
+    const core::ColonyStore other = core::ColonyStore::open(toStdString(otherPath), core::ColonyStore::Mode::ReadOnly);
+    return core::mergeColonies(document_->writableStore(), other, {core::MergePreference::None, true, today()});
+}
+
+core::MergeReport ColonyEditFacade::merge(const QString& otherPath, core::MergePreference preference)
+{
+    if (auto p = writable(); !p.empty()) throw std::runtime_error(p.front().message);
+    const core::ColonyStore other = core::ColonyStore::open(toStdString(otherPath), core::ColonyStore::Mode::ReadOnly);
+    core::MergeReport report = core::mergeColonies(document_->writableStore(), other, {preference, false, today()});
+    if (report.written) {
+        document_->clearHistory(tr("a merge added records outside the undo history"));
+        document_->reload();
+    }
+    return report;
+}
+
+QString ColonyEditFacade::restoreBackup(const QString& backupPath)
+{
+    if (auto p = writable(); !p.empty()) return toQString(p.front().message);
+    const QString path = document_->path();
+    document_->clearHistory(tr("the colony was restored from a backup"));
+    // Closed while the backup is copied in, so no cached record outlives the restore.
+    document_->close();
+    QString failure;
+    try {
+        core::restoreBackup(toStdString(backupPath), toStdString(path), std::chrono::system_clock::now());
+    } catch (const std::exception& error) {
+        failure = QString::fromUtf8(error.what());
+    }
+    document_->open(path);
+    return failure;
+}
+
+void ColonyEditFacade::restoreDamagedFile(const QString& backupPath, const QString& colonyPath)
+{
+    core::restoreBackup(toStdString(backupPath), toStdString(colonyPath), std::chrono::system_clock::now());
 }
 
 } // namespace hierloom::ui

@@ -1,25 +1,35 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
 #include "core/base/colony.h"
-#include "core/store/colony_store.h"
-#include "core/store/colony_edits.h"
 #include "core/base/field_problem.h"
+#include "core/planning/stability_watch.h"
+#include "core/store/colony_edits.h"
+#include "core/store/colony_import.h"
+#include "core/store/colony_merge.h"
+#include "core/store/colony_store.h"
+#include "core/store/setting_values.h"
 
 #include <QObject>
 #include <QString>
 
+#include <optional>
 #include <string>
 #include <vector>
 
 namespace hierloom::ui {
 
 class ColonyDocument;
+class ColonyCommand;
 
-/// The one place the desktop writes to a colony: each function checks the
-/// change under the import's rules (core/rules/encounter_rules.h,
-/// core/rules/animal_rules.h, core/store/colony_edits.h), writes it in one transaction
-/// and pushes an undo command on the document's QUndoStack. Returns the
-/// problems that stopped it (nothing written then), or nothing.
+/// The one writer of the desktop: every change to the open colony file goes
+/// through here. An edit is checked under the import's rules
+/// (core/rules/encounter_rules.h, core/rules/animal_rules.h,
+/// core/store/colony_edits.h) and pushed on the document's QUndoStack as a
+/// command whose redo() writes it in one transaction; an edit that changes
+/// nothing is dropped (nothing written, nothing pushed). Each function
+/// returns the problems that stopped it (nothing written then), or nothing.
+/// Writes that cannot be undone (an import, a merge, a restore) are done
+/// here too and then clear the undo history, saying why.
 class ColonyEditFacade : public QObject {
     Q_OBJECT
 public:
@@ -49,8 +59,40 @@ public:
     core::FieldProblems setBehaviourCodes(const std::vector<core::ColonyStore::BehaviourCode>& codes);
     core::FieldProblems setObservers(const std::vector<std::string>& names);
 
+    /// Sets key-value settings (a missing value removes the key) as one undoable step.
+    core::FieldProblems setSettings(const core::SettingValues& values, const QString& text);
+    /// Stores the stability watch's thresholds; unchanged thresholds write nothing.
+    core::FieldProblems setStabilityThresholds(const core::StabilityThresholds& thresholds);
+    /// Stores the species and its overrides (empty: the species default applies).
+    core::FieldProblems setSpeciesSetting(const std::string& species, std::optional<int> gestationDays,
+                                          std::optional<int> maturityYears);
+    /// Saves (or replaces) a named what-if scenario's text.
+    core::FieldProblems saveScenario(const std::string& name, const std::string& text);
+    /// Deletes a saved scenario; nothing happens when there is none of that name.
+    core::FieldProblems deleteScenario(const std::string& name);
+
+    /// Imports CSV files (all or nothing). Throws core::ColonyFileError when
+    /// the file cannot be written. When records were added the undo history
+    /// is cleared and the records re-read; a failure to read them back is put
+    /// in `readBackError`.
+    core::ImportResult importFiles(const core::ImportPaths& paths, QString* readBackError = nullptr);
+    /// Checks a merge of another colony file without writing (throws when a file cannot be read).
+    core::MergeReport checkMerge(const QString& otherPath);
+    /// Merges another colony file (all or nothing; report.written says
+    /// whether it wrote); after a merge the undo history is cleared.
+    core::MergeReport merge(const QString& otherPath, core::MergePreference preference);
+    /// Puts a backup back over the open colony file (which is backed up
+    /// first by core) and re-opens it, clearing the undo history. Returns the
+    /// restore's error, empty when restored; throws when re-opening fails.
+    QString restoreBackup(const QString& backupPath);
+    /// Puts a backup over a colony file that could not be opened (damaged or
+    /// not a colony file); the open colony is not touched. Throws on failure.
+    void restoreDamagedFile(const QString& backupPath, const QString& colonyPath);
+
 private:
     core::FieldProblems writable() const;
+    /// Pushes a command, whose first redo() writes; the problems of a failed write.
+    core::FieldProblems push(ColonyCommand* command);
     core::FieldProblems pushEncounterChange(std::vector<core::Encounter> removed, std::vector<core::Encounter>& inserted,
                                             const QString& text);
     core::FieldProblems pushAnimalChange(const core::AnimalChange& change, const QString& text);

@@ -1,31 +1,35 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "ui/document/edit_commands.h"
 
-#include "ui/document/colony_document.h"
+#include <utility>
 
 namespace hierloom::ui {
 
 ColonyCommand::ColonyCommand(ColonyDocument* document, const QString& text) : QUndoCommand(text), document_(document) {}
 
-void ColonyCommand::redo()
-{
-    if (done_) {
-        done_ = false;
-        return;
-    }
-    run(true);
-}
+void ColonyCommand::redo() { run(true); }
 
 void ColonyCommand::undo() { run(false); }
 
 void ColonyCommand::run(bool forward)
 {
+    core::FieldProblems* first = std::exchange(firstFailure_, nullptr);
     try {
         apply(forward);
     } catch (const std::exception& error) {
         // The file is whole (each write is one transaction); show what it holds.
-        document_->reload();
-        emit document_->writeFailed(QString::fromUtf8(error.what()));
+        // No exception may leave redo()/undo() through QUndoStack, so a file
+        // that cannot be read either keeps the cache and the message below says why.
+        try {
+            document_->reload();
+        } catch (const std::exception&) {
+        }
+        if (first) {
+            first->push_back({"", error.what()});
+            setObsolete(true); // never written, so nothing to undo: QUndoStack::push drops it
+        } else {
+            emit document_->writeFailed(QString::fromUtf8(error.what()));
+        }
     }
 }
 
@@ -35,19 +39,25 @@ EncounterChangeCommand::EncounterChangeCommand(ColonyDocument* document, std::ve
 {
 }
 
-void EncounterChangeCommand::write(ColonyDocument* document, const std::vector<core::Encounter>& removed,
-                                   std::vector<core::Encounter>& inserted)
-{
-    core::writeEncounterChange(*document->store(), removed, inserted);
-    document->applyEncounterChange(removed, inserted);
-}
-
 void EncounterChangeCommand::apply(bool forward)
 {
-    // The records keep the seq and uid they got the first time, so a redo
-    // restores them exactly and later commands still find them.
+    // The first write gives the inserted records their seq and uid; later
+    // redos write them with the same, so later commands still find them.
     std::vector<core::Encounter> in = forward ? inserted_ : removed_;
-    write(document_, forward ? removed_ : inserted_, in);
+    const std::vector<core::Encounter>& out = forward ? removed_ : inserted_;
+    // Writing an encounter adds its observer to the observer list; later
+    // undos and redos put the list back as it was on their side of the command.
+    const bool first = !observersKnown_;
+    if (first) observersBefore_ = store().observers();
+    core::writeEncounterChange(store(), out, in);
+    if (first) {
+        observersAfter_ = store().observers();
+        observersKnown_ = true;
+    } else if (const Names& list = forward ? observersAfter_ : observersBefore_; store().observers() != list) {
+        core::writeObservers(store(), list);
+    }
+    if (forward) inserted_ = in;
+    applyEncounterChange(out, in);
 }
 
 AnimalChangeCommand::AnimalChangeCommand(ColonyDocument* document, core::AnimalChange change, const QString& text)
@@ -57,9 +67,9 @@ AnimalChangeCommand::AnimalChangeCommand(ColonyDocument* document, core::AnimalC
 
 void AnimalChangeCommand::apply(bool forward)
 {
-    if (forward) core::writeAnimalChange(*document_->store(), change_.before, change_.after);
-    else core::writeAnimalChange(*document_->store(), change_.after, change_.before);
-    document_->reloadAnimals();
+    if (forward) core::writeAnimalChange(store(), change_.before, change_.after);
+    else core::writeAnimalChange(store(), change_.after, change_.before);
+    reloadAnimals();
 }
 
 ListChangeCommand::ListChangeCommand(ColonyDocument* document, Codes before, Codes after, const QString& text)
@@ -74,9 +84,21 @@ ListChangeCommand::ListChangeCommand(ColonyDocument* document, Names before, Nam
 
 void ListChangeCommand::apply(bool forward)
 {
-    if (codes_) core::writeBehaviourCodes(*document_->store(), forward ? codesAfter_ : codesBefore_);
-    else core::writeObservers(*document_->store(), forward ? namesAfter_ : namesBefore_);
-    document_->listsChanged();
+    if (codes_) core::writeBehaviourCodes(store(), forward ? codesAfter_ : codesBefore_);
+    else core::writeObservers(store(), forward ? namesAfter_ : namesBefore_);
+    announce(ColonyDocument::ChangeKind::ListsChanged);
+}
+
+SettingsChangeCommand::SettingsChangeCommand(ColonyDocument* document, core::SettingValues before,
+                                             core::SettingValues after, const QString& text)
+    : ColonyCommand(document, text), before_(std::move(before)), after_(std::move(after))
+{
+}
+
+void SettingsChangeCommand::apply(bool forward)
+{
+    core::writeSettingValues(store(), forward ? after_ : before_);
+    announce(ColonyDocument::ChangeKind::SettingsChanged);
 }
 
 } // namespace hierloom::ui

@@ -1,36 +1,49 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
 #include "core/base/colony.h"
+#include "core/base/field_problem.h"
 #include "core/store/colony_edits.h"
 #include "core/store/colony_store.h"
+#include "core/store/setting_values.h"
+#include "ui/document/colony_document.h"
 
 #include <QUndoCommand>
 
-#include <optional>
 #include <vector>
 
 namespace hierloom::ui {
 
-class ColonyDocument;
-
-/// Base of the edit commands: the first redo() is skipped because the facade
-/// already wrote the change (so a failed write is reported before anything is
-/// pushed); later redo()/undo() write through core/ and refresh the document
-/// once. A write that fails then is reported through the document's owner
-/// (ColonyDocument::writeFailed) and the cache is re-read from the file.
+/// Base of the edit commands: redo() performs the change and undo() reverses
+/// it, each a write through core/ followed by one update of the document.
+/// The facade pushes a command, so its first redo() is the edit itself: when
+/// that write fails the problem goes to the facade's caller and the command
+/// marks itself obsolete, which makes QUndoStack drop it. A later redo() or
+/// undo() that fails is reported through ColonyDocument::writeFailed. Either
+/// way the cache is re-read from the file, which each transaction left whole.
 class ColonyCommand : public QUndoCommand {
 public:
     ColonyCommand(ColonyDocument* document, const QString& text);
     void redo() final;
     void undo() final;
+    /// Where the first redo() puts a failure (instead of writeFailed).
+    void reportFirstFailureTo(core::FieldProblems* problems) { firstFailure_ = problems; }
 
 protected:
     virtual void apply(bool forward) = 0;
-    ColonyDocument* document_;
+    // The document's writer side, open to the commands through this base.
+    core::ColonyStore& store() { return document_->writableStore(); }
+    void applyEncounterChange(const std::vector<core::Encounter>& removed, const std::vector<core::Encounter>& inserted)
+    {
+        document_->applyEncounterChange(removed, inserted);
+    }
+    void reloadAnimals() { document_->reloadAnimals(); }
+    void announce(ColonyDocument::ChangeKind kind) { document_->announce(kind); }
 
 private:
     void run(bool forward);
-    bool done_ = true;
+
+    ColonyDocument* document_;
+    core::FieldProblems* firstFailure_ = nullptr;
 };
 
 /// Removes and inserts encounters (an entry, an edit, a delete, a whole session).
@@ -38,16 +51,18 @@ class EncounterChangeCommand : public ColonyCommand {
 public:
     EncounterChangeCommand(ColonyDocument* document, std::vector<core::Encounter> removed,
                            std::vector<core::Encounter> inserted, const QString& text);
-    /// Performs the change the first time; throws on a failed write.
-    static void write(ColonyDocument* document, const std::vector<core::Encounter>& removed,
-                      std::vector<core::Encounter>& inserted);
+    /// The inserted records; after the first redo() with their seq and uid.
+    const std::vector<core::Encounter>& inserted() const { return inserted_; }
 
 protected:
     void apply(bool forward) override;
 
 private:
+    using Names = std::vector<std::string>;
     std::vector<core::Encounter> removed_;
     std::vector<core::Encounter> inserted_;
+    bool observersKnown_ = false; // set by the first redo()
+    Names observersBefore_, observersAfter_;
 };
 
 /// Replaces one animal's record and stays (add, edit, birth, exit, introduction, move).
@@ -77,6 +92,20 @@ private:
     bool codes_;
     Codes codesBefore_, codesAfter_;
     Names namesBefore_, namesAfter_;
+};
+
+/// Sets some key-value settings (thresholds, species, a saved scenario...),
+/// restoring their earlier values, or their absence, on undo.
+class SettingsChangeCommand : public ColonyCommand {
+public:
+    SettingsChangeCommand(ColonyDocument* document, core::SettingValues before, core::SettingValues after,
+                          const QString& text);
+
+protected:
+    void apply(bool forward) override;
+
+private:
+    core::SettingValues before_, after_;
 };
 
 } // namespace hierloom::ui

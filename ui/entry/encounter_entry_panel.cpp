@@ -213,10 +213,10 @@ EncounterEntryPanel::EncounterEntryPanel(ColonyEditFacade* facade, QWidget* pare
     connect(winner_, &QLineEdit::textChanged, this, [this] { checkAnimalField(winner_, winnerInfo_); });
     connect(loser_, &QLineEdit::textChanged, this, [this] { checkAnimalField(loser_, loserInfo_); });
     connect(time_, &QLineEdit::textChanged, this, &EncounterEntryPanel::checkTime);
-    connect(document_, &ColonyDocument::changed, this, [this] {
-        // Encounter-only changes leave the groups, residents and lists as they were.
-        const auto kind = document_->lastChange().kind;
-        if (kind != ColonyDocument::Change::EncountersAppended && kind != ColonyDocument::Change::EncountersChanged)
+    connect(document_, &ColonyDocument::changed, this, [this](ColonyDocument::ChangeKind kind) {
+        // Encounter and settings changes leave the groups, residents and lists as they were.
+        using Kind = ColonyDocument::ChangeKind;
+        if (kind != Kind::EncountersAppended && kind != Kind::EncountersChanged && kind != Kind::SettingsChanged)
             refreshChoices();
         refreshList();
     });
@@ -242,7 +242,7 @@ void EncounterEntryPanel::refreshChoices()
     observer_->clear();
     behaviour_->clear();
     behaviour_->addItem(QString());
-    if (core::ColonyStore* store = document_->store()) {
+    if (const core::ColonyStore* store = document_->store()) {
         for (const std::string& o : store->observers()) observer_->addItem(toQString(o));
         for (const auto& c : store->behaviourCodes()) {
             behaviour_->addItem(toQString(c.code));

@@ -2,6 +2,7 @@
 #include "ui/planning/colony_manager_views.h"
 
 #include "ui/document/colony_document.h"
+#include "ui/document/colony_edit_facade.h"
 #include "ui/planning/planner_view.h"
 #include "ui/planning/report_dialog.h"
 #include "ui/planning/stability_badge.h"
@@ -14,17 +15,16 @@
 
 namespace hierloom::ui {
 
-ColonyManagerViews addColonyManagerViews(QMainWindow* window, QTabWidget* tabs, ColonyDocument* document)
+ColonyManagerViews addColonyManagerViews(QMainWindow* window, QTabWidget* tabs, ColonyEditFacade* facade)
 {
     ColonyManagerViews v;
-    v.planner = new PlannerView(document, window);
-    v.stability = new StabilityView(document, window);
+    v.planner = new PlannerView(facade, window);
+    v.stability = new StabilityView(facade, window);
     tabs->addTab(v.planner, QObject::tr("Planner"));
     tabs->addTab(v.stability, QObject::tr("Stability"));
-    v.badge = new StabilityBadge(document, window);
+    v.badge = new StabilityBadge(facade->document(), window);
     window->statusBar()->addPermanentWidget(v.badge);
     QObject::connect(v.badge, &QToolButton::clicked, tabs, [tabs, v] { tabs->setCurrentWidget(v.stability); });
-    QObject::connect(v.stability, &StabilityView::thresholdsChanged, v.badge, &StabilityBadge::refresh);
     return v;
 }
 

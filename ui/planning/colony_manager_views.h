@@ -7,6 +7,7 @@ class QTabWidget;
 namespace hierloom::ui {
 
 class ColonyDocument;
+class ColonyEditFacade;
 class PlannerView;
 class StabilityBadge;
 class StabilityView;
@@ -20,7 +21,7 @@ struct ColonyManagerViews {
 
 /// Adds the Planner and Stability tabs (objectName "planner", "stability") and
 /// the stability badge to the window's status bar (a click shows the Stability tab).
-ColonyManagerViews addColonyManagerViews(QMainWindow* window, QTabWidget* tabs, ColonyDocument* document);
+ColonyManagerViews addColonyManagerViews(QMainWindow* window, QTabWidget* tabs, ColonyEditFacade* facade);
 
 /// Adds "Print Hierarchy Report..." and "Save Hierarchy Report as PDF..." to a menu.
 void addReportActions(QMenu* menu, QMainWindow* window, ColonyDocument* document);

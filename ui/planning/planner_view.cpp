@@ -7,6 +7,7 @@
 #include "report/scenario_report.h"
 #include "ui/widgets/caution_label.h"
 #include "ui/document/colony_document.h"
+#include "ui/document/colony_edit_facade.h"
 #include "ui/document/visible_refresh.h"
 #include "ui/document/qt_convert.h"
 #include "ui/planning/scenario_composer.h"
@@ -69,10 +70,11 @@ QString ratio(const core::GroupComposition& g)
 
 } // namespace
 
-PlannerView::PlannerView(ColonyDocument* document, QWidget* parent)
+PlannerView::PlannerView(ColonyEditFacade* facade, QWidget* parent)
     : QWidget(parent),
-      document_(document),
-      composer_(new ScenarioComposer(document, this)),
+      facade_(facade),
+      document_(facade->document()),
+      composer_(new ScenarioComposer(document_, this)),
       savedBox_(new QComboBox(this)),
       saveButton_(new QPushButton(tr("Save As..."), this)),
       deleteButton_(new QPushButton(tr("Delete"), this)),
@@ -175,7 +177,7 @@ QString PlannerView::problems() const { return problems_->text(); }
 QStringList PlannerView::savedNames() const
 {
     QStringList out;
-    if (core::ColonyStore* store = document_->store())
+    if (const core::ColonyStore* store = document_->store())
         for (const std::string& n : core::savedScenarioNames(*store)) out << toQString(n);
     return out;
 }
@@ -203,9 +205,12 @@ void PlannerView::refreshSaved()
 
 bool PlannerView::saveScenario(const QString& name)
 {
-    core::ColonyStore* store = document_->store();
-    if (!store || document_->isReadOnly() || name.isEmpty()) return false;
-    core::saveScenarioText(*store, toStdString(name), core::formatScenarioText(composer_->scenario()));
+    if (!document_->isOpen() || document_->isReadOnly() || name.isEmpty()) return false;
+    const auto problems = facade_->saveScenario(toStdString(name), core::formatScenarioText(composer_->scenario()));
+    if (!problems.empty()) {
+        problems_->setText(toQString(problems.front().message));
+        return false;
+    }
     refreshSaved();
     savedBox_->setCurrentText(name);
     return true;
@@ -213,7 +218,7 @@ bool PlannerView::saveScenario(const QString& name)
 
 std::optional<core::Scenario> PlannerView::savedScenario(const QString& name, QString* error) const
 {
-    core::ColonyStore* store = document_->store();
+    const core::ColonyStore* store = document_->store();
     if (!store) return std::nullopt;
     const auto text = core::savedScenarioText(*store, toStdString(name));
     if (!text) {
@@ -243,9 +248,8 @@ bool PlannerView::openScenario(const QString& name)
 
 bool PlannerView::deleteScenario(const QString& name)
 {
-    core::ColonyStore* store = document_->store();
-    if (!store || document_->isReadOnly() || name.isEmpty()) return false;
-    core::deleteSavedScenario(*store, toStdString(name));
+    if (!document_->isOpen() || document_->isReadOnly() || name.isEmpty()) return false;
+    if (!facade_->deleteScenario(toStdString(name)).empty()) return false;
     refreshSaved();
     return true;
 }

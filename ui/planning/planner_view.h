@@ -17,6 +17,7 @@ class QVBoxLayout;
 namespace hierloom::ui {
 
 class ColonyDocument;
+class ColonyEditFacade;
 class ScenarioComposer;
 
 /// The colony manager's planner: compose a what-if scenario, see the observed
@@ -27,7 +28,7 @@ class ScenarioComposer;
 class PlannerView : public QWidget {
     Q_OBJECT
 public:
-    explicit PlannerView(ColonyDocument* document, QWidget* parent = nullptr);
+    explicit PlannerView(ColonyEditFacade* facade, QWidget* parent = nullptr);
 
     ScenarioComposer* composer() const { return composer_; }
     /// The result of the scenario as composed now; empty when it cannot run (see problems()).
@@ -38,7 +39,7 @@ public:
     QTableWidget* reversalsTable() const { return reversals_; }
     QTableWidget* compareTable() const { return compare_; }
 
-    /// Saves the composed scenario under a name in the colony file (setting `scenario:NAME`).
+    /// Saves the composed scenario under a name in the colony file (setting `scenario:NAME`), through the edit facade.
     bool saveScenario(const QString& name);
     /// Reopens a saved scenario into the composer; false when missing or no longer valid.
     bool openScenario(const QString& name);
@@ -57,6 +58,7 @@ private:
     void printDialog();
     void savePdfDialog();
 
+    ColonyEditFacade* facade_;
     ColonyDocument* document_;
     ScenarioComposer* composer_;
     QComboBox* savedBox_;

@@ -28,7 +28,7 @@ report::HierarchyReportOptions documentReportOptions(ColonyDocument* document, c
     o.group = group;
     o.at = at;
     o.colonyName = toStdString(QFileInfo(document->path()).fileName());
-    if (core::ColonyStore* store = document->store()) {
+    if (const core::ColonyStore* store = document->store()) {
         o.thresholds = core::readStabilityThresholds(*store);
         o.severity = core::behaviourSeverities(*store);
     }

@@ -116,7 +116,7 @@ ScenarioComposer::ScenarioComposer(ColonyDocument* document, QWidget* parent)
     // A new file starts a new scenario; an edit of the record (an evening's
     // entries) keeps the changes composed so far and refreshes the choices.
     connect(document_, &ColonyDocument::changed, this, [this] {
-        if (document_->lastChange().kind == ColonyDocument::Change::Reset) {
+        if (document_->lastChange().kind == ColonyDocument::ChangeKind::Reset) {
             reset();
         } else {
             refreshChoices();

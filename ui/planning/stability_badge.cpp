@@ -23,8 +23,9 @@ StabilityBadge::StabilityBadge(ColonyDocument* document, QWidget* parent)
     debounce_.setSingleShot(true);
     debounce_.setInterval(3000);
     connect(&debounce_, &QTimer::timeout, this, &StabilityBadge::refresh);
-    connect(document_, &ColonyDocument::changed, this, [this] {
-        if (document_->lastChange().kind == ColonyDocument::Change::Reset) refresh();
+    // A new file or new thresholds show at once; record edits after a pause.
+    connect(document_, &ColonyDocument::changed, this, [this](ColonyDocument::ChangeKind kind) {
+        if (kind == ColonyDocument::ChangeKind::Reset || kind == ColonyDocument::ChangeKind::SettingsChanged) refresh();
         else debounce_.start();
     });
     refresh();

@@ -5,6 +5,7 @@
 #include "core/store/stability_settings.h"
 #include "ui/widgets/caution_label.h"
 #include "ui/document/colony_document.h"
+#include "ui/document/colony_edit_facade.h"
 #include "ui/widgets/help_button.h"
 #include "ui/document/visible_refresh.h"
 #include "ui/document/qt_convert.h"
@@ -44,29 +45,30 @@ QString signalName(core::StabilitySignal s)
 }
 } // namespace
 
-core::StabilityOptions documentStabilityOptions(ColonyDocument* document, const std::string& group,
+core::StabilityOptions documentStabilityOptions(const ColonyDocument* document, const std::string& group,
                                                 core::PeriodLength length)
 {
     core::StabilityOptions o;
     o.group = group;
     o.length = length;
-    if (core::ColonyStore* store = document->store()) {
+    if (const core::ColonyStore* store = document->store()) {
         o.thresholds = core::readStabilityThresholds(*store);
         o.severity = core::behaviourSeverities(*store);
     }
     return o;
 }
 
-core::StabilitySeries documentStability(ColonyDocument* document, const std::string& group, core::PeriodLength length)
+core::StabilitySeries documentStability(const ColonyDocument* document, const std::string& group, core::PeriodLength length)
 {
     const core::Matrilines lines(document->colony());
     return core::stabilityWatch(document->colony(), document->residences(), lines,
                                 documentStabilityOptions(document, group, length));
 }
 
-StabilityView::StabilityView(ColonyDocument* document, QWidget* parent)
+StabilityView::StabilityView(ColonyEditFacade* facade, QWidget* parent)
     : QWidget(parent),
-      document_(document),
+      facade_(facade),
+      document_(facade->document()),
       group_(new QComboBox(this)),
       length_(new QComboBox(this)),
       thresholdsButton_(new QPushButton(tr("Thresholds..."), this)),
@@ -168,7 +170,7 @@ void StabilityView::refreshGroups()
 
 void StabilityView::editThresholds()
 {
-    core::ColonyStore* store = document_->store();
+    const core::ColonyStore* store = document_->store();
     if (!store) return;
     StabilityThresholdsDialog dialog(core::readStabilityThresholds(*store), this);
     if (document_->isReadOnly()) dialog.setWindowTitle(tr("Stability Thresholds (read-only colony: not saved)"));
@@ -177,11 +179,8 @@ void StabilityView::editThresholds()
 
 void StabilityView::applyThresholds(const core::StabilityThresholds& thresholds)
 {
-    core::ColonyStore* store = document_->store();
-    if (!store || document_->isReadOnly()) return;
-    core::writeStabilityThresholds(*store, thresholds);
-    recompute();
-    emit thresholdsChanged();
+    if (!document_->isOpen() || document_->isReadOnly()) return;
+    facade_->setStabilityThresholds(thresholds);
 }
 
 void StabilityView::recompute()
@@ -198,7 +197,7 @@ void StabilityView::recompute()
                                tr("rank change per animal")};
     const QColor colours[] = {kCounter, kSevere, kRank};
     const auto& t = [this] {
-        core::ColonyStore* store = document_->store();
+        const core::ColonyStore* store = document_->store();
         return store ? core::readStabilityThresholds(*store) : core::StabilityThresholds{};
     }();
     const double median = series_.medianSevereRate.value_or(0);

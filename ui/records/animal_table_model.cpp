@@ -12,7 +12,9 @@ namespace hierloom::ui {
 AnimalTableModel::AnimalTableModel(const ColonyDocument* document, QObject* parent)
     : QAbstractTableModel(parent), document_(document)
 {
-    connect(document_, &ColonyDocument::changed, this, &AnimalTableModel::rebuild);
+    connect(document_, &ColonyDocument::changed, this, [this](ColonyDocument::ChangeKind kind) {
+        if (kind != ColonyDocument::ChangeKind::SettingsChanged) rebuild(); // settings leave the animals as they are
+    });
     rebuild();
 }
 

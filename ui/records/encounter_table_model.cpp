@@ -21,7 +21,7 @@ void EncounterTableModel::rebuild()
 {
     const auto& encounters = document_->colony().encounters;
     const ColonyDocument::Change& change = document_->lastChange();
-    if (change.kind == ColonyDocument::Change::EncountersAppended && change.firstAppended == newestFirst_.size()) {
+    if (change.kind == ColonyDocument::ChangeKind::EncountersAppended && change.firstAppended == newestFirst_.size()) {
         // An evening entry appends a row: place it (and tell the view of one
         // inserted row) instead of re-sorting and resetting a million.
         const auto newer = [&](size_t a, size_t b) { return core::encounterBefore(encounters[b], encounters[a]); };
@@ -40,7 +40,8 @@ void EncounterTableModel::rebuild()
         }
         return;
     }
-    if (change.kind == ColonyDocument::Change::AnimalsChanged || change.kind == ColonyDocument::Change::ListsChanged) {
+    if (change.kind == ColonyDocument::ChangeKind::AnimalsChanged || change.kind == ColonyDocument::ChangeKind::ListsChanged ||
+        change.kind == ColonyDocument::ChangeKind::SettingsChanged) {
         if (newestFirst_.size() == encounters.size()) return; // the encounters are as they were
     }
     beginResetModel();

@@ -25,7 +25,7 @@ ListEditorDialog::ListEditorDialog(ColonyEditFacade* facade, List list, QWidget*
                                             : QStringList{tr("Name or initials")});
     table_->horizontalHeader()->setStretchLastSection(true);
     table_->verticalHeader()->hide();
-    if (core::ColonyStore* store = facade_->document()->store()) {
+    if (const core::ColonyStore* store = facade_->document()->store()) {
         if (codes) {
             for (const auto& c : store->behaviourCodes()) {
                 const int r = table_->rowCount();

@@ -4,6 +4,7 @@
 #include "core/store/colony_backup.h"
 #include "core/store/colony_store.h"
 #include "ui/document/colony_document.h"
+#include "ui/document/colony_edit_facade.h"
 #include "ui/shell/merge_dialog.h"
 #include "ui/document/qt_convert.h"
 
@@ -81,9 +82,9 @@ QString chooseBackup(QWidget* parent, const QString& colonyPath)
 
 } // namespace
 
-BackupActions::BackupActions(QMenu* file, QWidget* window, ColonyDocument* document, ReportError reportError,
+BackupActions::BackupActions(QMenu* file, QWidget* window, ColonyEditFacade* facade, ReportError reportError,
                              AskQuestion ask)
-    : QObject(window), window_(window), document_(document), reportError_(std::move(reportError)), ask_(std::move(ask))
+    : QObject(window), window_(window), facade_(facade), document_(facade->document()), reportError_(std::move(reportError)), ask_(std::move(ask))
 {
     backUp_ = file->addAction(tr("&Back Up Now"), this, [this] { backUpNow(); });
     restore_ = file->addAction(tr("&Restore from Backup..."), this, &BackupActions::chooseAndRestore);
@@ -134,29 +135,22 @@ bool BackupActions::restore(const QString& backupPath)
                  "so this can be reversed by restoring that backup.")
                   .arg(QFileInfo(path).fileName(), name)))
         return false;
-    // Closed while the backup is copied in, so no cached record outlives the restore.
-    document_->close();
-    bool restored = true;
+    QString failure;
     try {
-        core::restoreBackup(toStdString(backupPath), toStdString(path), std::chrono::system_clock::now());
-    } catch (const std::exception& e) {
-        restored = false;
-        reportError_(tr("Cannot Restore the Backup"), QString::fromUtf8(e.what()));
-    }
-    try {
-        document_->open(path);
-        afterOpen();
+        failure = facade_->restoreBackup(backupPath);
     } catch (const std::exception& e) {
         reportError_(tr("Cannot Open Colony"), QString::fromUtf8(e.what()));
         return false;
     }
-    return restored;
+    if (!failure.isEmpty()) reportError_(tr("Cannot Restore the Backup"), failure);
+    afterOpen();
+    return failure.isEmpty();
 }
 
 void BackupActions::mergeAnotherColony()
 {
     if (!document_->isOpen() || document_->isReadOnly()) return;
-    MergeDialog dialog(document_, window_);
+    MergeDialog dialog(facade_, window_);
     dialog.exec();
 }
 
@@ -169,7 +163,7 @@ void BackupActions::setSessionObserver(const QString& observer)
 void BackupActions::applyUserName()
 {
     if (!document_->isOpen() || document_->isReadOnly()) return;
-    document_->store()->setUserName(toStdString(observer_.isEmpty() ? osUserName() : observer_));
+    document_->setAuditUserName(toStdString(observer_.isEmpty() ? osUserName() : observer_));
 }
 
 void BackupActions::afterOpen()
@@ -210,7 +204,7 @@ bool BackupActions::offerBackupFor(const QString& path, const core::ColonyFileEr
                   .arg(QString::fromUtf8(error.what()), takenText(newest.taken))))
         return false;
     try {
-        core::restoreBackup(newest.path, toStdString(path), std::chrono::system_clock::now());
+        facade_->restoreDamagedFile(toQString(newest.path), path);
     } catch (const std::exception& e) {
         reportError_(tr("Cannot Restore the Backup"), QString::fromUtf8(e.what()));
         return false;

@@ -15,6 +15,7 @@ class QWidget;
 namespace hierloom::ui {
 
 class ColonyDocument;
+class ColonyEditFacade;
 
 /// The desktop side of backups, restore and merge (issue 9): File > Back Up
 /// Now, Restore from Backup..., Merge Another Colony...; the scheduled backup
@@ -27,11 +28,11 @@ public:
     using ReportError = std::function<void(const QString& title, const QString& message)>;
     using AskQuestion = std::function<bool(const QString& title, const QString& message)>;
 
-    BackupActions(QMenu* file, QWidget* window, ColonyDocument* document, ReportError reportError, AskQuestion ask);
+    BackupActions(QMenu* file, QWidget* window, ColonyEditFacade* facade, ReportError reportError, AskQuestion ask);
 
     /// Takes a backup of the open colony now; the new file's path, or empty on failure.
     QString backUpNow();
-    /// Asks for confirmation, then puts `backupPath` back into the open colony and re-reads it.
+    /// Asks for confirmation, then has the edit facade put `backupPath` back into the open colony and re-read it.
     bool restore(const QString& backupPath);
     /// Runs the merge dialog (file chooser, dry run, report, real merge).
     void mergeAnotherColony();
@@ -60,6 +61,7 @@ private:
     void updateEnabled();
 
     QWidget* window_;
+    ColonyEditFacade* facade_;
     ColonyDocument* document_;
     ReportError reportError_;
     AskQuestion ask_;

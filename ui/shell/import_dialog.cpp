@@ -3,6 +3,7 @@
 
 #include "core/store/colony_import.h"
 #include "ui/document/colony_document.h"
+#include "ui/document/colony_edit_facade.h"
 #include "ui/widgets/help_browser.h"
 #include "ui/document/qt_convert.h"
 
@@ -18,8 +19,8 @@
 
 namespace hierloom::ui {
 
-ImportDialog::ImportDialog(ColonyDocument* document, QWidget* parent)
-    : QDialog(parent), document_(document), result_(new QLabel(this)), problems_(new QPlainTextEdit(this))
+ImportDialog::ImportDialog(ColonyEditFacade* facade, QWidget* parent)
+    : QDialog(parent), facade_(facade), document_(facade->document()), result_(new QLabel(this)), problems_(new QPlainTextEdit(this))
 {
     setWindowTitle(tr("Import CSV Files"));
     auto* intro = new QLabel(tr("Choose the files to add to the colony. Each is optional; "
@@ -101,16 +102,17 @@ bool ImportDialog::runImport()
 {
     problems_->clear();
     problemCount_ = 0;
-    core::ColonyStore* store = document_->store();
-    if (!store || document_->isReadOnly()) {
+    if (!document_->isOpen() || document_->isReadOnly()) {
         result_->setText(tr("No colony is open for writing; nothing was imported."));
         return false;
     }
     const core::ImportPaths paths{toStdString(animals_->text().trimmed()), toStdString(residences_->text().trimmed()),
                                   toStdString(encounters_->text().trimmed())};
     core::ImportResult result;
+    QString readBackError;
     try {
-        result = core::importFiles(*store, paths, core::today());
+        // The facade writes, re-reads the records and clears the undo history.
+        result = facade_->importFiles(paths, &readBackError);
     } catch (const core::ColonyFileError& error) {
         result_->setText(tr("The colony file could not be written; nothing was imported.\n%1")
                              .arg(toQString(error.what())));
@@ -131,12 +133,8 @@ bool ImportDialog::runImport()
                          .arg(result.animals)
                          .arg(result.residences)
                          .arg(result.encounters));
-    try {
-        document_->reload();
-    } catch (const core::ColonyFileError& error) {
-        result_->setText(result_->text() + u'\n' +
-                         tr("The colony could not be read back: %1").arg(toQString(error.what())));
-    }
+    if (!readBackError.isEmpty())
+        result_->setText(result_->text() + u'\n' + tr("The colony could not be read back: %1").arg(readBackError));
     return true;
 }
 

@@ -12,13 +12,14 @@ class QPlainTextEdit;
 namespace hierloom::ui {
 
 class ColonyDocument;
+class ColonyEditFacade;
 
 /// Chooses animals.csv, residences.csv and encounters.csv and imports them
 /// all or nothing; on failure lists every problem, on success the counts.
 class ImportDialog : public QDialog {
     Q_OBJECT
 public:
-    explicit ImportDialog(ColonyDocument* document, QWidget* parent = nullptr);
+    explicit ImportDialog(ColonyEditFacade* facade, QWidget* parent = nullptr);
 
     void setAnimalsPath(const QString& path);
     void setResidencesPath(const QString& path);
@@ -40,6 +41,7 @@ private:
     QLineEdit* addFileRow(QGridLayout* grid, int row, const QString& label);
     void updateButtons();
 
+    ColonyEditFacade* facade_;
     ColonyDocument* document_;
     QLineEdit* animals_;
     QLineEdit* residences_;

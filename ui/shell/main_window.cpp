@@ -55,12 +55,12 @@ MainWindow::MainWindow(const QString& colonyPath, QWidget* parent)
 {
     tabs_->addTab(animals_, tr("Animals"));
     tabs_->addTab(encounters_, tr("Encounters"));
-    analysis_ = addAnalysisViews(tabs_, document_, this);
     facade_ = new ColonyEditFacade(document_, this);
+    analysis_ = addAnalysisViews(tabs_, facade_, this);
     entry_ = new EncounterEntryPanel(facade_, this);
     entry_->setObjectName(QStringLiteral("entry"));
     tabs_->addTab(entry_, tr("Evening Entry"));
-    manager_ = addColonyManagerViews(this, tabs_, document_);
+    manager_ = addColonyManagerViews(this, tabs_, facade_);
     tabs_->setDocumentMode(true);
     stack_->addWidget(welcome_);
     stack_->addWidget(tabs_);
@@ -79,6 +79,9 @@ MainWindow::MainWindow(const QString& colonyPath, QWidget* parent)
     connect(entry_->observerBox(), &QComboBox::currentTextChanged, backups_, &BackupActions::setSessionObserver);
     connect(document_, &ColonyDocument::writeFailed, this,
             [this](const QString& message) { reportError(tr("Cannot Save the Change"), message); });
+    connect(document_, &ColonyDocument::historyCleared, this, [this](const QString& reason) {
+        statusBar()->showMessage(tr("Undo history cleared: %1.").arg(reason), 10000);
+    });
     connect(welcome_, &WelcomePanel::openRequested, this, [this] { openDialog(false); });
     connect(welcome_, &WelcomePanel::newRequested, this, &MainWindow::newColonyDialog);
     connect(welcome_, &WelcomePanel::demoRequested, this, &MainWindow::openDemoColony);
@@ -120,7 +123,7 @@ void MainWindow::buildMenus()
     addResearchExportAction(file, this, document_);
     file->addSeparator();
     backups_ = new BackupActions(
-        file, this, document_, [this](const QString& title, const QString& message) { reportError(title, message); },
+        file, this, facade_, [this](const QString& title, const QString& message) { reportError(title, message); },
         [this](const QString& title, const QString& message) { return askQuestion(title, message); });
     file->addSeparator();
     closeAction_ = file->addAction(tr("&Close"), this, &MainWindow::closeColony);
@@ -264,15 +267,11 @@ void MainWindow::openDialog(bool readOnly)
 void MainWindow::importCsv()
 {
     if (!document_->isOpen() || document_->isReadOnly()) return;
-    ImportDialog dialog(document_, this);
+    // The facade imports and clears the undo history when the import added records.
+    ImportDialog dialog(facade_, this);
     dialog.setStartFolder(lastFolder());
-    const size_t encountersBefore = document_->colony().encounters.size();
-    const size_t animalsBefore = document_->colony().animals.size();
     dialog.exec();
     setLastFolder(dialog.startFolder());
-    // An import is not in the undo history; commands recorded before it could no longer be undone safely.
-    if (document_->colony().encounters.size() != encountersBefore || document_->colony().animals.size() != animalsBefore)
-        document_->undoStack()->clear();
 }
 
 void MainWindow::closeColony() { document_->close(); }

@@ -3,6 +3,7 @@
 
 #include "core/store/colony_store.h"
 #include "ui/document/colony_document.h"
+#include "ui/document/colony_edit_facade.h"
 #include "ui/document/qt_convert.h"
 
 #include <QApplication>
@@ -22,9 +23,10 @@
 
 namespace hierloom::ui {
 
-MergeDialog::MergeDialog(ColonyDocument* document, QWidget* parent)
+MergeDialog::MergeDialog(ColonyEditFacade* facade, QWidget* parent)
     : QDialog(parent),
-      document_(document),
+      facade_(facade),
+      document_(facade->document()),
       fileLabel_(new QLabel(tr("No file chosen"), this)),
       text_(new QPlainTextEdit(this)),
       conflictBox_(new QGroupBox(tr("Records edited differently in the two files"), this)),
@@ -82,8 +84,7 @@ bool MergeDialog::check(const QString& otherPath)
         QApplication::setOverrideCursor(Qt::WaitCursor);
         const auto restoreCursor = qScopeGuard([] { QApplication::restoreOverrideCursor(); });
         try {
-            const core::ColonyStore other = core::ColonyStore::open(toStdString(otherPath), core::ColonyStore::Mode::ReadOnly);
-            report_ = core::mergeColonies(*document_->store(), other, {core::MergePreference::None, true, core::today()});
+            report_ = facade_->checkMerge(otherPath);
             checked_ = true;
         } catch (const std::exception& e) {
             error_ = QString::fromUtf8(e.what());
@@ -120,8 +121,7 @@ bool MergeDialog::merge()
     try {
         QApplication::setOverrideCursor(Qt::WaitCursor);
         const auto restoreCursor = qScopeGuard([] { QApplication::restoreOverrideCursor(); });
-        const core::ColonyStore other = core::ColonyStore::open(toStdString(otherPath_), core::ColonyStore::Mode::ReadOnly);
-        done = core::mergeColonies(*document_->store(), other, {preference(), false, core::today()});
+        done = facade_->merge(otherPath_, preference());
     } catch (const std::exception& e) {
         error_ = QString::fromUtf8(e.what());
         showState();
@@ -133,9 +133,7 @@ bool MergeDialog::merge()
         showState();
         return false;
     }
-    // The merge wrote outside the undo history, so older commands could no longer be undone safely.
-    document_->undoStack()->clear();
-    document_->reload();
+    // The facade re-read the records and cleared the undo history, saying why.
     text_->setPlainText(describe(report_, false));
     accept();
     return true;

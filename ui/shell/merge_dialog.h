@@ -13,6 +13,7 @@ class QRadioButton;
 namespace hierloom::ui {
 
 class ColonyDocument;
+class ColonyEditFacade;
 
 /// File > Merge Another Colony (issue 9): a dry run against the other file
 /// first, its report (added, skipped, conflicts), a choice for conflicts
@@ -21,7 +22,7 @@ class ColonyDocument;
 class MergeDialog : public QDialog {
     Q_OBJECT
 public:
-    explicit MergeDialog(ColonyDocument* document, QWidget* parent = nullptr);
+    explicit MergeDialog(ColonyEditFacade* facade, QWidget* parent = nullptr);
 
     /// Dry-runs the merge of `otherPath` into the open colony and shows the
     /// report; false (with errorText()) when the other file cannot be read.
@@ -46,6 +47,7 @@ private:
     void chooseFile();
     void showState();
 
+    ColonyEditFacade* facade_;
     ColonyDocument* document_;
     QString otherPath_;
     core::MergeReport report_;
