@@ -3,6 +3,7 @@
 
 #include "core/rules/animal_rules.h"
 #include "core/rules/encounter_rules.h"
+#include "core/rules/residence_rules.h"
 #include "core/store/record_binding.h"
 #include "core/base/residence_index.h"
 #include "core/store/sqlite_statement.h"
