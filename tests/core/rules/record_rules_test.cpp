@@ -201,7 +201,7 @@ std::optional<RuleCase> animalCase(AnimalRule rule, const Colony& colony)
         // An import only adds animals: none of them can already be a parent in the colony.
         return RuleCase{std::nullopt, edited("MA", [](Animal& a) { a.sex = Sex::Male; }), "sex", "must stay female"};
     case AnimalRule::ParentKeepsBirthOrder:
-        return RuleCase{std::nullopt, edited("SIRE", [](Animal& a) { a.birth = day("2009-01-01"); }), "birth_date",
+        return RuleCase{std::nullopt, edited("SIRE", [](Animal& a) { a.birth = day("2015-01-01"); }), "birth_date",
                         "is not before the birth of 'D1'"};
     case AnimalRule::Count: break;
     }
@@ -295,50 +295,50 @@ std::optional<RuleCase> encounterCase(EncounterRule rule, RuleColony& colony)
     return std::nullopt;
 }
 
+/// Runs the case of every value of `Rule` below its Count; a value without a case fails.
+template <typename Rule, typename MakeCase>
+void expectEveryRuleBothWays(RuleColony& colony, const std::string& file, MakeCase makeCase)
+{
+    for (int i = 0; i < static_cast<int>(Rule::Count); ++i) {
+        const auto rule = static_cast<Rule>(i);
+        const std::optional<RuleCase> c = makeCase(rule);
+        if (!c) ADD_FAILURE() << "no case for the rule " << ruleName(rule);
+        else expectSameBothWays(colony, file, ruleName(rule), *c);
+    }
+}
+
+template <typename Rule>
+int addNames(std::set<std::string>& names)
+{
+    for (int i = 0; i < static_cast<int>(Rule::Count); ++i) names.insert(ruleName(static_cast<Rule>(i)));
+    return static_cast<int>(Rule::Count);
+}
+
 } // namespace
 
 TEST(RecordRules, EveryAnimalRuleReadsTheSameInAnImportAndByHand)
 {
     RuleColony colony;
-    for (int i = 0; i < static_cast<int>(AnimalRule::Count); ++i) {
-        const auto rule = static_cast<AnimalRule>(i);
-        const auto c = animalCase(rule, colony.colony());
-        if (!c) ADD_FAILURE() << "no case for the animal rule " << ruleName(rule);
-        else expectSameBothWays(colony, "animals", ruleName(rule), *c);
-    }
+    expectEveryRuleBothWays<AnimalRule>(colony, "animals", [&](AnimalRule r) { return animalCase(r, colony.colony()); });
 }
 
 TEST(RecordRules, EveryResidenceRuleReadsTheSameInAnImportAndByHand)
 {
     RuleColony colony;
-    for (int i = 0; i < static_cast<int>(ResidenceRule::Count); ++i) {
-        const auto rule = static_cast<ResidenceRule>(i);
-        const auto c = residenceCase(rule, colony.colony());
-        if (!c) ADD_FAILURE() << "no case for the residence rule " << ruleName(rule);
-        else expectSameBothWays(colony, "residences", ruleName(rule), *c);
-    }
+    expectEveryRuleBothWays<ResidenceRule>(colony, "residences",
+                                           [&](ResidenceRule r) { return residenceCase(r, colony.colony()); });
 }
 
 TEST(RecordRules, EveryEncounterRuleReadsTheSameInAnImportAndByHand)
 {
     RuleColony colony;
-    for (int i = 0; i < static_cast<int>(EncounterRule::Count); ++i) {
-        const auto rule = static_cast<EncounterRule>(i);
-        const auto c = encounterCase(rule, colony);
-        if (!c) ADD_FAILURE() << "no case for the encounter rule " << ruleName(rule);
-        else expectSameBothWays(colony, "encounters", ruleName(rule), *c);
-    }
+    expectEveryRuleBothWays<EncounterRule>(colony, "encounters", [&](EncounterRule r) { return encounterCase(r, colony); });
 }
 
 TEST(RecordRules, EveryRuleHasItsOwnName)
 {
     std::set<std::string> names;
-    int rules = 0;
-    for (int i = 0; i < static_cast<int>(AnimalRule::Count); ++i, ++rules) names.insert(ruleName(static_cast<AnimalRule>(i)));
-    for (int i = 0; i < static_cast<int>(ResidenceRule::Count); ++i, ++rules)
-        names.insert(ruleName(static_cast<ResidenceRule>(i)));
-    for (int i = 0; i < static_cast<int>(EncounterRule::Count); ++i, ++rules)
-        names.insert(ruleName(static_cast<EncounterRule>(i)));
+    const int rules = addNames<AnimalRule>(names) + addNames<ResidenceRule>(names) + addNames<EncounterRule>(names);
     EXPECT_EQ(names.size(), static_cast<size_t>(rules));
     EXPECT_EQ(names.count("?"), 0U);
 }
