@@ -215,12 +215,13 @@ void checkEncounters(const ResidenceIndex& where, std::unordered_set<std::string
     FieldProblems row; // reused: no allocation while rows pass
     forEachRow(src, cols, P, [&](const std::vector<std::string_view>& f, int line) {
         Encounter e;
+        constexpr unsigned dateUnread = 1; // the only cell whose reading the encounter rules need to know of
         unsigned unread = 0;
         const std::string_view dateText = cols.field(f, DateCol);
         if (dateText.empty()) {
             row.push_back({"date", "is empty"});
-            unread = 1;
-        } else if (const auto date = dateField(dateText, "date", row, unread, 1)) {
+            unread = dateUnread;
+        } else if (const auto date = dateField(dateText, "date", row, unread, dateUnread)) {
             e.date = *date;
         }
         const std::string_view timeText = cols.field(f, Time);
