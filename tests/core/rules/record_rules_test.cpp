@@ -23,19 +23,8 @@ const Day kToday = *parseDate("2024-06-30");
 
 Day day(const char* text) { return *parseDate(text); }
 
-// LONE lives in the colony but in no group.
-const char* kAnimals = "id,name,sex,birth_date,mother,father,entry_date,entry_type,exit_date,exit_type\n"
-                       "MA,Matriarch,F,2008-04-01,,,2010-01-01,founder,,\n"
-                       "SIRE,Sire,M,2007-05-01,,,2010-01-01,founder,,\n"
-                       "D1,Daughter,F,2014-05-02,MA,SIRE,,born,,\n"
-                       "D2,Second,F,2016-04-20,MA,,,born,2023-02-01,died\n"
-                       "LONE,,F,,,,2012-01-01,founder,,\n";
-const char* kResidences = "animal,group,from,to\n"
-                          "MA,east,2010-01-01,\n"
-                          "SIRE,east,2010-01-01,2019-12-31\n"
-                          "SIRE,west,2020-01-01,\n"
-                          "D1,east,2014-05-02,\n"
-                          "D2,east,2016-04-20,\n";
+// The import tests' colony, and LONE: in the colony but in no group.
+const char* kLone = "id,sex,entry_date,entry_type\nLONE,F,2012-01-01,founder\n";
 const char* kAnimalHeader = "id,name,sex,birth_date,mother,father,entry_date,entry_type,exit_date,exit_type\n";
 const char* kResidenceHeader = "animal,group,from,to\n";
 const char* kEncounterHeader = "date,time,winner,loser,outcome,behaviour,group,observer,note\n";
@@ -57,9 +46,14 @@ public:
     RuleColony()
         : store_(ColonyStore::create(dir_.file("c.hierloom")))
     {
+        using hierloom::test::kBaseAnimals, hierloom::test::kBaseResidences;
         const ImportResult base =
-            importFiles(store_, {dir_.write("a.csv", kAnimals), dir_.write("r.csv", kResidences), ""}, kToday);
+            importFiles(store_, {dir_.write("a.csv", kBaseAnimals), dir_.write("r.csv", kBaseResidences), ""}, kToday);
         EXPECT_TRUE(base.ok()) << base.problems.text();
+        // An empty residences file with LONE, which alone would be placed in group "main".
+        const ImportResult lone =
+            importFiles(store_, {dir_.write("lone.csv", kLone), dir_.write("none.csv", kResidenceHeader), ""}, kToday);
+        EXPECT_TRUE(lone.ok()) << lone.problems.text();
         colony_ = store_.load();
     }
 
