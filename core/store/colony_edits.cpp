@@ -3,6 +3,8 @@
 
 #include "core/rules/animal_rules.h"
 #include "core/rules/encounter_rules.h"
+#include "core/rules/record_messages.h"
+#include "core/rules/residence_rules.h"
 #include "core/store/record_binding.h"
 #include "core/base/residence_index.h"
 #include "core/store/sqlite_statement.h"
@@ -97,11 +99,10 @@ AnimalChange planBirth(const Colony& colony, Animal newborn, Day today)
     const int m = where.animal(newborn.mother);
     std::string group;
     if (m >= 0 && *newborn.birth <= today) {
-        if (!where.presentOn(m, *newborn.birth))
-            return refused("mother", quotedValue(newborn.mother) + " was not alive in the colony on " + formatDate(*newborn.birth));
-        const int g = where.groupOn(m, *newborn.birth);
-        if (g < 0) return refused("mother", quotedValue(newborn.mother) + " was in no group on " + formatDate(*newborn.birth));
-        group = where.groups()[static_cast<size_t>(g)];
+        // Alive and in a group that day, in the encounter rules' words.
+        if (auto problem = checkEncounterAnimal(newborn.mother, {}, *newborn.birth, where))
+            return refused("mother", std::move(*problem));
+        group = where.groups()[static_cast<size_t>(where.groupOn(m, *newborn.birth))];
     }
     AnimalChange c = planNewAnimal(colony, std::move(newborn), group, today);
     return c;
@@ -110,7 +111,7 @@ AnimalChange planBirth(const Colony& colony, Animal newborn, Day today)
 AnimalChange planAnimalEdit(const Colony& colony, const Animal& input, Day today)
 {
     const Animal* old = findByUid(colony, input.uid);
-    if (!old) return refused("id", quotedValue(input.id) + " is not an animal of the colony");
+    if (!old) return refused("id", notAnAnimalOf(input.id, "the colony"));
     if (old->id != input.id)
         return refused("id", "cannot be changed (" + old->id + " is the id used in the notebooks and encounters)");
     Animal a = input;
@@ -146,8 +147,7 @@ AnimalChange planAnimalEdit(const Colony& colony, const Animal& input, Day today
 AnimalChange planExit(const Colony& colony, const std::string& id, Day date, ExitType type, Day today)
 {
     const auto rec = animalRecord(colony, id);
-    if (!rec) return refused("id", quotedValue(id) + " is not an animal of the colony");
-    if (type == ExitType::None) return refused("exit_type", "is required when exit_date is given (died or removed)");
+    if (!rec) return refused("id", notAnAnimalOf(id, "the colony"));
     Animal a = rec->animal;
     a.exit = date;
     a.exitType = type;
@@ -157,9 +157,9 @@ AnimalChange planExit(const Colony& colony, const std::string& id, Day date, Exi
 AnimalChange planMove(const Colony& colony, const std::string& id, const std::string& group, Day date, Day today)
 {
     auto rec = animalRecord(colony, id);
-    if (!rec) return refused("id", quotedValue(id) + " is not an animal of the colony");
+    if (!rec) return refused("id", notAnAnimalOf(id, "the colony"));
     if (group.empty()) return refused("group", "is empty");
-    if (date > today) return refused("from", quotedValue(formatDate(date)) + " is in the future");
+    if (date > today) return refused("from", inTheFuture(date));
     const Animal& a = rec->animal;
     AnimalChange c;
     c.before = rec;

@@ -8,6 +8,9 @@
 #include "core/store/record_appender.h"
 #include "core/base/residence_index.h"
 #include "core/store/write_transaction.h"
+#include "core/rules/animal_rules.h"
+#include "core/rules/encounter_rules.h"
+#include "core/rules/residence_rules.h"
 
 #include <algorithm>
 #include <exception>
@@ -21,16 +24,15 @@ namespace {
 
 
 /// Checks an optional uid cell: its form, and that no record already has it.
-void checkUid(std::string_view uid, std::unordered_set<std::string>& seen, const std::string& file, int line,
-              ImportProblems& problems, std::string& out)
+void checkUid(std::string_view uid, std::unordered_set<std::string>& seen, FieldProblems& row, std::string& out)
 {
     if (uid.empty()) return;
     if (!isValidUid(uid)) {
-        problems.add(file, line, "uid", quotedValue(uid) + " is not a record uid (36 characters: 8-4-4-4-12 hex digits)");
+        row.push_back({"uid", quotedValue(uid) + " is not a record uid (36 characters: 8-4-4-4-12 hex digits)"});
         return;
     }
     if (!seen.insert(std::string(uid)).second) {
-        problems.add(file, line, "uid", quotedValue(uid) + " is already in the colony or earlier in this file");
+        row.push_back({"uid", quotedValue(uid) + " is already in the colony or earlier in this file"});
         return;
     }
     out = std::string(uid);
@@ -81,23 +83,25 @@ void forEachRow(const ImportSource& src, CsvColumns& columns, ImportProblems& pr
     if (!reader.error().empty()) problems.add(src.name, reader.line(), "", reader.error());
 }
 
-/// Parses an optional date field: empty -> nullopt; bad or future -> problem.
-std::optional<Day> dateField(std::string_view text, Day today, const std::string& file, int line, const char* column,
-                             ImportProblems& problems, bool& bad)
+/// Parses an optional date field: empty -> nullopt; not a date -> problem and
+/// `unread |= flag` (whether it lies in the future is a rule, checked later).
+std::optional<Day> dateField(std::string_view text, const char* column, FieldProblems& row, unsigned& unread,
+                             unsigned flag)
 {
     if (text.empty()) return std::nullopt;
     auto d = parseDate(text);
     if (!d) {
-        problems.add(file, line, column, quotedValue(text) + " is not a real date in the form YYYY-MM-DD");
-        bad = true;
-        return std::nullopt;
-    }
-    if (*d > today) {
-        problems.add(file, line, column, quotedValue(text) + " is in the future");
-        bad = true;
-        return std::nullopt;
+        row.push_back({column, quotedValue(text) + " is not a real date in the form YYYY-MM-DD"});
+        unread |= flag;
     }
     return d;
+}
+
+/// Moves a row's problems into the import's list, located at file:line.
+void report(FieldProblems& row, const std::string& file, int line, ImportProblems& problems)
+{
+    for (FieldProblem& p : row) problems.add(file, line, std::move(p.field), std::move(p.message));
+    row.clear();
 }
 
 void planAnimals(const std::vector<Animal>& existing, const ImportSource& src, Day today, ImportPlan& plan)
@@ -110,129 +114,47 @@ void planAnimals(const std::vector<Animal>& existing, const ImportSource& src, D
     for (const Animal& a : existing) uids.insert(a.uid);
     ImportProblems& P = plan.problems;
     const std::string& F = src.name;
-    IdIndex existingIds;
-    for (size_t i = 0; i < existing.size(); ++i) existingIds.emplace(existing[i].id, static_cast<int>(i));
-    IdIndex fileIds;
+    AnimalContext ctx(existing, today);
+    ctx.useFile(plan.animals, "this file or the colony");
     std::vector<int> lines;
+    FieldProblems row;
 
+    // The text of each row, then the rules about the record itself (core/rules/animal_rules.h).
     forEachRow(src, cols, P, [&](const std::vector<std::string_view>& f, int line) {
         Animal a;
-        bool bad = false;
-        const std::string_view id = cols.field(f, Id);
-        if (id.empty()) {
-            P.add(F, line, "id", "is empty; every animal needs an id");
-            bad = true;
-        } else if (!isValidAnimalId(id)) {
-            P.add(F, line, "id", quotedValue(id) + " must be 1-32 letters, digits, '_', '-' or '.'");
-            bad = true;
-        } else if (existingIds.count(id)) {
-            P.add(F, line, "id", quotedValue(id) + " is already in the colony");
-            bad = true;
-        } else if (auto it = fileIds.find(id); it != fileIds.end()) {
-            P.add(F, line, "id", quotedValue(id) + " appears twice (first on line " +
-                                     std::to_string(lines[static_cast<size_t>(it->second)]) + ")");
-            bad = true;
-        }
-        a.id = std::string(id);
+        unsigned unread = 0;
+        a.id = std::string(cols.field(f, Id));
         a.name = std::string(cols.field(f, Name));
         const auto sex = parseSex(cols.field(f, SexCol));
-        if (!sex || cols.field(f, SexCol).empty()) {
-            P.add(F, line, "sex", quotedValue(cols.field(f, SexCol)) + " must be F, M or U");
-            bad = true;
-        } else {
-            a.sex = *sex;
-        }
-        a.birth = dateField(cols.field(f, Birth), today, F, line, "birth_date", P, bad);
+        if (!sex || cols.field(f, SexCol).empty()) row.push_back({"sex", quotedValue(cols.field(f, SexCol)) + " must be F, M or U"});
+        else a.sex = *sex;
+        a.birth = dateField(cols.field(f, Birth), "birth_date", row, unread, AnimalUnread::birth);
         a.mother = std::string(cols.field(f, Mother));
         a.father = std::string(cols.field(f, Father));
-        a.entry = dateField(cols.field(f, Entry), today, F, line, "entry_date", P, bad);
+        a.entry = dateField(cols.field(f, Entry), "entry_date", row, unread, AnimalUnread::entry);
         if (!a.entry) a.entry = a.birth;
-        const auto et = parseEntryType(cols.field(f, EntryTypeCol));
-        if (!et) {
-            P.add(F, line, "entry_type", quotedValue(cols.field(f, EntryTypeCol)) + " must be born, introduced or founder");
-            bad = true;
-        } else {
-            a.entryType = *et;
+        if (const auto et = parseEntryType(cols.field(f, EntryTypeCol))) a.entryType = *et;
+        else row.push_back({"entry_type", quotedValue(cols.field(f, EntryTypeCol)) + " must be born, introduced or founder"});
+        a.exit = dateField(cols.field(f, Exit), "exit_date", row, unread, AnimalUnread::exit);
+        if (const auto xt = parseExitType(cols.field(f, ExitTypeCol))) a.exitType = *xt;
+        else {
+            row.push_back({"exit_type", quotedValue(cols.field(f, ExitTypeCol)) + " must be died or removed"});
+            unread |= AnimalUnread::exitType;
         }
-        a.exit = dateField(cols.field(f, Exit), today, F, line, "exit_date", P, bad);
-        const auto xt = parseExitType(cols.field(f, ExitTypeCol));
-        if (!xt) {
-            P.add(F, line, "exit_type", quotedValue(cols.field(f, ExitTypeCol)) + " must be died or removed");
-            bad = true;
-        } else {
-            a.exitType = *xt;
-        }
-        if (!cols.field(f, Exit).empty() && cols.field(f, ExitTypeCol).empty()) {
-            P.add(F, line, "exit_type", "is required when exit_date is given (died or removed)");
-            bad = true;
-        }
-        if (cols.field(f, Exit).empty() && !cols.field(f, ExitTypeCol).empty()) {
-            P.add(F, line, "exit_date", "is required when exit_type is given");
-            bad = true;
-        }
-        if (!a.birth && !a.entry && !bad) {
-            P.add(F, line, "entry_date", "is needed when birth_date is empty (the day the animal joined)");
-            bad = true;
-        }
-        if (a.birth && a.entry && *a.entry < *a.birth) {
-            P.add(F, line, "entry_date", formatDate(*a.entry) + " is before the birth date " + formatDate(*a.birth));
-            bad = true;
-        }
-        if (a.exit && a.entry && *a.exit < *a.entry) {
-            P.add(F, line, "exit_date", formatDate(*a.exit) + " is before the entry date " + formatDate(*a.entry));
-            bad = true;
-        }
-        checkUid(cols.field(f, Uid), uids, F, line, P, a.uid);
-        if (!id.empty() && !fileIds.count(id)) fileIds.emplace(std::string(id), static_cast<int>(plan.animals.size()));
+        checkAnimalRow(a, ctx, row, unread);
+        checkUid(cols.field(f, Uid), uids, row, a.uid);
+        report(row, F, line, P);
         lines.push_back(line);
         plan.animals.push_back(std::move(a));
+        if (!plan.animals.back().id.empty()) ctx.addFileRow(plan.animals.size() - 1, line);
         return true;
     });
 
-    // Parents: known, of the right sex, born before their offspring.
-    auto find = [&](const std::string& id) -> const Animal* {
-        if (auto it = fileIds.find(id); it != fileIds.end()) return &plan.animals[static_cast<size_t>(it->second)];
-        if (auto it = existingIds.find(id); it != existingIds.end()) return &existing[static_cast<size_t>(it->second)];
-        return nullptr;
-    };
+    // Parents and loops, once every row is known.
     for (size_t i = 0; i < plan.animals.size() && !P.full(); ++i) {
-        const Animal& a = plan.animals[i];
-        const int line = lines[i];
-        struct Parent {
-            const std::string& id;
-            const char* column;
-            Sex sex;
-            const char* word;
-        };
-        for (const Parent& p : {Parent{a.mother, "mother", Sex::Female, "female"},
-                                Parent{a.father, "father", Sex::Male, "male"}}) {
-            if (p.id.empty()) continue;
-            const Animal* parent = find(p.id);
-            if (p.id == a.id) P.add(F, line, p.column, quotedValue(p.id) + " is the animal itself");
-            else if (!parent) P.add(F, line, p.column, quotedValue(p.id) + " is not an animal of this file or the colony");
-            else if (parent->sex != p.sex)
-                P.add(F, line, p.column, quotedValue(p.id) + " is not recorded as " + p.word);
-            else if (parent->birth && a.birth && *parent->birth >= *a.birth)
-                P.add(F, line, p.column, quotedValue(p.id) + " was born on " + formatDate(*parent->birth) +
-                                             ", not before her offspring (" + formatDate(*a.birth) + ")");
-        }
+        checkAnimalLinks(plan.animals[i], ctx, row);
+        report(row, F, lines[i], P);
     }
-    // No animal may be its own ancestor: walk parent links with colouring.
-    std::vector<int> state(plan.animals.size(), 0);
-    std::function<bool(size_t)> cyclic = [&](size_t i) -> bool {
-        if (state[i] == 1) return true;
-        if (state[i] == 2) return false;
-        state[i] = 1;
-        for (const std::string* parent : {&plan.animals[i].mother, &plan.animals[i].father}) {
-            auto it = fileIds.find(*parent);
-            if (it != fileIds.end() && cyclic(static_cast<size_t>(it->second))) return true;
-        }
-        state[i] = 2;
-        return false;
-    };
-    for (size_t i = 0; i < plan.animals.size() && !P.full(); ++i)
-        if (state[i] == 0 && cyclic(i))
-            P.add(F, lines[i], "mother", quotedValue(plan.animals[i].id) + " would be its own ancestor (a loop of parent links)");
 }
 
 void planResidences(const std::vector<Animal>& allAnimals, const std::vector<Residence>& existing,
@@ -246,73 +168,35 @@ void planResidences(const std::vector<Animal>& allAnimals, const std::vector<Res
     const std::string& F = src.name;
     IdIndex ids;
     for (size_t i = 0; i < allAnimals.size(); ++i) ids.emplace(allAnimals[i].id, static_cast<int>(i));
-    struct Span {
-        Day from, to;
-        int line; // 0 for rows already in the colony
-    };
-    std::vector<std::vector<Span>> spans(allAnimals.size());
+    std::vector<std::vector<StaySpan>> spans(allAnimals.size());
     for (const Residence& r : existing)
         if (auto it = ids.find(r.animal); it != ids.end())
             spans[static_cast<size_t>(it->second)].push_back({r.from, r.to.value_or(ResidenceIndex::openEnd), 0});
+    FieldProblems row;
 
+    // The text of each row, then the rules about the stay (core/rules/residence_rules.h).
     forEachRow(src, cols, P, [&](const std::vector<std::string_view>& f, int line) {
-        bool bad = false;
         Residence r;
-        const std::string_view id = cols.field(f, AnimalCol);
-        auto it = ids.find(id);
-        if (it == ids.end()) {
-            P.add(F, line, "animal", quotedValue(id) + " is not an animal of the colony or of the animals file");
-            bad = true;
-        }
-        r.animal = std::string(id);
+        unsigned unread = 0;
+        r.animal = std::string(cols.field(f, AnimalCol));
         r.group = std::string(cols.field(f, GroupCol));
-        if (r.group.empty()) {
-            P.add(F, line, "group", "is empty");
-            bad = true;
+        const auto from = dateField(cols.field(f, From), "from", row, unread, ResidenceUnread::from);
+        if (cols.field(f, From).empty()) {
+            row.push_back({"from", "is empty; the first day in the group is required"});
+            unread |= ResidenceUnread::from;
         }
-        const auto from = dateField(cols.field(f, From), today, F, line, "from", P, bad);
-        if (!from && cols.field(f, From).empty()) {
-            P.add(F, line, "from", "is empty; the first day in the group is required");
-            bad = true;
-        }
-        r.to = dateField(cols.field(f, To), today, F, line, "to", P, bad);
         if (from) r.from = *from;
-        checkUid(cols.field(f, Uid), uids, F, line, P, r.uid);
-        if (from && r.to && *r.to < *from) {
-            P.add(F, line, "to", formatDate(*r.to) + " is before from " + formatDate(*from));
-            bad = true;
+        r.to = dateField(cols.field(f, To), "to", row, unread, ResidenceUnread::to);
+        auto it = ids.find(r.animal);
+        ResidenceContext ctx{today, nullptr, nullptr, "the colony or of the animals file"};
+        if (it != ids.end()) {
+            ctx.animal = &allAnimals[static_cast<size_t>(it->second)];
+            ctx.others = &spans[static_cast<size_t>(it->second)];
         }
-        if (!bad) {
-            const Animal& a = allAnimals[static_cast<size_t>(it->second)];
-            const auto start = lifeStart(a);
-            if (start && r.from < *start) {
-                P.add(F, line, "from", formatDate(r.from) + " is before " + a.id + " joined the colony (" +
-                                           formatDate(*start) + ")");
-                bad = true;
-            } else if (a.exit && r.from > *a.exit) {
-                P.add(F, line, "from", formatDate(r.from) + " is after " + a.id + " left the colony (" +
-                                           formatDate(*a.exit) + ")");
-                bad = true;
-            } else if (a.exit && r.to && *r.to > *a.exit) {
-                P.add(F, line, "to", formatDate(*r.to) + " is after " + a.id + " left the colony (" +
-                                         formatDate(*a.exit) + ")");
-                bad = true;
-            }
-        }
-        if (!bad) {
-            auto& mine = spans[static_cast<size_t>(it->second)];
-            const Day to = r.to.value_or(ResidenceIndex::openEnd);
-            for (const Span& s : mine)
-                if (s.from <= to && r.from <= s.to) {
-                    P.add(F, line, "from",
-                          "this stay of " + r.animal + " overlaps " +
-                              (s.line > 0 ? "the one on line " + std::to_string(s.line) : std::string("one already in the colony")) +
-                              " (an animal lives in one group at a time)");
-                    bad = true;
-                    break;
-                }
-            mine.push_back({r.from, to, line});
-        }
+        checkUid(cols.field(f, Uid), uids, row, r.uid);
+        if (checkStay(r, ctx, row, unread))
+            spans[static_cast<size_t>(it->second)].push_back({r.from, r.to.value_or(ResidenceIndex::openEnd), line});
+        report(row, F, line, P);
         plan.residences.push_back(std::move(r));
         return true;
     });
@@ -328,76 +212,32 @@ void checkEncounters(const ResidenceIndex& where, std::unordered_set<std::string
     CsvColumns cols({{"date", true}, {"time", false}, {"winner", true}, {"loser", true}, {"outcome", false},
                      {"behaviour", false}, {"group", false}, {"observer", false}, {"note", false}, {"uid", false}});
     const std::string& F = src.name;
+    FieldProblems row; // reused: no allocation while rows pass
     forEachRow(src, cols, P, [&](const std::vector<std::string_view>& f, int line) {
-        bool bad = false;
         Encounter e;
+        constexpr unsigned dateUnread = 1; // the only cell whose reading the encounter rules need to know of
+        unsigned unread = 0;
         const std::string_view dateText = cols.field(f, DateCol);
-        const auto date = dateField(dateText, today, F, line, "date", P, bad);
-        if (!date && dateText.empty()) {
-            P.add(F, line, "date", "is empty");
-            bad = true;
+        if (dateText.empty()) {
+            row.push_back({"date", "is empty"});
+            unread = dateUnread;
+        } else if (const auto date = dateField(dateText, "date", row, unread, dateUnread)) {
+            e.date = *date;
         }
-        if (date) e.date = *date;
         const std::string_view timeText = cols.field(f, Time);
-        if (!timeText.empty()) {
-            e.time = parseTimeOfDay(timeText);
-            if (!e.time) {
-                P.add(F, line, "time", quotedValue(timeText) + " is not a time of day in the form HH:MM (24 h)");
-                bad = true;
-            }
-        }
-        const std::string_view w = cols.field(f, Winner);
-        const std::string_view l = cols.field(f, Loser);
-        const int wi = where.animal(w);
-        const int li = where.animal(l);
-        if (wi < 0) P.add(F, line, "winner", w.empty() ? std::string("is empty") : quotedValue(w) + " is not an animal of the colony");
-        if (li < 0) P.add(F, line, "loser", l.empty() ? std::string("is empty") : quotedValue(l) + " is not an animal of the colony");
-        if (wi >= 0 && wi == li) P.add(F, line, "loser", quotedValue(l) + " is also the winner; an encounter needs two animals");
-        bad = bad || wi < 0 || li < 0 || wi == li;
-        const auto outcome = parseOutcome(cols.field(f, OutcomeCol));
-        if (!outcome) {
-            P.add(F, line, "outcome", quotedValue(cols.field(f, OutcomeCol)) + " must be decided or draw");
-            bad = true;
-        } else {
-            e.outcome = *outcome;
-        }
-        const std::string_view groupText = cols.field(f, GroupCol);
-        if (date && wi >= 0 && li >= 0 && wi != li) {
-            int groups[2] = {-1, -1};
-            const int who[2] = {wi, li};
-            const char* column[2] = {"winner", "loser"};
-            for (int k = 0; k < 2; ++k) {
-                const std::string_view id = k == 0 ? w : l;
-                if (!where.presentOn(who[k], *date)) {
-                    P.add(F, line, column[k], quotedValue(id) + " was not alive in the colony on " + formatDate(*date));
-                    bad = true;
-                } else if ((groups[k] = where.groupOn(who[k], *date)) < 0) {
-                    P.add(F, line, column[k], quotedValue(id) + " was in no group on " + formatDate(*date));
-                    bad = true;
-                }
-            }
-            if (!bad && groups[0] != groups[1]) {
-                P.add(F, line, "loser", quotedValue(l) + " was in group " + quotedValue(where.groups()[static_cast<size_t>(groups[1])]) +
-                                            " on " + formatDate(*date) + ", not with " + std::string(w) + " in " +
-                                            quotedValue(where.groups()[static_cast<size_t>(groups[0])]));
-                bad = true;
-            }
-            if (!bad) {
-                const std::string& shared = where.groups()[static_cast<size_t>(groups[0])];
-                if (!groupText.empty() && groupText != shared) {
-                    P.add(F, line, "group", quotedValue(groupText) + " differs from the group both animals were in on " +
-                                                formatDate(*date) + " (" + quotedValue(shared) + ")");
-                    bad = true;
-                }
-                e.group = shared;
-            }
-        }
-        e.winner = std::string(w);
-        e.loser = std::string(l);
+        if (!timeText.empty() && !(e.time = parseTimeOfDay(timeText))) row.push_back({"time", notATimeOfDay(timeText)});
+        if (const auto outcome = parseOutcome(cols.field(f, OutcomeCol))) e.outcome = *outcome;
+        else row.push_back({"outcome", notAnOutcome(cols.field(f, OutcomeCol))});
+        e.winner = std::string(cols.field(f, Winner));
+        e.loser = std::string(cols.field(f, Loser));
+        e.group = std::string(cols.field(f, GroupCol));
+        const std::string* shared = checkEncounterRow(e, where, today, row, unread == 0);
+        if (shared) e.group = *shared;
         e.behaviour = std::string(cols.field(f, Behaviour));
         e.observer = std::string(cols.field(f, Observer));
         e.note = std::string(cols.field(f, Note));
-        checkUid(cols.field(f, Uid), uids, F, line, P, e.uid);
+        checkUid(cols.field(f, Uid), uids, row, e.uid);
+        if (!row.empty()) report(row, F, line, P);
         return !P.empty() || accept(e);
     });
 }

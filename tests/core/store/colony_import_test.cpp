@@ -15,17 +15,8 @@ namespace {
 
 const Day kToday = *parseDate("2024-06-30");
 
-const char* kAnimals = "id,name,sex,birth_date,mother,father,entry_date,entry_type,exit_date,exit_type\n"
-                       "MA,Matriarch,F,2008-04-01,,,2010-01-01,founder,,\n"
-                       "SIRE,Sire,M,2007-05-01,,,2010-01-01,founder,,\n"
-                       "D1,Daughter,F,2014-05-02,MA,SIRE,,born,,\n"
-                       "D2,Second,F,2016-04-20,MA,,,born,2023-02-01,died\n";
-const char* kResidences = "animal,group,from,to\n"
-                          "MA,east,2010-01-01,\n"
-                          "SIRE,east,2010-01-01,2019-12-31\n"
-                          "SIRE,west,2020-01-01,\n"
-                          "D1,east,2014-05-02,\n"
-                          "D2,east,2016-04-20,\n";
+const char* kAnimals = hierloom::test::kBaseAnimals;
+const char* kResidences = hierloom::test::kBaseResidences;
 
 /// Imports into a fresh colony already holding the base animals and residences;
 /// returns the problem text and checks the file did not change when it failed.
