@@ -66,24 +66,25 @@ FieldProblems checkAnimal(const Animal& a, const std::vector<Animal>& colony, Da
 
     // A loop of parent links can only pass through `a`: walk its ancestors.
     if (!a.id.empty()) {
-        std::vector<const std::string*> todo{&a.mother, &a.father};
+        // Each ancestor remembers which of a's columns it was reached through, which is the one reported.
+        std::vector<std::pair<const std::string*, const char*>> todo{{&a.mother, "mother"}, {&a.father, "father"}};
         std::unordered_set<std::string_view> seen;
-        bool loop = false;
+        const char* loop = nullptr;
         while (!todo.empty() && !loop) {
-            const std::string* id = todo.back();
+            const auto [id, column] = todo.back();
             todo.pop_back();
             if (id->empty() || !seen.insert(*id).second) continue;
             if (*id == a.id) {
-                loop = true;
+                loop = column;
                 break;
             }
             auto it = byId.find(*id);
             if (it == byId.end()) continue;
-            todo.push_back(&it->second->mother);
-            todo.push_back(&it->second->father);
+            todo.push_back({&it->second->mother, column});
+            todo.push_back({&it->second->father, column});
         }
         if (loop && a.mother != a.id && a.father != a.id)
-            out.push_back({"mother", quotedValue(a.id) + " would be its own ancestor (a loop of parent links)"});
+            out.push_back({loop, quotedValue(a.id) + " would be its own ancestor (a loop of parent links)"});
     }
 
     // Edits must keep the animal a valid parent of its recorded offspring.

@@ -230,9 +230,21 @@ void planAnimals(const std::vector<Animal>& existing, const ImportSource& src, D
         state[i] = 2;
         return false;
     };
-    for (size_t i = 0; i < plan.animals.size() && !P.full(); ++i)
-        if (state[i] == 0 && cyclic(i))
-            P.add(F, lines[i], "mother", quotedValue(plan.animals[i].id) + " would be its own ancestor (a loop of parent links)");
+    for (size_t i = 0; i < plan.animals.size() && !P.full(); ++i) {
+        if (state[i] != 0) continue;
+        // The column whose link leads into the loop is the one reported.
+        state[i] = 1;
+        const char* column = nullptr;
+        for (const auto& [parent, name] : {std::pair{&plan.animals[i].mother, "mother"}, std::pair{&plan.animals[i].father, "father"}}) {
+            auto it = fileIds.find(*parent);
+            if (it != fileIds.end() && cyclic(static_cast<size_t>(it->second))) {
+                column = name;
+                break;
+            }
+        }
+        if (!column) state[i] = 2;
+        else P.add(F, lines[i], column, quotedValue(plan.animals[i].id) + " would be its own ancestor (a loop of parent links)");
+    }
 }
 
 void planResidences(const std::vector<Animal>& allAnimals, const std::vector<Residence>& existing,
