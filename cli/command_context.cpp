@@ -7,6 +7,7 @@
 #include <filesystem>
 #include <fstream>
 #include <ostream>
+#include <unistd.h>
 
 namespace hierloom::cli {
 
@@ -34,17 +35,42 @@ void emit(CommandContext& ctx, const std::string& text)
         ctx.out.flush();
         return;
     }
-    const std::string tmp = ctx.outFile + ".part";
-    {
+    writeFilesTogether({{ctx.outFile, text}});
+}
+
+void writeFilesTogether(const std::vector<std::pair<std::string, std::string>>& pathsAndTexts)
+{
+    std::vector<std::string> temps;
+    auto removeTemps = [&temps] {
+        std::error_code ec;
+        for (const std::string& t : temps) std::filesystem::remove(t, ec);
+    };
+    for (const auto& [path, text] : pathsAndTexts) {
+        // Per process, so two programs writing the same file never share a temporary.
+        const std::string tmp = path + ".part-" + std::to_string(::getpid());
+        temps.push_back(tmp);
         std::ofstream f(tmp, std::ios::binary | std::ios::trunc);
-        if (!f) throw BadInputError("--out: cannot write " + ctx.outFile);
+        if (!f) {
+            removeTemps();
+            throw BadInputError("--out: cannot write " + path);
+        }
         f << text;
         f.flush();
-        if (!f) throw BadInputError("--out: writing " + ctx.outFile + " failed (disk full?)");
+        if (!f) {
+            f.close();
+            removeTemps();
+            throw BadInputError("--out: writing " + path + " failed (disk full?)");
+        }
     }
-    std::error_code ec;
-    std::filesystem::rename(tmp, ctx.outFile, ec);
-    if (ec) throw BadInputError("--out: cannot write " + ctx.outFile + ": " + ec.message());
+    for (size_t i = 0; i < temps.size(); ++i) {
+        std::error_code ec;
+        std::filesystem::rename(temps[i], pathsAndTexts[i].first, ec);
+        if (ec) {
+            // The files already renamed are complete; the rest are not written at all.
+            for (size_t j = i; j < temps.size(); ++j) std::filesystem::remove(temps[j], ec);
+            throw BadInputError("--out: cannot write " + pathsAndTexts[i].first + ": " + ec.message());
+        }
+    }
 }
 
 } // namespace hierloom::cli

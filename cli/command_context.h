@@ -6,6 +6,8 @@
 #include <optional>
 #include <stdexcept>
 #include <string>
+#include <utility>
+#include <vector>
 
 namespace CLI {
 class App;
@@ -42,5 +44,10 @@ std::optional<hierloom::core::Day> optionDate(const std::string& text, const cha
 
 /// Writes `text` to --out FILE (atomically, via a temporary file) or to standard output.
 void emit(CommandContext& ctx, const std::string& text);
+
+/// Writes several files all or nothing: each into a temporary file beside it,
+/// then all renamed into place; on any failure no temporary file is left and
+/// no target is replaced (BadInputError naming the file).
+void writeFilesTogether(const std::vector<std::pair<std::string, std::string>>& pathsAndTexts);
 
 } // namespace hierloom::cli

@@ -2,6 +2,7 @@
 #include "cli/command_line.h"
 
 #include "cli/commands.h"
+#include "cli/finite_option.h"
 #include "cli/option_defaults.h"
 #include "core/base/colony_file_error.h"
 
@@ -40,6 +41,7 @@ int run(int argc, const char* const* argv, std::ostream& out, std::ostream& err)
     addMergeCommand(app, ctx, action);
     addHistoryCommand(app, ctx, action);
     describeDefaults(app);
+    requireFiniteNumbers(app);
     try {
         app.parse(argc, argv);
     } catch (const CLI::CallForHelp&) {

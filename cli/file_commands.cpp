@@ -82,16 +82,17 @@ void addExportCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
             std::error_code ec;
             std::filesystem::create_directories(o->dir, ec);
             if (ec) throw BadInputError("--dir: cannot create " + o->dir + ": " + ec.message());
-            auto write = [&](const char* name, void (*writer)(std::ostream&, const Colony&)) {
-                const std::filesystem::path target = std::filesystem::path(o->dir) / name;
-                CommandContext fileCtx{ctx.out, ctx.err, target.string()};
+            // All three or none: written beside their names first, renamed together.
+            std::vector<std::pair<std::string, std::string>> files;
+            auto add = [&](const char* name, void (*writer)(std::ostream&, const Colony&)) {
                 std::ostringstream text;
                 writer(text, colony);
-                emit(fileCtx, text.str());
+                files.emplace_back((std::filesystem::path(o->dir) / name).string(), text.str());
             };
-            write("animals.csv", writeAnimalsCsv);
-            write("residences.csv", writeResidencesCsv);
-            write("encounters.csv", writeEncountersCsv);
+            add("animals.csv", writeAnimalsCsv);
+            add("residences.csv", writeResidencesCsv);
+            add("encounters.csv", writeEncountersCsv);
+            writeFilesTogether(files);
             ctx.err << "wrote " << colony.animals.size() << " animals, " << colony.residences.size()
                     << " residences, " << colony.encounters.size() << " encounters to " << o->dir << "\n";
         };

@@ -19,6 +19,19 @@ namespace hierloom::cli {
 
 using namespace hierloom::core;
 
+namespace {
+
+/// Names each backup whose name carries a time later than now (a wrong clock).
+void warnAboutFutureBackups(CommandContext& ctx, const std::string& colony)
+{
+    for (const BackupFile& b : listBackups(colony))
+        if (b.future)
+            ctx.err << "warning: " << b.path << " is named with a time in the future (a clock was wrong when it "
+                    << "was taken); it is kept, listed last and not used to order or schedule backups\n";
+}
+
+} // namespace
+
 void addBackupCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
 {
     auto* cmd = app.add_subcommand("backup", "write a consistent copy of the colony file into NAME.hierloom-backups "
@@ -45,6 +58,7 @@ void addBackupCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
                 csv.writeRow({"backup"});
                 for (const BackupFile& b : listBackups(o->colony)) csv.writeRow({b.path});
                 emit(ctx, text.str());
+                warnAboutFutureBackups(ctx, o->colony);
                 return;
             }
             const bool settings = o->keep > 0 || o->every >= 0;
@@ -56,6 +70,7 @@ void addBackupCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
             const std::string path = backupColony(store, std::chrono::system_clock::now(), keep);
             ctx.out << path << "\n";
             ctx.err << "backed up " << o->colony << " to " << path << " (keeping the newest " << keep << ")\n";
+            warnAboutFutureBackups(ctx, o->colony);
         };
     });
 }

@@ -22,10 +22,11 @@ ColonyStore createDemoColonyFile(const std::string& path)
                             ImportSource{"demo encounters.csv", encounters.str()}};
     ImportPlan plan = planImport({}, {}, input, today());
     if (!plan.ok()) throw std::logic_error("the bundled demo colony does not import:\n" + plan.problems.text());
-    ColonyStore store = ColonyStore::create(path);
-    store.append(plan.animals, plan.residences, plan.encounters);
-    store.setSetting("species", "rhesus_macaque");
-    return store;
+    // Built under a partial name and renamed when complete (ColonyStore::create).
+    return ColonyStore::create(path, [&](ColonyStore& store) {
+        store.append(plan.animals, plan.residences, plan.encounters);
+        store.setSetting("species", "rhesus_macaque");
+    });
 }
 
 } // namespace hierloom::core

@@ -75,21 +75,24 @@ void notInFuture(const std::optional<Day>& d, Day today, const char* field, Fiel
 }
 
 /// True when following parent links up from `a` comes back to `a`.
-bool isOwnAncestor(const Animal& a, const AnimalContext& ctx)
+// The column of `a` (mother or father) through which a walk up the parent links
+// comes back to `a`, or nullptr when no loop passes through it.
+const char* ancestorLoopColumn(const Animal& a, const AnimalContext& ctx)
 {
-    std::vector<const std::string*> todo{&a.mother, &a.father};
+    // Each ancestor remembers which of a's columns it was reached through.
+    std::vector<std::pair<const std::string*, const char*>> todo{{&a.mother, "mother"}, {&a.father, "father"}};
     std::unordered_set<std::string_view> seen;
     while (!todo.empty()) {
-        const std::string* id = todo.back();
+        const auto [id, column] = todo.back();
         todo.pop_back();
         if (id->empty() || !seen.insert(*id).second) continue;
-        if (*id == a.id) return true;
+        if (*id == a.id) return column;
         if (const Animal* up = ctx.find(*id)) {
-            todo.push_back(&up->mother);
-            todo.push_back(&up->father);
+            todo.push_back({&up->mother, column});
+            todo.push_back({&up->father, column});
         }
     }
-    return false;
+    return nullptr;
 }
 
 } // namespace
@@ -146,8 +149,9 @@ void checkAnimalLinks(const Animal& a, const AnimalContext& ctx, FieldProblems& 
     }
 
     // AnimalRule::NoAncestorLoop (a parent that is the animal itself is reported above)
-    if (!a.id.empty() && a.mother != a.id && a.father != a.id && isOwnAncestor(a, ctx))
-        out.push_back({"mother", quotedValue(a.id) + " would be its own ancestor (a loop of parent links)"});
+    if (!a.id.empty() && a.mother != a.id && a.father != a.id)
+        if (const char* column = ancestorLoopColumn(a, ctx))
+            out.push_back({column, quotedValue(a.id) + " would be its own ancestor (a loop of parent links)"});
 
     // AnimalRule::ParentKeepsSex, ParentKeepsBirthOrder: an edit keeps the animal a valid
     // parent of the offspring already in the colony.

@@ -4,16 +4,20 @@
 #include "core/base/colony_file_error.h"
 #include "core/store/colony_schema.h"
 #include "core/store/colony_store.h"
+#include "core/store/integrity_check.h"
+#include "core/store/partial_files.h"
 #include "core/store/sqlite_statement.h"
 
 #include <sqlite3.h>
 
 #include <algorithm>
+#include <optional>
 #include <cstdio>
 #include <ctime>
 #include <fcntl.h>
+#include <cmath>
 #include <filesystem>
-#include <unistd.h>
+#include <system_error>
 
 namespace hierloom::core {
 
@@ -70,7 +74,11 @@ struct Found {
     int serial;
 };
 
-std::vector<Found> findBackups(const std::string& colonyPath)
+// A backup named up to this much after "now" is still ordered by its name
+// (clocks of two machines sharing a folder differ by seconds).
+constexpr auto kClockTolerance = std::chrono::minutes(1);
+
+std::vector<Found> findBackups(const std::string& colonyPath, Clock::time_point now)
 {
     std::vector<Found> out;
     const std::string prefix = stemOf(colonyPath) + "-";
@@ -80,22 +88,15 @@ std::vector<Found> findBackups(const std::string& colonyPath)
         if (entry.path().extension() != ".hierloom" || name.rfind(prefix, 0) != 0) continue;
         const std::string middle = name.substr(prefix.size(), name.size() - prefix.size() - 9);
         Found f{{entry.path().string(), {}}, 1};
-        if (parseStamp(middle, f.file.taken, f.serial)) out.push_back(f);
+        if (!parseStamp(middle, f.file.taken, f.serial)) continue;
+        f.file.future = f.file.taken > now + kClockTolerance;
+        out.push_back(f);
     }
     std::sort(out.begin(), out.end(), [](const Found& a, const Found& b) {
+        if (a.file.future != b.file.future) return !a.file.future;
         return a.file.taken != b.file.taken ? a.file.taken > b.file.taken : a.serial > b.serial;
     });
     return out;
-}
-
-/// Flushes a folder's entries (a rename) to disk.
-void syncFolder(const fs::path& folder)
-{
-    const int fd = ::open(folder.c_str(), O_RDONLY | O_DIRECTORY);
-    if (fd >= 0) {
-        ::fsync(fd);
-        ::close(fd);
-    }
 }
 
 struct Connection {
@@ -151,18 +152,88 @@ std::string backupConnection(sqlite3* db, const std::string& colonyPath, Clock::
     std::error_code ec;
     fs::create_directories(folder, ec);
     if (ec) throw ColonyFileError(Kind::Io, folder.string() + ": cannot create the backup folder: " + ec.message());
+    sqlite3_busy_timeout(db, 5000);
+    requireIntact(db, colonyPath);
+    // Partial files of a killed backup; the real clock, not `now`, dates them.
+    removeAbandonedPartials(folder.string(), stemOf(colonyPath) + "-", Clock::now());
     const std::string base = stemOf(colonyPath) + "-" + kind + stamp(now);
     fs::path target = folder / (base + ".hierloom");
-    for (int n = 2; fs::exists(target); ++n) target = folder / (base + "-" + std::to_string(n) + ".hierloom");
-    const fs::path partial = target.string() + ".partial";
-    fs::remove(partial, ec);
-    copyDatabase(db, partial.string(), "the backup");
-    fs::rename(partial, target, ec);
-    if (ec) throw ColonyFileError(Kind::Io, target.string() + ": cannot name the backup: " + ec.message());
-    syncFolder(folder);
-    const auto all = findBackups(colonyPath);
-    for (size_t i = static_cast<size_t>(std::max(keep, 1)); i < all.size(); ++i) fs::remove(all[i].file.path, ec);
+    const std::string partial = partialPathFor(target.string());
+    try {
+        copyDatabase(db, partial, "the backup");
+        // Another program may take a backup in the same second: take the next free serial.
+        for (int n = 2; !publishPartial(partial, target.string()); ++n)
+            target = folder / (base + "-" + std::to_string(n) + ".hierloom");
+    } catch (const std::system_error& e) {
+        removePartial(partial);
+        throw ColonyFileError(Kind::Io, target.string() + ": cannot name the backup: " + e.code().message());
+    } catch (...) {
+        removePartial(partial);
+        throw;
+    }
+    syncFolder(folder.string());
+    // Rotation: the backup just taken always stays, and so do backups named
+    // with a future time (their order is unknown; the caller warns about them).
+    size_t kept = 1;
+    for (const Found& f : findBackups(colonyPath, now)) {
+        if (f.file.future || f.file.path == target.string()) continue;
+        if (kept < static_cast<size_t>(std::max(keep, 1)))
+            ++kept;
+        else
+            fs::remove(f.file.path, ec);
+    }
     return target.string();
+}
+
+bool hasTable(sqlite3* db, const char* schema, const char* table)
+{
+    SqliteStatement q(db, (std::string("SELECT 1 FROM ") + schema + ".sqlite_schema WHERE type = 'table' AND name = ?").c_str());
+    q.bind(1, std::string(table));
+    return q.step();
+}
+
+void execOrThrow(sqlite3* db, const char* sql, const std::string& context)
+{
+    char* msg = nullptr;
+    if (sqlite3_exec(db, sql, nullptr, nullptr, &msg) != SQLITE_OK) {
+        const std::string text = msg ? msg : sqlite3_errmsg(db);
+        sqlite3_free(msg);
+        throw ColonyFileError(Kind::Io, context + ": " + text);
+    }
+}
+
+/// Copies the backup behind `backupDb` into `partial` and adds, in one
+/// transaction, the audit rows of the colony file at `livePath` that the
+/// backup lacks (the history of the state being replaced stays readable) and
+/// the live file's identities (file_identity.h). Leaves `partial` open in `out`.
+void prepareRestore(sqlite3* backupDb, const std::string& livePath, const std::string& partial, Connection& out)
+{
+    copyDatabase(backupDb, partial, "the restore");
+    if (sqlite3_open_v2(partial.c_str(), &out.db, SQLITE_OPEN_READWRITE, nullptr) != SQLITE_OK)
+        throw ColonyFileError(Kind::Io, partial + ": cannot be opened for the restore");
+    sqlite3_busy_timeout(out.db, 5000);
+    {
+        SqliteStatement attach(out.db, "ATTACH ?1 AS replaced");
+        attach.bind(1, livePath);
+        attach.run();
+    }
+    execOrThrow(out.db, "BEGIN", partial); // deferred: the replaced file is only read, and may have a writer
+    if (hasTable(out.db, "main", "audit") && hasTable(out.db, "replaced", "audit"))
+        execOrThrow(out.db,
+                    "INSERT INTO main.audit(time, user, tbl, uid, action, old_values, new_values) "
+                    "SELECT r.time, r.user, r.tbl, r.uid, r.action, r.old_values, r.new_values FROM replaced.audit r "
+                    "WHERE NOT EXISTS (SELECT 1 FROM main.audit m WHERE m.uid = r.uid AND m.time = r.time AND "
+                    "m.user = r.user AND m.tbl = r.tbl AND m.action = r.action AND m.old_values IS r.old_values AND "
+                    "m.new_values IS r.new_values) ORDER BY r.id",
+                    partial);
+    execOrThrow(out.db, "CREATE TABLE IF NOT EXISTS main.file_identity (id TEXT PRIMARY KEY, writes INTEGER NOT NULL DEFAULT 0)",
+                partial);
+    if (hasTable(out.db, "replaced", "file_identity"))
+        execOrThrow(out.db,
+                    "INSERT OR IGNORE INTO main.file_identity(id, writes) SELECT id, writes FROM replaced.file_identity",
+                    partial);
+    execOrThrow(out.db, "COMMIT", partial);
+    execOrThrow(out.db, "DETACH replaced", partial);
 }
 
 int settingInt(const ColonyStore& store, const char* key, int fallback)
@@ -191,10 +262,10 @@ std::string backupFolder(const std::string& colonyPath)
     return (p.parent_path() / (p.stem().string() + ".hierloom-backups")).string();
 }
 
-std::vector<BackupFile> listBackups(const std::string& colonyPath)
+std::vector<BackupFile> listBackups(const std::string& colonyPath, Clock::time_point now)
 {
     std::vector<BackupFile> out;
-    for (const Found& f : findBackups(colonyPath)) out.push_back(f.file);
+    for (const Found& f : findBackups(colonyPath, now)) out.push_back(f.file);
     return out;
 }
 
@@ -211,10 +282,12 @@ bool backupIfDue(const ColonyStore& store, Clock::time_point now)
     } catch (const std::exception&) {
         hours = defaultBackupIntervalHours;
     }
+    if (!std::isfinite(hours)) hours = defaultBackupIntervalHours;
     if (!(hours > 0)) return false;
-    const auto backups = listBackups(store.path());
+    const auto backups = listBackups(store.path(), now);
     const auto interval = std::chrono::duration_cast<Clock::duration>(std::chrono::duration<double>(hours * 3600.0));
-    if (!backups.empty() && now - backups.front().taken < interval) return false;
+    // A backup named with a future time says nothing about when the last real one was taken.
+    if (!backups.empty() && !backups.front().future && now - backups.front().taken < interval) return false;
     backupColony(store, now, settingInt(store, "backup_keep", defaultBackupsKept));
     return true;
 }
@@ -238,37 +311,62 @@ void restoreBackup(const std::string& backupPath, const std::string& colonyPath,
         if (e.kind() != Kind::Missing && e.kind() != Kind::NotAColonyFile && e.kind() != Kind::Damaged) throw;
         live = false;
     }
+    std::optional<ColonyStore> colony;
     if (live) {
-        Connection colony;
-        if (sqlite3_open_v2(colonyPath.c_str(), &colony.db, SQLITE_OPEN_READWRITE, nullptr) != SQLITE_OK)
-            throw ColonyFileError(Kind::Io, colonyPath + ": cannot be opened for writing");
-        sqlite3_busy_timeout(colony.db, 5000);
+        colony.emplace(ColonyStore::open(colonyPath));
+        colony->setBusyTimeout(5000);
+        // A file failing the quick check is replaced whole and kept aside, like one that does not open.
+        if (!quickCheckProblem(colony->handle()).empty()) {
+            colony.reset();
+            live = false;
+        }
+    }
+    if (live) {
         // SQLite cannot copy pages of one size into a WAL file of another
         // (colony files created by earlier builds use 4 KiB pages, newer ones 16 KiB).
-        if (const int from = pageSizeOf(backup.db), to = pageSizeOf(colony.db); from != to)
+        if (const int from = pageSizeOf(backup.db), to = pageSizeOf(colony->handle()); from != to)
             throw ColonyFileError(Kind::Io, backupPath + ": was made from a colony file with " +
                                                 std::to_string(from / 1024) + " KiB pages and cannot be restored over " +
                                                 colonyPath + " (" + std::to_string(to / 1024) +
                                                 " KiB pages); restore it into a new file instead; " + colonyPath +
                                                 " is unchanged");
         // The state being replaced stays recoverable, like any other backup.
-        backupConnection(colony.db, colonyPath, now, defaultBackupsKept);
-        sqlite3_backup* b = sqlite3_backup_init(colony.db, "main", backup.db, "main");
-        if (!b) throw ColonyFileError(Kind::Io, colonyPath + ": restore failed: " + sqlite3_errmsg(colony.db));
-        const int rc = sqlite3_backup_step(b, -1);
-        sqlite3_backup_finish(b);
-        if ((rc & 0xFF) == SQLITE_BUSY || (rc & 0xFF) == SQLITE_LOCKED)
-            throw ColonyFileError(Kind::Busy, colonyPath + ": another program is writing to it; close that "
-                                                           "program (or wait for it to finish) and restore again");
-        if (rc != SQLITE_DONE)
-            throw ColonyFileError(Kind::Io, colonyPath + ": restore failed: " + sqlite3_errstr(rc) +
-                                                "; the file is unchanged");
+        backupConnection(colony->handle(), colonyPath, now, defaultBackupsKept);
+        // The backup plus the replaced state's audit trail and identities, made
+        // under a partial name, is then copied in as one write transaction.
+        const std::string prepared = partialPathFor((fs::path(backupFolder(colonyPath)) /
+                                                     (stemOf(colonyPath) + "-restoring-" + stamp(now) + ".hierloom"))
+                                                        .string());
+        try {
+            Connection source;
+            prepareRestore(backup.db, colonyPath, prepared, source);
+            sqlite3_backup* b = sqlite3_backup_init(colony->handle(), "main", source.db, "main");
+            if (!b) throw ColonyFileError(Kind::Io, colonyPath + ": restore failed: " + sqlite3_errmsg(colony->handle()));
+            const int rc = sqlite3_backup_step(b, -1);
+            sqlite3_backup_finish(b);
+            if ((rc & 0xFF) == SQLITE_BUSY || (rc & 0xFF) == SQLITE_LOCKED)
+                throw ColonyFileError(Kind::Busy, colonyPath + ": another program is writing to it; close that "
+                                                               "program (or wait for it to finish) and restore again");
+            if (rc != SQLITE_DONE)
+                throw ColonyFileError(Kind::Io, colonyPath + ": restore failed: " + sqlite3_errstr(rc) +
+                                                    "; the file is unchanged");
+        } catch (...) {
+            removePartial(prepared);
+            throw;
+        }
+        removePartial(prepared);
+        colony.reset();
     } else {
         const fs::path target(colonyPath);
-        const fs::path temp = target.string() + ".restoring";
+        const fs::path temp = partialPathFor(target.string());
         std::error_code ec;
-        fs::remove(temp, ec);
-        copyDatabase(backup.db, temp.string(), "the restore");
+        removeAbandonedPartials(target.parent_path().string(), target.filename().string() + ".", Clock::now());
+        try {
+            copyDatabase(backup.db, temp.string(), "the restore");
+        } catch (...) {
+            removePartial(temp.string());
+            throw;
+        }
         if (fs::exists(target, ec)) {
             // Keep the damaged file (and any journal beside it) rather than destroy it.
             const fs::path folder = backupFolder(colonyPath);
@@ -281,7 +379,7 @@ void restoreBackup(const std::string& backupPath, const std::string& colonyPath,
         }
         fs::rename(temp, target, ec);
         if (ec) throw ColonyFileError(Kind::Io, colonyPath + ": cannot put the restored file in place: " + ec.message());
-        syncFolder(target.parent_path().empty() ? fs::path(".") : target.parent_path());
+        syncFolder(target.parent_path().string());
     }
     noteRestore(colonyPath, backupPath);
 }

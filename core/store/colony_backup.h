@@ -17,19 +17,28 @@ constexpr double defaultBackupIntervalHours = 24.0;
 struct BackupFile {
     std::string path;
     std::chrono::system_clock::time_point taken; ///< from the name (UTC, whole seconds)
+    /// Named with a time after "now" (a clock that was wrong): listed after the
+    /// others, never used to order or schedule backups, never rotated away.
+    bool future = false;
 };
 
 /// The folder holding a colony file's backups: `NAME.hierloom-backups` beside `NAME.hierloom`.
 std::string backupFolder(const std::string& colonyPath);
 
-/// The backups of a colony file, newest first (files named `NAME-YYYYMMDD-HHMMSS[-N].hierloom`).
-std::vector<BackupFile> listBackups(const std::string& colonyPath);
+/// The backups of a colony file, newest first (files named `NAME-YYYYMMDD-HHMMSS[-N].hierloom`),
+/// then those named with a time later than `now` (see BackupFile::future).
+std::vector<BackupFile> listBackups(const std::string& colonyPath,
+                                    std::chrono::system_clock::time_point now = std::chrono::system_clock::now());
 
 /// Writes a consistent copy of the open colony through SQLite's online backup
 /// interface (sqlite3_backup_*, a single read snapshot, so concurrent writers
 /// never tear it) into the backup folder, checks it with `PRAGMA
-/// integrity_check` and only then gives it its final name; then deletes the
-/// oldest backups beyond `keep`. Returns the new backup's path.
+/// integrity_check` under a partial name unique to this process and call
+/// (partial_files.h) and only then gives it its final name; then deletes the
+/// oldest backups beyond `keep`, never the one just taken nor one named with
+/// a future time. The live file passes `PRAGMA quick_check` first, else
+/// ColonyFileError(Damaged) names the newest good backup. Partial files
+/// abandoned by a killed backup are removed. Returns the new backup's path.
 std::string backupColony(const ColonyStore& store, std::chrono::system_clock::time_point now,
                          int keep = defaultBackupsKept);
 

@@ -2,7 +2,11 @@
 #include "core/store/colony_store.h"
 
 #include "core/store/colony_schema.h"
+#include "core/store/file_identity.h"
+#include "core/store/integrity_check.h"
+#include "core/store/partial_files.h"
 #include "core/store/record_appender.h"
+#include "core/store/sqlite_uri.h"
 #include "core/store/write_transaction.h"
 #include "core/store/sqlite_statement.h"
 
@@ -14,6 +18,7 @@
 #include <cstring>
 #include <filesystem>
 #include <fstream>
+#include <unistd.h>
 
 namespace hierloom::core {
 
@@ -124,6 +129,48 @@ void checkHeader(const std::string& path)
                                                  " bytes); restore it from a backup");
 }
 
+std::string folderOf(const std::string& path)
+{
+    const std::string parent = std::filesystem::path(path).parent_path().string();
+    return parent.empty() ? std::string(".") : parent;
+}
+
+bool folderWritable(const std::string& path) { return ::access(folderOf(path).c_str(), W_OK) == 0; }
+
+bool walPending(const std::string& path)
+{
+    std::error_code ec;
+    const auto size = std::filesystem::file_size(path + "-wal", ec);
+    return !ec && size > 0;
+}
+
+/// Why this program may not write the file at `path`; empty when it may.
+std::string whyNotWritable(const std::string& path)
+{
+    if (::access(path.c_str(), W_OK) != 0) return "the file is read-only";
+    if (!folderWritable(path))
+        return "its folder is read-only (while writing, SQLite keeps a -wal and a -shm file beside the colony file)";
+    return {};
+}
+
+/// Opens `path` read-only: with the `immutable` flag when its folder is not
+/// writable and no -wal waits beside it, so that SQLite needs no -shm file.
+int openForReading(const std::string& path, sqlite3** db, int extraFlags)
+{
+    if (!folderWritable(path) && !walPending(path))
+        return sqlite3_open_v2(sqliteUri(path, "immutable=1").c_str(), db,
+                               SQLITE_OPEN_READONLY | SQLITE_OPEN_URI | extraFlags, nullptr);
+    return sqlite3_open_v2(path.c_str(), db, SQLITE_OPEN_READONLY | extraFlags, nullptr);
+}
+
+std::string cannotOpenMessage(const std::string& path, const std::string& detail)
+{
+    if (!folderWritable(path) && walPending(path))
+        return path + ": has changes waiting in " + path + "-wal and its folder is read-only, so they cannot be read; "
+                      "copy the file together with its -wal file into a writable folder";
+    return path + ": cannot be opened" + (detail.empty() ? std::string() : ": " + detail);
+}
+
 std::string defaultUserName()
 {
     for (const char* var : {"HIERLOOM_USER", "USER", "LOGNAME"})
@@ -133,45 +180,65 @@ std::string defaultUserName()
 
 } // namespace
 
-ColonyStore ColonyStore::create(const std::string& path)
+ColonyStore ColonyStore::create(const std::string& path, const std::function<void(ColonyStore&)>& fill)
 {
     std::error_code ec;
     if (std::filesystem::exists(path, ec))
         throw ColonyFileError(Kind::AlreadyExists, path + ": already exists; choose another name");
-    sqlite3* db = nullptr;
-    const int rc = sqlite3_open_v2(path.c_str(), &db, SQLITE_OPEN_READWRITE | SQLITE_OPEN_CREATE | kOneThreadAtATime, nullptr);
-    if (rc != SQLITE_OK) {
-        const std::string msg = db ? sqlite3_errmsg(db) : sqlite3_errstr(rc);
-        sqlite3_close(db);
-        throw ColonyFileError(Kind::Io, path + ": cannot be created: " + msg);
+    removeAbandonedPartials(folderOf(path), std::filesystem::path(path).filename().string() + ".",
+                            std::chrono::system_clock::now());
+    const std::string partial = partialPathFor(path);
+    try {
+        {
+            sqlite3* db = nullptr;
+            const int rc = sqlite3_open_v2(partial.c_str(), &db,
+                                           SQLITE_OPEN_READWRITE | SQLITE_OPEN_CREATE | kOneThreadAtATime, nullptr);
+            if (rc != SQLITE_OK) {
+                const std::string msg = db ? sqlite3_errmsg(db) : sqlite3_errstr(rc);
+                sqlite3_close(db);
+                throw ColonyFileError(Kind::Io, path + ": cannot be created: " + msg);
+            }
+            ColonyStore store(db, partial);
+            configureConnection(db, partial);
+            // 16 KiB pages rather than SQLite's 4 KiB: a quarter of the page writes
+            // and B-tree levels for large colonies (bulk imports ~15 % faster). Set
+            // before the first write; WAL keeps it fixed from then on.
+            store.exec("PRAGMA page_size = 16384");
+            store.exec("PRAGMA journal_mode = WAL");
+            {
+                WriteTransaction tx(store);
+                store.exec(schemaVersion1Sql());
+                store.exec(schemaVersion2Sql());
+                store.exec(("PRAGMA application_id = " + std::to_string(colonyApplicationId)).c_str());
+                store.exec(("PRAGMA user_version = " + std::to_string(currentSchemaVersion)).c_str());
+                tx.commit();
+            }
+            store.startSession();
+            if (fill) fill(store);
+        } // closing folds the -wal into the file and removes it
+        if (!publishPartial(partial, path))
+            throw ColonyFileError(Kind::AlreadyExists, path + ": already exists; choose another name");
+    } catch (const std::system_error& e) {
+        removePartial(partial);
+        throw ColonyFileError(Kind::Io, path + ": cannot be created: " + e.code().message());
+    } catch (...) {
+        removePartial(partial);
+        throw;
     }
-    ColonyStore store(db, path);
-    configureConnection(db, path);
-    // 16 KiB pages rather than SQLite's 4 KiB: a quarter of the page writes
-    // and B-tree levels for large colonies (bulk imports ~15 % faster). Set
-    // before the first write; WAL keeps it fixed from then on.
-    store.exec("PRAGMA page_size = 16384");
-    store.exec("PRAGMA journal_mode = WAL");
-    {
-        WriteTransaction tx(store);
-        store.exec(schemaVersion1Sql());
-        store.exec(schemaVersion2Sql());
-        store.exec(("PRAGMA application_id = " + std::to_string(colonyApplicationId)).c_str());
-        store.exec(("PRAGMA user_version = " + std::to_string(currentSchemaVersion)).c_str());
-        tx.commit();
-    }
-    store.startSession();
-    return store;
+    removePartial(partial); // a -shm or -wal the close may have left
+    syncFolder(folderOf(path));
+    return open(path, Mode::ReadWrite);
 }
 
 int probeColonyFile(const std::string& path)
 {
     checkHeader(path);
+    checkWalBelongs(path);
     sqlite3* db = nullptr;
-    const int rc = sqlite3_open_v2(path.c_str(), &db, SQLITE_OPEN_READONLY, nullptr);
+    const int rc = openForReading(path, &db, 0);
     if (rc != SQLITE_OK) {
         sqlite3_close(db);
-        throw ColonyFileError(Kind::Io, path + ": cannot be opened");
+        throw ColonyFileError(Kind::Io, cannotOpenMessage(path, {}));
     }
     int version = 0;
     try {
@@ -198,16 +265,22 @@ ColonyStore ColonyStore::open(const std::string& path, Mode mode)
                               path + ": was written by a newer Hierloom (file version " + std::to_string(version) +
                                   ", this program reads up to " + std::to_string(currentSchemaVersion) +
                                   "); update the program to open it");
+    if (mode == Mode::ReadWrite)
+        if (const std::string why = whyNotWritable(path); !why.empty())
+            throw ColonyFileError(Kind::ReadOnly, path + ": cannot be changed: " + why +
+                                                      "; it can still be read. Copy it into a writable folder to change it");
     sqlite3* db = nullptr;
-    const int flags = (mode == Mode::ReadOnly ? SQLITE_OPEN_READONLY : SQLITE_OPEN_READWRITE) | kOneThreadAtATime;
-    const int rc = sqlite3_open_v2(path.c_str(), &db, flags, nullptr);
+    const int rc = mode == Mode::ReadOnly
+                       ? openForReading(path, &db, kOneThreadAtATime)
+                       : sqlite3_open_v2(path.c_str(), &db, SQLITE_OPEN_READWRITE | kOneThreadAtATime, nullptr);
     if (rc != SQLITE_OK) {
         const std::string msg = db ? sqlite3_errmsg(db) : sqlite3_errstr(rc);
         sqlite3_close(db);
-        throw ColonyFileError(Kind::Io, path + ": cannot be opened: " + msg);
+        throw ColonyFileError(Kind::Io, cannotOpenMessage(path, msg));
     }
     ColonyStore store(db, path);
     configureConnection(db, path);
+    if (mode == Mode::ReadOnly) requireIntact(db, path);
     if (version < currentSchemaVersion) {
         if (mode == Mode::ReadOnly)
             throw ColonyFileError(Kind::NewerVersion, path + ": uses an older file version (" + std::to_string(version) +
@@ -274,7 +347,8 @@ void ColonyStore::migrate(int fromVersion)
     exec("PRAGMA journal_mode = WAL");
 }
 
-ColonyStore::ColonyStore(ColonyStore&& other) noexcept : db_(other.db_), path_(std::move(other.path_))
+ColonyStore::ColonyStore(ColonyStore&& other) noexcept
+    : db_(other.db_), path_(std::move(other.path_)), intactAtVersion_(other.intactAtVersion_)
 {
     other.db_ = nullptr;
 }
@@ -285,6 +359,7 @@ ColonyStore& ColonyStore::operator=(ColonyStore&& other) noexcept
         sqlite3_close(db_);
         db_ = other.db_;
         path_ = std::move(other.path_);
+        intactAtVersion_ = other.intactAtVersion_;
         other.db_ = nullptr;
     }
     return *this;
@@ -293,6 +368,16 @@ ColonyStore& ColonyStore::operator=(ColonyStore&& other) noexcept
 ColonyStore::~ColonyStore() { sqlite3_close(db_); }
 
 void ColonyStore::exec(const char* sql) const { execOn(db_, sql, path_); }
+
+void ColonyStore::checkBeforeWrite()
+{
+    SqliteStatement q(db_, "PRAGMA data_version");
+    const std::int64_t version = q.step() ? q.integer(0) : -1;
+    if (intactAtVersion_ && *intactAtVersion_ == version) return;
+    requireIntact(db_, path_);
+    ensureFileIdentity(*this);
+    intactAtVersion_ = version;
+}
 
 int ColonyStore::schemaVersion() const { return pragmaInt(db_, "PRAGMA user_version", path_); }
 

@@ -3,6 +3,9 @@
 #include "core/base/colony.h"
 #include "core/base/colony_file_error.h"
 
+#include <cstdint>
+#include <functional>
+#include <optional>
 #include <string>
 #include <unordered_set>
 #include <vector>
@@ -22,9 +25,17 @@ public:
 
     enum class Mode { ReadOnly, ReadWrite };
 
-    /// Creates a new, empty colony file; fails if the path exists.
-    static ColonyStore create(const std::string& path);
+    /// Creates a new colony file; fails if the path exists. The file is built
+    /// under a partial name beside `path` (the schema, then `fill`), closed and
+    /// only then renamed to `path`, so a killed program leaves nothing at
+    /// `path`; abandoned partial files of earlier runs are removed.
+    static ColonyStore create(const std::string& path, const std::function<void(ColonyStore&)>& fill = {});
     /// Opens an existing colony file, migrating an older schema (ReadWrite only).
+    /// ReadWrite refuses (ColonyFileError::Kind::ReadOnly) a file or folder
+    /// this program may not write. ReadOnly opens the file read-only, and with
+    /// SQLite's `immutable` flag when its folder is not writable (no -shm or
+    /// -wal file is needed then). Both refuse a -wal file written for another
+    /// file (checkWalBelongs) and a file failing `PRAGMA quick_check`.
     static ColonyStore open(const std::string& path, Mode mode = Mode::ReadWrite);
 
     ColonyStore(ColonyStore&& other) noexcept;
@@ -90,6 +101,13 @@ public:
     /// Runs `sql` (no results) or throws ColonyFileError naming the file.
     void exec(const char* sql) const;
 
+    /// Called by WriteTransaction when it begins: runs `PRAGMA quick_check`
+    /// unless it passed on this connection and no other connection has
+    /// committed since (`PRAGMA data_version`), and makes sure the file has its
+    /// identity (file_identity.h). Throws ColonyFileError(Damaged) naming the
+    /// newest good backup.
+    void checkBeforeWrite();
+
 private:
     ColonyStore(sqlite3* db, std::string path) : db_(db), path_(std::move(path)) {}
     void migrate(int fromVersion);
@@ -97,6 +115,7 @@ private:
 
     sqlite3* db_ = nullptr;
     std::string path_;
+    std::optional<std::int64_t> intactAtVersion_; // data_version when quick_check last passed
 };
 
 /// Reads the schema version and application id of a file without changing it;

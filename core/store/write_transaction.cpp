@@ -3,6 +3,7 @@
 
 #include "core/store/colony_schema.h"
 #include "core/store/colony_store.h"
+#include "core/store/file_identity.h"
 
 #include <sqlite3.h>
 
@@ -30,6 +31,16 @@ WriteTransaction::WriteTransaction(ColonyStore& store, Size size)
         restoreConnection();
         throw;
     }
+    if (!nested_) {
+        try {
+            // Inside the transaction, so no other program changes the file between the check and the write.
+            store_.checkBeforeWrite();
+        } catch (...) {
+            sqlite3_exec(store_.handle(), "ROLLBACK", nullptr, nullptr, nullptr);
+            restoreConnection();
+            throw;
+        }
+    }
     if (bulk_) {
         try {
             // The trigger's per-row check costs a fifth of a bulk load; dropping
@@ -47,6 +58,7 @@ WriteTransaction::WriteTransaction(ColonyStore& store, Size size)
 void WriteTransaction::commit()
 {
     if (bulk_) store_.exec(auditTriggerSql("encounter", "insert").c_str());
+    if (!nested_) countFileWrite(store_); // every -wal this program writes carries the file's identity
     store_.exec(nested_ ? "RELEASE write_records" : "COMMIT");
     done_ = true;
     restoreConnection();

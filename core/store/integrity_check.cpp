@@ -1,0 +1,67 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#include "core/store/integrity_check.h"
+
+#include "core/base/colony_file_error.h"
+#include "core/store/colony_backup.h"
+
+#include <sqlite3.h>
+
+namespace hierloom::core {
+
+std::string quickCheckProblem(sqlite3* db)
+{
+    // One problem is enough to refuse; stopping there keeps a badly damaged
+    // file from being walked to the end.
+    sqlite3_stmt* q = nullptr;
+    int rc = sqlite3_prepare_v2(db, "PRAGMA quick_check(1)", -1, &q, nullptr);
+    std::string answer;
+    if (rc == SQLITE_OK) {
+        rc = sqlite3_step(q);
+        if (rc == SQLITE_ROW) {
+            const auto* text = sqlite3_column_text(q, 0);
+            answer = text ? reinterpret_cast<const char*>(text) : "";
+        }
+    }
+    if (rc != SQLITE_ROW && rc != SQLITE_DONE && rc != SQLITE_OK) answer = sqlite3_errstr(rc);
+    sqlite3_finalize(q);
+    if ((rc & 0xFF) == SQLITE_BUSY || (rc & 0xFF) == SQLITE_LOCKED)
+        throw ColonyFileError(ColonyFileError::Kind::Busy, std::string("the check waited too long for another program"));
+    if (answer == "ok") return {};
+    if (answer.empty()) answer = "no answer from the check";
+    // A line of SQLite's own wording is enough to recognise the damage.
+    if (const auto nl = answer.find('\n'); nl != std::string::npos) answer.resize(nl);
+    if (answer.size() > 120) answer = answer.substr(0, 117) + "...";
+    return answer;
+}
+
+std::string newestGoodBackup(const std::string& colonyPath)
+{
+    for (const BackupFile& b : listBackups(colonyPath)) {
+        sqlite3* db = nullptr;
+        bool good = false;
+        if (sqlite3_open_v2(b.path.c_str(), &db, SQLITE_OPEN_READONLY, nullptr) == SQLITE_OK) {
+            try {
+                good = quickCheckProblem(db).empty();
+            } catch (const ColonyFileError&) {
+                good = false;
+            }
+        }
+        sqlite3_close(db);
+        if (good) return b.path;
+    }
+    return {};
+}
+
+void requireIntact(sqlite3* db, const std::string& path)
+{
+    const std::string problem = quickCheckProblem(db);
+    if (problem.empty()) return;
+    const std::string backup = newestGoodBackup(path);
+    throw ColonyFileError(ColonyFileError::Kind::Damaged,
+                          path + ": is damaged (" + problem + "); nothing was read or changed. " +
+                              (backup.empty() ? std::string("No good backup was found beside it.")
+                                              : "The newest good backup is " + backup +
+                                                    " (hierloom-cli restore " + path + " --from " + backup + ")"));
+}
+
+} // namespace hierloom::core
