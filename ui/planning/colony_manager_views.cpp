@@ -2,7 +2,6 @@
 #include "ui/planning/colony_manager_views.h"
 
 #include "ui/document/colony_document.h"
-#include "ui/planning/planner_view.h"
 #include "ui/planning/report_dialog.h"
 #include "ui/planning/stability_badge.h"
 #include "ui/planning/stability_view.h"
@@ -14,18 +13,13 @@
 
 namespace hierloom::ui {
 
-ColonyManagerViews addColonyManagerViews(QMainWindow* window, QTabWidget* tabs, ColonyDocument* document)
+void addStabilityBadge(QMainWindow* window, QTabWidget* tabs, ColonyDocument* document, ColonyManagerViews& views)
 {
-    ColonyManagerViews v;
-    v.planner = new PlannerView(document, window);
-    v.stability = new StabilityView(document, window);
-    tabs->addTab(v.planner, QObject::tr("Planner"));
-    tabs->addTab(v.stability, QObject::tr("Stability"));
-    v.badge = new StabilityBadge(document, window);
-    window->statusBar()->addPermanentWidget(v.badge);
-    QObject::connect(v.badge, &QToolButton::clicked, tabs, [tabs, v] { tabs->setCurrentWidget(v.stability); });
-    QObject::connect(v.stability, &StabilityView::thresholdsChanged, v.badge, &StabilityBadge::refresh);
-    return v;
+    views.badge = new StabilityBadge(document, window);
+    window->statusBar()->addPermanentWidget(views.badge);
+    StabilityView* stability = views.stability;
+    QObject::connect(views.badge, &QToolButton::clicked, tabs, [tabs, stability] { tabs->setCurrentWidget(stability); });
+    QObject::connect(stability, &StabilityView::thresholdsChanged, views.badge, &StabilityBadge::refresh);
 }
 
 void addReportActions(QMenu* menu, QMainWindow* window, ColonyDocument* document)

@@ -5,6 +5,7 @@
 #include "core/store/stability_settings.h"
 #include "ui/widgets/caution_label.h"
 #include "ui/document/colony_document.h"
+#include "ui/document/settings_edits.h"
 #include "ui/widgets/help_button.h"
 #include "ui/document/visible_refresh.h"
 #include "ui/document/qt_convert.h"
@@ -50,6 +51,7 @@ core::StabilityOptions documentStabilityOptions(ColonyDocument* document, const 
     core::StabilityOptions o;
     o.group = group;
     o.length = length;
+    o.elo = documentAnalysisSettings(document).elo;
     if (core::ColonyStore* store = document->store()) {
         o.thresholds = core::readStabilityThresholds(*store);
         o.severity = core::behaviourSeverities(*store);
