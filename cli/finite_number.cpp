@@ -17,7 +17,7 @@ CLI::Validator finiteNumber()
             if (!std::isfinite(v)) return "'" + text + "' is not a finite number";
             return {};
         },
-        "NUMBER");
+        "");
 }
 
 } // namespace hierloom::cli
