@@ -44,9 +44,7 @@ int main(int argc, char* argv[])
                                  QStringLiteral("[colony]"));
     const QCommandLineOption viewOption(
         QStringLiteral("view"),
-        QCoreApplication::translate("main",
-                                    "Open on this view: animals, encounters, timeline, prediction, matrix, hierarchy, sex-ratio, "
-                                    "entry, planner or stability."),
+        QCoreApplication::translate("main", "Open on this view: %1.").arg(hierloom::ui::viewIdList()),
         QStringLiteral("name"));
     parser.addOption(viewOption);
     parser.process(*app);

@@ -1,11 +1,13 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 // ranks, matrix and metrics: the hierarchy figures of methods.md as CSV.
+#include "cli/analysis_options.h"
 #include "cli/colony_loading.h"
 #include "cli/commands.h"
 
 #include "core/ranks/hierarchy_metrics.h"
 #include "core/base/number_format.h"
 #include "core/ranks/parallel_randomisation.h"
+#include "core/ranks/rank_method_registry.h"
 #include "core/ranks/rank_table.h"
 #include "core/ranks/win_matrix.h"
 
@@ -25,9 +27,7 @@ struct RanksOptions {
     WindowOptions window;
     std::string method = "elo";
     std::string at;
-    double k = 100;
-    double start = 1000;
-    std::string curve = "logistic";
+    AnalysisOverrides analysis;
     bool optimiseK = false;
     int randomise = 0;
     std::uint64_t seed = 1;
@@ -39,12 +39,12 @@ struct RanksOptions {
 void runRanks(CommandContext& ctx, const RanksOptions& o)
 {
     const LoadedColony loaded = loadColony(o.colony);
-    const SelectionOptions sel = selectionOf(o.window, loaded);
+    const AnalysisSettings settings = analysisSettingsOf(loaded, o.analysis, o.window.draws);
+    const SelectionOptions sel = withDefaultWindow(selectionOf(o.window, loaded), settings, loaded);
+    reportAnalysisSettings(ctx, "ranks", settings, &o.analysis, o.window.draws);
     RankOptions r;
     r.method = *parseRankMethod(o.method);
-    r.elo.k = o.k;
-    r.elo.start = o.start;
-    r.elo.curve = o.curve == "normal" ? EloCurve::Normal : EloCurve::Logistic;
+    r.elo = settings.elo;
     r.at = optionDate(o.at, "--at");
     r.optimiseK = o.optimiseK;
     r.randomise = o.randomise;
@@ -89,14 +89,11 @@ void addRanksCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
     auto o = std::make_shared<RanksOptions>();
     cmd->add_option("COLONY_FILE", o->colony, "the colony file")->required();
     addWindowOptions(*cmd, o->window);
-    cmd->add_option("--method", o->method, "elo, ds (David's score) or isi (default: elo)")
-        ->check(CLI::IsMember({"elo", "ds", "isi"}));
+    cmd->add_option("--method", o->method, rankMethodChoicesText() + " (default: " + rankMethods().front().code + ")")
+        ->check(CLI::IsMember(rankMethodCodes()));
     cmd->add_option("--at", o->at, "elo: ratings at this date, ranked among the animals resident that day "
                                       "(default: after the window's last encounter)");
-    cmd->add_option("--k", o->k, "elo: the k factor (default: 100)")->check(CLI::Range(0.0, 100000.0));
-    cmd->add_option("--start", o->start, "elo: every animal's start rating (default: 1000)");
-    cmd->add_option("--curve", o->curve, "elo: logistic or normal expectation (default: logistic)")
-        ->check(CLI::IsMember({"logistic", "normal"}));
+    addEloOptions(*cmd, o->analysis, "elo: ");
     cmd->add_flag("--optimise-k", o->optimiseK, "elo: use the maximum-likelihood k (Foerster et al. 2016)");
     cmd->add_option("--randomise", o->randomise, "elo: randomised Elo over N random orders (default: off)")
         ->check(CLI::Range(1, 1000000));
@@ -115,24 +112,31 @@ void addMatrixCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
     struct Options {
         std::string colony;
         WindowOptions window;
+        AnalysisOverrides analysis;
         std::string order = "isi";
     };
     auto o = std::make_shared<Options>();
     cmd->add_option("COLONY_FILE", o->colony, "the colony file")->required();
     addWindowOptions(*cmd, o->window);
-    cmd->add_option("--order", o->order, "order of rows and columns: elo, ds, isi or id (default: isi)")
-        ->check(CLI::IsMember({"elo", "ds", "isi", "id"}));
+    std::vector<std::string> orders = rankMethodCodes();
+    orders.push_back("id");
+    cmd->add_option("--order", o->order,
+                    "order of rows and columns: " + rankMethodChoicesText() + ", or id (default: isi)")
+        ->check(CLI::IsMember(orders));
+    addEloOptions(*cmd, o->analysis, "--order elo: ");
     cmd->add_option("--out", ctx.outFile, "write the CSV to this file instead of standard output");
     cmd->callback([&ctx, &action, o] {
         action = [&ctx, o] {
             const LoadedColony loaded = loadColony(o->colony);
-            const SelectionOptions sel = selectionOf(o->window, loaded);
+            const AnalysisSettings settings = analysisSettingsOf(loaded, o->analysis, o->window.draws);
+            const SelectionOptions sel = withDefaultWindow(selectionOf(o->window, loaded), settings, loaded);
+            reportAnalysisSettings(ctx, "matrix", settings, &o->analysis, o->window.draws);
             const EncounterSelection s = selectEncounters(loaded.colony, loaded.where, sel);
             std::vector<int> order;
             if (o->order == "id") {
                 for (int i = 0; i < s.size(); ++i) order.push_back(i);
             } else {
-                order = orderByMethod(s, *parseRankMethod(o->order), sel.draws);
+                order = orderByMethod(s, *parseRankMethod(o->order), settings.elo);
             }
             const WinMatrix m = WinMatrix::fromBouts(s.size(), s.bouts, sel.draws);
             std::ostringstream out;
@@ -173,7 +177,9 @@ void addMetricsCommand(CLI::App& app, CommandContext& ctx, CommandAction& action
     cmd->callback([&ctx, &action, o] {
         action = [&ctx, o] {
             const LoadedColony loaded = loadColony(o->colony);
-            SelectionOptions sel = selectionOf(o->window, loaded);
+            const AnalysisSettings settings = analysisSettingsOf(loaded, {}, o->window.draws);
+            SelectionOptions sel = withDefaultWindow(selectionOf(o->window, loaded), settings, loaded);
+            reportAnalysisSettings(ctx, "metrics", settings, nullptr, o->window.draws);
             sel.includeResidents = o->residents;
             const EncounterSelection s = selectEncounters(loaded.colony, loaded.where, sel);
             const unsigned threads = o->threads == 0 ? defaultThreadCount() : o->threads;

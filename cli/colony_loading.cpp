@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "cli/colony_loading.h"
 
+#include "core/store/analysis_settings_store.h"
 #include "core/store/colony_store.h"
 
 namespace hierloom::cli {
@@ -13,6 +14,7 @@ LoadedColony loadColony(const std::string& path)
     LoadedColony out;
     out.colony = store.load();
     out.where = ResidenceIndex(out.colony.animals, out.colony.residences);
+    out.settings = readAnalysisSettings(store);
     return out;
 }
 
@@ -28,7 +30,7 @@ SelectionOptions selectionOf(const WindowOptions& o, const LoadedColony& loaded)
         for (const auto& g : loaded.where.groups()) known += (known.empty() ? "" : ", ") + g;
         throw BadInputError("--group: no group named '" + s.group + "' (groups: " + (known.empty() ? "none" : known) + ")");
     }
-    s.draws = o.draws == "ignore" ? DrawPolicy::Ignore : DrawPolicy::Half;
+    s.draws = o.draws.empty() ? loaded.settings.elo.draws : *parseDrawPolicy(o.draws);
     return s;
 }
 

@@ -16,7 +16,8 @@ void addWindowOptions(CLI::App& command, WindowOptions& options)
     command.add_option("--from", options.from, "first day of the window, YYYY-MM-DD (default: the first encounter)");
     command.add_option("--to", options.to, "last day of the window, YYYY-MM-DD (default: the last encounter)");
     command.add_option("--group", options.group, "social group to analyse (default: every group)");
-    command.add_option("--draws", options.draws, "draws count half to each side, or are ignored (default: half)")
+    command.add_option("--draws", options.draws,
+                       "draws count half to each side, or are ignored (default: the colony's setting, else half)")
         ->check(CLI::IsMember({"half", "ignore"}));
 }
 

@@ -33,7 +33,7 @@ struct WindowOptions {
     std::string from;
     std::string to;
     std::string group;
-    std::string draws = "half";
+    std::string draws; // empty: the colony's setting
 };
 
 /// Adds --from, --to, --group and --draws to a command.

@@ -1,5 +1,6 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 // inherit and scenario: matrilineal rank prediction against observed ranks, and what-if changes.
+#include "cli/analysis_options.h"
 #include "cli/colony_loading.h"
 #include "cli/commands.h"
 
@@ -26,11 +27,10 @@ struct InheritOptions {
     std::string colony;
     std::string at;
     std::string rule = "youngest";
-    int maturityYears = 4;
     std::string group;
     std::string matrilineOrder;
-    std::string draws = "half";
-    double k = 100;
+    std::string draws; // empty: the colony's setting
+    AnalysisOverrides analysis;
     bool dyads = false;
     bool monthly = false;
     bool acquisition = false;
@@ -69,15 +69,16 @@ void runInherit(CommandContext& ctx, const InheritOptions& o)
     WindowOptions window;
     window.group = o.group;
     window.draws = o.draws;
-    const SelectionOptions sel = selectionOf(window, loaded); // checks the group name
+    selectionOf(window, loaded); // checks the group name
+    const AnalysisSettings settings = analysisSettingsOf(loaded, o.analysis, o.draws);
+    reportAnalysisSettings(ctx, "inherit", settings, &o.analysis, o.draws);
     InheritanceOptions opt;
     opt.at = optionDate(o.at, "--at");
     opt.rule = *parseSiblingRule(o.rule);
-    opt.maturityYears = o.maturityYears;
+    opt.maturityYears = settings.maturityYears;
     opt.group = o.group;
     opt.matrilineOrder = commaList(o.matrilineOrder);
-    opt.elo.k = o.k;
-    opt.elo.draws = sel.draws;
+    opt.elo = settings.elo;
     const Matrilines lines(loaded.colony);
     for (const PedigreeProblem& p : lines.problems())
         ctx.err << "hierloom-cli: pedigree: " << p.animal << ": " << p.message << "\n";
@@ -117,7 +118,7 @@ void runInherit(CommandContext& ctx, const InheritOptions& o)
         throw BadInputError(e.what());
     }
     const DiscordanceSummary s = summariseDiscordance(lines, p);
-    ctx.err << "inherit: " << formatDate(p.at) << ", rule " << toString(p.rule) << ", maturity " << o.maturityYears
+    ctx.err << "inherit: " << formatDate(p.at) << ", rule " << toString(p.rule) << ", maturity " << opt.maturityYears
             << " years: " << s.ranked << " ranked females, " << s.observed << " with an Elo rating; conformity "
             << (s.conformity ? formatNumber(*s.conformity) : "undefined") << " (" << s.discordant << " of "
             << s.comparable << " dyads discordant), tau-b " << (s.tauB ? formatNumber(*s.tauB) : "undefined") << "\n";
@@ -143,12 +144,19 @@ void runInherit(CommandContext& ctx, const InheritOptions& o)
 void runScenarioCommand(CommandContext& ctx, const std::string& colonyPath, const std::string& file, bool dyads)
 {
     const LoadedColony loaded = loadColony(colonyPath);
-    const ScenarioFileResult parsed = readScenarioFile(file, loaded.colony);
+    // The colony's settings stand unless the scenario file gives its own (maturity).
+    Scenario defaults;
+    defaults.maturityYears = loaded.settings.maturityYears;
+    defaults.elo = loaded.settings.elo;
+    const ScenarioFileResult parsed = readScenarioFile(file, loaded.colony, defaults);
     if (!parsed.scenario) {
         for (const std::string& e : parsed.errors) ctx.err << e << "\n";
         throw BadInputError("the scenario was not run (" + std::to_string(parsed.errors.size()) + " problem" +
                             (parsed.errors.size() == 1 ? "" : "s") + "); nothing was written");
     }
+    AnalysisSettings used = loaded.settings;
+    used.maturityYears = parsed.scenario->maturityYears;
+    reportAnalysisSettings(ctx, "scenario", used, nullptr, {});
     const ScenarioResult r = runScenario(loaded.colony, *parsed.scenario);
     ctx.err << "scenario at " << formatDate(r.at) << ":";
     for (const ScenarioGroup& g : r.groups)
@@ -188,15 +196,13 @@ void addInheritCommand(CLI::App& app, CommandContext& ctx, CommandAction& action
     cmd->add_option("--at", o->at, "the date of the prediction (default: the date of the last encounter)");
     cmd->add_option("--rule", o->rule, "sibling rule: youngest (default, youngest ascendancy) or eldest")
         ->check(CLI::IsMember({"youngest", "eldest"}));
-    cmd->add_option("--maturity-years", o->maturityYears, "age in whole years from which a female is ranked (default: 4)")
-        ->check(CLI::Range(0, 100));
+    addMaturityOption(*cmd, o->analysis);
     cmd->add_option("--group", o->group, "rank only the females resident in this social group (default: every group)");
     cmd->add_option("--matriline-order", o->matrilineOrder,
                     "explicit order of the matrilines, matriarch ids top first, comma-separated "
                     "(lines not listed follow in the observed order)");
-    cmd->add_option("--draws", o->draws, "half (default: a draw updates Elo by half) or ignore")
-        ->check(CLI::IsMember({"half", "ignore"}));
-    cmd->add_option("--k", o->k, "Elo k factor of the observed ranks (default: 100)")->check(CLI::Range(0.0, 100000.0));
+    addDrawsOption(*cmd, o->draws);
+    addEloOptions(*cmd, o->analysis, "observed ranks by Elo: ");
     cmd->add_flag("--dyads", o->dyads, "list the discordant dyads instead: above,below,category (above = observed above)");
     cmd->add_flag("--monthly", o->monthly,
                   "conformity month by month instead: method (elo, ds),period_start,period_end,ranked,observed,"

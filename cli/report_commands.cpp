@@ -1,5 +1,6 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 // stability and report: the stability watch as CSV, and the printable hierarchy report as PDF.
+#include "cli/analysis_options.h"
 #include "cli/colony_loading.h"
 #include "cli/commands.h"
 
@@ -53,6 +54,8 @@ struct StabilityCommandOptions {
     std::string group;
     std::string every = "month";
     std::string from, to;
+    std::string draws; // empty: the colony's setting
+    AnalysisOverrides analysis;
 };
 
 void runStability(CommandContext& ctx, const StabilityCommandOptions& o)
@@ -60,7 +63,10 @@ void runStability(CommandContext& ctx, const StabilityCommandOptions& o)
     const LoadedColony loaded = loadColony(o.colony);
     checkGroup(loaded, o.group);
     const StoredStability stored = storedStability(o.colony);
+    const AnalysisSettings settings = analysisSettingsOf(loaded, o.analysis, o.draws);
+    reportAnalysisSettings(ctx, "stability", settings, &o.analysis, o.draws);
     StabilityOptions so;
+    so.elo = settings.elo;
     so.group = o.group;
     so.length = o.every == "week" ? PeriodLength::Week : PeriodLength::Month;
     so.from = optionDate(o.from, "--from");
@@ -95,6 +101,8 @@ struct ReportOptions {
     std::string group;
     std::string at;
     std::string out;
+    std::string draws; // empty: the colony's setting
+    AnalysisOverrides analysis;
 };
 
 void runReport(CommandContext& ctx, const ReportOptions& o)
@@ -109,6 +117,10 @@ void runReport(CommandContext& ctx, const ReportOptions& o)
     ro.colonyName = std::filesystem::path(o.colony).filename().string();
     ro.thresholds = stored.thresholds;
     ro.severity = stored.severity;
+    const AnalysisSettings settings = analysisSettingsOf(loaded, o.analysis, o.draws);
+    reportAnalysisSettings(ctx, "report", settings, &o.analysis, o.draws);
+    ro.elo = settings.elo;
+    ro.maturityYears = settings.maturityYears;
     // QPdfWriter needs a GUI application; without a display the offscreen platform serves.
     if (qEnvironmentVariableIsEmpty("QT_QPA_PLATFORM")) qputenv("QT_QPA_PLATFORM", "offscreen");
     std::unique_ptr<QGuiApplication> app;
@@ -146,6 +158,8 @@ void addStabilityCommand(CLI::App& app, CommandContext& ctx, CommandAction& acti
     cmd->add_option("--every", o->every, "week or month (default)")->check(CLI::IsMember({"week", "month"}));
     cmd->add_option("--from", o->from, "first day shown (default: the group's first encounter)");
     cmd->add_option("--to", o->to, "last day shown (default: its last encounter)");
+    addDrawsOption(*cmd, o->draws);
+    addEloOptions(*cmd, o->analysis);
     cmd->add_option("--out", ctx.outFile, "write the CSV to this file instead of standard output");
     cmd->callback([&ctx, &action, o] { action = [&ctx, o] { runStability(ctx, *o); }; });
 }
@@ -161,6 +175,9 @@ void addReportCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
     cmd->add_option("--group", o->group, "the social group")->required();
     cmd->add_option("--at", o->at, "the date of the report (default: the group's last encounter)");
     cmd->add_option("--out", o->out, "the PDF file to write")->required();
+    addDrawsOption(*cmd, o->draws);
+    addEloOptions(*cmd, o->analysis);
+    addMaturityOption(*cmd, o->analysis);
     cmd->callback([&ctx, &action, o] { action = [&ctx, o] { runReport(ctx, *o); }; });
 }
 

@@ -2,12 +2,14 @@
 // sex-ratio, maternal-ranks and export-tables: maternal rank against offspring
 // sex (Trivers & Willard 1973) and the research tables, through the same core
 // table functions the desktop program shows.
+#include "cli/analysis_options.h"
 #include "cli/colony_loading.h"
 #include "cli/commands.h"
 
 #include "core/store/colony_store.h"
 #include "core/research/export_tables.h"
 #include "core/research/maternal_rank.h"
+#include "core/ranks/rank_method_registry.h"
 #include "core/base/number_format.h"
 #include "core/research/sex_ratio_analysis.h"
 #include "core/research/species_profile.h"
@@ -32,6 +34,7 @@ struct BirthOptions {
     std::string species;
     int gestationDays = 0; // 0: the colony's setting
     int maturityYears = -1; // -1: the colony's setting
+    AnalysisOverrides analysis; // Elo of the mothers' ranks
 };
 
 void addBirthOptions(CLI::App& cmd, BirthOptions& o, bool exportWindow = false)
@@ -42,8 +45,8 @@ void addBirthOptions(CLI::App& cmd, BirthOptions& o, bool exportWindow = false)
     cmd.add_option("--to", o.window.to, "last birth date counted" + (exportWindow ? std::string(" and last day of the encounter window") : std::string()) + ", YYYY-MM-DD (default: all)");
     cmd.add_option("--group", o.window.group,
                    "births in this social group, mothers ranked among its females (default: every group)");
-    cmd.add_option("--draws", o.window.draws, "draws count half to each side, or are ignored (default: half)")
-        ->check(CLI::IsMember({"half", "ignore"}));
+    addDrawsOption(cmd, o.window.draws);
+    addEloOptions(cmd, o.analysis, "Elo of the mothers' ranks: ");
     std::string keys;
     for (const SpeciesProfile& p : knownSpecies()) keys += (keys.empty() ? "" : ", ") + p.key;
     cmd.add_option("--species", o.species, "species whose defaults apply for this run: " + keys +
@@ -80,7 +83,18 @@ SpeciesSettings speciesFor(const BirthOptions& o)
     }
 }
 
-MaternalRankOptions maternalOptions(const BirthOptions& o, const LoadedColony& loaded, const SpeciesSettings& s)
+/// The colony's analysis settings with this run's overrides; the maturity age is the species settings' one.
+AnalysisSettings birthSettings(CommandContext& ctx, const char* command, const BirthOptions& o,
+                               const LoadedColony& loaded, const SpeciesSettings& species)
+{
+    AnalysisSettings settings = analysisSettingsOf(loaded, o.analysis, o.window.draws);
+    settings.maturityYears = species.maturityYears;
+    reportAnalysisSettings(ctx, command, settings, &o.analysis, o.window.draws);
+    return settings;
+}
+
+MaternalRankOptions maternalOptions(const BirthOptions& o, const LoadedColony& loaded, const SpeciesSettings& s,
+                                    const AnalysisSettings& settings)
 {
     const SelectionOptions sel = selectionOf(o.window, loaded); // checks dates and group
     MaternalRankOptions m;
@@ -89,7 +103,7 @@ MaternalRankOptions maternalOptions(const BirthOptions& o, const LoadedColony& l
     m.group = sel.group;
     m.gestationDays = s.gestationDays;
     m.maturityYears = s.maturityYears;
-    m.elo.draws = sel.draws;
+    m.elo = settings.elo;
     return m;
 }
 
@@ -133,8 +147,9 @@ void runSexRatio(CommandContext& ctx, const BirthOptions& o, const std::string& 
 {
     const SpeciesSettings species = speciesFor(o);
     const LoadedColony loaded = loadColony(o.colony);
+    const AnalysisSettings settings = birthSettings(ctx, "sex-ratio", o, loaded, species);
     const std::vector<MaternalRankRow> births =
-        computeMaternalRanks(loaded.colony, loaded.where, maternalOptions(o, loaded, species));
+        computeMaternalRanks(loaded.colony, loaded.where, maternalOptions(o, loaded, species, settings));
     const SexRatioAnalysis a = analyseSexRatio(births);
     reportSettings(ctx, "sex-ratio", species);
     reportSexRatio(ctx, births, a);
@@ -157,8 +172,9 @@ void runMaternalRanks(CommandContext& ctx, const BirthOptions& o)
 {
     const SpeciesSettings species = speciesFor(o);
     const LoadedColony loaded = loadColony(o.colony);
+    const AnalysisSettings settings = birthSettings(ctx, "maternal-ranks", o, loaded, species);
     const std::vector<MaternalRankRow> births =
-        computeMaternalRanks(loaded.colony, loaded.where, maternalOptions(o, loaded, species));
+        computeMaternalRanks(loaded.colony, loaded.where, maternalOptions(o, loaded, species, settings));
     reportSettings(ctx, "maternal-ranks", species);
     if (births.empty()) ctx.err << "maternal-ranks: no births in this window\n";
     emit(ctx, tableCsv(maternalRankTable(births), false));
@@ -191,9 +207,11 @@ void runExportTables(CommandContext& ctx, const ExportTablesOptions& o)
     if (!o.every.empty() && !o.windows.empty()) throw BadInputError("--every and --window cannot be combined");
     const SpeciesSettings species = speciesFor(o.births);
     const LoadedColony loaded = loadColony(o.births.colony);
+    const AnalysisSettings settings = birthSettings(ctx, "export-tables", o.births, loaded, species);
     ResearchExportOptions r;
     r.selection = selectionOf(o.births.window, loaded);
     r.ranks.method = *parseRankMethod(o.method);
+    r.ranks.elo = settings.elo;
     if (!o.every.empty()) r.every = parsePeriodLength(o.every);
     for (const std::string& w : o.windows) r.windows.push_back(parseWindow(w));
     r.randomisations = o.randomisations;
@@ -254,8 +272,9 @@ void addExportTablesCommand(CLI::App& app, CommandContext& ctx, CommandAction& a
                                          "(default: the whole window as one period)")
         ->check(CLI::IsMember({"day", "week", "month", "year"}));
     cmd->add_option("--window", o->windows, "a custom period FROM,TO (repeat for several)");
-    cmd->add_option("--method", o->method, "rank method: elo, ds or isi (default: elo)")
-        ->check(CLI::IsMember({"elo", "ds", "isi"}));
+    cmd->add_option("--method", o->method,
+                    "rank method: " + rankMethodChoicesText() + " (default: " + rankMethods().front().code + ")")
+        ->check(CLI::IsMember(rankMethodCodes()));
     cmd->add_option("--randomisations", o->randomisations,
                     "iterations of each test in the metrics table (default: 0, tests skipped and their p empty)")
         ->check(CLI::Range(0, 10000000));

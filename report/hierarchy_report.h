@@ -22,7 +22,7 @@ struct HierarchyReportOptions {
     std::string colonyName;      ///< shown under the title (the file name)
     core::EloSettings elo;
     core::SiblingRule rule = core::SiblingRule::Youngest;
-    int maturityYears = 4;
+    int maturityYears = core::kDefaultMaturityYears;
     int changeDays = 90; ///< recent rank changes: Elo ranks this many days before the date against at it
     core::StabilityThresholds thresholds;
     std::map<std::string, int, std::less<>> severity; ///< behaviour code -> severity

@@ -55,30 +55,6 @@
         <translation type="unfinished"></translation>
     </message>
     <message>
-        <source>Timeline</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Prediction</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Matrix</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Hierarchy</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Planner</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Stability</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
         <source>&amp;Print Hierarchy Report...</source>
         <translation type="unfinished"></translation>
     </message>
@@ -96,10 +72,6 @@
     </message>
     <message>
         <source>Cannot Make the Report</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Sex Ratio</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -179,6 +151,73 @@
     </message>
     <message>
         <source>About Hierloom</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::AnalysisSettingsDialog</name>
+    <message>
+        <source>Analysis Settings</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Logistic</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Normal</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Count half to each side</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Ignore</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source> years</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source> days</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>All data</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Elo &amp;k factor:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Elo &amp;start value:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Expectation &amp;curve:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Draws:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Maturity age:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Default &amp;window (last days):</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Kept in the colony file and used by every view, the report and hierloom-cli (whose options override them for one run). Defaults: %1.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>The colony is open read-only, so they cannot be changed.</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -1284,18 +1323,6 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <translation type="unfinished"></translation>
     </message>
     <message>
-        <source>Animals</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Encounters</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Evening Entry</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
         <source>Cannot Save the Change</source>
         <translation type="unfinished"></translation>
     </message>
@@ -1341,30 +1368,6 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
     <message>
         <source>&amp;View</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>&amp;Animals</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>&amp;Encounters</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>&amp;Timeline</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>&amp;Prediction</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>&amp;Matrix</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>&amp;Hierarchy</source>
         <translation type="unfinished"></translation>
     </message>
     <message>
@@ -1431,23 +1434,19 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <source>Encounters: %1</source>
         <translation type="unfinished"></translation>
     </message>
+    <message>
+        <source>&amp;Analysis</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Analysis &amp;Settings...</source>
+        <translation type="unfinished"></translation>
+    </message>
 </context>
 <context>
     <name>hierloom::ui::MatrixView</name>
     <message>
         <source>the matrix</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Elo rating</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>David&apos;s score</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>I&amp;&amp;SI</source>
         <translation type="unfinished"></translation>
     </message>
     <message>
@@ -1506,6 +1505,14 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     <message>
         <source>
 (wins against the order)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Animal id</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>animal id</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -2225,18 +2232,6 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <translation type="unfinished"></translation>
     </message>
     <message>
-        <source>Elo rating</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>David&apos;s score</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>I&amp;&amp;SI order</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
         <source>All groups</source>
         <translation type="unfinished"></translation>
     </message>
@@ -2803,6 +2798,49 @@ per animal</source>
     </message>
 </context>
 <context>
+    <name>hierloom::ui::ViewRegistry</name>
+    <message>
+        <source>&amp;Animals</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Encounters</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Timeline</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Prediction</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Matrix</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Hierarchy</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Se&amp;x Ratio</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Evening E&amp;ntry</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>P&amp;lanner</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Stability</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
     <name>hierloom::ui::WelcomePanel</name>
     <message>
         <source>Recent colonies</source>
@@ -2873,7 +2911,7 @@ Without a colony file it opens on a start screen that offers the demo colony.</s
         <translation type="unfinished"></translation>
     </message>
     <message>
-        <source>Open on this view: animals, encounters, timeline, prediction, matrix, hierarchy, sex-ratio, entry, planner or stability.</source>
+        <source>Open on this view: %1.</source>
         <translation type="unfinished"></translation>
     </message>
 </context>

@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
 #include "core/base/colony.h"
+#include "core/ranks/analysis_settings.h"
 #include "core/ranks/elo_rating.h"
 #include "core/pedigree/matriline.h"
 #include "core/base/residence_index.h"
@@ -31,7 +32,7 @@ using ObservedScores = std::map<std::string, double, std::less<>>;
 struct InheritanceOptions {
     std::optional<Day> at; ///< default: the date of the record's last encounter
     SiblingRule rule = SiblingRule::Youngest;
-    int maturityYears = 4;
+    int maturityYears = kDefaultMaturityYears;
     std::string group; ///< empty: every resident female of the colony
     /// Matriarch ids, top line first, overriding the observed matriline order; lines
     /// not listed follow in the observed order.

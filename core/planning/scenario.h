@@ -41,7 +41,7 @@ struct Scenario {
     std::optional<Day> at; ///< default: the date of the record's last encounter
     std::string group;     ///< the group changed; empty: every group resident that day
     SiblingRule rule = SiblingRule::Youngest;
-    int maturityYears = 4;
+    int maturityYears = kDefaultMaturityYears;
     std::vector<std::string> matrilineOrder; ///< explicit order (matriarch ids) of the lines, as in `inherit`
     int recentDays = 180; ///< observed dyads: decided encounters of the last this-many days up to the date
     bool newbornsAsAdults = true;

@@ -44,10 +44,12 @@ std::optional<int> wholeNumber(const std::string& s)
 
 } // namespace
 
-ScenarioFileResult parseScenarioText(std::string_view text, const std::string& file, const Colony& colony)
+ScenarioFileResult parseScenarioText(std::string_view text, const std::string& file, const Colony& colony,
+                                     const Scenario& defaults)
 {
     ScenarioFileResult result;
-    Scenario s;
+    Scenario s = defaults;
+    s.changes.clear();
     auto error = [&](int line, const std::string& what) {
         result.errors.push_back(line > 0 ? file + ":" + std::to_string(line) + ": " + what : file + ": " + what);
     };
@@ -200,7 +202,7 @@ std::string formatScenarioText(const Scenario& s)
     return out.str();
 }
 
-ScenarioFileResult readScenarioFile(const std::string& path, const Colony& colony)
+ScenarioFileResult readScenarioFile(const std::string& path, const Colony& colony, const Scenario& defaults)
 {
     std::ifstream in(path, std::ios::binary);
     if (!in) {
@@ -210,7 +212,7 @@ ScenarioFileResult readScenarioFile(const std::string& path, const Colony& colon
     }
     std::ostringstream text;
     text << in.rdbuf();
-    return parseScenarioText(text.str(), path, colony);
+    return parseScenarioText(text.str(), path, colony, defaults);
 }
 
 } // namespace hierloom::core

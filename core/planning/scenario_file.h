@@ -20,7 +20,10 @@ struct ScenarioFileResult {
 /// line: date, group, rule, maturity, window, newborns, matrilines, remove, birth,
 /// introduce, split; `#` comments) and checks it against the colony
 /// (checkScenario), so that unknown animals are reported with their line.
-ScenarioFileResult parseScenarioText(std::string_view text, const std::string& fileName, const Colony& colony);
+/// Settings the text does not give (maturity, Elo...) come from `defaults`,
+/// normally the colony's analysis settings.
+ScenarioFileResult parseScenarioText(std::string_view text, const std::string& fileName, const Colony& colony,
+                                     const Scenario& defaults = Scenario{});
 
 /// Writes a scenario in the format parseScenarioText reads (docs/scenario-files.md):
 /// every setting spelled out, then the changes in order, so that parsing the text
@@ -29,6 +32,7 @@ ScenarioFileResult parseScenarioText(std::string_view text, const std::string& f
 std::string formatScenarioText(const Scenario& scenario);
 
 /// Reads and parses a scenario file; an unreadable file is an error of the result.
-ScenarioFileResult readScenarioFile(const std::string& path, const Colony& colony);
+ScenarioFileResult readScenarioFile(const std::string& path, const Colony& colony,
+                                    const Scenario& defaults = Scenario{});
 
 } // namespace hierloom::core

@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "core/planning/stability_watch.h"
 
+#include "core/ranks/elo_kernel.h"
 #include "core/ranks/encounter_selection.h"
 #include "core/base/number_format.h"
 
@@ -109,7 +110,9 @@ StabilitySeries stabilityWatch(const Colony& colony, const ResidenceIndex& where
     };
 
     std::vector<double> rating(static_cast<size_t>(n), o.elo.start);
-    std::vector<bool> rated(static_cast<size_t>(n), false);
+    std::vector<unsigned char> rated(static_cast<size_t>(n), 0);
+    const bool ignoreDraws = o.elo.draws == DrawPolicy::Ignore;
+    detail::EloTally tally;
     std::vector<double> prevRating;
     std::vector<bool> prevIn;
     const int severeAt = o.thresholds.severeAtLeast;
@@ -150,12 +153,9 @@ StabilitySeries stabilityWatch(const Colony& colony, const ResidenceIndex& where
                     }
                 }
             }
-            if (!(bout.draw && o.elo.draws == DrawPolicy::Ignore)) {
-                const double delta = o.elo.k * ((bout.draw ? 0.5 : 1.0) - eloExpected(rating[w] - rating[l], o.elo.curve));
-                rating[w] += delta;
-                rating[l] -= delta;
-                rated[w] = rated[l] = true;
-            }
+            // The shared Elo kernel, one bout at a time: the watch reads ratings between bouts.
+            detail::eloStepsFor<false>(o.elo.curve, &bout, &bout + 1, rating.data(), rated.data(), o.elo.k,
+                                       ignoreDraws, tally);
         }
         if (sp.decided > 0) sp.counterShare = static_cast<double>(sp.counterDominant) / sp.decided;
         sp.dyads.reserve(dyads.size());

@@ -1,7 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
-// Internal to the Elo files: the inner update loop shared by the plain,
-// optimised-k and randomised Elo so that all three compute the same numbers.
+// Internal to the Elo code: the inner update loop shared by the plain,
+// optimised-k and randomised Elo and the stability watch, so that all compute the same numbers.
 #include "core/ranks/bout.h"
 #include "core/ranks/elo_rating.h"
 

@@ -7,6 +7,7 @@
 #include "core/ranks/ordinal_ranks.h"
 #include "core/ranks/parallel_randomisation.h"
 #include "core/ranks/randomised_elo.h"
+#include "core/ranks/rank_method_registry.h"
 #include "core/ranks/win_matrix.h"
 
 #include <algorithm>
@@ -16,10 +17,8 @@ namespace hierloom::core {
 
 std::optional<RankMethod> parseRankMethod(std::string_view t)
 {
-    if (t == "elo") return RankMethod::Elo;
-    if (t == "ds") return RankMethod::DavidsScore;
-    if (t == "isi") return RankMethod::Isi;
-    return std::nullopt;
+    const RankMethodInfo* m = findRankMethod(t);
+    return m ? std::optional<RankMethod>(m->method) : std::nullopt;
 }
 
 namespace {
@@ -179,17 +178,16 @@ std::vector<PeriodRankRow> computeRanksByPeriod(const Colony& colony, const Resi
     return out;
 }
 
-std::vector<int> orderByMethod(const EncounterSelection& sel, RankMethod method, DrawPolicy draws)
+std::vector<int> orderByMethod(const EncounterSelection& sel, RankMethod method, const EloSettings& elo)
 {
+    const DrawPolicy draws = elo.draws;
     const int n = sel.size();
     std::vector<int> order(static_cast<size_t>(n));
     std::iota(order.begin(), order.end(), 0);
     if (n == 0) return order;
     std::vector<int> ranks;
     if (method == RankMethod::Elo) {
-        EloSettings s;
-        s.draws = draws;
-        const EloRun run = runElo(n, sel.bouts, s);
+        const EloRun run = runElo(n, sel.bouts, elo);
         ranks = ordinalRanks(run.rating, run.rated);
         // Animals without a rating (resident only) go last, by id.
         int next = static_cast<int>(std::count(run.rated.begin(), run.rated.end(), true));

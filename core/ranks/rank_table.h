@@ -67,6 +67,7 @@ std::vector<PeriodRankRow> computeRanksByPeriod(const Colony& colony, const Resi
 
 /// Ordinal order of the selection's animals by a method over the whole
 /// window (all analysed animals, resident or not); index list, top first.
-std::vector<int> orderByMethod(const EncounterSelection& selection, RankMethod method, DrawPolicy draws);
+/// Elo uses `elo`; every method counts draws by elo.draws.
+std::vector<int> orderByMethod(const EncounterSelection& selection, RankMethod method, const EloSettings& elo);
 
 } // namespace hierloom::core

@@ -99,10 +99,12 @@ ExportTable rankTableByWindows(const Colony& colony, const ResidenceIndex& where
 }
 
 ExportTable winMatrixTable(const Colony& colony, const ResidenceIndex& where, const SelectionOptions& selection,
-                           RankMethod order)
+                           RankMethod order, const EloSettings& elo)
 {
     const EncounterSelection s = selectEncounters(colony, where, selection);
-    const std::vector<int> ord = orderByMethod(s, order, selection.draws);
+    EloSettings e = elo;
+    e.draws = selection.draws;
+    const std::vector<int> ord = orderByMethod(s, order, e);
     const WinMatrix m = WinMatrix::fromBouts(s.size(), s.bouts, selection.draws);
     ExportTable t{"win_matrix", {"animal"}, {}};
     for (int j : ord) t.header.push_back(s.ids[static_cast<size_t>(j)]);
@@ -229,7 +231,7 @@ std::vector<ExportTable> researchTables(const Colony& colony, const ResidenceInd
         if (from && to && *from <= *to) periods.push_back({*from, *to});
         out.push_back(rankTableByWindows(colony, where, o.selection, o.ranks, periods));
     }
-    out.push_back(winMatrixTable(colony, where, o.selection, o.ranks.method));
+    out.push_back(winMatrixTable(colony, where, o.selection, o.ranks.method, o.ranks.elo));
     out.push_back(metricsByPeriodTable(colony, where, o.selection, periods, o.randomisations, o.seed, o.threads));
     MaternalRankOptions m;
     m.from = o.selection.from;

@@ -2,6 +2,7 @@
 #pragma once
 #include "core/base/calendar_period.h"
 #include "core/base/colony.h"
+#include "core/ranks/analysis_settings.h"
 #include "core/ranks/encounter_selection.h"
 #include "core/research/maternal_rank.h"
 #include "core/ranks/rank_table.h"
@@ -42,7 +43,7 @@ ExportTable rankTableByWindows(const Colony& colony, const ResidenceIndex& where
 /// The win matrix of the selection (rows winners, columns losers, diagonal
 /// empty), animals ordered by `order` over the window as the `matrix` command does.
 ExportTable winMatrixTable(const Colony& colony, const ResidenceIndex& where, const SelectionOptions& selection,
-                           RankMethod order);
+                           RankMethod order, const EloSettings& elo = EloSettings{});
 
 /// Hierarchy metrics (computeHierarchyMetrics) per period: one row per
 /// period, columns period_start, period_end and the `metrics` names in order.
@@ -84,7 +85,7 @@ struct ResearchExportOptions {
     std::uint64_t seed = 1;
     unsigned threads = 0;
     int gestationDays = 165;
-    int maturityYears = 4;
+    int maturityYears = kDefaultMaturityYears;
 };
 
 /// Every research table: ranks by period, win matrix, metrics by period,

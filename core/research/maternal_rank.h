@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
 #include "core/base/colony.h"
+#include "core/ranks/analysis_settings.h"
 #include "core/ranks/elo_rating.h"
 #include "core/base/residence_index.h"
 
@@ -33,7 +34,7 @@ struct MaternalRankOptions {
     std::optional<Day> to;   ///< births on or before this day
     std::string group;       ///< empty: every group; else births in, and ranks within, this group
     int gestationDays = 165;
-    int maturityYears = 4;
+    int maturityYears = kDefaultMaturityYears;
     EloSettings elo;         ///< start, k, curve, draws
 };
 

@@ -19,7 +19,7 @@ case " $* " in *" hierloom-cli "*)
         grep -q "^\.SS $command\$" "$dir/hierloom-cli.1" || { echo "FAIL: hierloom-cli.1 lacks $command"; fail=1; }
     done
     # A default from ranks --help, as the reader of the man page needs it.
-    grep -q 'elo: the k factor (default: 100)' "$dir/hierloom-cli.1" ||
+    grep -q "elo: the k factor (default: the colony's setting, else 100)" "$dir/hierloom-cli.1" ||
         { echo "FAIL: hierloom-cli.1 lacks the defaults of ranks"; fail=1; } ;;
 esac
 case " $* " in *" hierloom "*)

@@ -2,6 +2,7 @@
 // Help inside the program (issue 10): every figure key has a methods entry,
 // the "?" buttons and the Help menu open the right place, the About box
 // names every licence, and the icon and the English catalogue are compiled in.
+#include "core/ranks/rank_method_registry.h"
 #include "ui/shell/about_dialog.h"
 #include "ui/widgets/help_browser.h"
 #include "ui/widgets/help_button.h"
@@ -239,4 +240,17 @@ TEST(HelpButton, EveryFigureViewHasItsHelpButtons)
     EXPECT_EQ(visibleKeys(), QStringList{QStringLiteral("davids_score")});
     views.matrix->setMethod(core::RankMethod::Isi);
     EXPECT_EQ(visibleKeys(), QStringList{QStringLiteral("isi")});
+}
+
+TEST(HelpTopics, EveryRegisteredRankMethodHasItsEntry)
+{
+    // The rank method registry names the help entry of each method; the matrix
+    // view's "?" buttons open it.
+    const QSet<QString> anchors = anchorsOf(resourceText(QStringLiteral(":/help/methods.html")));
+    for (const core::RankMethodInfo& m : core::rankMethods()) {
+        bool listed = false;
+        for (const ui::HelpTopic& topic : ui::figureHelpTopics) listed = listed || qstrcmp(topic.key, m.helpKey) == 0;
+        EXPECT_TRUE(listed) << m.code << ": " << m.helpKey << " is not a help topic";
+        EXPECT_TRUE(anchors.contains(QString::fromLatin1(m.helpKey))) << m.helpKey;
+    }
 }

@@ -35,7 +35,9 @@ QStringList expectedOrder(const core::Colony& c, const core::ResidenceIndex& whe
 {
     const core::EncounterSelection sel = core::selectEncounters(c, where, o);
     QStringList out;
-    for (int i : core::orderByMethod(sel, method, o.draws)) out << ui::toQString(sel.ids[static_cast<size_t>(i)]);
+    core::EloSettings elo;
+    elo.draws = o.draws;
+    for (int i : core::orderByMethod(sel, method, elo)) out << ui::toQString(sel.ids[static_cast<size_t>(i)]);
     return out;
 }
 

@@ -2,6 +2,7 @@
 #include "ui/analysis/hierarchy_plots_view.h"
 
 #include "ui/document/colony_document.h"
+#include "ui/document/document_settings.h"
 #include "ui/widgets/help_button.h"
 #include "ui/document/visible_refresh.h"
 #include "ui/document/compute_runner.h"
@@ -149,6 +150,9 @@ void HierarchyPlotsView::recompute()
     auto colony = snapshot.colony;
     auto where = snapshot.residences;
     core::InheritanceOptions options;
+    const core::AnalysisSettings settings = documentAnalysisSettings(document_);
+    options.elo = settings.elo;
+    options.maturityYears = settings.maturityYears;
     options.group = toStdString(group_->currentData().toString());
     runner_->start([this, colony, where, options](const std::atomic<bool>& cancel,
                                                   const ComputeRunner::Progress& progress) {

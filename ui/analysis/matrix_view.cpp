@@ -2,8 +2,11 @@
 #include "ui/analysis/matrix_view.h"
 
 #include "core/ranks/encounter_selection.h"
+#include "core/ranks/rank_method_registry.h"
+#include "core/pedigree/inheritance_prediction.h"
 #include "core/pedigree/matriline.h"
 #include "ui/document/colony_document.h"
+#include "ui/document/document_settings.h"
 #include "ui/widgets/help_button.h"
 #include "ui/document/visible_refresh.h"
 #include "ui/document/compute_runner.h"
@@ -12,6 +15,7 @@
 #include "ui/document/qt_convert.h"
 
 #include <QComboBox>
+#include <QCoreApplication>
 #include <QDateEdit>
 #include <QHBoxLayout>
 #include <QLabel>
@@ -21,6 +25,7 @@
 #include <qcustomplot.h>
 
 #include <cmath>
+#include <numeric>
 #include <utility>
 
 namespace hierloom::ui {
@@ -47,9 +52,10 @@ MatrixView::MatrixView(ColonyDocument* document, QWidget* parent)
       toEdit_(new QDateEdit(this)),
       summary_(new QLabel(this))
 {
-    methodBox_->addItem(tr("Elo rating"), static_cast<int>(core::RankMethod::Elo));
-    methodBox_->addItem(tr("David's score"), static_cast<int>(core::RankMethod::DavidsScore));
-    methodBox_->addItem(tr("I&&SI"), static_cast<int>(core::RankMethod::Isi));
+    for (const core::RankMethodInfo& m : core::rankMethods())
+        methodBox_->addItem(QCoreApplication::translate("hierloom::core::RankMethod", m.displayName),
+                            QString::fromLatin1(m.code));
+    methodBox_->addItem(tr("Animal id"), QStringLiteral("id"));
     groupBox_->addItem(tr("All groups"), QString());
     for (QDateEdit* e : {fromEdit_, toEdit_}) {
         e->setCalendarPopup(true);
@@ -59,12 +65,10 @@ MatrixView::MatrixView(ColonyDocument* document, QWidget* parent)
     controls->addWidget(new QLabel(tr("Order by:"), this));
     controls->addWidget(methodBox_);
     // The "?" follows the ordering method chosen (setMethod shows the matching one).
-    for (const auto& [method, key] : {std::pair{core::RankMethod::Elo, "elo"},
-                                      std::pair{core::RankMethod::DavidsScore, "davids_score"},
-                                      std::pair{core::RankMethod::Isi, "isi"}}) {
-        auto* help = new HelpButton(QString::fromLatin1(key), this);
-        help->setProperty("rankMethod", static_cast<int>(method));
-        help->setVisible(method == method_);
+    for (const core::RankMethodInfo& m : core::rankMethods()) {
+        auto* help = new HelpButton(QString::fromLatin1(m.helpKey), this);
+        help->setProperty("rankMethod", static_cast<int>(m.method));
+        help->setVisible(method_ == m.method);
         controls->addWidget(help);
     }
     controls->addWidget(new QLabel(tr("From:"), this));
@@ -99,8 +103,10 @@ MatrixView::MatrixView(ColonyDocument* document, QWidget* parent)
     plot_->setMouseTracking(true);
     plot_->setInteractions(QCP::iRangeDrag | QCP::iRangeZoom);
 
-    connect(methodBox_, &QComboBox::currentIndexChanged, this,
-            [this] { setMethod(static_cast<core::RankMethod>(methodBox_->currentData().toInt())); });
+    connect(methodBox_, &QComboBox::currentIndexChanged, this, [this] {
+        const core::RankMethodInfo* m = core::findRankMethod(toStdString(methodBox_->currentData().toString()));
+        setMethod(m ? std::optional<core::RankMethod>(m->method) : std::nullopt);
+    });
     connect(groupBox_, &QComboBox::currentIndexChanged, this, [this] { setGroup(groupBox_->currentData().toString()); });
     connect(fromEdit_, &QDateEdit::editingFinished, this, [this] { setWindow(toDay(fromEdit_->date()), to_); });
     connect(toEdit_, &QDateEdit::editingFinished, this, [this] { setWindow(from_, toDay(toEdit_->date())); });
@@ -114,15 +120,23 @@ MatrixView::MatrixView(ColonyDocument* document, QWidget* parent)
 
 MatrixView::~MatrixView() = default;
 
-void MatrixView::setMethod(core::RankMethod method)
+void MatrixView::setMethod(std::optional<core::RankMethod> method)
 {
     if (method == method_) return;
     method_ = method;
     const QSignalBlocker block(methodBox_);
-    methodBox_->setCurrentIndex(methodBox_->findData(static_cast<int>(method)));
+    methodBox_->setCurrentIndex(
+        methodBox_->findData(method ? QString::fromLatin1(core::rankMethodInfo(*method).code) : QStringLiteral("id")));
     for (HelpButton* help : findChildren<HelpButton*>())
-        help->setVisible(help->property("rankMethod").toInt() == static_cast<int>(method));
+        help->setVisible(method && help->property("rankMethod").toInt() == static_cast<int>(*method));
     recompute();
+}
+
+QStringList MatrixView::orderCodes() const
+{
+    QStringList out;
+    for (int i = 0; i < methodBox_->count(); ++i) out << methodBox_->itemData(i).toString();
+    return out;
 }
 
 void MatrixView::setWindow(std::optional<core::Day> from, std::optional<core::Day> to)
@@ -150,20 +164,26 @@ void MatrixView::recompute()
         return;
     }
     core::SelectionOptions options;
+    const core::AnalysisSettings settings = documentAnalysisSettings(document_);
     options.from = from_;
     options.to = to_;
+    if (!from_ && !to_) options.from = core::defaultWindowStart(settings, core::lastEncounterDay(document_->colony()));
     options.group = toStdString(group_);
-    const core::RankMethod method = method_;
+    options.draws = settings.elo.draws;
+    const core::EloSettings elo = settings.elo;
+    const std::optional<core::RankMethod> method = method_;
     const ColonyDocument::Snapshot snapshot = document_->snapshot();
     auto colony = snapshot.colony;
     auto where = snapshot.residences;
-    runner_->start([this, colony, where, options, method](const std::atomic<bool>& cancel,
+    runner_->start([this, colony, where, options, method, elo](const std::atomic<bool>& cancel,
                                                           const ComputeRunner::Progress& progress) {
         progress(0, 3);
         const core::EncounterSelection sel = core::selectEncounters(*colony, *where, options);
         if (cancel) return ComputeRunner::Apply();
         progress(1, 3);
-        const std::vector<int> order = core::orderByMethod(sel, method, options.draws);
+        std::vector<int> order(static_cast<size_t>(sel.size()));
+        std::iota(order.begin(), order.end(), 0); // by id
+        if (method) order = core::orderByMethod(sel, *method, elo);
         if (cancel) return ComputeRunner::Apply();
         progress(2, 3);
         const core::WinMatrix all = core::WinMatrix::fromBouts(sel.size(), sel.bouts, options.draws);
@@ -335,13 +355,14 @@ void MatrixView::rebuildPlot()
     connect(plot_->xAxis, qOverload<const QCPRange&>(&QCPAxis::rangeChanged), plot_->xAxis2,
             qOverload<const QCPRange&>(&QCPAxis::setRange), Qt::UniqueConnection);
     plot_->legend->setVisible(true);
-    const char* method = method_ == core::RankMethod::Elo ? "Elo rating"
-                         : method_ == core::RankMethod::DavidsScore ? "David's score" : "I&SI";
+    const QString method = method_ ? QCoreApplication::translate("hierloom::core::RankMethod",
+                                                                 core::rankMethodInfo(*method_).displayName)
+                                   : tr("animal id");
     int below = static_cast<int>(markX.size());
     summary_->setText(tr("%1 animals, %2 encounters counted; ordered by %3; %4 cells with wins against the order.")
                           .arg(n)
                           .arg(countText(all))
-                          .arg(tr(method))
+                          .arg(method)
                           .arg(below));
     plot_->replot(QCustomPlot::rpQueuedReplot);
 }

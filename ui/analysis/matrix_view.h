@@ -27,8 +27,8 @@ class ComputeRunner;
 class ProgressStrip;
 
 /// The win matrix of a window (rows winners, columns losers) with the animals
-/// in the order of a rank method (core::orderByMethod: Elo, David's score or
-/// I&SI), cells shaded by count, wins against that order (below the
+/// in the order of a rank method (core::orderByMethod, any method of the
+/// registry, with the colony's analysis settings) or by id, cells shaded by count, wins against that order (below the
 /// diagonal) marked, lines between consecutive animals of different
 /// matrilines, a colour strip per matriline and the row (won) and column
 /// (lost) totals.
@@ -41,7 +41,10 @@ public:
     QCustomPlot* plot() const { return plot_; }
     ComputeRunner* runner() const { return runner_; }
 
-    void setMethod(core::RankMethod method);
+    /// Orders by a rank method, or by animal id when empty.
+    void setMethod(std::optional<core::RankMethod> method);
+    /// The order choices offered, as codes: the rank method registry's, then "id".
+    QStringList orderCodes() const;
     /// Inclusive window; an empty end means the record's first or last day.
     void setWindow(std::optional<core::Day> from, std::optional<core::Day> to);
     void setGroup(const QString& group);
@@ -83,7 +86,7 @@ private:
     QDateEdit* toEdit_;
     QLabel* summary_;
 
-    core::RankMethod method_ = core::RankMethod::Elo;
+    std::optional<core::RankMethod> method_ = core::RankMethod::Elo; ///< empty: by animal id
     std::optional<core::Day> from_, to_;
     QString group_;
     std::vector<std::string> ids_, names_, matriarchs_;

@@ -136,9 +136,9 @@ PedigreeView::PedigreeView(ColonyDocument* document, AnimalSelection* selection,
         connect(a, &QAction::triggered, this, std::move(act));
         addAction(a);
     };
-    // (Ctrl+1..6 belong to the window: they switch views.)
+    // (Ctrl+1..9 and Ctrl+0 belong to the window: they switch views; a second Ctrl+0 here would make both ambiguous.)
     addZoomAction(tr("Zoom to Fit Width"), QKeySequence(), [this] { zoomToFitWidth(); });
-    addZoomAction(tr("Actual Size"), QKeySequence(Qt::CTRL | Qt::Key_0), [this] { setZoom(1.0); });
+    addZoomAction(tr("Actual Size"), QKeySequence(Qt::CTRL | Qt::ALT | Qt::Key_0), [this] { setZoom(1.0); });
     addZoomAction(tr("Zoom In"), QKeySequence::ZoomIn, [this] { setZoom(zoom_ * 1.25); });
     addZoomAction(tr("Zoom Out"), QKeySequence::ZoomOut, [this] { setZoom(zoom_ / 1.25); });
     rebuild();

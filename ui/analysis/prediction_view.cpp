@@ -3,6 +3,7 @@
 
 #include "ui/document/animal_selection.h"
 #include "ui/document/colony_document.h"
+#include "ui/document/document_settings.h"
 #include "ui/widgets/help_button.h"
 #include "ui/document/visible_refresh.h"
 #include "ui/document/compute_runner.h"
@@ -135,6 +136,9 @@ void PredictionView::recompute()
         return;
     }
     core::InheritanceOptions options;
+    const core::AnalysisSettings settings = documentAnalysisSettings(document_);
+    options.elo = settings.elo;
+    options.maturityYears = settings.maturityYears;
     options.rule = rule_;
     if (selection_->day()) options.at = *selection_->day();
     else options.at = core::lastEncounterDay(document_->colony());

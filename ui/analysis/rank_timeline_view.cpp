@@ -3,6 +3,7 @@
 
 #include "ui/document/animal_selection.h"
 #include "ui/document/colony_document.h"
+#include "ui/document/document_settings.h"
 #include "ui/widgets/help_button.h"
 #include "ui/document/visible_refresh.h"
 #include "ui/document/compute_runner.h"
@@ -163,6 +164,9 @@ void RankTimelineView::recompute()
         return;
     }
     core::RankTimelineOptions options;
+    const core::AnalysisSettings settings = documentAnalysisSettings(document_);
+    options.inheritance.elo = settings.elo;
+    options.inheritance.maturityYears = settings.maturityYears;
     options.step = step_;
     options.inheritance.group = toStdString(group_);
     // Copies: the worker must not read the document while an edit changes it.

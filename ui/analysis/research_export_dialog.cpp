@@ -2,9 +2,11 @@
 #include "ui/analysis/research_export_dialog.h"
 
 #include "core/base/civil_date.h"
+#include "core/ranks/rank_method_registry.h"
 #include "core/research/species_profile.h"
 #include "core/store/species_settings.h"
 #include "ui/document/colony_document.h"
+#include "ui/document/document_settings.h"
 #include "ui/widgets/help_button.h"
 #include "ui/document/qt_convert.h"
 #include "ui/document/document_queries.h"
@@ -53,9 +55,9 @@ ResearchExportDialog::ResearchExportDialog(ColonyDocument* document, QWidget* pa
     windows_->setPlaceholderText(tr("One window per line: YYYY-MM-DD,YYYY-MM-DD"));
     windows_->setMaximumHeight(70);
     windows_->setEnabled(false);
-    method_->addItem(tr("Elo rating"), QStringLiteral("elo"));
-    method_->addItem(tr("David's score"), QStringLiteral("ds"));
-    method_->addItem(tr("I&&SI order"), QStringLiteral("isi"));
+    for (const core::RankMethodInfo& m : core::rankMethods())
+        method_->addItem(QCoreApplication::translate("hierloom::core::RankMethod", m.displayName),
+                         QString::fromLatin1(m.code));
     group_->addItem(tr("All groups"), QString());
     for (const QString& g : groupsWithEncounters(document_)) group_->addItem(g, g);
     from_->setPlaceholderText(tr("YYYY-MM-DD (empty: from the start)"));
@@ -137,6 +139,10 @@ std::optional<core::ResearchExportOptions> ResearchExportDialog::options(QString
     }
     o.selection.group = toStdString(group_->currentData().toString());
     o.ranks.method = *core::parseRankMethod(toStdString(method_->currentData().toString()));
+    // The colony's analysis settings, as the `export-tables` command uses them.
+    const core::AnalysisSettings settings = documentAnalysisSettings(document_);
+    o.ranks.elo = settings.elo;
+    o.selection.draws = settings.elo.draws;
     const QString period = period_->currentData().toString();
     if (period == QLatin1String("custom")) {
         for (const QString& raw : windows_->toPlainText().split(QLatin1Char('\n'))) {

@@ -5,6 +5,7 @@
 #include "core/store/species_settings.h"
 #include "ui/document/colony_document.h"
 #include "ui/document/colony_edit_facade.h"
+#include "ui/document/document_settings.h"
 #include "ui/widgets/help_button.h"
 #include "ui/widgets/plot_export.h"
 #include "ui/document/qt_convert.h"
@@ -74,14 +75,15 @@ QWidget* captioned(const QString& caption, const QString& helpKey, QWidget* extr
 
 } // namespace
 
-core::MaternalRankOptions documentMaternalOptions(const std::string& group, int gestationDays, int maturityYears)
+core::MaternalRankOptions documentMaternalOptions(const std::string& group, int gestationDays, int maturityYears,
+                                                 const core::EloSettings& elo)
 {
-    // As the `sex-ratio` command: every birth, draws counted half, Elo defaults.
+    // As the `sex-ratio` command: every birth, the colony's Elo settings.
     core::MaternalRankOptions m;
     m.group = group;
     m.gestationDays = gestationDays;
     m.maturityYears = maturityYears;
-    m.elo.draws = core::SelectionOptions{}.draws;
+    m.elo = elo;
     return m;
 }
 
@@ -278,7 +280,8 @@ void SexRatioView::recompute()
 {
     births_ = core::computeMaternalRanks(
         document_->colony(), document_->residences(),
-        documentMaternalOptions(toStdString(group_->currentData().toString()), gestation_->value(), maturity_->value()));
+        documentMaternalOptions(toStdString(group_->currentData().toString()), gestation_->value(), maturity_->value(),
+                                documentAnalysisSettings(document_).elo));
     analysis_ = core::analyseSexRatio(births_);
 
     // The figures: the rows of the `sex-ratio` command, empty where undefined.

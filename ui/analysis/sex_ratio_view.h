@@ -21,7 +21,8 @@ class ColonyEditFacade;
 
 /// The maternal rank options of the open document for these settings, as the
 /// `sex-ratio` command builds them (one code path for screen and exports).
-core::MaternalRankOptions documentMaternalOptions(const std::string& group, int gestationDays, int maturityYears);
+core::MaternalRankOptions documentMaternalOptions(const std::string& group, int gestationDays, int maturityYears,
+                                                 const core::EloSettings& elo);
 
 /// The Sex Ratio tab (Trivers & Willard 1973; methods.md "Maternal rank and
 /// offspring sex ratio"): the species setting, the `sex-ratio` figures, the

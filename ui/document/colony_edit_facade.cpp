@@ -1,6 +1,8 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "ui/document/colony_edit_facade.h"
 
+#include "core/store/analysis_settings_store.h"
+
 #include "core/research/species_profile.h"
 #include "core/rules/encounter_rules.h"
 #include "core/store/colony_backup.h"
@@ -193,6 +195,20 @@ core::FieldProblems ColonyEditFacade::setSpeciesSetting(const std::string& speci
         // The stored setting is not valid: writing a valid one is a change.
     }
     return setSettings(values, tr("Set species %1").arg(toQString(species)));
+}
+
+core::FieldProblems ColonyEditFacade::setAnalysisSettings(const core::AnalysisSettings& settings)
+{
+    if (auto p = writable(); !p.empty()) return p;
+    core::SettingValues values;
+    try {
+        values = core::analysisSettingValues(*document_->store(), settings);
+    } catch (const std::invalid_argument& error) {
+        return {{"settings", error.what()}};
+    }
+    // Settings equal to those in effect (stored or default) change nothing.
+    if (core::readAnalysisSettings(*document_->store()) == settings) return {};
+    return setSettings(values, tr("Change analysis settings"));
 }
 
 core::FieldProblems ColonyEditFacade::saveScenario(const std::string& name, const std::string& text)

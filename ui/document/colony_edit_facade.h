@@ -7,6 +7,7 @@
 #include "core/store/colony_import.h"
 #include "core/store/colony_merge.h"
 #include "core/store/colony_store.h"
+#include "core/ranks/analysis_settings.h"
 #include "core/store/setting_values.h"
 
 #include <QObject>
@@ -66,6 +67,9 @@ public:
     /// Stores the species and its overrides (empty: the species default applies).
     core::FieldProblems setSpeciesSetting(const std::string& species, std::optional<int> gestationDays,
                                           std::optional<int> maturityYears);
+    /// Stores the analysis settings (Elo k, start, curve, draws, maturity, window);
+    /// settings equal to those in effect write nothing.
+    core::FieldProblems setAnalysisSettings(const core::AnalysisSettings& settings);
     /// Saves (or replaces) a named what-if scenario's text.
     core::FieldProblems saveScenario(const std::string& name, const std::string& text);
     /// Deletes a saved scenario; nothing happens when there is none of that name.

@@ -2,8 +2,6 @@
 #include "ui/planning/colony_manager_views.h"
 
 #include "ui/document/colony_document.h"
-#include "ui/document/colony_edit_facade.h"
-#include "ui/planning/planner_view.h"
 #include "ui/planning/report_dialog.h"
 #include "ui/planning/stability_badge.h"
 #include "ui/planning/stability_view.h"
@@ -15,17 +13,12 @@
 
 namespace hierloom::ui {
 
-ColonyManagerViews addColonyManagerViews(QMainWindow* window, QTabWidget* tabs, ColonyEditFacade* facade)
+void addStabilityBadge(QMainWindow* window, QTabWidget* tabs, ColonyDocument* document, ColonyManagerViews& views)
 {
-    ColonyManagerViews v;
-    v.planner = new PlannerView(facade, window);
-    v.stability = new StabilityView(facade, window);
-    tabs->addTab(v.planner, QObject::tr("Planner"));
-    tabs->addTab(v.stability, QObject::tr("Stability"));
-    v.badge = new StabilityBadge(facade->document(), window);
-    window->statusBar()->addPermanentWidget(v.badge);
-    QObject::connect(v.badge, &QToolButton::clicked, tabs, [tabs, v] { tabs->setCurrentWidget(v.stability); });
-    return v;
+    views.badge = new StabilityBadge(document, window);
+    window->statusBar()->addPermanentWidget(views.badge);
+    StabilityView* stability = views.stability;
+    QObject::connect(views.badge, &QToolButton::clicked, tabs, [tabs, stability] { tabs->setCurrentWidget(stability); });
 }
 
 void addReportActions(QMenu* menu, QMainWindow* window, ColonyDocument* document)

@@ -12,16 +12,16 @@ class PlannerView;
 class StabilityBadge;
 class StabilityView;
 
-/// The colony manager's tabs and the status-bar alert.
+/// The colony manager's tabs (made by ui/shell/view_registry.h) and the status-bar alert.
 struct ColonyManagerViews {
     PlannerView* planner = nullptr;
     StabilityView* stability = nullptr;
     StabilityBadge* badge = nullptr;
 };
 
-/// Adds the Planner and Stability tabs (objectName "planner", "stability") and
-/// the stability badge to the window's status bar (a click shows the Stability tab).
-ColonyManagerViews addColonyManagerViews(QMainWindow* window, QTabWidget* tabs, ColonyEditFacade* facade);
+/// Adds the stability badge to the window's status bar (a click shows the
+/// Stability tab of `views`, which must exist) and sets views.badge.
+void addStabilityBadge(QMainWindow* window, QTabWidget* tabs, ColonyDocument* document, ColonyManagerViews& views);
 
 /// Adds "Print Hierarchy Report..." and "Save Hierarchy Report as PDF..." to a menu.
 void addReportActions(QMenu* menu, QMainWindow* window, ColonyDocument* document);

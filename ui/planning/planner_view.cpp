@@ -8,6 +8,7 @@
 #include "ui/widgets/caution_label.h"
 #include "ui/document/colony_document.h"
 #include "ui/document/colony_edit_facade.h"
+#include "ui/document/document_settings.h"
 #include "ui/document/visible_refresh.h"
 #include "ui/document/qt_convert.h"
 #include "ui/planning/scenario_composer.h"
@@ -225,7 +226,12 @@ std::optional<core::Scenario> PlannerView::savedScenario(const QString& name, QS
         if (error) *error = tr("No saved scenario named %1.").arg(name);
         return std::nullopt;
     }
-    const core::ScenarioFileResult parsed = core::parseScenarioText(*text, toStdString(name), document_->colony());
+    core::Scenario defaults;
+    const core::AnalysisSettings settings = documentAnalysisSettings(document_);
+    defaults.maturityYears = settings.maturityYears;
+    defaults.elo = settings.elo;
+    const core::ScenarioFileResult parsed =
+        core::parseScenarioText(*text, toStdString(name), document_->colony(), defaults);
     if (!parsed.scenario && error) {
         QStringList lines;
         for (const std::string& e : parsed.errors) lines << toQString(e);
@@ -268,7 +274,8 @@ void PlannerView::rerun()
         problems_->setText(document_->isOpen() ? tr("The colony has no group with encounters.") : QString());
         return;
     }
-    const core::Scenario s = composer_->scenario();
+    core::Scenario s = composer_->scenario();
+    s.elo = documentAnalysisSettings(document_).elo; // Elo is no part of a scenario's text
     try {
         result_ = core::runScenario(document_->colony(), s);
     } catch (const core::ScenarioError& e) {
@@ -379,7 +386,8 @@ void PlannerView::compare(const QString& first, const QString& second)
     const QString names[2] = {first, second};
     for (int k = 0; k < 2; ++k) {
         QString error;
-        const std::optional<core::Scenario> s = names[k].isEmpty() ? composer_->scenario() : savedScenario(names[k], &error);
+        std::optional<core::Scenario> s = names[k].isEmpty() ? composer_->scenario() : savedScenario(names[k], &error);
+        if (s) s->elo = documentAnalysisSettings(document_).elo;
         const QString label = names[k].isEmpty() ? tr("the scenario being composed") : names[k];
         if (!s) {
             notes << tr("%1: %2").arg(label, error);

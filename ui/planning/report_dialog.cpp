@@ -4,6 +4,7 @@
 #include "core/pedigree/inheritance_prediction.h"
 #include "core/store/stability_settings.h"
 #include "ui/document/colony_document.h"
+#include "ui/document/document_settings.h"
 #include "ui/document/qt_convert.h"
 #include "ui/document/document_queries.h"
 #include "ui/planning/stability_view.h"
@@ -28,6 +29,9 @@ report::HierarchyReportOptions documentReportOptions(ColonyDocument* document, c
     o.group = group;
     o.at = at;
     o.colonyName = toStdString(QFileInfo(document->path()).fileName());
+    const core::AnalysisSettings settings = documentAnalysisSettings(document);
+    o.elo = settings.elo;
+    o.maturityYears = settings.maturityYears;
     if (const core::ColonyStore* store = document->store()) {
         o.thresholds = core::readStabilityThresholds(*store);
         o.severity = core::behaviourSeverities(*store);

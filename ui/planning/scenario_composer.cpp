@@ -4,6 +4,7 @@
 #include "core/pedigree/inheritance_prediction.h"
 #include "core/pedigree/matriline.h"
 #include "ui/document/colony_document.h"
+#include "ui/document/document_settings.h"
 #include "ui/document/qt_convert.h"
 #include "ui/document/document_queries.h"
 #include "ui/planning/stability_view.h"
@@ -136,6 +137,9 @@ void ScenarioComposer::reset()
     }
     list_.clear();
     base_ = core::Scenario{};
+    const core::AnalysisSettings settings = documentAnalysisSettings(document_);
+    base_.maturityYears = settings.maturityYears;
+    base_.elo = settings.elo;
     newcomers_ = 0;
     refreshChoices();
     refreshChangeList();

@@ -6,6 +6,7 @@
 #include "ui/widgets/caution_label.h"
 #include "ui/document/colony_document.h"
 #include "ui/document/colony_edit_facade.h"
+#include "ui/document/document_settings.h"
 #include "ui/widgets/help_button.h"
 #include "ui/document/visible_refresh.h"
 #include "ui/document/qt_convert.h"
@@ -51,6 +52,7 @@ core::StabilityOptions documentStabilityOptions(const ColonyDocument* document, 
     core::StabilityOptions o;
     o.group = group;
     o.length = length;
+    o.elo = documentAnalysisSettings(document).elo;
     if (const core::ColonyStore* store = document->store()) {
         o.thresholds = core::readStabilityThresholds(*store);
         o.severity = core::behaviourSeverities(*store);

@@ -13,7 +13,9 @@
 #include "ui/shell/help_menu.h"
 #include "ui/shell/import_dialog.h"
 #include "ui/records/record_history_dialog.h"
+#include "ui/analysis/analysis_settings_dialog.h"
 #include "ui/analysis/research_export_dialog.h"
+#include "ui/document/animal_selection.h"
 #include "ui/shell/welcome_panel.h"
 
 #include <QAction>
@@ -47,20 +49,18 @@ MainWindow::MainWindow(const QString& colonyPath, QWidget* parent)
       stack_(new QStackedWidget(this)),
       welcome_(new WelcomePanel(this)),
       tabs_(new QTabWidget(this)),
-      animals_(new AnimalView(document_, this)),
-      encounters_(new EncounterView(document_, this)),
       fileLabel_(new QLabel(this)),
       animalCount_(new QLabel(this)),
       encounterCount_(new QLabel(this))
 {
-    tabs_->addTab(animals_, tr("Animals"));
-    tabs_->addTab(encounters_, tr("Encounters"));
     facade_ = new ColonyEditFacade(document_, this);
-    analysis_ = addAnalysisViews(tabs_, facade_, this);
-    entry_ = new EncounterEntryPanel(facade_, this);
-    entry_->setObjectName(QStringLiteral("entry"));
-    tabs_->addTab(entry_, tr("Evening Entry"));
-    manager_ = addColonyManagerViews(this, tabs_, facade_);
+    views_.analysis.selection = new AnimalSelection(this);
+    const ViewContext context{this, document_, facade_, views_};
+    for (const ViewEntry& entry : viewRegistry()) {
+        QWidget* view = entry.create(context);
+        view->setObjectName(QString::fromLatin1(entry.id));
+        tabs_->addTab(view, viewTitle(entry, false));
+    }
     tabs_->setDocumentMode(true);
     stack_->addWidget(welcome_);
     stack_->addWidget(tabs_);
@@ -70,13 +70,15 @@ MainWindow::MainWindow(const QString& colonyPath, QWidget* parent)
     statusBar()->addPermanentWidget(animalCount_);
     statusBar()->addPermanentWidget(encounterCount_);
 
+    addStabilityBadge(this, tabs_, document_, views_.manager);
+
     buildMenus();
     new EditMenus(this, facade_, [this] {
         showView(QStringLiteral("entry"));
-        entry_->focusEntry();
+        views_.entry->focusEntry();
     });
-    addHistoryActions(animals_, encounters_, document_);
-    connect(entry_->observerBox(), &QComboBox::currentTextChanged, backups_, &BackupActions::setSessionObserver);
+    addHistoryActions(views_.animals, views_.encounters, document_);
+    connect(views_.entry->observerBox(), &QComboBox::currentTextChanged, backups_, &BackupActions::setSessionObserver);
     connect(document_, &ColonyDocument::writeFailed, this,
             [this](const QString& message) { reportError(tr("Cannot Save the Change"), message); });
     connect(document_, &ColonyDocument::historyCleared, this, [this](const QString& reason) {
@@ -132,14 +134,18 @@ void MainWindow::buildMenus()
     quit->setShortcut(QKeySequence::Quit);
     quit->setMenuRole(QAction::QuitRole);
 
+    // Every registered view, with Ctrl+1 ... Ctrl+0 in registry (= tab) order.
     QMenu* view = menuBar()->addMenu(tr("&View"));
-    const QStringList names{tr("&Animals"), tr("&Encounters"), tr("&Timeline"), tr("&Prediction"), tr("&Matrix"),
-                            tr("&Hierarchy")};
-    for (int i = 0; i < names.size(); ++i) {
-        QAction* show = view->addAction(names[i], this, [this, i] { tabs_->setCurrentIndex(i); });
-        show->setShortcut(QKeySequence(Qt::CTRL | static_cast<Qt::Key>(Qt::Key_1 + i)));
+    for (int i = 0; i < static_cast<int>(viewRegistry().size()); ++i) {
+        const ViewEntry& entry = viewRegistry()[static_cast<size_t>(i)];
+        QAction* show = view->addAction(viewTitle(entry, true), this, [this, i] { tabs_->setCurrentIndex(i); });
+        show->setShortcut(viewShortcut(entry));
+        show->setObjectName(QStringLiteral("view-") + QString::fromLatin1(entry.id));
         viewActions_ << show;
     }
+    QMenu* analysis = menuBar()->addMenu(tr("&Analysis"));
+    settingsAction_ = analysis->addAction(tr("Analysis &Settings..."), this,
+                                          [this] { runAnalysisSettingsDialog(this, facade_); });
     addHelpMenu(this, [this] { openDemoColony(); });
 }
 
@@ -283,6 +289,7 @@ void MainWindow::refresh()
     importAction_->setEnabled(open && !document_->isReadOnly());
     closeAction_->setEnabled(open);
     for (QAction* action : viewActions_) action->setEnabled(open);
+    settingsAction_->setEnabled(open);
 
     const QLocale locale;
     if (!open) {

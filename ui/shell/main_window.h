@@ -1,8 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
-#include "ui/analysis/analysis_views.h"
-#include "ui/planning/colony_manager_views.h"
 #include "ui/shell/recent_files.h"
+#include "ui/shell/view_registry.h"
 
 #include <QMainWindow>
 
@@ -39,15 +38,20 @@ public:
     bool openDemoColony();
 
     ColonyDocument* document() const { return document_; }
-    AnimalView* animalView() const { return animals_; }
-    EncounterView* encounterView() const { return encounters_; }
+    AnimalView* animalView() const { return views_.animals; }
+    EncounterView* encounterView() const { return views_.encounters; }
     /// The one writer of the desktop (undo commands) and the evening entry tab ("--view entry").
     ColonyEditFacade* editFacade() const { return facade_; }
-    EncounterEntryPanel* entryPanel() const { return entry_; }
-    const AnalysisViews& analysisViews() const { return analysis_; }
+    EncounterEntryPanel* entryPanel() const { return views_.entry; }
+    const AnalysisViews& analysisViews() const { return views_.analysis; }
     /// The Planner and Stability tabs and the status-bar stability alert.
-    const ColonyManagerViews& managerViews() const { return manager_; }
-    /// Shows the tab named `name` (e.g. "timeline", "matrix"); false when there is none.
+    const ColonyManagerViews& managerViews() const { return views_.manager; }
+    /// The View menu's actions, one per registered view in registry order.
+    const QList<QAction*>& viewActions() const { return viewActions_; }
+    /// Analysis > Analysis Settings...
+    QAction* analysisSettingsAction() const { return settingsAction_; }
+    /// Shows the view with this registry id (e.g. "timeline", "sex-ratio") or tab
+    /// title; false when there is none.
     bool showView(const QString& name);
     /// File > Back Up Now, Restore from Backup..., Merge Another Colony... (issue 9).
     BackupActions* backupActions() const { return backups_; }
@@ -79,19 +83,16 @@ private:
     QStackedWidget* stack_;
     WelcomePanel* welcome_;
     QTabWidget* tabs_;
-    AnimalView* animals_;
-    EncounterView* encounters_;
-    AnalysisViews analysis_;
-    ColonyManagerViews manager_;
+    ViewParts views_;
     ColonyEditFacade* facade_ = nullptr;
     BackupActions* backups_ = nullptr;
-    EncounterEntryPanel* entry_ = nullptr;
     QLabel* fileLabel_;
     QLabel* animalCount_;
     QLabel* encounterCount_;
     QMenu* recentMenu_ = nullptr;
     QAction* importAction_ = nullptr;
     QAction* closeAction_ = nullptr;
+    QAction* settingsAction_ = nullptr;
     QList<QAction*> viewActions_;
 };
 
