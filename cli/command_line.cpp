@@ -2,7 +2,7 @@
 #include "cli/command_line.h"
 
 #include "cli/commands.h"
-#include "cli/finite_option.h"
+#include "cli/finite_number.h"
 #include "cli/option_defaults.h"
 #include "core/base/colony_file_error.h"
 

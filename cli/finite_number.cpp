@@ -8,6 +8,7 @@ namespace hierloom::cli {
 
 CLI::Validator finiteNumber()
 {
+    // Range checks compare with < and >, which NaN passes; so the text is checked first.
     return CLI::Validator(
         [](std::string& text) -> std::string {
             const char* begin = text.c_str();
@@ -18,6 +19,22 @@ CLI::Validator finiteNumber()
             return {};
         },
         "");
+}
+
+namespace {
+
+void require(CLI::App& command)
+{
+    for (CLI::Option* option : command.get_options())
+        if (option->get_type_name().rfind("FLOAT", 0) == 0) option->check(finiteNumber());
+}
+
+} // namespace
+
+void requireFiniteNumbers(CLI::App& app)
+{
+    require(app);
+    for (CLI::App* command : app.get_subcommands([](CLI::App*) { return true; })) require(*command);
 }
 
 } // namespace hierloom::cli
