@@ -1,5 +1,5 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
-// ranks, matrix and metrics: the hierarchy figures of methods.md as CSV.
+// ranks, matrix and metrics: the hierarchy figures of docs/methods.md as CSV.
 #include "cli/analysis_options.h"
 #include "cli/colony_loading.h"
 #include "cli/commands.h"

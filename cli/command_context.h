@@ -28,7 +28,7 @@ struct CommandContext {
     std::string outFile; // --out
 };
 
-/// Options every analysis command takes (interfaces.md "Common options").
+/// Options every analysis command takes (docs/file-formats.md "Common options").
 struct WindowOptions {
     std::string from;
     std::string to;

@@ -4,7 +4,7 @@
 
 namespace hierloom::cli {
 
-/// Exit statuses of interfaces.md: success, internal failure, bad input.
+/// Exit statuses of docs/file-formats.md: success, internal failure, bad input.
 enum ExitStatus { Success = 0, InternalFailure = 1, BadInput = 2 };
 
 /// Runs `hierloom-cli` with its arguments; output to `out`, messages to `err`.

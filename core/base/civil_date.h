@@ -40,7 +40,7 @@ std::optional<int> parseTimeOfDay(std::string_view text);
 std::string formatTimeOfDay(int minutes);
 
 /// The day an animal born on `birth` turns `years` old; a 29 February
-/// birthday falls on 1 March in common years (methods.md, "Age").
+/// birthday falls on 1 March in common years (docs/methods.md, "Age").
 Day anniversary(Day birth, int years);
 
 /// Whole years of age on `d` for an animal born on `birth`.

@@ -69,7 +69,7 @@ private:
     std::unordered_map<std::string, int> index_;
 };
 
-/// Encounter order of methods.md: date, then time (untimed last), then entry order.
+/// Encounter order of docs/methods.md: date, then time (untimed last), then entry order.
 bool encounterBefore(const Encounter& a, const Encounter& b);
 
 /// Indices of `encounters` in analysis order.

@@ -6,7 +6,7 @@
 namespace hierloom::core {
 
 /// One thing wrong with a single edited record, named by the field (the import's
-/// column name, interfaces.md) so that a form can show it beside that field.
+/// column name, docs/file-formats.md) so that a form can show it beside that field.
 struct FieldProblem {
     std::string field;
     std::string message;

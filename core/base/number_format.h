@@ -5,7 +5,7 @@
 
 namespace hierloom::core {
 
-/// Shortest text that reads back as the same double (interfaces.md: numbers round-trip).
+/// Shortest text that reads back as the same double (docs/file-formats.md: numbers round-trip).
 std::string formatNumber(double value);
 /// Empty text for an undefined figure (never "nan" or "0").
 std::string formatNumber(const std::optional<double>& value);

@@ -18,7 +18,7 @@ using IdIndex = std::unordered_map<std::string, int, StringHash, std::equal_to<>
 
 /// Answers "where was this animal on day D": its life span (entry or birth
 /// to exit) and its group memberships, each residence ending no later than
-/// the exit (methods.md, "Residence": both end days count).
+/// the exit (docs/methods.md, "Residence": both end days count).
 class ResidenceIndex {
 public:
     struct Stint {

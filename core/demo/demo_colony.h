@@ -33,7 +33,7 @@ inline constexpr const char* kLinesAfterRevolt = "ACBDE";
 } // namespace demo
 
 /// Kind of a planted, persistent departure from the youngest-ascendancy
-/// prediction of methods.md ("Matrilineal rank prediction").
+/// prediction of docs/methods.md ("Matrilineal rank prediction").
 enum class PlantedReversalKind { SiblingOrder, DaughterOverMother, MaleBelowFemale, CrossMatriline };
 
 /// One planted reversal: `upper` dominates `lower` for the whole record

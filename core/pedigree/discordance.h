@@ -12,7 +12,7 @@
 
 namespace hierloom::core {
 
-/// Kind of a discordant dyad (methods.md "Matrilineal rank prediction").
+/// Kind of a discordant dyad (docs/methods.md "Matrilineal rank prediction").
 enum class DiscordanceCategory { DaughterOverMother, SiblingOrder, WithinMatriline, CrossMatriline };
 
 /// `daughter_over_mother`, `sibling_order`, `within_matriline`, `cross_matriline`.
@@ -26,7 +26,7 @@ struct DiscordantDyad {
 };
 
 /// How far an observed hierarchy departs from the inheritance prediction
-/// (methods.md): discordant dyads, conformity and Kendall's tau-b (Kendall 1945).
+/// (docs/methods.md): discordant dyads, conformity and Kendall's tau-b (Kendall 1945).
 struct DiscordanceSummary {
     int ranked = 0;     ///< ranked females
     int observed = 0;   ///< of them with an observed rank
@@ -37,13 +37,13 @@ struct DiscordanceSummary {
     std::vector<DiscordantDyad> dyads; ///< by predicted rank of the female predicted higher, then of the other
 };
 
-/// The category of a discordant pair (methods.md): `above` is a daughter of `below`
+/// The category of a discordant pair (docs/methods.md): `above` is a daughter of `below`
 /// (daughter_over_mother), two daughters of one mother (sibling_order), any other
 /// pair of one matriline (within_matriline), else cross_matriline.
 DiscordanceCategory discordanceCategory(const Matrilines& lines, int above, int below);
 
 /// Discordant dyads, conformity = 1 - discordant/comparable and Kendall's tau-b
-/// between predicted and observed ranks of one prediction (methods.md).
+/// between predicted and observed ranks of one prediction (docs/methods.md).
 DiscordanceSummary summariseDiscordance(const Matrilines& lines, const InheritancePrediction& prediction);
 
 /// One month of a conformity series, read at the month's last day (clipped to the record).

@@ -10,7 +10,7 @@
 namespace hierloom::core {
 
 /// Who lives in one group on one day: sizes, the adult sex ratio and the number
-/// of matrilines (methods.md "Matrilineal rank prediction": a matriline is named
+/// of matrilines (docs/methods.md "Matrilineal rank prediction": a matriline is named
 /// after the end of its chain of mother links; Kawamura 1958).
 struct GroupComposition {
     std::string group;
@@ -29,7 +29,7 @@ struct GroupComposition {
 
 /// The composition of each named group on day `at`; an animal is adult on and
 /// after its maturityYears birthday, and one with an unknown birth date counts
-/// as adult (methods.md "Small choices").
+/// as adult (docs/methods.md "Small choices").
 std::vector<GroupComposition> groupComposition(const Colony& colony, const ResidenceIndex& where, Day at,
                                                const std::vector<std::string>& groups, int maturityYears);
 

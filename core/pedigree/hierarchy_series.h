@@ -16,7 +16,7 @@ namespace hierloom::core {
 /// One month of the hierarchy series: de Vries' (1995) h', steepness (de Vries,
 /// Stevens & Vervaecke 2006) and triangle transitivity t_tri (Shizuka & McDonald
 /// 2012) over the month's own encounters, and the conformity of the Elo order
-/// with the matrilineal prediction at the month's last day (methods.md).
+/// with the matrilineal prediction at the month's last day (docs/methods.md).
 struct HierarchyMonth {
     CalendarPeriod period;
     long long encounters = 0; ///< counted bouts of the month (draws kept under the draw policy)

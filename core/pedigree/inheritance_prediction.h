@@ -14,12 +14,12 @@
 
 namespace hierloom::core {
 
-/// Order of a mother's daughters in the inheritance walk (methods.md "Matrilineal
+/// Order of a mother's daughters in the inheritance walk (docs/methods.md "Matrilineal
 /// rank prediction"): youngest ascendancy (Kawamura 1958; Datta 1988), birth date
 /// descending, or the eldest first, birth date ascending.
 enum class SiblingRule { Youngest, Eldest };
 
-/// Reads `youngest` or `eldest` (the sibling rules of methods.md); empty otherwise.
+/// Reads `youngest` or `eldest` (the sibling rules of docs/methods.md); empty otherwise.
 std::optional<SiblingRule> parseSiblingRule(std::string_view text);
 /// `youngest` or `eldest`, as the `--rule` option spells them.
 const char* toString(SiblingRule rule);
@@ -28,7 +28,7 @@ const char* toString(SiblingRule rule);
 /// rating, a David's score); animals without a score are absent.
 using ObservedScores = std::map<std::string, double, std::less<>>;
 
-/// Settings of the predicted order; the defaults are those of methods.md.
+/// Settings of the predicted order; the defaults are those of docs/methods.md.
 struct InheritanceOptions {
     std::optional<Day> at; ///< default: the date of the record's last encounter
     SiblingRule rule = SiblingRule::Youngest;
@@ -40,14 +40,14 @@ struct InheritanceOptions {
     EloSettings elo; ///< observed ranks: Elo over the record up to the date (draws included)
 };
 
-/// Who takes part in the predicted order at one date (methods.md): females
+/// Who takes part in the predicted order at one date (docs/methods.md): females
 /// resident at D (in the group, if one is chosen) aged at least the maturity age.
 struct RankedFemales {
     std::vector<bool> ranked;              ///< per node of the Matrilines
     std::vector<std::string> unknownBirth; ///< ranked females whose birth date is unknown (counted mature)
 };
 
-/// The ranked females at day d (methods.md "Small choices": a female is mature on
+/// The ranked females at day d (docs/methods.md "Small choices": a female is mature on
 /// and after her maturity-age birthday; an unknown birth date counts as mature).
 RankedFemales rankedFemalesOn(const Matrilines& lines, const ResidenceIndex& where, Day d, const std::string& group,
                               int maturityYears);
@@ -74,7 +74,7 @@ struct PredictedFemale {
     int discordantDyads = 0; ///< pairs with her whose observed order reverses the predicted one
 };
 
-/// The predicted order at one date (methods.md "Matrilineal rank prediction").
+/// The predicted order at one date (docs/methods.md "Matrilineal rank prediction").
 struct InheritancePrediction {
     Day at = 0;
     SiblingRule rule = SiblingRule::Youngest;
@@ -89,7 +89,7 @@ struct InheritancePrediction {
     int find(std::string_view id) const;
 };
 
-/// The predicted order laid end to end (methods.md): matrilines by the best
+/// The predicted order laid end to end (docs/methods.md): matrilines by the best
 /// observed rank among their ranked members, lines without one last by matriarch
 /// id, unless `explicitOrder` (matriarch ids) sets the order; then each line's walk.
 /// Throws std::invalid_argument naming an explicit id that is unknown, not a
@@ -107,7 +107,7 @@ ObservedScores eloScoresAt(const Colony& colony, const ResidenceIndex& where, Da
 std::optional<Day> lastEncounterDay(const Colony& colony);
 
 /// The predicted order at options.at with observed ranks by Elo at that date
-/// (methods.md "Small choices", `inherit`). Throws std::invalid_argument for a
+/// (docs/methods.md "Small choices", `inherit`). Throws std::invalid_argument for a
 /// colony without encounters and no date, or a bad explicit matriline order.
 InheritancePrediction predictInheritance(const Colony& colony, const ResidenceIndex& where, const Matrilines& lines,
                                          const InheritanceOptions& options);

@@ -17,7 +17,7 @@ struct PedigreeProblem {
     std::string message;
 };
 
-/// Maternal pedigree of a colony (methods.md "Matrilineal rank prediction", after
+/// Maternal pedigree of a colony (docs/methods.md "Matrilineal rank prediction", after
 /// Kawamura 1958 and Datta 1988): every animal's mother, offspring, sisters,
 /// grandmother, its matriarch (the end of its chain of mother links) and its
 /// maternal-line generation. Dead and departed animals are part of the pedigree.

@@ -29,7 +29,7 @@ struct LifeEvent {
 
 /// One checkpoint of one ranked female: her Elo rating (Elo 1978; Neumann et
 /// al. 2011) and ordinal rank among the ranked females with a rating, against
-/// her rank in the matrilineal prediction (methods.md "Matrilineal rank
+/// her rank in the matrilineal prediction (docs/methods.md "Matrilineal rank
 /// prediction"; Kawamura 1958; Datta 1988).
 struct RankTimelinePoint {
     Day day = 0;
@@ -71,7 +71,7 @@ struct RankTimeline {
 using TimelineProgress = std::function<void(int, int)>;
 
 /// The rank timeline over the record (of options.group's encounters): at the
-/// last day of each week or month, the inheritance prediction of methods.md
+/// last day of each week or month, the inheritance prediction of docs/methods.md
 /// with observed ranks by Elo continued over the record, as monthlyConformity
 /// reads them, all from one Elo pass (eloAtCheckpoints). `cancel`, when set,
 /// is checked between checkpoints; a cancelled result says so.

@@ -28,7 +28,7 @@ struct ScenarioChange {
     int line = 0; ///< line of the scenario file, for messages (0: none)
 };
 
-/// A what-if scenario: the predicted order at one date (methods.md "Matrilineal
+/// A what-if scenario: the predicted order at one date (docs/methods.md "Matrilineal
 /// rank prediction", Kawamura 1958; Datta 1988) before and after hypothetical changes.
 ///
 /// Conventions: a newborn is placed as if already adult (`newbornsAsAdults`, the
@@ -113,7 +113,7 @@ struct ScenarioResult {
 };
 
 /// Applies the scenario's changes in order to a copy of the colony and predicts
-/// each group's order before and after (methods.md "Matrilineal rank prediction");
+/// each group's order before and after (docs/methods.md "Matrilineal rank prediction");
 /// nothing is written anywhere. Throws ScenarioError when checkScenario finds problems.
 ScenarioResult runScenario(const Colony& colony, const Scenario& scenario);
 

@@ -9,7 +9,7 @@
 
 namespace hierloom::core {
 
-/// Maturity age default of methods.md (a whole number of years); a species
+/// Maturity age default of docs/methods.md (a whole number of years); a species
 /// profile may give another.
 inline constexpr int kDefaultMaturityYears = 4;
 

@@ -12,7 +12,7 @@ struct Bout {
     bool draw = false;
 };
 
-/// How draws count (methods.md): half a win to each side, or not at all.
+/// How draws count (docs/methods.md): half a win to each side, or not at all.
 enum class DrawPolicy { Half, Ignore };
 
 } // namespace hierloom::core

@@ -46,7 +46,7 @@ std::optional<EloOptimum> optimiseEloK(int n, const std::vector<Bout>& bouts, co
     std::vector<double> rating;
     std::vector<unsigned char> rated;
     EloOptimum best{0.0, likelihoodAt(0.0, n, bouts, settings, rating, rated)};
-    // Every evaluated k competes; ties keep the smaller k (methods.md).
+    // Every evaluated k competes; ties keep the smaller k (docs/methods.md).
     auto consider = [&](double k) {
         const double value = likelihoodAt(k, n, bouts, settings, rating, rated);
         if (value > best.logLikelihood || (value == best.logLikelihood && k < best.k)) best = {k, value};

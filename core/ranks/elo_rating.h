@@ -13,7 +13,7 @@ namespace hierloom::core {
 enum class EloCurve { Logistic, Normal };
 
 /// Parameters of sequential Elo rating (Elo 1978; Albers & de Vries 2001;
-/// Neumann et al. 2011) with the defaults of methods.md.
+/// Neumann et al. 2011) with the defaults of docs/methods.md.
 struct EloSettings {
     double start = 1000;
     double k = 100;

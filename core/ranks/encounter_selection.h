@@ -10,7 +10,7 @@
 
 namespace hierloom::core {
 
-/// Which encounters and animals an analysis uses (methods.md, "Which
+/// Which encounters and animals an analysis uses (docs/methods.md, "Which
 /// encounters, which animals, in which order").
 struct SelectionOptions {
     std::optional<Day> from; // inclusive; default: all data

@@ -11,7 +11,7 @@
 
 namespace hierloom::core {
 
-/// The hierarchy figures of the `metrics` command, in interfaces.md's order:
+/// The hierarchy figures of the `metrics` command, in docs/file-formats.md's order:
 /// Landau's h and de Vries' h' with its test (de Vries 1995), directional
 /// consistency (van Hooff & Wensing 1987), steepness and its test (de Vries,
 /// Stevens & Vervaecke 2006), triangle transitivity and its test (Shizuka &
@@ -40,7 +40,7 @@ struct HierarchyMetrics {
 HierarchyMetrics computeHierarchyMetrics(const EncounterSelection& selection, DrawPolicy draws, int randomisations,
                                          std::uint64_t seed, unsigned threads);
 
-/// The figures as (metric, value) rows in the order of interfaces.md, values
+/// The figures as (metric, value) rows in the order of docs/file-formats.md, values
 /// in round-trip form and empty where undefined.
 std::vector<std::pair<std::string, std::string>> metricRows(const HierarchyMetrics& m);
 

@@ -7,7 +7,7 @@
 
 namespace hierloom::core {
 
-/// Outcome of a right-tailed randomisation test (methods.md "Randomisations"):
+/// Outcome of a right-tailed randomisation test (docs/methods.md "Randomisations"):
 /// p = (1 + #{random statistic >= observed}) / (N + 1).
 struct RandomisationTest {
     std::optional<double> p;          ///< empty when the statistic is undefined or N < 1

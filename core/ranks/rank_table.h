@@ -12,12 +12,12 @@
 
 namespace hierloom::core {
 
-/// The rank methods of methods.md.
+/// The rank methods of docs/methods.md.
 enum class RankMethod { Elo, DavidsScore, Isi };
 
 std::optional<RankMethod> parseRankMethod(std::string_view text);
 
-/// How a rank table is computed; the defaults are those of methods.md.
+/// How a rank table is computed; the defaults are those of docs/methods.md.
 struct RankOptions {
     RankMethod method = RankMethod::Elo;
     EloSettings elo;            // k, start, curve (draws come from the selection)
@@ -47,7 +47,7 @@ struct RankTable {
     std::optional<Day> rankedOn;         // Elo: the day whose residents are ranked
 };
 
-/// Ranks of the selected window (methods.md "Small choices"): Elo at --at or
+/// Ranks of the selected window (docs/methods.md "Small choices"): Elo at --at or
 /// at the window's last day among residents with a rating; David's score and
 /// I&SI over the window's analysed animals.
 RankTable computeRanks(const Colony& colony, const ResidenceIndex& where, const SelectionOptions& selection,

@@ -26,7 +26,7 @@ struct ExportTable {
     std::vector<std::vector<std::string>> rows;
 };
 
-/// Long rank table (one row per animal per period) of methods.md's rank
+/// Long rank table (one row per animal per period) of docs/methods.md's rank
 /// methods, as `ranks --every` computes it (Elo continues over the window and
 /// is read at each period's last day; David's score and I&SI per period), with
 /// the animal's matriline (its matriarch; Kawamura 1958), age in whole years,
@@ -59,7 +59,7 @@ ExportTable metricsByPeriodTable(const Colony& colony, const ResidenceIndex& whe
 ExportTable discordanceByMonthTable(const Colony& colony, const ResidenceIndex& where, const SelectionOptions& selection,
                                     const EloSettings& elo, int maturityYears);
 
-/// The per-birth maternal rank table (Trivers & Willard 1973; methods.md):
+/// The per-birth maternal rank table (Trivers & Willard 1973; docs/methods.md):
 /// rank, ranked females and relative rank at conception and at birth,
 /// whether the birth is used and, if not, the reason code.
 ExportTable maternalRankTable(const std::vector<MaternalRankRow>& births);
@@ -75,7 +75,7 @@ ExportTable rankThirdsTable(const SexRatioAnalysis& analysis);
 std::vector<CalendarPeriod> selectionPeriods(const Colony& colony, const ResidenceIndex& where,
                                              const SelectionOptions& selection, PeriodLength every);
 
-/// Everything one research export holds, with the defaults of methods.md.
+/// Everything one research export holds, with the defaults of docs/methods.md.
 struct ResearchExportOptions {
     SelectionOptions selection;         ///< window, group, draws (from/to also select births)
     RankOptions ranks;                  ///< method and Elo settings

@@ -11,7 +11,7 @@
 
 namespace hierloom::core {
 
-/// Why a birth is left out of the sex-ratio analysis (methods.md, "Maternal
+/// Why a birth is left out of the sex-ratio analysis (docs/methods.md, "Maternal
 /// rank and offspring sex ratio" and "Small choices").
 enum class BirthExclusion {
     None,               ///< used
@@ -38,7 +38,7 @@ struct MaternalRankOptions {
     EloSettings elo;         ///< start, k, curve, draws
 };
 
-/// A mother's Elo rank on one day among the ranked females (methods.md).
+/// A mother's Elo rank on one day among the ranked females (docs/methods.md).
 struct MaternalRankAt {
     Day day = 0;
     std::optional<int> rank;              ///< r, 1 = top; empty when she is not ranked
@@ -59,7 +59,7 @@ struct MaternalRankRow {
 };
 
 /// Maternal rank at conception and at birth for every birth of the window
-/// (Trivers & Willard 1973; methods.md "Maternal rank and offspring sex
+/// (Trivers & Willard 1973; docs/methods.md "Maternal rank and offspring sex
 /// ratio"): r is the mother's ordinal Elo rank among the m ranked females
 /// (resident that day, in the group if one is given, at least maturityYears
 /// old or of unknown birth date, with an Elo rating from the whole record up

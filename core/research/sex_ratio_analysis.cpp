@@ -33,7 +33,7 @@ SexRatioAnalysis analyseSexRatio(const std::vector<MaternalRankRow>& births)
             (son ? a.highSons : a.highDaughters) += 1;
         else
             (son ? a.lowSons : a.lowDaughters) += 1;
-        // methods.md: low < 1/3 <= middle < 2/3 <= high.
+        // docs/methods.md: low < 1/3 <= middle < 2/3 <= high.
         RankThird& t = a.thirds[rel < 1.0 / 3.0 ? 0 : rel < 2.0 / 3.0 ? 1 : 2];
         ++t.births;
         if (son) ++t.sons;

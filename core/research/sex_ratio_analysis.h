@@ -24,7 +24,7 @@ struct RankThird {
     std::optional<double> high;
 };
 
-/// The figures of the `sex-ratio` command (Trivers & Willard 1973; methods.md
+/// The figures of the `sex-ratio` command (Trivers & Willard 1973; docs/methods.md
 /// "Maternal rank and offspring sex ratio"): counts, the logistic regression
 /// of male (1) on maternal relative rank at conception (fitLogistic), Fisher's
 /// exact test of high (rel >= 0.5) vs low mothers by offspring sex, and the
@@ -43,7 +43,7 @@ struct SexRatioAnalysis {
 /// Computes every figure from the per-birth table (births with exclusion None).
 SexRatioAnalysis analyseSexRatio(const std::vector<MaternalRankRow>& births);
 
-/// The figures as (metric, value) rows in the order of interfaces.md, values
+/// The figures as (metric, value) rows in the order of docs/file-formats.md, values
 /// in round-trip form and empty where undefined.
 std::vector<std::pair<std::string, std::string>> sexRatioRows(const SexRatioAnalysis& a);
 

@@ -8,7 +8,7 @@
 namespace hierloom::core {
 
 /// Life-history defaults of one species for the maternal-rank analyses
-/// (methods.md, "Maternal rank and offspring sex ratio"; Trivers & Willard 1973):
+/// (docs/methods.md, "Maternal rank and offspring sex ratio"; Trivers & Willard 1973):
 /// gestation length and the whole-year age from which a female is ranked.
 struct SpeciesProfile {
     std::string key;            ///< stable code kept in the colony file, e.g. "rhesus_macaque"
@@ -27,7 +27,7 @@ const std::vector<SpeciesProfile>& knownSpecies();
 /// hyphens and underscores ignored), or nullptr.
 const SpeciesProfile* findSpecies(std::string_view key);
 
-/// Key of the default species (methods.md: maturity age default 4 years).
+/// Key of the default species (docs/methods.md: maturity age default 4 years).
 inline constexpr const char* kDefaultSpeciesKey = "rhesus_macaque";
 
 /// Colony-file setting keys.

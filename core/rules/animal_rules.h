@@ -10,7 +10,7 @@
 
 namespace hierloom::core {
 
-/// Every rule an animal record obeys (interfaces.md, "Animals"), in the order
+/// Every rule an animal record obeys (docs/file-formats.md, "animals.csv"), in the order
 /// their problems are reported. The import, the pedigree dialogs and the merge
 /// all check animals through this module, so each message is written once.
 enum class AnimalRule {

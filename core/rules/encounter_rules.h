@@ -10,7 +10,7 @@
 
 namespace hierloom::core {
 
-/// Every rule an encounter obeys (interfaces.md, "Encounters"), in the order
+/// Every rule an encounter obeys (docs/file-formats.md, "encounters.csv"), in the order
 /// their problems are reported; the import (also its bulk checking thread),
 /// the evening entry and the encounter editor check encounters only here.
 enum class EncounterRule {

@@ -8,8 +8,8 @@
 
 namespace hierloom::core {
 
-/// Every rule a stay of an animal in a group obeys (interfaces.md,
-/// "Residences"), in the order their problems are reported; the import and the
+/// Every rule a stay of an animal in a group obeys (docs/file-formats.md,
+/// "residences.csv"), in the order their problems are reported; the import and the
 /// pedigree dialogs (moves, exits, new animals) check stays only here.
 enum class ResidenceRule {
     AnimalKnown,      // animal: an animal of the colony (or of the import's animals file)

@@ -9,7 +9,7 @@ namespace hierloom::core {
 /// The Design of Experiments, ch. 2); `a` is hypergeometric given the margins.
 struct FisherExactResult {
     /// Sum of the probabilities of all tables with the observed margins that are no
-    /// more probable than the observed one (relative tolerance 1e-7), as in methods.md.
+    /// more probable than the observed one (relative tolerance 1e-7), as in docs/methods.md.
     double twoSided = 1.0;
     /// P(A <= a): evidence that the odds ratio is below 1.
     double less = 1.0;

@@ -15,7 +15,7 @@ namespace {
 constexpr int kMaxIterations = 100;
 constexpr int kMaxHalvings = 60;
 constexpr double kTolerance = 1e-10; // Newton converges quadratically: the next step would be ~1e-20
-constexpr double kCiZ = 1.96; // methods.md fixes b +- 1.96 SE
+constexpr double kCiZ = 1.96; // docs/methods.md fixes b +- 1.96 SE
 
 // log(1 + e^t) without overflow.
 double log1pExp(double t)

@@ -16,7 +16,7 @@ struct LogisticFit {
     std::optional<double> slopeZ;
     /// Two-sided normal p of slopeZ.
     std::optional<double> slopeP;
-    /// slope -+ 1.96 slopeSe (methods.md, "Maternal rank and offspring sex ratio").
+    /// slope -+ 1.96 slopeSe (docs/methods.md, "Maternal rank and offspring sex ratio").
     std::optional<double> slopeCiLow;
     std::optional<double> slopeCiHigh;
     /// Likelihood-ratio chi-square (1 df) against the intercept-only model.

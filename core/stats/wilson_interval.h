@@ -5,7 +5,7 @@
 
 namespace hierloom::core {
 
-/// The standard normal quantile for a two-sided 95 % interval (methods.md, "Small choices").
+/// The standard normal quantile for a two-sided 95 % interval (docs/methods.md, "Small choices").
 inline constexpr double kZ95 = 1.959963984540054;
 
 /// Lower and upper limit of a confidence interval for a proportion.

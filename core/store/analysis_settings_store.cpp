@@ -27,7 +27,7 @@ std::optional<T> parsed(const std::string& text)
     return v;
 }
 
-/// The species' maturity default, or the methods.md default when the stored species is unknown.
+/// The species' maturity default, or the docs/methods.md default when the stored species is unknown.
 int speciesMaturityDefault(const ColonyStore& store)
 {
     const std::string species = store.setting(kSpeciesSettingKey);

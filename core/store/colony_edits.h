@@ -12,7 +12,7 @@ namespace hierloom::core {
 
 // Single-record edits of a colony file, for the desktop's edit facade and
 // its undo commands. Each change is first planned against the colony as it
-// stands (checked under the import's rules, interfaces.md, with the import's
+// stands (checked under the import's rules, docs/file-formats.md, with the import's
 // wording; nothing is written on a problem), then written in one transaction.
 // Written changes carry both states so an undo writes the earlier one back.
 

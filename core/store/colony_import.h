@@ -37,7 +37,7 @@ struct ImportPlan {
 };
 
 /// Checks import files against the colony's existing animals and residences
-/// under every rule of interfaces.md; writes nothing. `today` bounds dates.
+/// under every rule of docs/file-formats.md; writes nothing. `today` bounds dates.
 /// `encounterUids` holds the uids of the colony's encounters, needed only
 /// when the encounters file has a uid column.
 ImportPlan planImport(const std::vector<Animal>& existingAnimals, const std::vector<Residence>& existingResidences,

@@ -7,7 +7,7 @@ using namespace hierloom::test;
 
 namespace {
 
-/// Three resident animals and the four encounters of check-values.md 1a.
+/// Three resident animals and the four encounters of docs/methods.md, "Check values" 1a.
 std::string smallColony(const CliTempDir& dir)
 {
     const std::string colony = dir.file("s.hierloom");
@@ -30,7 +30,7 @@ TEST(CliAnalysis, EloFollowsTheWorkedSequence)
 {
     CliTempDir dir;
     const std::string colony = smallColony(dir);
-    // After day one (A beats B, B beats A): check-values.md 1a step 2 [computed]:
+    // After day one (A beats B, B beats A): docs/methods.md, "Check values" 1a step 2 [computed]:
     // A = 985.9935, B = 1014.0065; C has no rating yet and is not ranked.
     const auto day1 = lines(runCli({"ranks", colony, "--method", "elo", "--at", "2020-01-01"}).out);
     ASSERT_EQ(day1.size(), 3U);
@@ -39,7 +39,7 @@ TEST(CliAnalysis, EloFollowsTheWorkedSequence)
     EXPECT_EQ(day1[2].substr(0, 4), "A,2,");
     EXPECT_NEAR(std::stod(day1[2].substr(4)), 985.9935, 1e-4);
     // Day two: the untimed encounter (A beats C) sorts after the 08:00 one
-    // (B beats C), methods.md "Encounter order"; the same logistic update by
+    // (B beats C), docs/methods.md "Encounter order"; the same logistic update by
     // hand in that order gives B = 1061.9919, A = 1031.1191, C = 906.8890
     // [computed regression value; 1a's order would give different numbers].
     const auto all = lines(runCli({"ranks", colony, "--at", "2020-01-02"}).out);

@@ -57,7 +57,7 @@ std::vector<std::string> optionBlocks(const std::string& help)
 TEST(CliHelp, EveryCommandIsListed)
 {
     const auto names = commandNames();
-    // The commands of interfaces.md at least; more may be added.
+    // The commands of docs/file-formats.md at least; more may be added.
     for (const char* expected : {"init", "import", "export", "demo", "ranks", "matrix", "metrics", "sex-ratio",
                                  "maternal-ranks", "export-tables", "inherit", "scenario"})
         EXPECT_NE(std::find(names.begin(), names.end(), expected), names.end()) << expected;

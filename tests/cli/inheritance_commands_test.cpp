@@ -1,5 +1,5 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
-// The inherit and scenario commands (interfaces.md "Command line"), run in-process.
+// The inherit and scenario commands (docs/file-formats.md "Command line"), run in-process.
 #include "cli_test_support.h"
 
 #include <gtest/gtest.h>
@@ -39,7 +39,7 @@ TEST(CliInherit, PredictedAgainstObserved)
     ASSERT_EQ(r.status, 0) << r.err;
     EXPECT_EQ(lines(r.out), (std::vector<std::string>{"animal,matriline,predicted_rank,observed_rank,discordant_dyads",
                                                        "M,M,1,1,0", "D2,M,2,3,1", "D1,M,3,2,1", "N,N,4,4,0"}));
-    // Conformity 1 - 1/6 and tau-b (5 - 1)/6 on standard error (methods.md; Kendall 1945).
+    // Conformity 1 - 1/6 and tau-b (5 - 1)/6 on standard error (docs/methods.md; Kendall 1945).
     EXPECT_NE(r.err.find("2021-01-10"), std::string::npos) << r.err;
     EXPECT_NE(r.err.find("conformity 0.8333333333333334 (1 of 6 dyads discordant), tau-b 0.6666666666666666"),
               std::string::npos)

@@ -45,7 +45,7 @@ TEST(CliResearch, SexRatioRowsInInterfaceOrder)
     const std::string colony = demoColony(dir);
     const CliResult r = runCli({"sex-ratio", colony, "--births", dir.file("births.csv")});
     ASSERT_EQ(r.status, 0) << r.err;
-    // interfaces.md: `metric,value` then the 14 rows, in order.
+    // docs/file-formats.md: `metric,value` then the 14 rows, in order.
     const auto rows = lines(r.out);
     ASSERT_EQ(rows.size(), kSexRatioRows.size() + 1);
     EXPECT_EQ(rows[0], "metric,value");
@@ -71,10 +71,10 @@ TEST(CliResearch, OneUsableBirthGivesEmptyRegressionAndAMessage)
     ASSERT_EQ(rows.size(), 15U);
     EXPECT_EQ(rows[1], "births_used,1");
     EXPECT_EQ(rows[3], "sons,1");
-    EXPECT_EQ(rows[5], "intercept,"); // methods.md: undefined with fewer than two births
+    EXPECT_EQ(rows[5], "intercept,"); // docs/methods.md: undefined with fewer than two births
     EXPECT_EQ(rows[14], "fisher_p,1");
     EXPECT_NE(r.err.find("all of one sex"), std::string::npos);
-    // B is 2nd of 3 on 2020-01-10: relative rank 1 - 1/2 = 0.5 (methods.md).
+    // B is 2nd of 3 on 2020-01-10: relative rank 1 - 1/2 = 0.5 (docs/methods.md).
     const auto births = lines(CliTempDir::read(dir.file("b.csv")));
     bool found = false;
     for (const auto& line : births)
@@ -91,7 +91,7 @@ TEST(CliResearch, NoBirthsInTheWindow)
     const auto rows = lines(r.out);
     ASSERT_EQ(rows.size(), 15U);
     EXPECT_EQ(rows[1], "births_used,0");
-    EXPECT_EQ(rows[14], "fisher_p,"); // methods.md: no Fisher p without births
+    EXPECT_EQ(rows[14], "fisher_p,"); // docs/methods.md: no Fisher p without births
     EXPECT_NE(r.err.find("no births"), std::string::npos);
 }
 

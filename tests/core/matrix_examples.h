@@ -1,6 +1,6 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 // Shared inputs for the matrix-method tests: the hand examples of
-// shared/check-values.md and seeded random matrices.
+// docs/methods.md, "Check values" and seeded random matrices.
 #pragma once
 #include "core/ranks/win_matrix.h"
 

@@ -323,7 +323,7 @@ TEST_F(TimelineViewTest, PredictionViewShowsThePlantedReversal)
     EXPECT_EQ(view.connectorCount(), observed);
     EXPECT_TRUE(view.isEmphasised(ui::toQString(p.daughter)));
     EXPECT_TRUE(view.isEmphasised(ui::toQString(p.mother)));
-    // The dyad list holds the pair under its category (methods.md categories).
+    // The dyad list holds the pair under its category (docs/methods.md categories).
     bool listed = false;
     const QTableWidget* table = view.dyadTable();
     EXPECT_EQ(table->rowCount(), view.summary().discordant);

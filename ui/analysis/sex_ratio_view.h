@@ -24,7 +24,7 @@ class ColonyEditFacade;
 core::MaternalRankOptions documentMaternalOptions(const std::string& group, int gestationDays, int maturityYears,
                                                  const core::EloSettings& elo);
 
-/// The Sex Ratio tab (Trivers & Willard 1973; methods.md "Maternal rank and
+/// The Sex Ratio tab (Trivers & Willard 1973; docs/methods.md "Maternal rank and
 /// offspring sex ratio"): the species setting, the `sex-ratio` figures, the
 /// births left out with their reasons, the per-birth maternal rank table and
 /// the proportion of sons with Wilson 95 % intervals per maternal rank third.

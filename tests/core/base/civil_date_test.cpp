@@ -37,7 +37,7 @@ TEST(CivilDate, TimeOfDay)
 
 TEST(CivilDate, LeapDayBirthdayFallsOnFirstMarch)
 {
-    // methods.md "Age": a 29 February birthday falls on 1 March in common years.
+    // docs/methods.md "Age": a 29 February birthday falls on 1 March in common years.
     const Day birth = *parseDate("2016-02-29");
     EXPECT_EQ(formatDate(anniversary(birth, 4)), "2020-02-29");
     EXPECT_EQ(formatDate(anniversary(birth, 3)), "2019-03-01");

@@ -30,7 +30,7 @@ TEST(CsvWriter, RowsEndWithNewline)
     EXPECT_EQ(out.str(), "a,,\"c,d\"\n\"\"\"\"\n");
 }
 
-// Column order and formats of interfaces.md ("Import files").
+// Column order and formats of docs/file-formats.md ("Import files").
 TEST(ColonyCsvExport, ColumnsAndFormats)
 {
     Colony c;

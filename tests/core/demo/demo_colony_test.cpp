@@ -1,6 +1,6 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 // Checks of the invented demo colony against the scenario it promises
-// (core/demo/demo_colony.h, demo-colony/README.md) and the import rules of interfaces.md.
+// (core/demo/demo_colony.h, demo-colony/README.md) and the import rules of docs/file-formats.md.
 #include "core/store/colony_csv_export.h"
 #include "core/demo/demo_colony.h"
 #include "demo_fixture.h"
@@ -127,7 +127,7 @@ TEST(DemoColony, Counts)
     EXPECT_LE(facts().reversals.size(), 6u);
 }
 
-// Import rules of interfaces.md: distinct ids, both alive and resident that day;
+// Import rules of docs/file-formats.md: distinct ids, both alive and resident that day;
 // the scenario adds: at least a year old, not on or after the exit day.
 TEST(DemoColony, EncountersBetweenResidentAnimals)
 {
@@ -173,7 +173,7 @@ TEST(DemoColony, EncountersBetweenResidentAnimals)
     EXPECT_LT(noted / n, 0.02);
 }
 
-// Pedigree rules of interfaces.md, plus the scenario's own: mothers at least
+// Pedigree rules of docs/file-formats.md, plus the scenario's own: mothers at least
 // three years old and alive at the birth, fathers adult males resident at the birth.
 TEST(DemoColony, PedigreeIsPlausible)
 {

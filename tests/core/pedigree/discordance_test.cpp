@@ -1,5 +1,5 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
-// Discordant dyads, conformity and tau-b of core/pedigree/discordance.h (methods.md
+// Discordant dyads, conformity and tau-b of core/pedigree/discordance.h (docs/methods.md
 // "Matrilineal rank prediction"), on constructed cases worked by hand.
 #include "core/pedigree/discordance.h"
 
@@ -42,7 +42,7 @@ TEST(Discordance, EveryCategoryByHand)
     // Predicted (youngest ascendancy, Kawamura 1958): M, D2, D1, G, N, N1.
     ASSERT_EQ(p.females.size(), 6U);
     const std::vector<std::string> predicted{"M", "D2", "D1", "G", "N", "N1"};
-    const std::vector<int> observedRank{1, 5, 2, 3, 6, 4}; // the male does not count (methods.md "Small choices")
+    const std::vector<int> observedRank{1, 5, 2, 3, 6, 4}; // the male does not count (docs/methods.md "Small choices")
     for (size_t i = 0; i < 6; ++i) {
         EXPECT_EQ(p.females[i].animal, predicted[i]);
         EXPECT_EQ(p.females[i].observedRank, observedRank[i]) << predicted[i];
@@ -64,7 +64,7 @@ TEST(Discordance, EveryCategoryByHand)
     EXPECT_EQ(s.dyads[3].above, "N1");
     EXPECT_EQ(s.dyads[3].below, "N");
     EXPECT_STREQ(toString(s.dyads[3].category), "daughter_over_mother");
-    // Conformity = 1 - 4/15 (methods.md); tau-b without ties = (C - D)/15 = (11 - 4)/15 (Kendall 1945).
+    // Conformity = 1 - 4/15 (docs/methods.md); tau-b without ties = (C - D)/15 = (11 - 4)/15 (Kendall 1945).
     ASSERT_TRUE(s.conformity.has_value());
     EXPECT_DOUBLE_EQ(*s.conformity, 11.0 / 15.0);
     ASSERT_TRUE(s.tauB.has_value());

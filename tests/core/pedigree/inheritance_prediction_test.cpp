@@ -1,6 +1,6 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 // Predicted order of core/pedigree/inheritance_prediction.h on hand-built pedigrees
-// (methods.md "Matrilineal rank prediction"; Kawamura 1958; Datta 1988).
+// (docs/methods.md "Matrilineal rank prediction"; Kawamura 1958; Datta 1988).
 #include "core/pedigree/inheritance_prediction.h"
 
 #include "pedigree_test_support.h"
@@ -62,7 +62,7 @@ TEST(InheritancePrediction, YoungestAscendancy)
     EXPECT_EQ(p.matrilineOrder, (Ids{"A", "B"}));
     EXPECT_EQ(p.females[1].matriarch, "A");
     EXPECT_EQ(p.females[1].predictedRank, 2);
-    // Observed ranks (methods.md "Small choices"): among ranked females with a rating, 1..m.
+    // Observed ranks (docs/methods.md "Small choices"): among ranked females with a rating, 1..m.
     EXPECT_EQ(p.females[0].observedRank, 1);
     EXPECT_EQ(p.females[5].observedRank, 2);
     EXPECT_FALSE(p.females[1].observedRank.has_value());
@@ -70,7 +70,7 @@ TEST(InheritancePrediction, YoungestAscendancy)
 
 TEST(InheritancePrediction, EldestRuleReversesSisters)
 {
-    // methods.md: rule `eldest` orders daughters by birth date ascending.
+    // docs/methods.md: rule `eldest` orders daughters by birth date ascending.
     InheritanceOptions o;
     o.rule = SiblingRule::Eldest;
     EXPECT_EQ(order(predict(twoLines().build(), o)), (Ids{"A", "A1", "A2", "A2a", "A3", "B", "B1"}));
@@ -78,7 +78,7 @@ TEST(InheritancePrediction, EldestRuleReversesSisters)
 
 TEST(InheritancePrediction, DeadMothersDaughtersKeepTheLinesPlace)
 {
-    // methods.md: the whole pedigree, dead animals included, shapes the order; skipped
+    // docs/methods.md: the whole pedigree, dead animals included, shapes the order; skipped
     // animals' descendants keep their places. A2 dead: A2a still between A3 and A1.
     EXPECT_EQ(order(predict(twoLines().died("A2", "2015-01-01").build())), (Ids{"A", "A3", "A2a", "A1", "B", "B1"}));
     // The matriarch dead: her daughters keep the line's place above line B (A3 observed top).
@@ -90,7 +90,7 @@ TEST(InheritancePrediction, DeadMothersDaughtersKeepTheLinesPlace)
 
 TEST(InheritancePrediction, ImmatureSkippedDescendantsKeepPlace)
 {
-    // methods.md: immature females are skipped, their descendants keep their places.
+    // docs/methods.md: immature females are skipped, their descendants keep their places.
     // A3 born 2017 is 3 on 2020-06-01 (maturity 4); her daughter X has no birth date
     // (counts as mature, a data-entry case) and takes A3's place.
     PedigreeBuilder b = twoLines();
@@ -109,7 +109,7 @@ TEST(InheritancePrediction, ImmatureSkippedDescendantsKeepPlace)
     EXPECT_EQ(order(p), (Ids{"A", "X", "A2", "A2a", "A1", "B", "B1"}));
     EXPECT_EQ(p.unknownBirthCountedMature, (Ids{"X"}));
     EXPECT_TRUE(p.unorderable.empty()); // X has no sister
-    // Maturity on the birthday itself (methods.md "Age"): A2a turns 8 on 2020-01-01.
+    // Maturity on the birthday itself (docs/methods.md "Age"): A2a turns 8 on 2020-01-01.
     InheritanceOptions o;
     o.maturityYears = 8;
     o.at = dayFromCivil(2019, 12, 31);
@@ -120,7 +120,7 @@ TEST(InheritancePrediction, ImmatureSkippedDescendantsKeepPlace)
 
 TEST(InheritancePrediction, MatrilineOrderFollowsObservedTopMember)
 {
-    // methods.md: matrilines ordered by the best observed rank among their ranked members.
+    // docs/methods.md: matrilines ordered by the best observed rank among their ranked members.
     // B1 beats everyone of line A: line B moves on top although A beat B.
     const Colony c = twoLines().win("2020-03-01", "B1", "A", 4).win("2020-03-02", "B1", "A3", 2).build();
     const InheritancePrediction p = predict(c);
@@ -130,7 +130,7 @@ TEST(InheritancePrediction, MatrilineOrderFollowsObservedTopMember)
 
 TEST(InheritancePrediction, ExplicitMatrilineOrderOverrides)
 {
-    // methods.md: an explicit matriline order given by the user overrides the observed one.
+    // docs/methods.md: an explicit matriline order given by the user overrides the observed one.
     InheritanceOptions o;
     o.matrilineOrder = {"B"};
     const InheritancePrediction p = predict(twoLines().build(), o);
@@ -145,14 +145,14 @@ TEST(InheritancePrediction, ExplicitMatrilineOrderOverrides)
 
 TEST(InheritancePrediction, LinesWithoutObservedRankLastById)
 {
-    // methods.md: matrilines without an observed rank come last, by matriarch id.
+    // docs/methods.md: matrilines without an observed rank come last, by matriarch id.
     const Colony c = twoLines().female("D", "1995-01-01").female("C", "1995-01-01").build();
     EXPECT_EQ(predict(c).matrilineOrder, (Ids{"A", "B", "C", "D"}));
 }
 
 TEST(InheritancePrediction, UnknownBirthSistersPlacedEldestAndReported)
 {
-    // methods.md "Small choices": sisters with an unknown birth date are placed as the
+    // docs/methods.md "Small choices": sisters with an unknown birth date are placed as the
     // eldest; they are reported as unorderable, not hidden.
     const Colony c = PedigreeBuilder()
                          .female("M", "1990-01-01")
@@ -171,7 +171,7 @@ TEST(InheritancePrediction, UnknownBirthSistersPlacedEldestAndReported)
 
 TEST(InheritancePrediction, SameBirthDateByIdUnderBothRules)
 {
-    // methods.md "Small choices": sisters born the same day are ordered by id ascending.
+    // docs/methods.md "Small choices": sisters born the same day are ordered by id ascending.
     const Colony c = PedigreeBuilder()
                          .female("M", "1990-01-01")
                          .female("T2", "2005-05-05", "M")

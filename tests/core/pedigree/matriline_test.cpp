@@ -41,7 +41,7 @@ Colony family()
 
 TEST(Matriline, MatriarchMotherGrandmotherGeneration)
 {
-    // methods.md "Matrilineal rank prediction": follow mother links to an animal with no
+    // docs/methods.md "Matrilineal rank prediction": follow mother links to an animal with no
     // recorded mother; dead animals (G) still head their line.
     const Colony c = family();
     const Matrilines m(c);

@@ -36,7 +36,7 @@ TEST(RankAcquisition, FirstDayAboveEachOlderSister)
     EXPECT_TRUE(rows[0].compared);
     ASSERT_TRUE(rows[0].firstAbove.has_value());
     EXPECT_EQ(*rows[0].firstAbove, dayFromCivil(2018, 6, 1));
-    EXPECT_EQ(rows[0].ageYears, 4); // 2014-05-01 to 2018-06-01 (methods.md "Age")
+    EXPECT_EQ(rows[0].ageYears, 4); // 2014-05-01 to 2018-06-01 (docs/methods.md "Age")
     EXPECT_EQ(rows[0].ageDays, dayFromCivil(2018, 6, 1) - dayFromCivil(2014, 5, 1));
     EXPECT_TRUE(rows[0].aboveAtLastComparison);
     EXPECT_EQ(rows[1].daughter, "Z");

@@ -1,6 +1,6 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 // The rank timeline of core/pedigree/rank_timeline.h: each checkpoint must agree with a
-// separate predictInheritance at that date (methods.md "Matrilineal rank
+// separate predictInheritance at that date (docs/methods.md "Matrilineal rank
 // prediction"), and the demo colony's planted scenario must show in it.
 #include "core/pedigree/rank_timeline.h"
 

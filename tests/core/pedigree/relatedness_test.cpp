@@ -22,7 +22,7 @@ PedigreeNode child(int mother, int father = -1)
 TEST(Relatedness, MaternalPedigreeCheckValues)
 {
     // Wright 1922, Am. Nat. 56:330-338; Falconer & Mackay 1996, ch. 5 [from memory for
-    // the chapter]; check-values 11. Without inbreeding r = sum over paths (1/2)^L.
+    // the chapter]; docs/methods.md, "Check values" 11. Without inbreeding r = sum over paths (1/2)^L.
     std::vector<PedigreeNode> p;
     p.push_back({});         // 0 great-grandmother
     p.push_back(child(0));   // 1 grandmother

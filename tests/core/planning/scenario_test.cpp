@@ -57,7 +57,7 @@ const ScenarioMove& moveOf(const ScenarioResult& r, const std::string& id)
 
 TEST(Scenario, RemovingAMatriarchLeavesHerDaughtersInPlace)
 {
-    // methods.md: skipped (here removed) animals' descendants keep their places, so the
+    // docs/methods.md: skipped (here removed) animals' descendants keep their places, so the
     // order after removing Ada (line A) is the order before without her.
     const std::string ada = facts().matriarchs.at('A');
     const ScenarioResult r = runScenario(demoColony(), demoScenario({change(ScenarioChange::Kind::Remove, ada)}));
@@ -107,7 +107,7 @@ TEST(Scenario, NewbornPlacedDirectlyBelowHerMother)
     ASSERT_GE(after.size(), 2U);
     EXPECT_EQ(after[0], mother);
     EXPECT_EQ(after[1], "BABY");
-    // As an infant (methods.md: immature females are not ranked) she changes nothing.
+    // As an infant (docs/methods.md: immature females are not ranked) she changes nothing.
     Scenario s = demoScenario({birth});
     s.newbornsAsAdults = false;
     const ScenarioResult infant = runScenario(demoColony(), s);

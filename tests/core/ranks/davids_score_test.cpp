@@ -19,7 +19,7 @@ void expectNear(const std::vector<double>& got, const std::vector<double>& want,
     for (size_t i = 0; i < got.size(); ++i) EXPECT_NEAR(got[i], want[i], tol) << "index " << i;
 }
 
-/// NormDS from the P-based scores, for the P-version steepness column of check-values.md.
+/// NormDS from the P-based scores, for the P-version steepness column of docs/methods.md, "Check values".
 std::vector<double> normFromProportion(const WinMatrix& m)
 {
     std::vector<double> ds = davidsScores(m, DyadicIndex::Proportion);
@@ -29,7 +29,7 @@ std::vector<double> normFromProportion(const WinMatrix& m)
 
 } // namespace
 
-// check-values.md section 2, Example L [computed regression value].
+// docs/methods.md, "Check values" 2, Example L [computed regression value].
 TEST(DavidsScore, ExampleLinear)
 {
     const WinMatrix m = exampleL();
@@ -42,7 +42,7 @@ TEST(DavidsScore, ExampleLinear)
     EXPECT_NEAR(*steepnessOfScores(normP), 1.0, 1e-12);
 }
 
-// check-values.md section 2, Example 1 [computed regression value], 4 decimals.
+// docs/methods.md, "Check values" 2, Example 1 [computed regression value], 4 decimals.
 TEST(DavidsScore, ExampleOneUnknownDyad)
 {
     const WinMatrix m = example1();
@@ -55,7 +55,7 @@ TEST(DavidsScore, ExampleOneUnknownDyad)
     EXPECT_NEAR(*steepnessOfScores(normP), 0.6179, 5e-5);
 }
 
-// check-values.md section 2, Example C [computed regression value].
+// docs/methods.md, "Check values" 2, Example C [computed regression value].
 TEST(DavidsScore, ExampleCyclicTriad)
 {
     const WinMatrix m = exampleC();
@@ -67,7 +67,7 @@ TEST(DavidsScore, ExampleCyclicTriad)
     EXPECT_NEAR(*steepnessOfScores(normP), 0.6, 1e-12);
 }
 
-// check-values.md section 2, Example 5 [computed regression value].
+// docs/methods.md, "Check values" 2, Example 5 [computed regression value].
 TEST(DavidsScore, ExampleFiveGroup)
 {
     const WinMatrix m = example5();
@@ -78,7 +78,7 @@ TEST(DavidsScore, ExampleFiveGroup)
     EXPECT_NEAR(*steepnessOfScores(normP), 0.464, 5e-4);
 }
 
-// The D index is algebra on its published definition: D = P - (P - 1/2)/(n + 1) (check-values.md section 2).
+// The D index is algebra on its published definition: D = P - (P - 1/2)/(n + 1) (docs/methods.md, "Check values" 2).
 TEST(DavidsScore, CorrectedIndexMatchesPublishedForm)
 {
     const WinMatrix m = randomMatrix(9, 17, 0.7, 0.6, 6, true);
@@ -93,7 +93,7 @@ TEST(DavidsScore, CorrectedIndexMatchesPublishedForm)
         }
 }
 
-// Invariants (check-values.md section 2): sum DS = 0 and sum NormDS = n(n-1)/2; steepness in [0, 1].
+// Invariants (docs/methods.md, "Check values" 2): sum DS = 0 and sum NormDS = n(n-1)/2; steepness in [0, 1].
 TEST(DavidsScore, InvariantsOnRandomMatrices)
 {
     for (std::uint64_t seed = 1; seed <= 40; ++seed) {
@@ -111,14 +111,14 @@ TEST(DavidsScore, InvariantsOnRandomMatrices)
     }
 }
 
-// methods.md "Small choices": steepness is empty with fewer than two animals, never NaN.
+// docs/methods.md "Small choices": steepness is empty with fewer than two animals, never NaN.
 TEST(DavidsScore, DegenerateMatrices)
 {
     EXPECT_TRUE(davidsScores(WinMatrix(0), DyadicIndex::Proportion).empty());
     EXPECT_FALSE(steepness(WinMatrix(0)).has_value());
     EXPECT_FALSE(steepness(WinMatrix(1)).has_value());
     expectNear(normalisedDavidsScores(WinMatrix(1)), {0.0}, 0.0);
-    // Two animals, one win, by hand from methods.md: D = 0.75 / 0.25, w = 0.75, w2 = 0.75 * 0.25,
+    // Two animals, one win, by hand from docs/methods.md: D = 0.75 / 0.25, w = 0.75, w2 = 0.75 * 0.25,
     // l = 0.25, l2 = 0.25 * 0.75, so DS = +-0.5 and NormDS = 0.75, 0.25.
     const WinMatrix two = WinMatrix::fromRows({{0, 1}, {0, 0}});
     expectNear(davidsScores(two, DyadicIndex::Corrected), {0.75 + 0.1875 - 0.25 - 0.1875, -0.5}, 1e-12);

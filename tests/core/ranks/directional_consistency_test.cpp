@@ -8,7 +8,7 @@
 using namespace hierloom::core;
 using namespace hierloom::core::testing;
 
-// check-values.md section 5 [computed regression values].
+// docs/methods.md, "Check values" 5 [computed regression values].
 TEST(DirectionalConsistency, Examples)
 {
     EXPECT_NEAR(*directionalConsistency(example1()), 16.0 / 24.0, 1e-15); // H = 20, L = 4
@@ -17,7 +17,7 @@ TEST(DirectionalConsistency, Examples)
     EXPECT_EQ(*directionalConsistency(exampleC()), 1.0);
 }
 
-// check-values.md section 5: a tied dyad adds equally to H and L; a draw (1/2 each) likewise.
+// docs/methods.md, "Check values" 5: a tied dyad adds equally to H and L; a draw (1/2 each) likewise.
 TEST(DirectionalConsistency, TiesAndDraws)
 {
     EXPECT_EQ(*directionalConsistency(WinMatrix::fromRows({{0, 2}, {2, 0}})), 0.0);
@@ -26,7 +26,7 @@ TEST(DirectionalConsistency, TiesAndDraws)
     EXPECT_NEAR(*directionalConsistency(WinMatrix::fromRows({{0, 3.5}, {0.5, 0}})), 0.75, 1e-15);
 }
 
-// methods.md "Small choices": DCI is empty without encounters.
+// docs/methods.md "Small choices": DCI is empty without encounters.
 TEST(DirectionalConsistency, EmptyWithoutEncounters)
 {
     EXPECT_FALSE(directionalConsistency(WinMatrix(0)).has_value());

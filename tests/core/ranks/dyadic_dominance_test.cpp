@@ -8,7 +8,7 @@
 using namespace hierloom::core;
 using namespace hierloom::core::testing;
 
-// Definitions of methods.md "Linearity": V_ij is 1, 0 or 1/2 (tie or unknown).
+// Definitions of docs/methods.md "Linearity": V_ij is 1, 0 or 1/2 (tie or unknown).
 TEST(DyadicDominance, DominanceValues)
 {
     const WinMatrix m = example5();
@@ -21,7 +21,7 @@ TEST(DyadicDominance, DominanceValues)
     EXPECT_FALSE(dominates(m, 2, 0));
 }
 
-// interfaces.md metrics rows: dyads = n(n-1)/2, known = n_ij > 0, unknown_share = 1 - known/dyads.
+// docs/file-formats.md metrics rows: dyads = n(n-1)/2, known = n_ij > 0, unknown_share = 1 - known/dyads.
 TEST(DyadicDominance, DyadCounts)
 {
     const DyadCounts c1 = dyadCounts(example1()); // only B-D unknown

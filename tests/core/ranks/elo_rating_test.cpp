@@ -49,24 +49,24 @@ std::vector<Bout> randomBouts(int n, int count, unsigned seed, double drawShare)
 
 TEST(EloRating, LogisticExpectedScore)
 {
-    // check-values.md 1a [CONFIRMED]: 318chess.com / ualberta / chess.stackexchange 19653.
+    // docs/methods.md, "Check values" 1a [CONFIRMED]: 318chess.com / ualberta / chess.stackexchange 19653.
     EXPECT_DOUBLE_EQ(eloExpected(0, EloCurve::Logistic), 0.5);
     EXPECT_NEAR(eloExpected(92, EloCurve::Logistic), 0.6294, 5e-5);
     EXPECT_NEAR(eloExpected(100, EloCurve::Logistic), 0.6401, 5e-5);
     EXPECT_NEAR(eloExpected(200, EloCurve::Logistic), 0.7597, 5e-5);
     EXPECT_NEAR(eloExpected(400, EloCurve::Logistic), 0.9091, 5e-5);
     EXPECT_NEAR(eloExpected(800, EloCurve::Logistic), 0.9901, 5e-5);
-    // check-values.md 1a [COMPUTED] regression value.
+    // docs/methods.md, "Check values" 1a [COMPUTED] regression value.
     EXPECT_NEAR(eloExpected(300, EloCurve::Logistic), 0.8490, 5e-5);
-    // Identity E(d) + E(-d) = 1 (methods.md formula).
+    // Identity E(d) + E(-d) = 1 (docs/methods.md formula).
     for (double d = -1000; d <= 1000; d += 37.5)
         EXPECT_NEAR(eloExpected(d, EloCurve::Logistic) + eloExpected(-d, EloCurve::Logistic), 1.0, 1e-15);
 }
 
 TEST(EloRating, NormalFormAgainstFideTable)
 {
-    // FIDE Handbook B.02 table 8.1(b) rows as quoted in check-values.md 1b [CONFIRMED];
-    // methods.md: the normal form with sd 200*sqrt(2) agrees within 0.011, not exactly.
+    // FIDE Handbook B.02 table 8.1(b) rows as quoted in docs/methods.md, "Check values" 1b [CONFIRMED];
+    // docs/methods.md: the normal form with sd 200*sqrt(2) agrees within 0.011, not exactly.
     struct Row {
         int from, to;
         double pd;
@@ -82,14 +82,14 @@ TEST(EloRating, NormalFormAgainstFideTable)
     }
     // "over 735 -> 1.00" row, at its first value.
     EXPECT_LE(std::fabs(eloExpected(736, EloCurve::Normal) - 1.0), 0.011);
-    // check-values.md 1b [COMPUTED]: Phi(400/(200 sqrt 2)) = 0.9214.
+    // docs/methods.md, "Check values" 1b [COMPUTED]: Phi(400/(200 sqrt 2)) = 0.9214.
     EXPECT_NEAR(eloExpected(400, EloCurve::Normal), 0.9214, 5e-5);
     EXPECT_DOUBLE_EQ(eloExpected(0, EloCurve::Normal), 0.5);
 }
 
 TEST(EloRating, FourStepSequence)
 {
-    // check-values.md 1a update sequence [COMPUTED regression values]: A=0, B=1, C=2, k=100, start 1000.
+    // docs/methods.md, "Check values" 1a update sequence [COMPUTED regression values]: A=0, B=1, C=2, k=100, start 1000.
     const std::vector<Bout> bouts = {{0, 1}, {1, 0}, {0, 2}, {1, 2}};
     const EloSettings s;
     const std::vector<EloRun> runs = eloAtCheckpoints(3, bouts, {1, 2, 3, 4}, s);
@@ -110,14 +110,14 @@ TEST(EloRating, FourStepSequence)
     const EloRun whole = runElo(3, bouts, s);
     EXPECT_EQ(whole.rating, runs[3].rating);
     EXPECT_EQ(whole.logLikelihood, runs[3].logLikelihood);
-    // Elo is zero-sum: the ratings always total n * start (methods.md update rule).
+    // Elo is zero-sum: the ratings always total n * start (docs/methods.md update rule).
     EXPECT_NEAR(whole.rating[0] + whole.rating[1] + whole.rating[2], 3000, 1e-9);
 }
 
 TEST(EloRating, DrawsHalfAndIgnore)
 {
     EloSettings half;
-    // methods.md: a draw moves k(0.5 - E); with equal ratings E = 0.5, so nothing changes.
+    // docs/methods.md: a draw moves k(0.5 - E); with equal ratings E = 0.5, so nothing changes.
     const EloRun equal = runElo(2, {{0, 1, true}}, half);
     EXPECT_EQ(equal.rating[0], 1000);
     EXPECT_EQ(equal.rating[1], 1000);
@@ -125,14 +125,14 @@ TEST(EloRating, DrawsHalfAndIgnore)
     EXPECT_TRUE(equal.rated[1]);
     EXPECT_EQ(equal.decided, 0);
     EXPECT_EQ(equal.logLikelihood, 0);
-    // After A beats B (1050/950), a draw named "B, A" gives B k(0.5 - E(-100)) = 100(0.5-0.359935) (check-values 1a).
+    // After A beats B (1050/950), a draw named "B, A" gives B k(0.5 - E(-100)) = 100(0.5-0.359935) (docs/methods.md, "Check values" 1a).
     const EloRun after = runElo(2, {{0, 1}, {1, 0, true}}, half);
     EXPECT_NEAR(after.rating[1], 950 + 100 * (0.5 - 0.359935), 5e-5);
     EXPECT_NEAR(after.rating[0], 1050 - 100 * (0.5 - 0.359935), 5e-5);
     EXPECT_EQ(after.decided, 1);
     EXPECT_DOUBLE_EQ(after.logLikelihood, std::log(0.5));
 
-    // methods.md "Small choices": ignored draws neither update Elo nor count, so an animal
+    // docs/methods.md "Small choices": ignored draws neither update Elo nor count, so an animal
     // with only draws is not rated.
     EloSettings ignore;
     ignore.draws = DrawPolicy::Ignore;
@@ -145,7 +145,7 @@ TEST(EloRating, DrawsHalfAndIgnore)
 
 TEST(EloRating, MatchesPlainFormulaOnRandomData)
 {
-    // Brute force: the kernel against a plain, line-by-line implementation of the methods.md formulas.
+    // Brute force: the kernel against a plain, line-by-line implementation of the docs/methods.md formulas.
     const std::vector<Bout> bouts = randomBouts(12, 3000, 7, 0.1);
     for (EloCurve curve : {EloCurve::Logistic, EloCurve::Normal})
         for (DrawPolicy draws : {DrawPolicy::Half, DrawPolicy::Ignore}) {
@@ -167,7 +167,7 @@ TEST(EloRating, ExtremeGapsStayFinite)
 {
     // With k = 1e7 the first bout opens a gap of 1e7 points; the upset that follows has
     // E = 1/(1+10^25000), far below the smallest double, yet ln E = -25000 ln 10 - ln(1 + 10^-25000)
-    // (methods.md formula) is finite. The upset moves delta = k(1 - 0), so the two swap places.
+    // (docs/methods.md formula) is finite. The upset moves delta = k(1 - 0), so the two swap places.
     EloSettings s;
     s.k = 1e7;
     const EloRun run = runElo(2, {{0, 1}, {1, 0}}, s);
@@ -194,7 +194,7 @@ TEST(EloCheckpoints, AnyOrderOneRunAndDailyHistory)
     EXPECT_THROW(eloAtCheckpoints(6, bouts, {51}, s), std::out_of_range);
     EXPECT_THROW(runElo(5, {{0, 5}}, s), std::out_of_range);
 
-    // Days 10,10,12,15,15: three days, ratings after each day's last bout (methods.md "at date D").
+    // Days 10,10,12,15,15: three days, ratings after each day's last bout (docs/methods.md "Elo rating").
     const std::vector<Bout> five(bouts.begin(), bouts.begin() + 5);
     const std::vector<EloDay> history = eloDailyHistory(6, five, {10, 10, 12, 15, 15}, s);
     ASSERT_EQ(history.size(), 3u);

@@ -13,7 +13,7 @@ using namespace hierloom::core::testing;
 
 namespace {
 
-/// (I, SI) straight from the definition in methods.md.
+/// (I, SI) straight from the definition in docs/methods.md.
 std::pair<int, long long> bruteCriteria(const WinMatrix& m, const std::vector<int>& ord)
 {
     int inc = 0;
@@ -72,7 +72,7 @@ bool noSingleMoveImproves(const WinMatrix& m, const std::vector<int>& ord)
 
 } // namespace
 
-// check-values.md section 6 [computed regression values].
+// docs/methods.md, "Check values" 6 [computed regression values].
 TEST(IsiOrder, Examples)
 {
     const IsiResult e1 = isiOrder(example1());
@@ -100,7 +100,7 @@ TEST(IsiOrder, Examples)
     }
 }
 
-// isiCriteria agrees with the definition (methods.md "I&SI order").
+// isiCriteria agrees with the definition (docs/methods.md "I&SI order").
 TEST(IsiOrder, CriteriaMatchDefinition)
 {
     const WinMatrix m = randomMatrix(12, 3, 0.7, 0.6, 3, true);
@@ -114,7 +114,7 @@ TEST(IsiOrder, CriteriaMatchDefinition)
     }
 }
 
-// methods.md: up to 8 animals the result equals exhaustive search. Checked on
+// docs/methods.md: up to 8 animals the result equals exhaustive search. Checked on
 // 150 seeded random matrices of 3..8 animals (with ties, draws and unknowns),
 // against an independent brute force: (I, SI) and the documented tie-break.
 TEST(IsiOrder, EqualsExhaustiveSearchUpToEight)
@@ -146,7 +146,7 @@ TEST(IsiOrder, HeuristicReachesOptimumOnSmallGroups)
     }
 }
 
-// methods.md: above 8 animals no single move may improve (I, SI); checked by
+// docs/methods.md: above 8 animals no single move may improve (I, SI); checked by
 // trying every move on seeded random matrices of 12..20 animals.
 TEST(IsiOrder, NoSingleMoveImprovesAboveEight)
 {

@@ -43,7 +43,7 @@ std::vector<double> completionHs(const WinMatrix& m)
 
 } // namespace
 
-// check-values.md section 3 [computed regression values].
+// docs/methods.md, "Check values" 3 [computed regression values].
 TEST(Linearity, Examples)
 {
     const LinearityResult l = linearity(exampleL());
@@ -63,7 +63,7 @@ TEST(Linearity, Examples)
     EXPECT_EQ(e5.unknownDyads, 1);
 }
 
-// check-values.md section 3, Example 1: the two completions give h = 1.0 and 0.6.
+// docs/methods.md, "Check values" 3, Example 1: the two completions give h = 1.0 and 0.6.
 TEST(Linearity, ExampleOneCompletions)
 {
     std::vector<double> hs = completionHs(example1());
@@ -73,7 +73,7 @@ TEST(Linearity, ExampleOneCompletions)
     EXPECT_NEAR(hs[1], 1.0, 1e-12);
 }
 
-// de Vries 1995 identity (methods.md): h' is the mean of h over ALL completions
+// de Vries 1995 identity (docs/methods.md): h' is the mean of h over ALL completions
 // of the unknown dyads; enumerated on seeded random matrices with ties and draws.
 TEST(Linearity, HPrimeIsMeanOverAllCompletions)
 {
@@ -92,7 +92,7 @@ TEST(Linearity, HPrimeIsMeanOverAllCompletions)
     }
 }
 
-// methods.md: the mean of h_fill estimates h'; tolerance 4 binomial-style
+// docs/methods.md: the mean of h_fill estimates h'; tolerance 4 binomial-style
 // standard errors, the spread taken from the exact completion distribution.
 TEST(Linearity, MeanHFillEstimatesHPrime)
 {
@@ -111,7 +111,7 @@ TEST(Linearity, MeanHFillEstimatesHPrime)
     }
 }
 
-// check-values.md section 3: E(h) under random dominance is 3/(n+1) [computed].
+// docs/methods.md, "Check values" 3: E(h) under random dominance is 3/(n+1) [computed].
 TEST(Linearity, MeanRandomHIsThreeOverNPlusOne)
 {
     const LinearityTest t = linearityTest(randomMatrix(10, 5), 10000, 77, 2);
@@ -143,7 +143,7 @@ TEST(Linearity, RandomMatricesGiveUniformishP)
     EXPECT_LT(mean, 0.70);
 }
 
-// methods.md "Randomisations": the same seed gives the same figures whatever the thread count.
+// docs/methods.md "Randomisations": the same seed gives the same figures whatever the thread count.
 TEST(Linearity, SameSeedSameResultAnyThreads)
 {
     const WinMatrix m = randomMatrix(15, 4, 0.6, 0.6, 4);
@@ -156,7 +156,7 @@ TEST(Linearity, SameSeedSameResultAnyThreads)
     }
 }
 
-// methods.md "Small choices": h, h' and the test are empty below two animals; never NaN.
+// docs/methods.md "Small choices": h, h' and the test are empty below two animals; never NaN.
 TEST(Linearity, DegenerateMatrices)
 {
     for (int n : {0, 1}) {

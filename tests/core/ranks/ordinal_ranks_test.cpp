@@ -9,7 +9,7 @@ using namespace hierloom::core;
 
 TEST(OrdinalRanks, DescendingWithIndexTiesAndExclusions)
 {
-    // methods.md "Small choices": by score descending, equal (within relative 1e-9) by id ascending.
+    // docs/methods.md "Small choices": by score descending, equal (within relative 1e-9) by id ascending.
     const std::vector<double> score = {5, 9, 5 * (1 + 5e-10), 7, 9, 1};
     const std::vector<bool> include = {true, true, true, true, true, false};
     EXPECT_EQ(ordinalRanks(score, include), (std::vector<int>{4, 1, 5, 3, 2, 0}));

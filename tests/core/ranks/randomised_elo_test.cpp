@@ -38,7 +38,7 @@ bool sameRows(const std::vector<RandomisedEloRow>& a, const std::vector<Randomis
 
 TEST(RandomisedElo, SameSeedSameResultAnyThreadCount)
 {
-    // methods.md "Randomisations": same seed, same figure whatever the number of threads.
+    // docs/methods.md "Randomisations": same seed, same figure whatever the number of threads.
     const std::vector<Bout> bouts = randomBouts(8, 120, 11);
     const auto one = randomisedElo(8, bouts, EloSettings{}, 300, 42, 1);
     EXPECT_TRUE(sameRows(one, randomisedElo(8, bouts, EloSettings{}, 300, 42, 2)));
@@ -71,7 +71,7 @@ TEST(RandomisedElo, QuantilesOrderedAndRanksConsistent)
     EXPECT_LT(rows[0].meanRank, rows[9].meanRank);
     // No iterations: nothing defined, an empty result.
     EXPECT_TRUE(randomisedElo(10, bouts, EloSettings{}, 0, 1, 1).empty());
-    // methods.md "Small choices": under --draws ignore an animal with only draws is not analysed.
+    // docs/methods.md "Small choices": under --draws ignore an animal with only draws is not analysed.
     EloSettings ignore;
     ignore.draws = DrawPolicy::Ignore;
     const auto ig = randomisedElo(3, {{0, 1}, {2, 0, true}}, ignore, 10, 1, 1);
@@ -82,7 +82,7 @@ TEST(RandomisedElo, QuantilesOrderedAndRanksConsistent)
 
 TEST(RandomisedElo, LinearGroupOneBoutPerDyad)
 {
-    // check-values.md 12 test suggestion: a perfectly linear group with one interaction per
+    // docs/methods.md, "Check values" 12 test suggestion: a perfectly linear group with one interaction per
     // dyad ranks the same in every order. Verified here by brute force over all 6! = 720
     // orders of 4 animals (it is not true in general: with 6 animals and k = 100 some orders
     // already swap two neighbours).

@@ -47,7 +47,7 @@ TEST(SteepnessTest, SingleDyadExactP)
     EXPECT_EQ(*t.p, 1.0);
 }
 
-// methods.md "Randomisations": identical figures for any thread count.
+// docs/methods.md "Randomisations": identical figures for any thread count.
 TEST(SteepnessTest, SameSeedSameResultAnyThreads)
 {
     const WinMatrix m = randomMatrix(14, 8, 0.7, 0.65, 6, true);
@@ -59,7 +59,7 @@ TEST(SteepnessTest, SameSeedSameResultAnyThreads)
     }
 }
 
-// methods.md "Small choices": empty below two animals; no NaN for an all-zero matrix.
+// docs/methods.md "Small choices": empty below two animals; no NaN for an all-zero matrix.
 TEST(SteepnessTest, DegenerateMatrices)
 {
     for (int n : {0, 1}) EXPECT_FALSE(steepnessTest(WinMatrix(n), 100, 1, 1).p.has_value());

@@ -37,7 +37,7 @@ void expectTriads(const WinMatrix& m, long long t, long long c, double pt, doubl
 
 } // namespace
 
-// check-values.md section 4 [computed regression values; a tie has no arc].
+// docs/methods.md, "Check values" 4 [computed regression values; a tie has no arc].
 TEST(TriangleTransitivity, Examples)
 {
     expectTriads(exampleL(), 4, 0, 1.0, 1.0);
@@ -68,7 +68,7 @@ TEST(TriangleTransitivity, LinearMatrixGivesSmallP)
     EXPECT_LT(*t.p, 0.01);
     EXPECT_EQ(t.iterations, 10000);
     EXPECT_EQ(t.seed, 8U);
-    // Random orientations: P_t = 0.75 expected (check-values.md section 4), so mean t_tri ~ 0.
+    // Random orientations: P_t = 0.75 expected (docs/methods.md, "Check values" 4), so mean t_tri ~ 0.
     EXPECT_NEAR(*t.meanRandom, 0.0, 0.02);
 }
 
@@ -86,7 +86,7 @@ TEST(TriangleTransitivity, RandomMatricesGiveUniformishP)
     EXPECT_LT(mean, 0.70);
 }
 
-// methods.md "Randomisations": identical figures for any thread count.
+// docs/methods.md "Randomisations": identical figures for any thread count.
 TEST(TriangleTransitivity, SameSeedSameResultAnyThreads)
 {
     const WinMatrix m = randomMatrix(20, 6, 0.7, 0.6, 3);
@@ -98,7 +98,7 @@ TEST(TriangleTransitivity, SameSeedSameResultAnyThreads)
     }
 }
 
-// methods.md "Small choices": t_tri and its p are empty when T + C = 0.
+// docs/methods.md "Small choices": t_tri and its p are empty when T + C = 0.
 TEST(TriangleTransitivity, EmptyWithoutClosedTriads)
 {
     for (int n : {0, 1, 2, 6}) {

@@ -139,7 +139,7 @@ TEST(ExportTables, AddedColumnsMatchThePedigreeAndLifeHistory)
             EXPECT_EQ(row[5], facts.matriarchs.at(it->second)) << row[2];
             ++checked;
         }
-        // Age in whole years on the period's last day (methods.md "Age").
+        // Age in whole years on the period's last day (docs/methods.md "Age").
         const Day end = *parseDate(row[1]);
         EXPECT_EQ(row[6], a.birth ? std::to_string(ageInYears(*a.birth, end)) : std::string());
         EXPECT_EQ(row[7], toString(a.sex));

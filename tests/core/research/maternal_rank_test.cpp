@@ -13,7 +13,7 @@ Day on(int y, unsigned m, unsigned d) { return dayFromCivil(y, m, d); }
 
 constexpr int kGestation = 165;
 
-/// A small colony whose Elo ratings are worked out by hand (methods.md Elo,
+/// A small colony whose Elo ratings are worked out by hand (docs/methods.md Elo,
 /// k = 100, start 1000, logistic curve):
 ///   2019-12-01 A beats X (male):      A 1050,    X 950
 ///   2020-01-01 A beats B, A beats C, B beats C:
@@ -106,7 +106,7 @@ TEST(MaternalRank, RelativeRankAtConceptionAndAtBirthByHand)
     const auto rows = c.ranks(options());
     const MaternalRankRow& b = rows.at("B1");
     // Hand computation above: on 2020-01-10 A > B > C, m = 3 (X male, E immature).
-    EXPECT_EQ(b.atConception.day, on(2020, 1, 10)); // methods.md: conception = birth - gestation
+    EXPECT_EQ(b.atConception.day, on(2020, 1, 10)); // docs/methods.md: conception = birth - gestation
     EXPECT_EQ(b.atConception.rank, 2);
     EXPECT_EQ(b.atConception.rankedFemales, 3);
     EXPECT_EQ(b.atConception.relativeRank, 0.5); // 1 - (2 - 1)/(3 - 1)
@@ -121,7 +121,7 @@ TEST(MaternalRank, MaturityCountsFromTheBirthdayItself)
 {
     const HandColony c;
     const auto rows = c.ranks(options());
-    // methods.md "Age": at least 4 on and after the 4th birthday. On 2021-06-01
+    // docs/methods.md "Age": at least 4 on and after the 4th birthday. On 2021-06-01
     // E (942.85) ranks below A, C (975.65) and B (944.55): 4th of 4, relative 0.
     const MaternalRankRow& e2 = rows.at("E2");
     EXPECT_EQ(e2.exclusion, BirthExclusion::None);
@@ -141,18 +141,18 @@ TEST(MaternalRank, LeftOutBirthsCarryTheirReason)
     // whose mothers are not recorded.
     ASSERT_EQ(rows.size(), 14U);
     EXPECT_EQ(rows.at("A").exclusion, BirthExclusion::UnknownMother);
-    // methods.md: m < 2 is left out. On 2019-12-05 only A is a rated female.
+    // docs/methods.md: m < 2 is left out. On 2019-12-05 only A is a rated female.
     const MaternalRankRow& a1 = rows.at("A1");
     EXPECT_EQ(a1.exclusion, BirthExclusion::FewerThanTwoRanked);
     EXPECT_EQ(a1.atConception.rank, 1);
     EXPECT_EQ(a1.atConception.rankedFemales, 1);
     EXPECT_FALSE(a1.atConception.relativeRank);
     EXPECT_EQ(a1.atBirth.relativeRank, 1.0); // at birth (2020-05-18) A tops 3 females
-    // methods.md: a mother without a rating is left out (no encounter before 2019-11-01).
+    // docs/methods.md: a mother without a rating is left out (no encounter before 2019-11-01).
     EXPECT_EQ(rows.at("C1").exclusion, BirthExclusion::MotherNotRated);
     EXPECT_EQ(rows.at("C1").atConception.rankedFemales, 0);
     EXPECT_STREQ(toString(BirthExclusion::MotherNotRated), "no_rating");
-    // methods.md: sex F or M and a known mother only.
+    // docs/methods.md: sex F or M and a known mother only.
     EXPECT_EQ(rows.at("U1").exclusion, BirthExclusion::UnknownSex);
     EXPECT_EQ(rows.at("U1").atConception.relativeRank, 1.0); // the rank itself is still reported
     EXPECT_EQ(rows.at("N1").exclusion, BirthExclusion::UnknownMother);

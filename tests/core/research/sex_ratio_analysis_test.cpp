@@ -65,7 +65,7 @@ TEST(SexRatioAnalysis, CountsAndLogisticEqualFitLogisticDirectly)
     EXPECT_EQ(a.birthsLeftOut, 2);
     EXPECT_EQ(a.sons, 7);
     EXPECT_EQ(a.daughters, 8);
-    // methods.md: logistic regression of male (1) on relative rank at conception;
+    // docs/methods.md: logistic regression of male (1) on relative rank at conception;
     // the figures must be fitLogistic's own, bit for bit.
     std::vector<double> x;
     std::vector<int> y;
@@ -91,7 +91,7 @@ TEST(SexRatioAnalysis, CountsAndLogisticEqualFitLogisticDirectly)
 TEST(SexRatioAnalysis, FisherOnHighVersusLowEqualsFisherExactDirectly)
 {
     const SexRatioAnalysis a = analyseSexRatio(mixedBirths());
-    // methods.md: high = relative rank >= 0.5 (both 0.5 births are high).
+    // docs/methods.md: high = relative rank >= 0.5 (both 0.5 births are high).
     // High: 0.5 M, 0.5 F, 0.6 F, 2/3 M, 0.75 F, 0.8 F, 0.9 M, 1 F, 1 F -> 3 sons, 6 daughters.
     // Low: 0 M, 0.1 M, 0.2 F, 0.25 M, 1/3 M, 0.4 F -> 4 sons, 2 daughters.
     EXPECT_EQ(a.highSons, 3);
@@ -105,7 +105,7 @@ TEST(SexRatioAnalysis, FisherOnHighVersusLowEqualsFisherExactDirectly)
 TEST(SexRatioAnalysis, WilsonIntervalPerRankThird)
 {
     const SexRatioAnalysis a = analyseSexRatio(mixedBirths());
-    // methods.md: low < 1/3 <= middle < 2/3 <= high.
+    // docs/methods.md: low < 1/3 <= middle < 2/3 <= high.
     // low {0, 0.1, 0.2, 0.25}: 3 sons of 4; middle {1/3, 0.4, 0.5, 0.5, 0.6}: 2 of 5;
     // high {2/3, 0.75, 0.8, 0.9, 1, 1}: 2 of 6.
     const int births[] = {4, 5, 6};
@@ -115,7 +115,7 @@ TEST(SexRatioAnalysis, WilsonIntervalPerRankThird)
         EXPECT_EQ(r.births, births[t]) << r.name;
         EXPECT_EQ(r.sons, sons[t]) << r.name;
         EXPECT_EQ(r.proportion, static_cast<double>(sons[t]) / births[t]);
-        const auto w = wilsonInterval(sons[t], births[t], kZ95); // methods.md z = 1.959963984540054
+        const auto w = wilsonInterval(sons[t], births[t], kZ95); // docs/methods.md z = 1.959963984540054
         EXPECT_EQ(r.low, w->low);
         EXPECT_EQ(r.high, w->high);
     }
@@ -139,7 +139,7 @@ TEST(SexRatioAnalysis, PublishedWilsonExampleInOneThird)
 TEST(SexRatioAnalysis, RowsInInterfaceOrder)
 {
     const auto rows = sexRatioRows(analyseSexRatio(mixedBirths()));
-    // interfaces.md `sex-ratio` rows, in this order.
+    // docs/file-formats.md `sex-ratio` rows, in this order.
     const std::vector<std::string> names{"births_used", "births_left_out", "sons", "daughters", "intercept",
                                          "slope", "slope_se", "slope_z", "slope_p", "slope_ci_low",
                                          "slope_ci_high", "lr_chisq", "lr_p", "fisher_p"};
@@ -151,7 +151,7 @@ TEST(SexRatioAnalysis, RowsInInterfaceOrder)
 
 TEST(SexRatioAnalysis, NoBirthsGiveEmptyFiguresAndNoNan)
 {
-    // methods.md "Small choices": undefined figures empty; Fisher's p undefined without births.
+    // docs/methods.md "Small choices": undefined figures empty; Fisher's p undefined without births.
     const SexRatioAnalysis a = analyseSexRatio({});
     const auto rows = sexRatioRows(a);
     EXPECT_EQ(rows[0].second, "0");
@@ -162,7 +162,7 @@ TEST(SexRatioAnalysis, NoBirthsGiveEmptyFiguresAndNoNan)
 
 TEST(SexRatioAnalysis, AllSonsLeaveTheRegressionEmpty)
 {
-    // methods.md: offspring all of one sex -> the regression is undefined.
+    // docs/methods.md: offspring all of one sex -> the regression is undefined.
     std::vector<MaternalRankRow> b{birthAt(0.0, true), birthAt(0.5, true), birthAt(1.0, true)};
     const SexRatioAnalysis a = analyseSexRatio(b);
     const auto rows = sexRatioRows(a);

@@ -13,7 +13,7 @@ using namespace hierloom::core;
 
 TEST(SpeciesProfile, DefaultsAreTheRhesusValues)
 {
-    // methods.md: maturity age default 4 years; rhesus gestation ~165 days [from memory].
+    // docs/methods.md: maturity age default 4 years; rhesus gestation ~165 days [from memory].
     const SpeciesSettings s = resolveSpeciesSettings("", "", "");
     EXPECT_EQ(s.species, "rhesus_macaque");
     EXPECT_EQ(s.gestationDays, 165);

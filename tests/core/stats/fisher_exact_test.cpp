@@ -11,12 +11,12 @@ using namespace hierloom::core;
 TEST(FisherExact, TeaTasting)
 {
     // Fisher 1935, The Design of Experiments, ch. 2; R fisher.test help (Agresti 2002
-    // p. 91) gives one-sided "greater" p = 0.2429 = 17/70 [confirmed, check-values 8].
+    // p. 91) gives one-sided "greater" p = 0.2429 = 17/70 [confirmed, docs/methods.md, "Check values" 8].
     const auto r = fisherExact(3, 1, 1, 3);
     ASSERT_TRUE(r);
     EXPECT_NEAR(r->greater, 17.0 / 70.0, 1e-12);
     EXPECT_NEAR(r->greater, 0.2429, 5e-5);
-    // Two-sided: the null distribution 1, 16, 36, 16, 1 of 70 [computed, check-values 8].
+    // Two-sided: the null distribution 1, 16, 36, 16, 1 of 70 [computed, docs/methods.md, "Check values" 8].
     EXPECT_NEAR(r->twoSided, 34.0 / 70.0, 1e-12);
     EXPECT_NEAR(r->less, 69.0 / 70.0, 1e-12);
 
@@ -31,7 +31,7 @@ TEST(FisherExact, TeaTasting)
 TEST(FisherExact, LangeTwinConvictions)
 {
     // Fisher's twins example from the R fisher.test help [table confirmed]; p values
-    // [computed, check-values 8]: less 0.0004652, two-sided 0.0005367.
+    // [computed, docs/methods.md, "Check values" 8]: less 0.0004652, two-sided 0.0005367.
     const auto r = fisherExact(2, 15, 10, 3);
     ASSERT_TRUE(r);
     EXPECT_NEAR(r->less, 0.0004652, 5e-8);
@@ -41,7 +41,7 @@ TEST(FisherExact, LangeTwinConvictions)
 TEST(FisherExact, WhalesAndSharks)
 {
     // SciPy fisher_exact docs, [[8, 2], [1, 5]]: two-sided 0.0349650 = 5/143
-    // [table confirmed; p computed, check-values 8].
+    // [table confirmed; p computed, docs/methods.md, "Check values" 8].
     const auto r = fisherExact(8, 2, 1, 5);
     ASSERT_TRUE(r);
     EXPECT_NEAR(r->twoSided, 5.0 / 143.0, 1e-12);
@@ -50,7 +50,7 @@ TEST(FisherExact, WhalesAndSharks)
 
 TEST(FisherExact, EmptyAndDegenerateTables)
 {
-    EXPECT_FALSE(fisherExact(0, 0, 0, 0)); // methods.md: no p without births
+    EXPECT_FALSE(fisherExact(0, 0, 0, 0)); // docs/methods.md: no p without births
     EXPECT_FALSE(fisherExact(-1, 2, 3, 4));
     // A single possible table (a zero margin) has p = 1 in every direction.
     const auto r = fisherExact(0, 0, 3, 5);

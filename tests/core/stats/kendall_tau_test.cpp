@@ -11,7 +11,7 @@ using namespace hierloom::core;
 TEST(KendallTau, SciPyDocExample)
 {
     // SciPy kendalltau docs: x = [12, 2, 1, 12, 2], y = [1, 4, 7, 1, 0] gives
-    // tau-b = -0.47140452079103173 [from memory; recomputed, check-values 7].
+    // tau-b = -0.47140452079103173 [from memory; recomputed, docs/methods.md, "Check values" 7].
     const std::vector<double> x{12, 2, 1, 12, 2};
     const std::vector<double> y{1, 4, 7, 1, 0};
     const auto t = kendallTauB(x, y);
@@ -25,7 +25,7 @@ TEST(KendallTau, SciPyDocExample)
 TEST(KendallTau, AgrestiIncomeJobSatisfaction)
 {
     // Agresti 2002, Categorical Data Analysis, p. 57: income x job satisfaction, 4x4
-    // table expanded into paired observations; tau-b = 0.1524 [confirmed, check-values 7].
+    // table expanded into paired observations; tau-b = 0.1524 [confirmed, docs/methods.md, "Check values" 7].
     const int counts[4][4] = {{1, 3, 10, 6}, {2, 3, 10, 7}, {1, 6, 14, 12}, {0, 1, 9, 11}};
     std::vector<double> income, satisfaction;
     for (int i = 0; i < 4; ++i)

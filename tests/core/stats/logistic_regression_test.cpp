@@ -63,7 +63,7 @@ TEST(LogisticRegression, RefluxAndStress)
 {
     // R-bloggers 2009, "Simple logistic regression on qualitative dichotomic variables":
     // stress no 251 / 4 reflux, stress yes 131 / 33; intercept -4.1392 (SE 0.5040),
-    // slope 2.7605 (SE 0.5403), z 5.109, p 3.23e-07 [confirmed, check-values 10].
+    // slope 2.7605 (SE 0.5403), z 5.109, p 3.23e-07 [confirmed, docs/methods.md, "Check values" 10].
     const Data d = fromTable(251, 4, 131, 33);
     const LogisticFit f = fitLogistic(d.x, d.y);
     ASSERT_TRUE(f.slope && f.slopeSe && f.intercept && f.interceptSe && f.slopeZ && f.slopeP);
@@ -76,13 +76,13 @@ TEST(LogisticRegression, RefluxAndStress)
     // fitted z (3.2358e-07); the tolerance admits that printed discrepancy.
     EXPECT_NEAR(*f.slopeP, 3.23e-07, 1e-09);
     EXPECT_NEAR(*f.slopeP, std::erfc(*f.slopeZ / std::sqrt(2.0)), 1e-20);
-    // Closed form (Woolf 1955; check-values 10 identity): log odds ratio and
+    // Closed form (Woolf 1955; docs/methods.md, "Check values" 10 identity): log odds ratio and
     // sqrt(sum 1/cell); intercept the log odds at x = 0.
     EXPECT_NEAR(*f.slope, std::log(251.0 * 33.0 / (4.0 * 131.0)), 1e-9);
     EXPECT_NEAR(*f.slopeSe, std::sqrt(1 / 251.0 + 1 / 4.0 + 1 / 131.0 + 1 / 33.0), 1e-9);
     EXPECT_NEAR(*f.intercept, std::log(4.0 / 251.0), 1e-9);
     EXPECT_NEAR(*f.interceptSe, std::sqrt(1 / 251.0 + 1 / 4.0), 1e-9);
-    // methods.md: 95 % CI b +- 1.96 SE.
+    // docs/methods.md: 95 % CI b +- 1.96 SE.
     EXPECT_NEAR(*f.slopeCiLow, *f.slope - 1.96 * *f.slopeSe, 1e-12);
     EXPECT_NEAR(*f.slopeCiHigh, *f.slope + 1.96 * *f.slopeSe, 1e-12);
     // Identity: LR chi-square = G statistic of the 2x2 table.
@@ -96,7 +96,7 @@ TEST(LogisticRegression, HosmerLemeshowChdAge)
     // Hosmer & Lemeshow 2000, Applied Logistic Regression, ch. 3: CHD by age >= 55,
     // 21 / 6 at x = 1 and 22 / 51 at x = 0; slope 2.094 (SE 0.529), intercept
     // -0.841 (SE 0.255) [from memory for the table; computed 2.093546 (0.528534),
-    // -0.840783 (0.255073), z 3.961, check-values 10].
+    // -0.840783 (0.255073), z 3.961, docs/methods.md, "Check values" 10].
     const Data d = fromTable(51, 22, 6, 21);
     const LogisticFit f = fitLogistic(d.x, d.y);
     ASSERT_TRUE(f.slope && f.slopeSe && f.intercept && f.interceptSe && f.slopeZ);
@@ -171,7 +171,7 @@ TEST(LogisticRegression, ContinuousPredictorSatisfiesScoreEquations)
 
 TEST(LogisticRegression, UndefinedCasesAreEmpty)
 {
-    // methods.md "Small choices": fewer than two births, one sex only, a constant
+    // docs/methods.md "Small choices": fewer than two births, one sex only, a constant
     // predictor, complete separation: all figures empty.
     expectEmpty(fitLogistic(std::vector<double>{0.5}, std::vector<int>{1}));
     expectEmpty(fitLogistic(std::vector<double>{}, std::vector<int>{}));

@@ -15,7 +15,7 @@ TEST(NormalDistribution, CdfTableValues)
     EXPECT_NEAR(normalCdf(1.0), 0.8413447461, 1e-10);
     EXPECT_NEAR(normalCdf(2.0), 0.9772498681, 1e-10);
     EXPECT_NEAR(normalCdf(-1.0), 1.0 - 0.8413447461, 1e-10);
-    // methods.md: z = 1.959963984540054 is the 97.5 % quantile.
+    // docs/methods.md: z = 1.959963984540054 is the 97.5 % quantile.
     EXPECT_NEAR(normalCdf(1.959963984540054), 0.975, 1e-15);
 }
 

@@ -20,7 +20,7 @@ void expectInterval(std::int64_t k, std::int64_t n, double low, double high, dou
 TEST(WilsonInterval, Newcombe1998Table)
 {
     // Newcombe 1998, Stat. Med. 17:857-872, illustrative intervals, method 3, printed
-    // to 4 decimals [from memory; recomputed, check-values 9].
+    // to 4 decimals [from memory; recomputed, docs/methods.md, "Check values" 9].
     expectInterval(81, 263, 0.2553, 0.3662, 5e-5);
     expectInterval(15, 148, 0.0624, 0.1605, 5e-5);
     expectInterval(0, 20, 0.0000, 0.1611, 5e-5);
@@ -29,7 +29,7 @@ TEST(WilsonInterval, Newcombe1998Table)
 
 TEST(WilsonInterval, FurtherValues)
 {
-    // check-values 9, extra rows [computed regression values].
+    // docs/methods.md, "Check values" 9, extra rows [computed regression values].
     expectInterval(23, 60, 0.2709, 0.5098, 5e-5);
     expectInterval(0, 8, 0.0, 0.3244, 5e-5);
 }

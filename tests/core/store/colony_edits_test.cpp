@@ -83,7 +83,7 @@ TEST(ColonyEdits, RefusedEncountersUseTheImportWordingAndWriteNothing)
     struct Case {
         std::string row, field;
     };
-    // Each row breaks one import rule (interfaces.md); the edit must name the same field and say the same.
+    // Each row breaks one import rule (docs/file-formats.md); the edit must name the same field and say the same.
     for (const Case& c : {Case{"2020-01-01,F1,ZZ", "loser"}, Case{"2020-01-01,F1,F1", "loser"},
                           Case{"2020-01-01,F1,M1", "loser"}, Case{"2009-01-01,F1,D1", "winner"},
                           Case{"2999-01-01,F1,D1", "date"}}) {
@@ -242,7 +242,7 @@ TEST(ColonyEdits, MoveClosesOneStayAndOpensTheNext)
     c = f.store.load();
     const ResidenceIndex where(c.animals, c.residences);
     const int m = where.animal("M1");
-    // Residence days are inclusive (methods.md): B up to the day before, A from the move day.
+    // Residence days are inclusive (docs/methods.md): B up to the day before, A from the move day.
     EXPECT_EQ(where.groups()[static_cast<size_t>(where.groupOn(m, *parseDate("2020-05-31")))], "B");
     EXPECT_EQ(where.groups()[static_cast<size_t>(where.groupOn(m, *parseDate("2020-06-01")))], "A");
     std::vector<Encounter> now{encounter("2020-06-02", "M1", "F1")};

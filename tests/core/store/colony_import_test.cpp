@@ -1,5 +1,5 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
-// Every import rule of interfaces.md, each with its message and the colony
+// Every import rule of docs/file-formats.md, each with its message and the colony
 // file left byte-for-byte unchanged.
 #include "core/store/colony_import.h"
 #include "core/store/colony_store.h"

@@ -46,7 +46,7 @@ TEST(FuzzRegressions, EveryRecordedInputStillParsesWithoutBreakingAnInvariant)
 TEST(FuzzRegressions, SeedInputsAreAcceptedByTheFixedColony)
 {
     // The seeds are valid files for the fixed colony of fuzz_entries.h (hand-checked
-    // against interfaces.md), so the fuzzers start from inputs that reach the deep checks.
+    // against docs/file-formats.md), so the fuzzers start from inputs that reach the deep checks.
     using namespace hierloom::fuzz;
     const auto& c = fixedColony();
     hierloom::core::ImportInput in;
