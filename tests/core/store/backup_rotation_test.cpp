@@ -4,6 +4,7 @@
 #include "core/store/colony_store.h"
 #include "core/store/partial_files.h"
 #include "import_test_support.h"
+#include "two_animal_colony.h"
 
 #include <gtest/gtest.h>
 
@@ -19,23 +20,11 @@ namespace fs = std::filesystem;
 
 namespace {
 
-// 2024-05-01 12:00:00 UTC.
-const Clock::time_point noon = Clock::from_time_t(1714564800);
+const Clock::time_point noon = hierloom::test::kNoon;
 
 ColonyStore colonyWithTwoAnimals(const std::string& path)
 {
-    ColonyStore store = ColonyStore::create(path);
-    Animal f, m;
-    f.id = "F1";
-    f.sex = Sex::Female;
-    m.id = "M1";
-    m.sex = Sex::Male;
-    f.entry = m.entry = parseDate("2010-01-01");
-    store.append({f, m},
-                 {{"F1", "main", *parseDate("2010-01-01"), std::nullopt, ""},
-                  {"M1", "main", *parseDate("2010-01-01"), std::nullopt, ""}},
-                 {});
-    return store;
+    return hierloom::test::twoAnimalColony(path, 0);
 }
 
 std::vector<std::string> namesIn(const std::string& folder)

@@ -4,6 +4,7 @@
 #include "core/store/colony_store.h"
 #include "core/store/record_history.h"
 #include "import_test_support.h"
+#include "two_animal_colony.h"
 
 #include <gtest/gtest.h>
 #include <sqlite3.h>
@@ -17,35 +18,11 @@ using Clock = std::chrono::system_clock;
 
 namespace {
 
-// 2024-05-01 12:00:00 UTC = 1714564800 s after the Unix epoch.
-const Clock::time_point noon = Clock::from_time_t(1714564800);
-
-std::vector<Encounter> encounters(int n)
-{
-    std::vector<Encounter> out(static_cast<size_t>(n));
-    for (auto& e : out) {
-        e.date = *parseDate("2012-01-01");
-        e.winner = "F1";
-        e.loser = "M1";
-        e.group = "main";
-    }
-    return out;
-}
+const Clock::time_point noon = hierloom::test::kNoon;
 
 ColonyStore smallColony(const std::string& path)
 {
-    ColonyStore store = ColonyStore::create(path);
-    Animal f, m;
-    f.id = "F1";
-    f.sex = Sex::Female;
-    m.id = "M1";
-    m.sex = Sex::Male;
-    f.entry = m.entry = parseDate("2010-01-01");
-    store.append({f, m},
-                 {{"F1", "main", *parseDate("2010-01-01"), std::nullopt, ""},
-                  {"M1", "main", *parseDate("2010-01-01"), std::nullopt, ""}},
-                 encounters(5));
-    return store;
+    return hierloom::test::twoAnimalColony(path, 5);
 }
 
 } // namespace
@@ -112,7 +89,7 @@ TEST(ColonyBackup, RestoreBringsBackTheRecordsAndKeepsWhatItReplaced)
     const std::string backup = backupColony(smallColony(path), noon);
     {
         ColonyStore store = ColonyStore::open(path);
-        store.append({}, {}, encounters(7));
+        store.append({}, {}, hierloom::test::twoAnimalEncounters(7));
         EXPECT_EQ(store.encounterCount(), 12);
     }
     ColonyStore reader = ColonyStore::open(path, ColonyStore::Mode::ReadOnly); // an open reader does not stop it

@@ -7,6 +7,7 @@
 #include "core/store/integrity_check.h"
 #include "core/store/sqlite_statement.h"
 #include "import_test_support.h"
+#include "two_animal_colony.h"
 
 #include <gtest/gtest.h>
 
@@ -19,33 +20,11 @@ using Clock = std::chrono::system_clock;
 
 namespace {
 
-const Clock::time_point noon = Clock::from_time_t(1714564800);
-
-std::vector<Encounter> encounters(int n)
-{
-    std::vector<Encounter> out(static_cast<size_t>(n));
-    for (auto& e : out) {
-        e.date = *parseDate("2012-01-01");
-        e.winner = "F1";
-        e.loser = "M1";
-        e.group = "main";
-    }
-    return out;
-}
+const Clock::time_point noon = hierloom::test::kNoon;
 
 void makeColony(const std::string& path)
 {
-    ColonyStore store = ColonyStore::create(path);
-    Animal f, m;
-    f.id = "F1";
-    f.sex = Sex::Female;
-    m.id = "M1";
-    m.sex = Sex::Male;
-    f.entry = m.entry = parseDate("2010-01-01");
-    store.append({f, m},
-                 {{"F1", "main", *parseDate("2010-01-01"), std::nullopt, ""},
-                  {"M1", "main", *parseDate("2010-01-01"), std::nullopt, ""}},
-                 encounters(50));
+    hierloom::test::twoAnimalColony(path, 50);
 }
 
 /// Breaks the page of the index on encounter uids: the records read as before
@@ -86,7 +65,7 @@ TEST(IntegrityCheck, AWriteToADamagedFileIsRefusedNamingTheNewestGoodBackup)
     const std::string before = hierloom::test::fileBytes(path);
     ColonyStore store = ColonyStore::open(path); // opening for writing reads nothing yet
     try {
-        store.append({}, {}, encounters(1));
+        store.append({}, {}, hierloom::test::twoAnimalEncounters(1));
         FAIL() << "wrote into a damaged file";
     } catch (const ColonyFileError& e) {
         const std::string m = e.what();
@@ -96,7 +75,7 @@ TEST(IntegrityCheck, AWriteToADamagedFileIsRefusedNamingTheNewestGoodBackup)
         EXPECT_EQ(m.find('\n'), std::string::npos) << m; // one line, not SQLite's whole report
         EXPECT_LT(m.size(), 400U + 3 * path.size()) << m;
     }
-    std::vector<Encounter> one = encounters(1); // an edit from the desktop goes the same way
+    std::vector<Encounter> one = hierloom::test::twoAnimalEncounters(1); // an edit from the desktop goes the same way
     EXPECT_THROW(writeEncounterChange(store, {}, one), ColonyFileError);
     // A backup of it is refused too, and none is made.
     EXPECT_THROW(backupColony(store, noon + std::chrono::hours(1)), ColonyFileError);
