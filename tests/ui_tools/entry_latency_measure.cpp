@@ -121,7 +121,7 @@ int main(int argc, char* argv[])
     QApplication::processEvents();
     std::printf("full reload (what a naive undo command would do): %lld ms\n", static_cast<long long>(timer.elapsed()));
 
-    panel->dateEdit()->setDate(QDate::currentDate());
+    panel->dateEdit()->setText(QDate::currentDate().toString(Qt::ISODate));
     panel->groupBox()->setCurrentText(QStringLiteral("A"));
     panel->observerBox()->setCurrentText(QStringLiteral("bench"));
     QApplication::processEvents();
