@@ -180,11 +180,13 @@ TEST(EveningEntry, ABlankObserverIsRefusedAndUnknownIsAccepted)
     EXPECT_TRUE(inFile(e.path).empty());
     EXPECT_TRUE(e.panel->fieldMessage("observer").startsWith(QStringLiteral("Choose the observer")));
     EXPECT_EQ(QApplication::focusWidget(), e.panel->observerBox());
+    EXPECT_EQ(e.panel->refusedList()->count(), 1);
     e.type("unknown");
     QTest::keyClick(e.focus(), Qt::Key_T, Qt::AltModifier);
     e.key(Qt::Key_Return); // the refused line is still on the entry line
     ASSERT_EQ(inFile(e.path).size(), 1u);
     EXPECT_EQ(inFile(e.path)[0].observer, "unknown");
+    EXPECT_EQ(e.panel->refusedList()->count(), 0); // saved now, so no longer listed as refused
 }
 
 TEST(EveningEntry, RefusedLinesAreListedAndCanBeRecalled)

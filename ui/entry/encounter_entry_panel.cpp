@@ -489,6 +489,10 @@ bool EncounterEntryPanel::commitLine()
         return false;
     }
     if (warned) warned_.insert(e.uid);
+    // A refused line saved once its fault was fixed (the observer, the date) leaves the refused list.
+    const QStringList saved = typedFields();
+    for (int i = refused_->count() - 1; i >= 0; --i)
+        if (refused_->item(i)->data(Qt::UserRole).toStringList() == saved) delete refused_->takeItem(i);
     const bool hadTime = e.time.has_value();
     editing_.reset();
     mode_->clear();

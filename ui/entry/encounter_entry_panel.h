@@ -101,6 +101,8 @@ private:
     void showProblems(const core::FieldProblems& problems);
     void refuse(const core::FieldProblems& problems);
     void recallRefused();
+    /// The entry line as typed: time, winner, loser, draw, behaviour, note.
+    QStringList typedFields() const;
     void clearMessages();
     void clearLine();
     void cancelEdit();

@@ -67,13 +67,18 @@ QString EncounterEntryPanel::countText() const { return count_->text(); }
 
 QString EncounterEntryPanel::summaryText() const { return summary_->text(); }
 
+QStringList EncounterEntryPanel::typedFields() const
+{
+    return {time_->text(), winner_->text(), loser_->text(), draw_->isChecked() ? QStringLiteral("1") : QString(),
+            behaviour_->currentText(), note_->text()};
+}
+
 void EncounterEntryPanel::refuse(const core::FieldProblems& problems)
 {
     clearMessages();
     ++refusals_;
     // Listed with its reason, so a line refused late in the evening is not lost.
-    const QStringList fields{time_->text(), winner_->text(), loser_->text(), draw_->isChecked() ? QStringLiteral("1") : QString(),
-                             behaviour_->currentText(), note_->text()};
+    const QStringList fields = typedFields();
     QString text = QStringLiteral("%1 %2 > %3").arg(fields[0].trimmed(), fields[1].trimmed(), fields[2].trimmed()).trimmed();
     text += QStringLiteral(": ") + toQString(problems.front().message);
     if (refused_->count() > 0 && refused_->item(refused_->count() - 1)->data(Qt::UserRole).toStringList() == fields)

@@ -32,6 +32,8 @@ LifeEventDialog::LifeEventDialog(ColonyEditFacade* facade, Event event, const QS
 {
     const QStringList titles{tr("Record Death"), tr("Record Removal"), tr("Move Between Groups")};
     setWindowTitle(titles[static_cast<int>(event)]);
+    // Wide enough that "who" (name, id, sex, age, group) reads on one line.
+    setMinimumWidth(fontMetrics().horizontalAdvance(QLatin1Char('M')) * 36);
     const ColonyDocument* document = facade_->document();
     // Nothing chosen unless a view had an animal selected: never a default animal.
     animal_->addItem(QString(), QString());
