@@ -7,10 +7,14 @@
 #include "core/base/residence_index.h"
 #include "ui/records/animal_editor_dialog.h"
 #include "ui/records/life_event_dialog.h"
+#include "ui/records/animal_table_model.h"
+#include "ui/records/animal_view.h"
+#include "ui/shell/main_window.h"
 #include "ui/widgets/caution_label.h"
 
 #include <QComboBox>
 #include <QLabel>
+#include <QTableView>
 
 using namespace hierloom;
 using namespace hierloom::test;
@@ -184,4 +188,45 @@ TEST(LifeHistoryDialogs, IntroductionShowsTheCautionAndAsksBeforeANewGroup)
     EXPECT_EQ(asked[0], QStringLiteral("There is no group 'C' in the colony. Create a new group named 'C'?"));
     EXPECT_EQ(asked[1], QStringLiteral("Record the introduction of X1 into group C on 2021-08-01?"));
     EXPECT_EQ(groupOf(colonyIn(e.path), "X1", "2021-08-02"), "C");
+}
+
+TEST(LifeHistoryDialogs, PedigreeMenuDialogsStartFromTheAnimalSelectedInTheAnimalsView)
+{
+    TempDir dir;
+    const std::string path = makeColony(dir);
+    ui::MainWindow window;
+    ASSERT_TRUE(window.openColony(ui::toQString(path)));
+    window.show();
+    QApplication::setActiveWindow(&window);
+    QTableView* table = window.animalView()->table();
+    window.showView(QStringLiteral("animals"));
+    // Nothing selected: the death dialog names nobody (it once proposed the first animal).
+    QStringList shown;
+    auto readDialog = [&shown](int tries, auto&& self) -> void {
+        QTimer::singleShot(10, [&shown, tries, self] {
+            auto* dialog = qobject_cast<ui::LifeEventDialog*>(QApplication::activeModalWidget());
+            if (!dialog) {
+                if (tries > 0) self(tries - 1, self);
+                return;
+            }
+            shown << dialog->animalText();
+            QTest::keyClick(dialog, Qt::Key_Escape);
+        });
+    };
+    readDialog(300, readDialog);
+    QTest::keyClick(focusIn(&window), Qt::Key_D, Qt::ControlModifier | Qt::ShiftModifier);
+    ASSERT_EQ(shown.size(), 1);
+    EXPECT_EQ(shown[0], QStringLiteral("No animal chosen."));
+    // A click on Dot's row, then Ctrl+Shift+D: the dialog is about Dot.
+    int row = -1;
+    for (int r = 0; r < table->model()->rowCount(); ++r)
+        if (table->model()->index(r, ui::AnimalTableModel::Id).data().toString() == QStringLiteral("D2")) row = r;
+    ASSERT_GE(row, 0);
+    table->scrollTo(table->model()->index(row, 1));
+    QTest::mouseClick(table->viewport(), Qt::LeftButton, {}, table->visualRect(table->model()->index(row, 1)).center());
+    readDialog(300, readDialog);
+    QTest::keyClick(focusIn(&window), Qt::Key_D, Qt::ControlModifier | Qt::ShiftModifier);
+    ASSERT_EQ(shown.size(), 2);
+    EXPECT_TRUE(shown[1].startsWith(QStringLiteral("Dot (D2) · female · "))) << shown[1].toStdString();
+    EXPECT_FALSE(animal(colonyIn(path), "D2").exit.has_value()); // Escape wrote nothing
 }
