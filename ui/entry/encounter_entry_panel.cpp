@@ -239,6 +239,15 @@ void EncounterEntryPanel::documentChanged()
     }
     // Encounter-only changes leave the groups, residents and lists as they were.
     const auto kind = document_->lastChange().kind;
+    if (kind == ColonyDocument::Change::EncountersAppended && dayIndexValid_) {
+        // Appended rows come last: only they need looking at.
+        const auto& all = document_->colony().encounters;
+        const std::string group = toStdString(group_->currentText());
+        for (size_t i = document_->lastChange().firstAppended; i < all.size(); ++i)
+            if (all[i].date == day_ && all[i].group == group) dayIndex_.push_back(i);
+    } else {
+        dayIndexValid_ = false;
+    }
     if (kind != ColonyDocument::Change::EncountersAppended && kind != ColonyDocument::Change::EncountersChanged)
         refreshChoices();
     refreshList();
@@ -295,7 +304,9 @@ void EncounterEntryPanel::refreshResidents()
 void EncounterEntryPanel::headerChanged()
 {
     // A new date, group or observer is a new notebook page: close the session.
+    // (A new date closed it under its own date before it took over, in dateTyped.)
     if (sessionRowCount() > 0) endSession();
+    dayIndexValid_ = false;
     refreshResidents();
     refreshList();
     checkDate();
@@ -368,6 +379,7 @@ void EncounterEntryPanel::dateTyped()
     // Close the session under its own date before the new one takes over.
     if (sessionRowCount() > 0) endSession();
     day_ = *day;
+    dayIndexValid_ = false;
     headerChanged();
 }
 

@@ -142,6 +142,10 @@ private:
     UndoKeys* undoKeys_;
 
     AnimalMatcher matcher_;
+    // Positions in the document's encounters of the date and group's lines, kept
+    // up to date on appends so Enter does not scan a million rows.
+    mutable std::vector<size_t> dayIndex_;
+    mutable bool dayIndexValid_ = false;
     core::Day day_ = 0;                      // the session's date, as stored and shown
     bool dateValid_ = true;                  // false while the date field holds no real date
     QString openPath_;                       // the file the session belongs to

@@ -26,9 +26,15 @@ std::vector<const core::Encounter*> EncounterEntryPanel::dayRows() const
     // Read from the document every time, so the table can never drift from the file.
     std::vector<const core::Encounter*> out;
     if (!dateValid_) return out;
-    const std::string group = toStdString(group_->currentText());
-    for (const core::Encounter& e : document_->colony().encounters)
-        if (e.date == day_ && e.group == group) out.push_back(&e);
+    const auto& all = document_->colony().encounters;
+    if (!dayIndexValid_) {
+        const std::string group = toStdString(group_->currentText());
+        dayIndex_.clear();
+        for (size_t i = 0; i < all.size(); ++i)
+            if (all[i].date == day_ && all[i].group == group) dayIndex_.push_back(i);
+        dayIndexValid_ = true;
+    }
+    for (size_t i : dayIndex_) out.push_back(&all[i]);
     return out;
 }
 
