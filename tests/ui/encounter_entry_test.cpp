@@ -3,6 +3,7 @@
 // every check reads the colony file back through a separate store.
 #include "ui/entry/encounter_entry_panel.h"
 
+#include "tests/ui/entry_test_support.h"
 #include "core/store/colony_import.h"
 #include "core/store/colony_store.h"
 #include "core/pedigree/matriline.h"
@@ -26,90 +27,7 @@
 #include <gtest/gtest.h>
 
 using namespace hierloom;
-using hierloom::test::TempDir;
-
-namespace {
-
-// Group A: the F1 matriline and F2; group B: M1 and G1. Hand-made so every
-// expected row below can be checked by eye.
-const char* const animalsCsv = "id,name,sex,birth_date,mother,entry_type\n"
-                               "F1,Ada,F,2010-03-01,,founder\n"
-                               "F2,Bea,F,2012-05-02,,founder\n"
-                               "D1,Cleo,F,2015-04-03,F1,born\n"
-                               "D2,Dot,F,2017-06-04,D1,born\n"
-                               "M1,Eli,M,2011-01-01,,founder\n"
-                               "G1,Gus,F,2012-01-01,,founder\n";
-const char* const residencesCsv = "animal,group,from\n"
-                                  "F1,A,2010-03-01\nF2,A,2012-05-02\nD1,A,2015-04-03\nD2,A,2017-06-04\n"
-                                  "M1,B,2011-01-01\nG1,B,2012-01-01\n";
-
-std::string makeColony(const TempDir& dir)
-{
-    const std::string path = dir.file("entry.hierloom");
-    core::ColonyStore store = core::ColonyStore::create(path);
-    const core::ImportResult plan = core::importFiles(
-        store, {dir.write("a.csv", animalsCsv), dir.write("r.csv", residencesCsv), {}}, core::today());
-    EXPECT_TRUE(plan.ok()) << plan.problems.text();
-    return path;
-}
-
-/// Encounters in the file, read by a separate connection (what another program or a restart would see).
-std::vector<core::Encounter> inFile(const std::string& path)
-{
-    return core::ColonyStore::open(path, core::ColonyStore::Mode::ReadOnly).loadEncounters();
-}
-
-struct Entry {
-    TempDir dir;
-    std::string path = makeColony(dir);
-    ui::ColonyDocument document;
-    ui::ColonyEditFacade facade{&document};
-    std::unique_ptr<ui::EncounterEntryPanel> panel;
-    QStringList questions;
-    bool answer = true;
-    int keys = 0; // keystrokes sent through type()/key()
-
-    Entry()
-    {
-        document.open(ui::toQString(path));
-        panel = std::make_unique<ui::EncounterEntryPanel>(&facade);
-        panel->setDuplicateQuestion([this](const QString& q) {
-            questions << q;
-            return answer;
-        });
-        panel->show();
-        QApplication::setActiveWindow(panel.get());
-        panel->dateEdit()->setDate(QDate(2021, 5, 1));
-        panel->groupBox()->setCurrentText(QStringLiteral("A"));
-        panel->observerBox()->setCurrentText(QStringLiteral("AB"));
-        panel->focusEntry();
-    }
-    QWidget* focus() const { return QApplication::focusWidget() ? QApplication::focusWidget() : panel->timeEdit(); }
-    void type(const QString& text)
-    {
-        QTest::keyClicks(focus(), text);
-        keys += static_cast<int>(text.size());
-    }
-    void key(Qt::Key k)
-    {
-        QTest::keyClick(focus(), k);
-        ++keys;
-    }
-    /// One notebook line as a person types it: time (optional), Tab, winner, Tab, loser, Enter.
-    void line(const QString& time, const QString& winner, const QString& loser)
-    {
-        if (QApplication::focusWidget() == panel->timeEdit()) {
-            if (!time.isEmpty()) type(time);
-            key(Qt::Key_Tab);
-        }
-        type(winner);
-        key(Qt::Key_Tab);
-        type(loser);
-        key(Qt::Key_Return);
-    }
-};
-
-} // namespace
+using namespace hierloom::test;
 
 TEST(EncounterEntry, TabOrderFollowsTheNotebook)
 {
@@ -178,7 +96,7 @@ TEST(EncounterEntry, UnknownAndNonResidentAnimalsAreRefusedBesideTheField)
     QTest::keyClicks(e.panel->loserEdit(), QStringLiteral("F1"));
     EXPECT_EQ(e.panel->fieldMessage("loser"), QStringLiteral("'F1' is also the winner; an encounter needs two animals"));
     // A date in the future.
-    e.panel->dateEdit()->setDate(QDate::currentDate().addDays(2));
+    e.panel->dateEdit()->setText(QDate::currentDate().addDays(2).toString(Qt::ISODate));
     EXPECT_TRUE(e.panel->fieldMessage("date").endsWith(QStringLiteral("is in the future")));
     EXPECT_FALSE(e.panel->commitLine());
     EXPECT_TRUE(inFile(e.path).empty());
@@ -245,6 +163,7 @@ TEST(EncounterEntry, UndoAndRedoOfAnEntryAnEditADeleteAndASession)
     e.line("", "F2", "D2");
     e.line("", "D2", "D1");
     ASSERT_EQ(inFile(e.path).size(), 3u);
+    answerNextBox(Qt::Key_Y); // it asks first, naming the lines
     e.panel->undoWholeSession();
     EXPECT_TRUE(inFile(e.path).empty());
     EXPECT_EQ(e.panel->sessionList()->rowCount(), 0);
@@ -266,7 +185,11 @@ TEST(EncounterEntry, BirthGivesTheNewbornTheMothersMatrilineAndGroup)
     // Only valid candidates: females born before 2021-06-01; M1 (male) is not offered.
     EXPECT_LT(dialog.motherBox()->findData(QStringLiteral("M1")), 0);
     dialog.motherBox()->setCurrentIndex(dialog.motherBox()->findData(QStringLiteral("D2")));
+    QStringList asked;
+    answerNextBox(Qt::Key_Y, &asked);
     dialog.accept();
+    ASSERT_EQ(asked.size(), 1);
+    EXPECT_EQ(asked[0], QStringLiteral("Record the birth of Nia (N1) to Dot (D2) on 2021-06-01?"));
     ASSERT_EQ(dialog.result(), QDialog::Accepted) << dialog.fieldMessage("mother").toStdString();
     const core::Colony colony = core::ColonyStore::open(e.path, core::ColonyStore::Mode::ReadOnly).load();
     const core::Matrilines lines(colony);

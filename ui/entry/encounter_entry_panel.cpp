@@ -5,24 +5,30 @@
 #include "ui/document/colony_document.h"
 #include "ui/document/colony_edit_facade.h"
 #include "ui/document/qt_convert.h"
+#include "ui/entry/entry_words.h"
+#include "ui/entry/session_table.h"
+#include "ui/entry/undo_keys.h"
+#include "ui/widgets/confirm.h"
+#include "ui/widgets/typed_date.h"
 
 #include <QApplication>
 #include <QCheckBox>
 #include <QComboBox>
 #include <QCompleter>
-#include <QDateEdit>
 #include <QGridLayout>
 #include <QHBoxLayout>
 #include <QHeaderView>
 #include <QKeyEvent>
 #include <QLabel>
 #include <QLineEdit>
+#include <QListWidget>
 #include <QMessageBox>
 #include <QPushButton>
 #include <QShortcut>
 #include <QSignalBlocker>
 #include <QStringListModel>
 #include <QTableWidget>
+#include <QUndoStack>
 #include <QVBoxLayout>
 
 #include <algorithm>
@@ -36,7 +42,9 @@ QLabel* infoLabel(QWidget* parent)
     auto* label = new QLabel(parent);
     label->setWordWrap(true);
     label->setTextFormat(Qt::PlainText);
-    label->setMinimumHeight(label->fontMetrics().height() * 2);
+    // Two lines, always: a message never moves the fields, nor widens its column.
+    label->setFixedHeight(label->fontMetrics().lineSpacing() * 2 + 2);
+    label->setSizePolicy(QSizePolicy::Ignored, QSizePolicy::Fixed);
     label->setAlignment(Qt::AlignLeft | Qt::AlignTop);
     return label;
 }
@@ -53,10 +61,6 @@ void showHint(QLabel* label, const QString& text)
     label->setText(text);
 }
 
-// Counts in words; spelled out so the English reads right without a translation file.
-QString lines(int n) { return n == 1 ? EncounterEntryPanel::tr("1 line") : EncounterEntryPanel::tr("%1 lines").arg(n); }
-QString animalsText(int n) { return n == 1 ? EncounterEntryPanel::tr("1 animal") : EncounterEntryPanel::tr("%1 animals").arg(n); }
-QString warningsText(int n) { return n == 1 ? EncounterEntryPanel::tr("1 warning") : EncounterEntryPanel::tr("%1 warnings").arg(n); }
 
 bool isError(const QLabel* label) { return label->styleSheet().contains(QLatin1String("b00020")); }
 
@@ -71,10 +75,9 @@ EncounterEntryPanel::EncounterEntryPanel(ColonyEditFacade* facade, QWidget* pare
     : QWidget(parent),
       facade_(facade),
       document_(facade->document()),
-      askDuplicate_([this](const QString& q) {
-          return QMessageBox::question(this, tr("Possible Duplicate"), q) == QMessageBox::Yes;
-      }),
-      date_(new QDateEdit(QDate::currentDate(), this)),
+      askDuplicate_([this](const QString& q) { return confirm(this, tr("Possible Duplicate"), q, false); }),
+      askUndoSession_([this](const QString& q) { return confirm(this, tr("Undo Whole Session"), q, false); }),
+      date_(new QLineEdit(this)),
       group_(new QComboBox(this)),
       observer_(new QComboBox(this)),
       endButton_(new QPushButton(tr("End &Session"), this)),
@@ -96,10 +99,15 @@ EncounterEntryPanel::EncounterEntryPanel(ColonyEditFacade* facade, QWidget* pare
       count_(new QLabel(this)),
       summary_(new QLabel(this)),
       undoSession_(new QPushButton(tr("&Undo Whole Session"), this)),
-      matcher_(document_)
+      refused_(new QListWidget(this)),
+      undoKeys_(nullptr),
+      matcher_(document_),
+      day_(facade->today())
 {
-    date_->setDisplayFormat(QStringLiteral("yyyy-MM-dd"));
-    date_->setCalendarPopup(true);
+    // A plain field read by parseTypedDate: what is shown is what is stored.
+    date_->setText(formatDay(day_));
+    date_->setPlaceholderText(tr("YYYY-MM-DD"));
+    date_->setMaximumWidth(date_->fontMetrics().horizontalAdvance(QStringLiteral("0000-00-00")) * 2);
     observer_->setEditable(true);
     observer_->setInsertPolicy(QComboBox::NoInsert);
     observer_->setMinimumContentsLength(8);
@@ -117,6 +125,8 @@ EncounterEntryPanel::EncounterEntryPanel(ColonyEditFacade* facade, QWidget* pare
     }
     summary_->setWordWrap(true);
     mode_->setStyleSheet(QStringLiteral("font-weight: bold;"));
+    mode_->setFixedHeight(mode_->fontMetrics().lineSpacing() + 2);
+    refused_->setMaximumHeight(refused_->fontMetrics().lineSpacing() * 4 + 6);
 
     // Session header.
     auto* header = new QHBoxLayout;
@@ -154,14 +164,8 @@ EncounterEntryPanel::EncounterEntryPanel(ColonyEditFacade* facade, QWidget* pare
     line->setColumnStretch(2, 2);
     line->setColumnStretch(5, 4);
 
-    list_->setColumnCount(7);
-    list_->setHorizontalHeaderLabels({tr("Line"), tr("Time"), tr("Winner"), tr("Loser"), tr("Outcome"),
-                                      tr("Behaviour"), tr("Note")});
-    list_->setEditTriggers(QAbstractItemView::NoEditTriggers);
-    list_->setSelectionBehavior(QAbstractItemView::SelectRows);
-    list_->verticalHeader()->hide();
-    list_->horizontalHeader()->setStretchLastSection(true);
-    list_->setAlternatingRowColors(true);
+    setUpSessionTable(list_);
+    list_->setTabKeyNavigation(false); // Tab leaves the table for the refused lines
 
     auto* footer = new QHBoxLayout;
     footer->addWidget(count_, 1);
@@ -176,7 +180,11 @@ EncounterEntryPanel::EncounterEntryPanel(ColonyEditFacade* facade, QWidget* pare
     layout->addWidget(dateInfo_);
     layout->addWidget(mode_);
     layout->addLayout(line);
-    layout->addWidget(new QLabel(tr("This session (each line is saved as it is entered):"), this));
+    auto* refusedLabel = new QLabel(tr("&Refused lines (Enter on one puts it back on the line; Esc clears the line):"), this);
+    refusedLabel->setBuddy(refused_);
+    layout->addWidget(refusedLabel);
+    layout->addWidget(refused_);
+    layout->addWidget(new QLabel(tr("This date and group in the file (each line is saved as it is entered):"), this));
     layout->addWidget(list_, 1);
     layout->addLayout(footer);
     layout->addWidget(summary_);
@@ -190,10 +198,13 @@ EncounterEntryPanel::EncounterEntryPanel(ColonyEditFacade* facade, QWidget* pare
     setTabOrder(draw_, behaviour_);
     setTabOrder(behaviour_, note_);
     setTabOrder(note_, list_);
+    setTabOrder(list_, refused_);
     for (QWidget* w : {static_cast<QWidget*>(time_), static_cast<QWidget*>(winner_), static_cast<QWidget*>(loser_),
                        static_cast<QWidget*>(draw_), static_cast<QWidget*>(behaviour_), static_cast<QWidget*>(note_)})
         w->installEventFilter(this);
     list_->installEventFilter(this);
+    refused_->installEventFilter(this);
+    date_->installEventFilter(this);
     addButton_->setAutoDefault(false);
     endButton_->setAutoDefault(false);
     endButton_->setFocusPolicy(Qt::NoFocus); // Alt+S; keeps Tab going from the header straight to the line
@@ -207,24 +218,53 @@ EncounterEntryPanel::EncounterEntryPanel(ColonyEditFacade* facade, QWidget* pare
     connect(deleteButton, &QPushButton::clicked, this, &EncounterEntryPanel::deleteSelectedRows);
     connect(undoSession_, &QPushButton::clicked, this, &EncounterEntryPanel::undoWholeSession);
     connect(list_, &QTableWidget::cellDoubleClicked, this, &EncounterEntryPanel::editSelectedRow);
-    connect(date_, &QDateEdit::dateChanged, this, &EncounterEntryPanel::headerChanged);
+    connect(date_, &QLineEdit::textChanged, this, &EncounterEntryPanel::dateTyped);
     connect(group_, &QComboBox::currentTextChanged, this, &EncounterEntryPanel::headerChanged);
     connect(observer_, &QComboBox::currentTextChanged, this, &EncounterEntryPanel::headerChanged);
     connect(winner_, &QLineEdit::textChanged, this, [this] { checkAnimalField(winner_, winnerInfo_); });
     connect(loser_, &QLineEdit::textChanged, this, [this] { checkAnimalField(loser_, loserInfo_); });
     connect(time_, &QLineEdit::textChanged, this, &EncounterEntryPanel::checkTime);
-    connect(document_, &ColonyDocument::changed, this, [this](ColonyDocument::ChangeKind kind) {
-        // Encounter and settings changes leave the groups, residents and lists as they were.
-        using Kind = ColonyDocument::ChangeKind;
-        if (kind != Kind::EncountersAppended && kind != Kind::EncountersChanged && kind != Kind::SettingsChanged)
-            refreshChoices();
-        refreshList();
-    });
-    refreshChoices();
+    connect(document_, &ColonyDocument::changed, this, &EncounterEntryPanel::documentChanged);
+    undoKeys_ = new UndoKeys(this, document_->undoStack());
+    documentChanged();
+}
+
+void EncounterEntryPanel::documentChanged()
+{
+    // Another file, or the same one closed and opened again: a new session.
+    const QString path = document_->isOpen() ? document_->path() : QString();
+    if (path != openPath_) {
+        openPath_ = path;
+        resetSession();
+    }
+    // Encounter and settings changes leave the groups, residents and lists as they were.
+    const auto kind = document_->lastChange().kind;
+    if (kind == ColonyDocument::ChangeKind::EncountersAppended && dayIndexValid_) {
+        // Appended rows come last: only they need looking at.
+        const auto& all = document_->colony().encounters;
+        const std::string group = toStdString(group_->currentText());
+        for (size_t i = document_->lastChange().firstAppended; i < all.size(); ++i)
+            if (all[i].date == day_ && all[i].group == group) dayIndex_.push_back(i);
+    } else {
+        dayIndexValid_ = false;
+    }
+    if (kind != ColonyDocument::ChangeKind::EncountersAppended && kind != ColonyDocument::ChangeKind::EncountersChanged &&
+        kind != ColonyDocument::ChangeKind::SettingsChanged)
+        refreshChoices();
     refreshList();
 }
 
-core::Day EncounterEntryPanel::sessionDay() const { return toDay(date_->date()); }
+void EncounterEntryPanel::resetSession()
+{
+    summary_->clear();
+    sessionUids_.clear();
+    warned_.clear();
+    refused_->clear();
+    refusals_ = 0;
+    editing_.reset();
+    mode_->clear();
+    clearLine();
+}
 
 void EncounterEntryPanel::refreshChoices()
 {
@@ -265,8 +305,11 @@ void EncounterEntryPanel::refreshResidents()
 void EncounterEntryPanel::headerChanged()
 {
     // A new date, group or observer is a new notebook page: close the session.
+    // (A new date closed it under its own date before it took over, in dateTyped.)
     if (sessionRowCount() > 0) endSession();
+    dayIndexValid_ = false;
     refreshResidents();
+    refreshList();
     checkDate();
     checkAnimalField(winner_, winnerInfo_);
     checkAnimalField(loser_, loserInfo_);
@@ -322,9 +365,30 @@ void EncounterEntryPanel::checkTime()
     else timeInfo_->clear();
 }
 
+void EncounterEntryPanel::dateTyped()
+{
+    const auto day = parseTypedDate(date_->text());
+    dateValid_ = day.has_value();
+    if (!day) {
+        showError(dateInfo_, typedDateProblem(date_->text()));
+        return;
+    }
+    if (*day == day_) {
+        checkDate();
+        return;
+    }
+    // Close the session under its own date before the new one takes over.
+    if (sessionRowCount() > 0) endSession();
+    day_ = *day;
+    dayIndexValid_ = false;
+    headerChanged();
+}
+
 void EncounterEntryPanel::checkDate()
 {
-    if (sessionDay() > facade_->today())
+    if (!dateValid_)
+        showError(dateInfo_, typedDateProblem(date_->text()));
+    else if (sessionDay() > facade_->today())
         showError(dateInfo_, toQString("'" + core::formatDate(sessionDay()) + "' is in the future"));
     else if (document_->isOpen() && group_->count() == 0)
         showHint(dateInfo_, tr("The colony has no groups yet: add animals first."));
@@ -344,15 +408,26 @@ void EncounterEntryPanel::showProblems(const core::FieldProblems& problems)
         QLabel* target = p.field == "winner" ? winnerInfo_
                          : p.field == "loser" ? loserInfo_
                          : p.field == "time"  ? timeInfo_
-                         : p.field == "date"  ? dateInfo_
+                         : p.field == "date" || p.field == "observer" ? dateInfo_
                                               : lineInfo_;
-        showError(target, toQString(p.field == "group" || p.field.empty() ? p.message : p.message));
+        showError(target, toQString(p.message));
     }
+    if (problems.empty()) return;
+    // The cursor goes to the field at fault, so the fix is typed where it belongs.
+    const std::string& f = problems.front().field;
+    QWidget* fault = f == "time" ? static_cast<QWidget*>(time_)
+                     : f == "loser" ? static_cast<QWidget*>(loser_)
+                     : f == "date" ? static_cast<QWidget*>(date_)
+                     : f == "observer" ? static_cast<QWidget*>(observer_)
+                     : f == "behaviour" ? static_cast<QWidget*>(behaviour_)
+                                        : static_cast<QWidget*>(winner_);
+    fault->setFocus();
+    if (auto* edit = qobject_cast<QLineEdit*>(fault)) edit->selectAll();
 }
 
 QString EncounterEntryPanel::fieldMessage(const QString& field) const
 {
-    const QLabel* label = field == QLatin1String("date")     ? dateInfo_
+    const QLabel* label = field == QLatin1String("date") || field == QLatin1String("observer") ? dateInfo_
                           : field == QLatin1String("time")   ? timeInfo_
                           : field == QLatin1String("winner") ? winnerInfo_
                           : field == QLatin1String("loser")  ? loserInfo_
@@ -378,6 +453,9 @@ bool EncounterEntryPanel::commitLine()
     e.note = toStdString(note_->text().trimmed());
 
     core::FieldProblems problems;
+    if (!dateValid_) problems.push_back({"date", toStdString(typedDateProblem(date_->text()))});
+    if (e.observer.empty() && !editing_)
+        problems.push_back({"observer", toStdString(tr("Choose the observer (or type 'unknown'); a line needs one"))});
     if (badTime) problems.push_back({"time", toStdString(tr("'%1' is not a time of day in the form HH:MM (24 h)").arg(time_->text().trimmed()))});
     if (w.partial) problems.push_back({"winner", toStdString(*w.error)});
     if (l.partial) problems.push_back({"loser", toStdString(*l.error)});
@@ -388,20 +466,19 @@ bool EncounterEntryPanel::commitLine()
                 problems.push_back({field, *m});
     if (problems.empty()) problems = facade_->checkEncounter(e);
     if (!problems.empty()) {
-        clearMessages();
-        showProblems(problems);
-        ++refusals_;
+        refuse(problems);
         return false;
     }
 
-    // Same pair at the same time in this session: probably entered twice.
+    // Same pair at the same time on this day, in this session or earlier: probably entered twice.
     bool warned = false;
-    for (const core::Encounter* row : sessionRows()) {
-        if (editing_ && row->seq == editing_->seq) continue;
+    for (const core::Encounter* row : dayRows()) {
+        if (editing_ && row->uid == editing_->uid) continue;
         if (samePairKey(row->winner, row->loser) == samePairKey(e.winner, e.loser) && row->time == e.time) {
             const QString when = e.time ? tr("at %1").arg(toQString(core::formatTimeOfDay(*e.time))) : tr("without a time");
-            if (!askDuplicate_(tr("%1 and %2 %3 are already in this session. Save this line as another encounter?")
-                                   .arg(toQString(e.winner), toQString(e.loser), when))) {
+            const QString where = sessionUids_.count(row->uid) ? tr("in this session") : tr("in the file for this day");
+            if (!askDuplicate_(tr("%1 and %2 %3 are already %4. Save this line as another encounter?")
+                                   .arg(toQString(e.winner), toQString(e.loser), when, where))) {
                 showError(lineInfo_, tr("Not saved: a possible duplicate."));
                 return false;
             }
@@ -418,13 +495,17 @@ bool EncounterEntryPanel::commitLine()
         written = facade_->editEncounter(e);
     } else {
         written = facade_->addEncounter(e);
-        if (written.empty()) sessionSeqs_.push_back(e.seq);
+        if (written.empty()) sessionUids_.insert(e.uid);
     }
     if (!written.empty()) {
-        showProblems(written);
+        refuse(written);
         return false;
     }
-    if (warned) warned_.insert(e.seq);
+    if (warned) warned_.insert(e.uid);
+    // A refused line saved once its fault was fixed (the observer, the date) leaves the refused list.
+    const QStringList saved = typedFields();
+    for (int i = refused_->count() - 1; i >= 0; --i)
+        if (refused_->item(i)->data(Qt::UserRole).toStringList() == saved) delete refused_->takeItem(i);
     const bool hadTime = e.time.has_value();
     editing_.reset();
     mode_->clear();
@@ -456,145 +537,6 @@ void EncounterEntryPanel::showEvent(QShowEvent* event)
     QWidget::showEvent(event);
     // Coming to this tab means typing a notebook: start on the entry line.
     if (!isAncestorOf(QApplication::focusWidget())) focusEntry();
-}
-
-std::vector<const core::Encounter*> EncounterEntryPanel::sessionRows() const
-{
-    // The cache is in seq order: each session row is found by binary search.
-    std::vector<const core::Encounter*> out;
-    const auto& cache = document_->colony().encounters;
-    for (std::int64_t seq : sessionSeqs_) {
-        auto it = std::lower_bound(cache.begin(), cache.end(), seq,
-                                   [](const core::Encounter& e, std::int64_t s) { return e.seq < s; });
-        if (it != cache.end() && it->seq == seq) out.push_back(&*it);
-    }
-    return out;
-}
-
-int EncounterEntryPanel::sessionRowCount() const { return static_cast<int>(sessionRows().size()); }
-
-void EncounterEntryPanel::refreshList()
-{
-    const auto rows = sessionRows();
-    list_->setRowCount(static_cast<int>(rows.size()));
-    std::set<std::string> animals;
-    int warnings = 0;
-    for (int r = 0; r < static_cast<int>(rows.size()); ++r) {
-        const core::Encounter& e = *rows[static_cast<size_t>(r)];
-        const QStringList cells{QString::number(r + 1),
-                                e.time ? toQString(core::formatTimeOfDay(*e.time)) : QString(),
-                                toQString(e.winner),
-                                toQString(e.loser),
-                                e.outcome == core::Outcome::Draw ? tr("draw") : tr("decided"),
-                                toQString(e.behaviour),
-                                toQString(e.note)};
-        for (int c = 0; c < cells.size(); ++c) {
-            auto* item = new QTableWidgetItem(cells[c]);
-            item->setData(Qt::UserRole, QVariant::fromValue<qlonglong>(e.seq));
-            list_->setItem(r, c, item);
-        }
-        animals.insert(e.winner);
-        animals.insert(e.loser);
-        warnings += warned_.count(e.seq) ? 1 : 0;
-    }
-    if (!rows.empty()) list_->scrollToBottom();
-    count_->setText(lines(static_cast<int>(rows.size())) + QStringLiteral(" · ") +
-                    animalsText(static_cast<int>(animals.size())) + QStringLiteral(" · ") +
-                    warningsText(warnings + refusals_));
-    undoSession_->setEnabled(!rows.empty());
-}
-
-QString EncounterEntryPanel::countText() const { return count_->text(); }
-
-QString EncounterEntryPanel::summaryText() const { return summary_->text(); }
-
-void EncounterEntryPanel::editSelectedRow()
-{
-    const int row = list_->currentRow();
-    const auto rows = sessionRows();
-    if (row < 0 || row >= static_cast<int>(rows.size())) return;
-    const core::Encounter& e = *rows[static_cast<size_t>(row)];
-    editing_ = e;
-    time_->setText(e.time ? toQString(core::formatTimeOfDay(*e.time)) : QString());
-    winner_->setText(toQString(e.winner));
-    loser_->setText(toQString(e.loser));
-    draw_->setChecked(e.outcome == core::Outcome::Draw);
-    behaviour_->setCurrentText(toQString(e.behaviour));
-    note_->setText(toQString(e.note));
-    mode_->setText(tr("Changing line %1: Enter saves it, Esc cancels.").arg(row + 1));
-    time_->setFocus();
-}
-
-void EncounterEntryPanel::deleteSelectedRows()
-{
-    const auto rows = sessionRows();
-    std::vector<core::Encounter> gone;
-    for (const QModelIndex& index : list_->selectionModel()->selectedRows())
-        if (index.row() < static_cast<int>(rows.size())) gone.push_back(*rows[static_cast<size_t>(index.row())]);
-    if (gone.empty()) return;
-    const auto problems = facade_->deleteEncounters(gone);
-    if (!problems.empty()) showProblems(problems);
-}
-
-void EncounterEntryPanel::undoWholeSession()
-{
-    std::vector<core::Encounter> all;
-    for (const core::Encounter* e : sessionRows()) all.push_back(*e);
-    if (all.empty()) return;
-    const auto problems = facade_->deleteEncounters(
-        all, tr("Take back the session of %1 (%2)").arg(date_->date().toString(Qt::ISODate), lines(static_cast<int>(all.size()))));
-    if (!problems.empty()) showProblems(problems);
-    focusEntry();
-}
-
-void EncounterEntryPanel::endSession()
-{
-    const auto rows = sessionRows();
-    std::set<std::string> animals;
-    int warnings = 0;
-    for (const core::Encounter* e : rows) {
-        animals.insert(e->winner);
-        animals.insert(e->loser);
-        warnings += warned_.count(e->seq) ? 1 : 0;
-    }
-    summary_->setText(tr("Session ended: %1, group %2, observer %3: %4, %5, %6.")
-                          .arg(date_->date().toString(Qt::ISODate), group_->currentText(),
-                               observer_->currentText().isEmpty() ? tr("(none)") : observer_->currentText(),
-                               lines(static_cast<int>(rows.size())),
-                               animalsText(static_cast<int>(animals.size())),
-                               warningsText(warnings + refusals_)));
-    sessionSeqs_.clear();
-    warned_.clear();
-    refusals_ = 0;
-    editing_.reset();
-    mode_->clear();
-    refreshList();
-}
-
-bool EncounterEntryPanel::eventFilter(QObject* watched, QEvent* event)
-{
-    if (event->type() != QEvent::KeyPress) return QWidget::eventFilter(watched, event);
-    const auto* key = static_cast<QKeyEvent*>(event);
-    if (watched == list_) {
-        if (key->key() == Qt::Key_Delete || key->key() == Qt::Key_Backspace) {
-            deleteSelectedRows();
-            return true;
-        }
-        if (key->key() == Qt::Key_F2 || key->key() == Qt::Key_Return || key->key() == Qt::Key_Enter) {
-            editSelectedRow();
-            return true;
-        }
-        return QWidget::eventFilter(watched, event);
-    }
-    if ((key->key() == Qt::Key_Return || key->key() == Qt::Key_Enter) && key->modifiers() == Qt::NoModifier) {
-        commitLine();
-        return true;
-    }
-    if (key->key() == Qt::Key_Escape && key->modifiers() == Qt::NoModifier && editing_) {
-        cancelEdit();
-        return true;
-    }
-    return QWidget::eventFilter(watched, event);
 }
 
 } // namespace hierloom::ui

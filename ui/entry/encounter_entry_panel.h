@@ -15,9 +15,9 @@
 class QCheckBox;
 class QComboBox;
 class QCompleter;
-class QDateEdit;
 class QLabel;
 class QLineEdit;
+class QListWidget;
 class QPushButton;
 class QStringListModel;
 class QTableWidget;
@@ -26,14 +26,18 @@ namespace hierloom::ui {
 
 class ColonyDocument;
 class ColonyEditFacade;
+class UndoKeys;
 
 /// Evening entry of one observer's notebook: a session header (date, group,
 /// observer) chosen once, then one line per encounter in the notebook's order
 /// (time, winner, loser, draw, behaviour, note). Enter commits the line through
 /// the edit facade, so it is in the file at once; ids complete from the
 /// animals resident in the group that day, and mistakes are shown beside the
-/// field as they are typed. The session list below can be edited (F2), rows
-/// deleted (Del) and the whole session taken back in one undoable step.
+/// field as they are typed. The table below mirrors the file: every line of
+/// the date and group, earlier ones marked; rows can be edited (F2), deleted
+/// (Del) and this session's lines taken back in one undoable step. Refused
+/// lines are listed and can be put back on the line; Ctrl+Z / Ctrl+Shift+Z
+/// undo and redo whole lines from any field (ui/entry/undo_keys.h).
 class EncounterEntryPanel : public QWidget {
     Q_OBJECT
 public:
@@ -42,6 +46,8 @@ public:
     /// Asks whether to save a possible duplicate; tests replace the modal question.
     using Question = std::function<bool(const QString& question)>;
     void setDuplicateQuestion(Question question) { askDuplicate_ = std::move(question); }
+    /// Asks before taking back the whole session.
+    void setUndoSessionQuestion(Question question) { askUndoSession_ = std::move(question); }
 
     /// Commits the entry line (what Enter does); false when refused or declined.
     bool commitLine();
@@ -49,21 +55,23 @@ public:
     void editSelectedRow();
     /// Deletes the selected session rows (Del).
     void deleteSelectedRows();
-    /// Removes every row of this session as one undoable step.
+    /// Removes every row of this session as one undoable step, after asking.
     void undoWholeSession();
     /// Closes the session: shows its summary and starts an empty one.
     void endSession();
     /// Puts the keyboard focus on the first field of the entry line.
     void focusEntry();
 
-    /// The message shown beside a field ("date", "time", "winner", "loser", "line"), or empty.
+    /// The message shown beside a field ("date", "observer", "time", "winner", "loser", "line"), or empty.
     QString fieldMessage(const QString& field) const;
-    /// Rows of the session now in the file.
+    /// Lines entered in this session that are now in the file.
     int sessionRowCount() const;
+    /// The day lines are stored under (the last valid date typed).
+    core::Day sessionDay() const { return day_; }
     QString countText() const;
     QString summaryText() const;
 
-    QDateEdit* dateEdit() const { return date_; }
+    QLineEdit* dateEdit() const { return date_; }
     QComboBox* groupBox() const { return group_; }
     QComboBox* observerBox() const { return observer_; }
     QLineEdit* timeEdit() const { return time_; }
@@ -73,6 +81,7 @@ public:
     QComboBox* behaviourBox() const { return behaviour_; }
     QLineEdit* noteEdit() const { return note_; }
     QTableWidget* sessionList() const { return list_; }
+    QListWidget* refusedList() const { return refused_; }
 
 protected:
     bool eventFilter(QObject* watched, QEvent* event) override;
@@ -85,24 +94,33 @@ private:
     void headerChanged();
     void checkAnimalField(QLineEdit* edit, QLabel* info);
     void checkTime();
+    void dateTyped();
     void checkDate();
+    void documentChanged();
+    void resetSession();
     void showProblems(const core::FieldProblems& problems);
+    void refuse(const core::FieldProblems& problems);
+    void recallRefused();
+    /// The entry line as typed: time, winner, loser, draw, behaviour, note.
+    QStringList typedFields() const;
     void clearMessages();
     void clearLine();
     void cancelEdit();
     std::optional<int> parsedTime(bool& bad) const;
+    /// Every line in the file for the session's date and group, in entry order.
+    std::vector<const core::Encounter*> dayRows() const;
     std::vector<const core::Encounter*> sessionRows() const;
-    core::Day sessionDay() const;
 
     ColonyEditFacade* facade_;
     ColonyDocument* document_;
     Question askDuplicate_;
+    Question askUndoSession_;
 
-    QDateEdit* date_;
+    QLineEdit* date_;
     QComboBox* group_;
     QComboBox* observer_;
     QPushButton* endButton_;
-    QLabel* dateInfo_;
+    QLabel* dateInfo_; // messages of the header: date, observer, group
     QLineEdit* time_;
     QLineEdit* winner_;
     QLineEdit* loser_;
@@ -120,10 +138,19 @@ private:
     QLabel* count_;
     QLabel* summary_;
     QPushButton* undoSession_;
+    QListWidget* refused_;
+    UndoKeys* undoKeys_;
 
     AnimalMatcher matcher_;
-    std::vector<std::int64_t> sessionSeqs_;  // rows entered in this session (kept when undone, for redo)
-    std::set<std::int64_t> warned_;          // rows saved despite a duplicate warning
+    // Positions in the document's encounters of the date and group's lines, kept
+    // up to date on appends so Enter does not scan a million rows.
+    mutable std::vector<size_t> dayIndex_;
+    mutable bool dayIndexValid_ = false;
+    core::Day day_ = 0;                      // the session's date, as stored and shown
+    bool dateValid_ = true;                  // false while the date field holds no real date
+    QString openPath_;                       // the file the session belongs to
+    std::set<std::string> sessionUids_;      // lines entered in this session (kept when undone, for redo)
+    std::set<std::string> warned_;           // lines saved despite a duplicate warning
     std::optional<core::Encounter> editing_; // the row being changed, if any
     int refusals_ = 0;                       // lines refused in this session
 };

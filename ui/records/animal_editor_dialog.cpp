@@ -5,6 +5,10 @@
 #include "ui/document/colony_document.h"
 #include "ui/document/colony_edit_facade.h"
 #include "ui/document/qt_convert.h"
+#include "ui/records/animal_summary.h"
+#include "ui/widgets/caution_label.h"
+#include "ui/widgets/confirm.h"
+#include "ui/widgets/typed_date.h"
 
 #include <QComboBox>
 #include <QCompleter>
@@ -37,14 +41,6 @@ QLineEdit* newDateEdit(QWidget* parent)
 
 QString dayText(const std::optional<core::Day>& d) { return d ? formatDay(*d) : QString(); }
 
-QStringList groupNames(const ColonyDocument* document)
-{
-    QStringList out;
-    for (const std::string& g : document->residences().groups()) out << toQString(g);
-    out.sort();
-    return out;
-}
-
 } // namespace
 
 AnimalEditorDialog::AnimalEditorDialog(ColonyEditFacade* facade, Mode mode, QWidget* parent)
@@ -63,6 +59,7 @@ AnimalEditorDialog::AnimalEditorDialog(ColonyEditFacade* facade, Mode mode, QWid
       exit_(newDateEdit(this)),
       exitType_(new QComboBox(this)),
       general_(messageLabel(this)),
+      motherInfo_(new QLabel(this)),
       form_(new QFormLayout)
 {
     const QStringList titles{tr("Add Animal"), tr("Edit Animal"), tr("Record Birth"), tr("Record Introduction")};
@@ -77,15 +74,20 @@ AnimalEditorDialog::AnimalEditorDialog(ColonyEditFacade* facade, Mode mode, QWid
     exitType_->addItem(tr("(still present)"), QString());
     exitType_->addItem(tr("died"), QStringLiteral("died"));
     exitType_->addItem(tr("removed"), QStringLiteral("removed"));
+    // Groups are chosen from the colony's; a new name is confirmed on its own (confirmGroup).
     group_->setEditable(true);
+    group_->setInsertPolicy(QComboBox::NoInsert);
+    group_->addItem(QString());
     group_->addItems(groupNames(facade_->document()));
     group_->setCurrentText(QString());
+    mother_->setEditable(false);
 
     addRow(tr("&Id:"), id_, QStringLiteral("id"));
     addRow(tr("&Name:"), name_, QStringLiteral("name"));
     addRow(tr("&Sex:"), sex_, QStringLiteral("sex"));
     addRow(mode == Mode::Birth ? tr("&Born on:") : tr("&Birth date:"), birth_, QStringLiteral("birth_date"));
     addRow(tr("&Mother:"), mother_, QStringLiteral("mother"));
+    if (mode == Mode::Birth) form_->addRow(QString(), motherInfo_);
     addRow(tr("&Father:"), father_, QStringLiteral("father"));
     if (mode == Mode::Add || mode == Mode::Edit || mode == Mode::Introduction)
         addRow(mode == Mode::Introduction ? tr("&Introduced on:") : tr("&Entry date:"), entry_, QStringLiteral("entry_date"));
@@ -104,28 +106,55 @@ AnimalEditorDialog::AnimalEditorDialog(ColonyEditFacade* facade, Mode mode, QWid
             if (toStdString(id_->text()) != loaded_.id) loadAnimal(id_->text());
         });
     }
-    if (mode == Mode::Birth) {
-        auto* note = new QLabel(tr("The newborn lives in the group its mother was in on that day."), this);
-        note->setWordWrap(true);
-        form_->addRow(note);
-    }
+    // Fields this mode does not use are hidden: left unplaced they sat over the
+    // top of the form (Record Birth showed one across "Id:").
+    for (QWidget* field : std::initializer_list<QWidget*>{entry_, entryType_, group_, exit_, exitType_})
+        if (form_->indexOf(field->parentWidget()) < 0) field->hide();
+    motherInfo_->setTextFormat(Qt::PlainText);
+    motherInfo_->setWordWrap(true);
+    if (mode != Mode::Birth) motherInfo_->hide();
 
     auto* buttons = new QDialogButtonBox(QDialogButtonBox::Ok | QDialogButtonBox::Cancel, this);
     connect(buttons, &QDialogButtonBox::accepted, this, &AnimalEditorDialog::accept);
     connect(buttons, &QDialogButtonBox::rejected, this, &QDialog::reject);
     auto* layout = new QVBoxLayout(this);
+    if (mode == Mode::Birth)
+        layout->addWidget(new QLabel(tr("The newborn lives in the group its mother was in on that day."), this));
     layout->addLayout(form_);
+    // An introduction changes who is in the group: the planning caution applies.
+    if (mode == Mode::Introduction) layout->addWidget(makeCautionLabel(this));
     layout->addWidget(general_);
     layout->addWidget(buttons);
 
     connect(birth_, &QLineEdit::textChanged, this, &AnimalEditorDialog::refillParents);
     connect(id_, &QLineEdit::textChanged, this, &AnimalEditorDialog::refillParents);
+    connect(mother_, &QComboBox::currentIndexChanged, this, &AnimalEditorDialog::updateMotherInfo);
+    connect(birth_, &QLineEdit::textChanged, this, &AnimalEditorDialog::updateMotherInfo);
     refillParents();
     if (mode == Mode::Birth) {
         birth_->setText(formatDay(facade_->today()));
         entryType_->setCurrentIndex(1);
     }
     if (mode == Mode::Introduction) entryType_->setCurrentIndex(2);
+    updateMotherInfo();
+}
+
+void AnimalEditorDialog::startFrom(const QString& id)
+{
+    // A birth starts from the selected animal as the mother, when she can be one.
+    if (mode_ == Mode::Birth) {
+        const int i = mother_->findData(id);
+        if (i >= 0) mother_->setCurrentIndex(i);
+    } else if (mode_ == Mode::Edit && !id.isEmpty()) {
+        loadAnimal(id);
+    }
+}
+
+void AnimalEditorDialog::updateMotherInfo()
+{
+    const std::string mother = toStdString(mother_->currentData().toString());
+    const core::Day day = parseTypedDate(birth_->text()).value_or(facade_->today());
+    motherInfo_->setText(mother.empty() ? tr("No mother chosen.") : describeAnimal(facade_->document(), mother, day));
 }
 
 void AnimalEditorDialog::addRow(const QString& label, QWidget* field, const QString& key)
@@ -191,7 +220,7 @@ std::optional<core::Day> AnimalEditorDialog::dateOf(QLineEdit* edit, const char*
 {
     const QString text = edit->text().trimmed();
     if (text.isEmpty()) return std::nullopt;
-    const auto d = core::parseDate(toStdString(text));
+    const auto d = parseTypedDate(text);
     if (!d) problems.push_back({field, "'" + toStdString(text) + "' is not a real date in the form YYYY-MM-DD"});
     return d;
 }
@@ -207,10 +236,26 @@ void AnimalEditorDialog::show(const core::FieldProblems& problems)
     }
 }
 
+QString AnimalEditorDialog::motherText() const { return motherInfo_->text(); }
+
 QString AnimalEditorDialog::fieldMessage(const QString& field) const
 {
     const QLabel* l = messages_.value(field, general_);
     return !l->isHidden() ? l->text() : QString();
+}
+
+bool AnimalEditorDialog::confirmEvent(const core::Animal& a, const QString& group)
+{
+    // Life-history events name themselves before they are written.
+    const QString who = a.name.empty() ? toQString(a.id) : toQString(a.name) + QStringLiteral(" (") + toQString(a.id) + ')';
+    if (mode_ == Mode::Birth) {
+        const QString mother = a.mother.empty() ? tr("an unknown mother") : nameAndId(facade_->document(), a.mother);
+        return confirm(this, windowTitle(), tr("Record the birth of %1 to %2 on %3?").arg(who, mother, dayText(a.birth)), false);
+    }
+    if (mode_ == Mode::Introduction)
+        return confirm(this, windowTitle(),
+                       tr("Record the introduction of %1 into group %2 on %3?").arg(who, group, dayText(a.entry)), false);
+    return true;
 }
 
 void AnimalEditorDialog::accept()
@@ -230,8 +275,15 @@ void AnimalEditorDialog::accept()
         a.exit = dateOf(exit_, "exit_date", problems);
         a.exitType = core::parseExitType(toStdString(exitType_->currentData().toString())).value_or(core::ExitType::None);
     }
+    const QString groupText = group_->currentText().trimmed();
+    if (problems.empty() && (mode_ == Mode::Add || mode_ == Mode::Introduction) &&
+        !confirmGroup(this, facade_->document(), groupText)) {
+        group_->setFocus();
+        return;
+    }
+    if (problems.empty() && !confirmEvent(a, groupText)) return;
     if (problems.empty()) {
-        const std::string group = toStdString(group_->currentText().trimmed());
+        const std::string group = toStdString(groupText);
         switch (mode_) {
         case Mode::Add: problems = facade_->addAnimal(a, group); break;
         case Mode::Edit: problems = facade_->editAnimal(a); break;
@@ -241,65 +293,6 @@ void AnimalEditorDialog::accept()
     }
     show(problems);
     if (problems.empty()) QDialog::accept();
-}
-
-LifeEventDialog::LifeEventDialog(ColonyEditFacade* facade, Event event, QWidget* parent)
-    : QDialog(parent),
-      facade_(facade),
-      event_(event),
-      animal_(new QComboBox(this)),
-      date_(newDateEdit(this)),
-      group_(new QComboBox(this)),
-      message_(messageLabel(this))
-{
-    const QStringList titles{tr("Record Death"), tr("Record Removal"), tr("Move Between Groups")};
-    setWindowTitle(titles[static_cast<int>(event)]);
-    // Only animals still in the colony can die, leave or move.
-    for (const core::Animal& a : facade_->document()->colony().animals)
-        if (!a.exit) animal_->addItem(toQString(a.id));
-    animal_->setEditable(true);
-    animal_->setInsertPolicy(QComboBox::NoInsert);
-    date_->setText(formatDay(facade_->today()));
-    group_->setEditable(true);
-    group_->addItems(groupNames(facade_->document()));
-    auto* form = new QFormLayout;
-    auto row = [&](const QString& text, QWidget* w) {
-        auto* l = new QLabel(text, this);
-        l->setBuddy(w);
-        form->addRow(l, w);
-    };
-    row(tr("&Animal:"), animal_);
-    row(tr("&Date:"), date_);
-    if (event == Event::Move) row(tr("To &group:"), group_);
-    else group_->hide();
-    auto* buttons = new QDialogButtonBox(QDialogButtonBox::Ok | QDialogButtonBox::Cancel, this);
-    connect(buttons, &QDialogButtonBox::accepted, this, &LifeEventDialog::accept);
-    connect(buttons, &QDialogButtonBox::rejected, this, &QDialog::reject);
-    auto* layout = new QVBoxLayout(this);
-    layout->addLayout(form);
-    layout->addWidget(message_);
-    layout->addWidget(buttons);
-}
-
-QString LifeEventDialog::message() const { return !message_->isHidden() ? message_->text() : QString(); }
-
-void LifeEventDialog::accept()
-{
-    const std::string id = toStdString(animal_->currentText().trimmed());
-    const QString text = date_->text().trimmed();
-    const auto day = core::parseDate(toStdString(text));
-    core::FieldProblems problems;
-    if (!day) problems.push_back({"date", "'" + toStdString(text) + "' is not a real date in the form YYYY-MM-DD"});
-    else if (event_ == Event::Move) problems = facade_->moveAnimal(id, toStdString(group_->currentText().trimmed()), *day);
-    else problems = facade_->recordExit(id, *day, event_ == Event::Death ? core::ExitType::Died : core::ExitType::Removed);
-    if (problems.empty()) {
-        QDialog::accept();
-        return;
-    }
-    QStringList lines;
-    for (const auto& p : problems) lines << toQString(p.field.empty() ? p.message : p.field + ": " + p.message);
-    message_->setText(lines.join('\n'));
-    message_->show();
 }
 
 } // namespace hierloom::ui

@@ -18,7 +18,9 @@ class ColonyEditFacade;
 /// Adds or edits one animal, records a birth or an introduction, through the
 /// edit facade (each undoable). Mother and father are offered only among valid
 /// candidates (females, resp. males, born before the animal); problems appear
-/// beside their field in the import's words and the dialog stays open.
+/// beside their field in the import's words and the dialog stays open. A birth
+/// or an introduction is confirmed by name before it is written; a group name
+/// not in the colony needs its own confirmation.
 class AnimalEditorDialog : public QDialog {
     Q_OBJECT
 public:
@@ -27,6 +29,10 @@ public:
 
     /// Edit mode: loads an animal by id.
     void loadAnimal(const QString& id);
+    /// Starts from the animal selected in a view: the mother of a birth, the animal to edit.
+    void startFrom(const QString& id);
+    /// Who the chosen mother is (Birth): name, id, sex, age, group.
+    QString motherText() const;
     /// Saves through the facade; closes on success, else shows the problems.
     void accept() override;
 
@@ -47,6 +53,8 @@ private:
     void addRow(const QString& label, QWidget* field, const QString& key);
     std::optional<core::Day> dateOf(QLineEdit* edit, const char* field, core::FieldProblems& problems) const;
     void show(const core::FieldProblems& problems);
+    void updateMotherInfo();
+    bool confirmEvent(const core::Animal& a, const QString& group);
 
     ColonyEditFacade* facade_;
     Mode mode_;
@@ -64,30 +72,9 @@ private:
     QLineEdit* exit_;
     QComboBox* exitType_;
     QLabel* general_;
+    QLabel* motherInfo_;
     QMap<QString, QLabel*> messages_;
     QFormLayout* form_;
-};
-
-/// A death, a removal or a move between groups of one animal, through the edit facade.
-class LifeEventDialog : public QDialog {
-    Q_OBJECT
-public:
-    enum class Event { Death, Removal, Move };
-    LifeEventDialog(ColonyEditFacade* facade, Event event, QWidget* parent = nullptr);
-    void accept() override;
-
-    QComboBox* animalBox() const { return animal_; }
-    QLineEdit* dateEdit() const { return date_; }
-    QComboBox* groupBox() const { return group_; }
-    QString message() const;
-
-private:
-    ColonyEditFacade* facade_;
-    Event event_;
-    QComboBox* animal_;
-    QLineEdit* date_;
-    QComboBox* group_;
-    QLabel* message_;
 };
 
 } // namespace hierloom::ui

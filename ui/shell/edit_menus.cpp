@@ -2,6 +2,9 @@
 #include "ui/shell/edit_menus.h"
 
 #include "ui/records/animal_editor_dialog.h"
+#include "ui/records/animal_table_model.h"
+#include "ui/records/animal_view.h"
+#include "ui/records/life_event_dialog.h"
 #include "ui/document/colony_document.h"
 #include "ui/document/colony_edit_facade.h"
 #include "ui/records/list_editor_dialog.h"
@@ -10,9 +13,33 @@
 #include <QMainWindow>
 #include <QMenu>
 #include <QMenuBar>
+#include <QItemSelectionModel>
+#include <QTableView>
 #include <QUndoStack>
 
 namespace hierloom::ui {
+
+namespace {
+
+template <typename Dialog, typename Kind>
+void runDialog(ColonyEditFacade* facade, Kind kind, const QString& animal, QWidget* parent)
+{
+    Dialog dialog(facade, kind, parent);
+    dialog.startFrom(animal);
+    dialog.exec();
+}
+
+} // namespace
+
+QString EditMenus::selectedAnimal() const
+{
+    // The animal selected in the Animals view, if one is; the dialogs start from it.
+    const auto* view = window_->findChild<AnimalView*>();
+    if (!view || !view->table()->selectionModel()) return {};
+    const QModelIndexList rows = view->table()->selectionModel()->selectedRows(AnimalTableModel::Id);
+    if (rows.size() != 1) return {};
+    return rows.front().data().toString();
+}
 
 EditMenus::EditMenus(QMainWindow* window, ColonyEditFacade* facade, std::function<void()> showEntry)
     : QObject(window), window_(window), facade_(facade)
@@ -55,17 +82,17 @@ EditMenus::EditMenus(QMainWindow* window, ColonyEditFacade* facade, std::functio
         {tr("&Add Animal..."), QKeySequence(Qt::CTRL | Qt::SHIFT | Qt::Key_N),
          [this] { AnimalEditorDialog(facade_, Mode::Add, window_).exec(); }},
         {tr("&Edit Animal..."), QKeySequence(Qt::CTRL | Qt::SHIFT | Qt::Key_E),
-         [this] { AnimalEditorDialog(facade_, Mode::Edit, window_).exec(); }},
+         [this] { runDialog<AnimalEditorDialog>(facade_, Mode::Edit, selectedAnimal(), window_); }},
         {tr("Record &Birth..."), QKeySequence(Qt::CTRL | Qt::SHIFT | Qt::Key_B),
-         [this] { AnimalEditorDialog(facade_, Mode::Birth, window_).exec(); }},
+         [this] { runDialog<AnimalEditorDialog>(facade_, Mode::Birth, selectedAnimal(), window_); }},
         {tr("Record &Death..."), QKeySequence(Qt::CTRL | Qt::SHIFT | Qt::Key_D),
-         [this] { LifeEventDialog(facade_, Event::Death, window_).exec(); }},
+         [this] { LifeEventDialog(facade_, Event::Death, selectedAnimal(), window_).exec(); }},
         {tr("Record &Removal..."), QKeySequence(Qt::CTRL | Qt::SHIFT | Qt::Key_R),
-         [this] { LifeEventDialog(facade_, Event::Removal, window_).exec(); }},
+         [this] { LifeEventDialog(facade_, Event::Removal, selectedAnimal(), window_).exec(); }},
         {tr("Record &Introduction..."), QKeySequence(Qt::CTRL | Qt::SHIFT | Qt::Key_I),
          [this] { AnimalEditorDialog(facade_, Mode::Introduction, window_).exec(); }},
         {tr("&Move Between Groups..."), QKeySequence(Qt::CTRL | Qt::SHIFT | Qt::Key_M),
-         [this] { LifeEventDialog(facade_, Event::Move, window_).exec(); }},
+         [this] { LifeEventDialog(facade_, Event::Move, selectedAnimal(), window_).exec(); }},
     };
     for (const Item& item : items) {
         QAction* a = pedigree->addAction(item.text, this, item.run);

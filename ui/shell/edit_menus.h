@@ -15,7 +15,8 @@ class ColonyEditFacade;
 /// The Edit menu (Undo/Redo from the document's QUndoStack, evening entry,
 /// behaviour codes, observers) and the Pedigree menu (add/edit animal,
 /// birth, death, removal, introduction, move), each with a shortcut shown in
-/// the menu. Kept out of the main window so it only assembles.
+/// the menu; the pedigree dialogs start from the animal selected in the
+/// Animals view, if any. Kept out of the main window so it only assembles.
 class EditMenus : public QObject {
     Q_OBJECT
 public:
@@ -26,6 +27,7 @@ public:
 
 private:
     void updateEnabled();
+    QString selectedAnimal() const;
 
     QMainWindow* window_;
     ColonyEditFacade* facade_;
