@@ -124,8 +124,10 @@ int main(int argc, char* argv[])
     panel->dateEdit()->setText(QDate::currentDate().toString(Qt::ISODate));
     panel->groupBox()->setCurrentText(QStringLiteral("A"));
     panel->observerBox()->setCurrentText(QStringLiteral("bench"));
-    // Runs on a reused file repeat the same lines: save them without the duplicate question.
+    // Runs on a reused file repeat the same lines: save them without the duplicate question,
+    // and take the session back at the end without the confirmation a person gets.
     panel->setDuplicateQuestion([](const QString&) { return true; });
+    panel->setUndoSessionQuestion([](const QString&) { return true; });
     QApplication::processEvents();
     std::vector<double> ms;
     for (int i = 0; i < 21; ++i) {
