@@ -268,12 +268,7 @@ void writeEncounterChange(ColonyStore& store, const std::vector<Encounter>& remo
             }
         }
         if (insert.empty()) return;
-        std::int64_t seq = 0;
-        {
-            SqliteStatement q(db, "SELECT coalesce(max(seq), 0) FROM encounter");
-            q.step();
-            seq = q.integer(0);
-        }
+        std::int64_t seq = highestEncounterSeq(db);
         SqliteStatement ins(db, kInsertEncounterSql);
         SqliteStatement obs(db, "INSERT OR IGNORE INTO observer(name) VALUES (?)");
         std::string date;
@@ -325,26 +320,11 @@ std::vector<Encounter> deleteEncounters(ColonyStore& store, const std::vector<st
 
 std::vector<Encounter> encountersByUid(const ColonyStore& store, const std::vector<std::string>& uids)
 {
-    SqliteStatement q(store.handle(), "SELECT seq, uid, date, time, winner, loser, outcome, behaviour, grp, observer, "
-                                      "note FROM encounter WHERE uid = ?");
+    SqliteStatement q(store.handle(), (std::string("SELECT ") + kEncounterColumnsSql + " FROM encounter WHERE uid = ?").c_str());
     std::vector<Encounter> out;
     for (const std::string& uid : uids) {
         q.bind(1, uid);
-        if (q.step()) {
-            Encounter e;
-            e.seq = q.integer(0);
-            e.uid = q.text(1);
-            e.date = parseDate(q.text(2)).value_or(0);
-            if (!q.isNull(3)) e.time = static_cast<int>(q.integer(3));
-            e.winner = q.text(4);
-            e.loser = q.text(5);
-            e.outcome = q.text(6) == "draw" ? Outcome::Draw : Outcome::Decided;
-            e.behaviour = q.text(7);
-            e.group = q.text(8);
-            e.observer = q.text(9);
-            e.note = q.text(10);
-            out.push_back(std::move(e));
-        }
+        if (q.step()) out.push_back(readEncounterRow(q, store.path()));
         q.reset();
     }
     std::sort(out.begin(), out.end(), [](const Encounter& a, const Encounter& b) { return a.seq < b.seq; });

@@ -6,6 +6,7 @@
 #include "core/store/integrity_check.h"
 #include "core/store/partial_files.h"
 #include "core/store/record_appender.h"
+#include "core/store/record_binding.h"
 #include "core/store/sqlite_uri.h"
 #include "core/store/write_transaction.h"
 #include "core/store/sqlite_statement.h"
@@ -422,27 +423,12 @@ std::vector<Residence> ColonyStore::loadResidences() const
 
 std::vector<Encounter> ColonyStore::loadEncounters() const
 {
-    SqliteStatement q(db_, "SELECT seq, uid, date, time, winner, loser, outcome, behaviour, grp, observer, note "
-                           "FROM encounter ORDER BY seq");
+    SqliteStatement q(db_, (std::string("SELECT ") + kEncounterColumnsSql + " FROM encounter ORDER BY seq").c_str());
     std::vector<Encounter> out;
     // Growing a vector of a million records by doubling moved each several
     // times; the headroom keeps an evening's new entries from moving them all.
     out.reserve(static_cast<size_t>(encounterCount()) + 4096);
-    while (q.step()) {
-        Encounter e;
-        e.seq = q.integer(0);
-        e.uid = q.text(1);
-        e.date = requiredDay(q.text(2), path_);
-        if (!q.isNull(3)) e.time = static_cast<int>(q.integer(3));
-        e.winner = q.text(4);
-        e.loser = q.text(5);
-        e.outcome = q.text(6) == "draw" ? Outcome::Draw : Outcome::Decided;
-        e.behaviour = q.text(7);
-        e.group = q.text(8);
-        e.observer = q.text(9);
-        e.note = q.text(10);
-        out.push_back(std::move(e));
-    }
+    while (q.step()) out.push_back(readEncounterRow(q, path_));
     return out;
 }
 

@@ -36,9 +36,7 @@ void insertResidences(ColonyStore& store, std::vector<Residence>& residences)
 EncounterAppender::EncounterAppender(ColonyStore& store, const WriteTransaction& transaction)
     : store_(store), bulk_(transaction.bulk()), insert_(store.handle(), kInsertEncounterSql)
 {
-    SqliteStatement q(store.handle(), "SELECT coalesce(max(seq), 0) FROM encounter");
-    q.step();
-    nextSeq_ = q.integer(0) + 1;
+    nextSeq_ = highestEncounterSeq(store.handle()) + 1;
     firstSeq_ = nextSeq_;
 }
 

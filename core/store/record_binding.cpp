@@ -1,6 +1,8 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "core/store/record_binding.h"
 
+#include "core/base/colony_file_error.h"
+
 namespace hierloom::core {
 
 std::optional<std::string> storedDate(const std::optional<Day>& d)
@@ -47,6 +49,34 @@ void bindEncounterColumns(SqliteStatement& q, const Encounter& e, const std::str
     q.bindStatic(9, e.group);
     q.bindStatic(10, e.observer);
     q.bindStatic(11, e.note);
+}
+
+Encounter readEncounterRow(const SqliteStatement& q, const std::string& path)
+{
+    Encounter e;
+    e.seq = q.integer(0);
+    e.uid = q.text(1);
+    const std::string date = q.text(2);
+    const auto day = parseDate(date);
+    if (!day)
+        throw ColonyFileError(ColonyFileError::Kind::Damaged, path + ": holds an impossible date '" + date + "'");
+    e.date = *day;
+    if (!q.isNull(3)) e.time = static_cast<int>(q.integer(3));
+    e.winner = q.text(4);
+    e.loser = q.text(5);
+    e.outcome = q.text(6) == "draw" ? Outcome::Draw : Outcome::Decided;
+    e.behaviour = q.text(7);
+    e.group = q.text(8);
+    e.observer = q.text(9);
+    e.note = q.text(10);
+    return e;
+}
+
+std::int64_t highestEncounterSeq(sqlite3* db)
+{
+    SqliteStatement q(db, "SELECT coalesce(max(seq), 0) FROM encounter");
+    q.step();
+    return q.integer(0);
 }
 
 } // namespace hierloom::core

@@ -20,6 +20,10 @@ inline constexpr const char* kInsertEncounterSql =
     "INSERT INTO encounter(seq, uid, date, time, winner, loser, outcome, behaviour, grp, observer, note) "
     "VALUES (?,?,?,?,?,?,?,?,?,?,?)";
 
+/// The columns of an encounter row in the order readEncounterRow expects.
+inline constexpr const char* kEncounterColumnsSql =
+    "seq, uid, date, time, winner, loser, outcome, behaviour, grp, observer, note";
+
 /// A stored date: ISO text, or NULL when unknown.
 std::optional<std::string> storedDate(const std::optional<Day>& d);
 
@@ -30,5 +34,14 @@ void bindResidenceColumns(SqliteStatement& q, const Residence& r);
 /// Binds parameters 1-11 of kInsertEncounterSql without copying: `e` and
 /// `dateText` (the formatted date) must stay unchanged until the statement runs.
 void bindEncounterColumns(SqliteStatement& q, const Encounter& e, const std::string& dateText);
+
+/// The encounter in the current row of a query that selected kEncounterColumnsSql.
+/// A date that is not a real date means the file was changed outside the program:
+/// throws ColonyFileError (Damaged) naming `path`.
+Encounter readEncounterRow(const SqliteStatement& q, const std::string& path);
+
+/// The highest encounter seq in the file (0 when there is none): new encounters
+/// continue after it, whichever path writes them.
+std::int64_t highestEncounterSeq(sqlite3* db);
 
 } // namespace hierloom::core
