@@ -380,6 +380,12 @@ void ColonyStore::checkBeforeWrite()
     intactAtVersion_ = version;
 }
 
+std::int64_t ColonyStore::dataVersion() const
+{
+    SqliteStatement q(db_, "PRAGMA data_version");
+    return q.step() ? q.integer(0) : -1;
+}
+
 int ColonyStore::schemaVersion() const { return pragmaInt(db_, "PRAGMA user_version", path_); }
 
 std::vector<Animal> ColonyStore::loadAnimals() const

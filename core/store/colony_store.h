@@ -46,6 +46,11 @@ public:
 
     const std::string& path() const { return path_; }
     int schemaVersion() const;
+    /// SQLite's `PRAGMA data_version` of this connection: it changes when
+    /// another connection (another program, another window) has committed a
+    /// change to the file since it was last asked, and never for this
+    /// connection's own writes. Equal values mean nobody else wrote.
+    std::int64_t dataVersion() const;
 
     std::vector<Animal> loadAnimals() const;
     std::vector<Residence> loadResidences() const;

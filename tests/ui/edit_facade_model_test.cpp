@@ -1,16 +1,24 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 // Model-based test of the desktop's write path: a seeded random run of
-// encounter additions, edits and deletions, undo, redo and settings changes,
-// all through the edit facade. A plain model (a list of states with an undo
-// position) says what the file should hold after each step; after every step
-// the file read by a fresh connection, the document's cache and the encounter
-// table's rows must all agree with it. Drift between the cache, the table's
-// incremental updates and the file shows up at the step that caused it.
+// encounter additions, edits and deletions, undo, redo, taking back a whole
+// session and settings changes, all through the edit facade, interleaved with
+// writes by another program (a second connection, as the command line is).
+// A plain model (a list of states with an undo position, plus the file's state
+// when another program changed it) says what the file should hold after each
+// step; after every step the file read by a fresh connection, the document's
+// cache and the encounter table's rows must all agree with it. Drift between
+// the cache, the table's incremental updates and the file shows up at the
+// step that caused it. When another program wrote, the desktop's next write,
+// undo or redo (or the window's activation) must first read the file again
+// and empty its history: the model then starts a new history from the file.
 #include "ui/document/colony_document.h"
 #include "ui/document/colony_edit_facade.h"
 #include "ui/document/qt_convert.h"
 #include "ui/document/record_equality.h"
+#include "ui/records/animal_table_model.h"
 #include "ui/records/encounter_table_model.h"
+
+#include "core/store/colony_edits.h"
 
 #include "tests/ui/facade_test_support.h"
 
@@ -19,7 +27,10 @@
 #include <gtest/gtest.h>
 
 #include <algorithm>
+#include <cstdio>
+#include <optional>
 #include <random>
+#include <set>
 
 using namespace hierloom;
 using hierloom::test::TempDir;
@@ -70,25 +81,32 @@ public:
     explicit RandomRun(unsigned seed) : random_(seed)
     {
         document_.open(ui::toQString(path_));
-        facade_.setToday(core::dayFromCivil(2024, 12, 31));
+        facade_.setToday(today_);
         model_.history.push_back(readFile(path_));
     }
 
     void step(int n)
     {
         const int pick = uniform(0, 99);
-        if (pick < 35) add();
-        else if (pick < 50) edit();
-        else if (pick < 60) remove();
-        else if (pick < 75) undo();
-        else if (pick < 85) redo();
-        else if (pick < 93) thresholds();
-        else observers();
+        kinds_.push_back(pick < 30 ? 'a' : pick < 42 ? 'e' : pick < 50 ? 'd' : pick < 63 ? 'u' : pick < 72 ? 'r'
+                         : pick < 79 ? 't' : pick < 84 ? 'o' : pick < 90 ? 's' : 'x');
+        if (pick < 30) add();
+        else if (pick < 42) edit();
+        else if (pick < 50) remove();
+        else if (pick < 63) undo();
+        else if (pick < 72) redo();
+        else if (pick < 79) thresholds();
+        else if (pick < 84) observers();
+        else if (pick < 90) undoSession();
+        else outsideWrite();
         check(n);
     }
 
-    int commands() const { return document_.undoStack()->count(); }
-    size_t encounters() const { return model_.now().encounters.size(); }
+    int mostCommands() const { return mostCommands_; }
+    size_t mostEncounters() const { return mostEncounters_; }
+    int outsideWrites() const { return outsideWrites_; }
+    int sessionsTakenBack() const { return sessionsTakenBack_; }
+    int refusedOnTop() const { return refusedOnTop_; }
 
 private:
     int uniform(int lo, int hi) { return std::uniform_int_distribution<int>(lo, hi)(random_); }
@@ -110,14 +128,26 @@ private:
         return e;
     }
 
+    /// The desktop read the file again (its next write, undo, redo or the
+    /// window's activation): its history starts anew from what the file holds.
+    void caughtUp()
+    {
+        if (!outside_) return;
+        model_.history = {*outside_};
+        model_.at = 0;
+        outside_.reset();
+    }
+
     void add()
     {
         core::Encounter e = randomEncounter();
         const core::FieldProblems p = facade_.addEncounter(e);
+        caughtUp();
         ASSERT_TRUE(p.empty()) << p.front().message;
         State s = model_.now();
         s.encounters.push_back(e); // with the seq and uid it was given
         addObserver(s, e.observer);
+        session_.insert(e.uid);
         model_.push(std::move(s));
     }
 
@@ -133,11 +163,20 @@ private:
         case 3: e.outcome = e.outcome == core::Outcome::Draw ? core::Outcome::Decided : core::Outcome::Draw; break;
         default: break; // unchanged: a no-op the facade must drop
         }
+        // Picked from the cache, which lags when another program wrote: the
+        // facade reads the file first and changes the row as it is now, or
+        // refuses when the row is gone.
         const core::FieldProblems p = facade_.editEncounter(e);
-        ASSERT_TRUE(p.empty()) << p.front().message;
+        caughtUp();
         State s = model_.now();
         auto it = std::find_if(s.encounters.begin(), s.encounters.end(), [&](const auto& x) { return x.uid == e.uid; });
-        ASSERT_NE(it, s.encounters.end());
+        if (it == s.encounters.end()) {
+            ASSERT_FALSE(p.empty()) << "an edit of a row another program deleted was written";
+            ASSERT_NE(p.front().message.find("no longer in the file"), std::string::npos) << p.front().message;
+            ++refusedOnTop_;
+            return;
+        }
+        ASSERT_TRUE(p.empty()) << p.front().message;
         if (ui::sameRecord(*it, e)) return; // nothing changed, nothing pushed
         *it = e;
         addObserver(s, e.observer);
@@ -155,28 +194,118 @@ private:
         std::shuffle(picks.begin(), picks.end(), random_);
         for (int i = 0; i < n; ++i) rows.push_back(cache[picks[static_cast<size_t>(i)]]);
         const core::FieldProblems p = facade_.deleteEncounters(rows);
-        ASSERT_TRUE(p.empty()) << p.front().message;
+        caughtUp();
         State s = model_.now();
+        const bool allThere = std::all_of(rows.begin(), rows.end(), [&](const core::Encounter& r) {
+            return std::any_of(s.encounters.begin(), s.encounters.end(), [&](const auto& x) { return x.uid == r.uid; });
+        });
+        if (!allThere) {
+            ASSERT_FALSE(p.empty()) << "a delete of rows another program deleted was written";
+            ++refusedOnTop_;
+            return;
+        }
+        ASSERT_TRUE(p.empty()) << p.front().message;
         std::erase_if(s.encounters, [&](const core::Encounter& x) {
             return std::any_of(rows.begin(), rows.end(), [&](const auto& r) { return r.uid == x.uid; });
         });
         model_.push(std::move(s));
     }
 
+    // Through the document, as the Edit menu and the entry's keys go.
     void undo()
     {
+        if (outside_) {
+            document_.undo(); // reads the file again and undoes nothing
+            caughtUp();
+            return;
+        }
         ASSERT_EQ(document_.undoStack()->canUndo(), model_.at > 0);
         if (model_.at == 0) return;
-        document_.undoStack()->undo();
+        document_.undo();
         --model_.at;
     }
 
     void redo()
     {
+        if (outside_) {
+            document_.redo();
+            caughtUp();
+            return;
+        }
         ASSERT_EQ(document_.undoStack()->canRedo(), model_.at + 1 < model_.history.size());
         if (model_.at + 1 >= model_.history.size()) return;
-        document_.undoStack()->redo();
+        document_.redo();
         ++model_.at;
+    }
+
+    /// Undo Whole Session as the entry does it: after reading the file again,
+    /// this session's lines still in the file, deleted as one step. Now and
+    /// then the session ends instead and a new one begins.
+    void undoSession()
+    {
+        if (uniform(0, 4) == 0) {
+            session_.clear();
+            return;
+        }
+        const core::FieldProblems caught = facade_.catchUp();
+        ASSERT_TRUE(caught.empty()) << caught.front().message;
+        caughtUp();
+        std::vector<core::Encounter> rows;
+        for (const core::Encounter& e : document_.colony().encounters)
+            if (session_.count(e.uid)) rows.push_back(e);
+        if (rows.empty()) return;
+        const core::FieldProblems p = facade_.deleteEncounters(rows, QStringLiteral("Take back the session"));
+        ASSERT_TRUE(p.empty()) << p.front().message;
+        State s = model_.now();
+        std::erase_if(s.encounters, [&](const core::Encounter& x) { return session_.count(x.uid) > 0; });
+        model_.push(std::move(s));
+        ++sessionsTakenBack_;
+    }
+
+    /// Another program (a second connection, as `hierloom-cli import` is)
+    /// adds, changes or deletes an encounter, or rewrites the observer list.
+    /// Half the time the person then comes back to the window (activation);
+    /// otherwise the desktop notices at its next step.
+    void outsideWrite()
+    {
+        State s = outside_ ? *outside_ : model_.now();
+        {
+            core::ColonyStore other = core::ColonyStore::open(path_, core::ColonyStore::Mode::ReadWrite);
+            const int what = s.encounters.empty() ? 0 : uniform(0, 5);
+            if (what <= 2) {
+                std::vector<core::Encounter> one{randomEncounter()};
+                const core::FieldProblems p = core::insertEncounters(other, one, today_);
+                ASSERT_TRUE(p.empty()) << p.front().message;
+                s.encounters.push_back(one.front());
+                addObserver(s, one.front().observer);
+            } else if (what == 3) {
+                const size_t i = static_cast<size_t>(uniform(0, static_cast<int>(s.encounters.size()) - 1));
+                core::deleteEncounters(other, {s.encounters[i].uid});
+                s.encounters.erase(s.encounters.begin() + static_cast<std::ptrdiff_t>(i));
+            } else if (what == 4) {
+                const size_t i = static_cast<size_t>(uniform(0, static_cast<int>(s.encounters.size()) - 1));
+                core::Encounter e = s.encounters[i];
+                e.note = "outside " + std::to_string(uniform(0, 99));
+                const core::FieldProblems p = core::updateEncounter(other, e, today_);
+                ASSERT_TRUE(p.empty()) << p.front().message;
+                s.encounters[i] = e;
+                addObserver(s, e.observer); // writing a line lists its observer, as the desktop's writes do
+            } else {
+                std::vector<std::string> names = s.observers;
+                names.push_back("outside " + std::to_string(uniform(0, 3)));
+                std::sort(names.begin(), names.end());
+                names.erase(std::unique(names.begin(), names.end()), names.end());
+                core::writeObservers(other, names);
+                s.observers = names;
+            }
+        }
+        outside_ = s;
+        ++outsideWrites_;
+        ASSERT_TRUE(document_.writtenElsewhere());
+        if (uniform(0, 1)) {
+            ASSERT_TRUE(document_.catchUpWithFile());
+            caughtUp();
+        }
     }
 
     void thresholds()
@@ -185,6 +314,7 @@ private:
         t.counterShare = 0.05 * uniform(1, 4); // few values, so repeats (no-ops) happen
         t.minDecided = uniform(10, 12);
         const core::FieldProblems p = facade_.setStabilityThresholds(t);
+        caughtUp();
         ASSERT_TRUE(p.empty()) << p.front().message;
         const core::SettingValues values = core::stabilityThresholdValues(t);
         // An absent key reads as its default, so storing what is in effect is no change.
@@ -204,6 +334,7 @@ private:
             if (uniform(0, 1)) names.push_back(o);
         if (names.empty()) names.push_back(kObservers.front());
         const core::FieldProblems p = facade_.setObservers(names);
+        caughtUp();
         ASSERT_TRUE(p.empty()) << p.front().message;
         if (model_.now().observers == names) return;
         State s = model_.now();
@@ -213,29 +344,38 @@ private:
 
     void check(int n)
     {
-        SCOPED_TRACE("after step " + std::to_string(n));
+        // The last steps' kinds: add, edit, delete, undo, redo, thresholds, observers, session, x = outside.
+        SCOPED_TRACE("after step " + std::to_string(n) + ", the last steps " + kinds_.substr(kinds_.size() > 12 ? kinds_.size() - 12 : 0));
         const State file = readFile(path_);
-        ASSERT_TRUE(ui::sameRecords(file.encounters, model_.now().encounters))
+        const State& expectedFile = outside_ ? *outside_ : model_.now();
+        ASSERT_TRUE(ui::sameRecords(file.encounters, expectedFile.encounters))
             << "the file's encounters are not what the steps should have made (" << file.encounters.size() << " vs "
-            << model_.now().encounters.size() << ")";
-        ASSERT_EQ(file.observers, model_.now().observers);
-        ASSERT_EQ(file.thresholds, model_.now().thresholds);
+            << expectedFile.encounters.size() << ")";
+        ASSERT_EQ(file.observers, expectedFile.observers);
+        ASSERT_EQ(file.thresholds, expectedFile.thresholds);
         ASSERT_EQ(document_.undoStack()->count(), static_cast<int>(model_.history.size()) - 1);
         ASSERT_EQ(document_.undoStack()->index(), static_cast<int>(model_.at));
-        ASSERT_TRUE(ui::sameRecords(document_.colony().encounters, file.encounters)) << "the document's cache drifted";
+        mostCommands_ = std::max(mostCommands_, document_.undoStack()->count());
+        mostEncounters_ = std::max(mostEncounters_, file.encounters.size());
+        // Until the desktop notices another program's write, it shows the file as it last read it.
+        ASSERT_EQ(document_.writtenElsewhere(), outside_.has_value());
+        const State& shown = model_.now();
+        ASSERT_TRUE(ui::sameRecords(document_.colony().encounters, shown.encounters)) << "the document's cache drifted";
+        if (!outside_) ASSERT_TRUE(ui::sameRecords(document_.colony().encounters, file.encounters));
+        ASSERT_EQ(animals_.rowCount(), 6); // the animals' table is not touched by any of these steps
 
-        // The table: every encounter, newest first, each cell from the file's record.
-        std::vector<size_t> order = core::chronologicalOrder(file.encounters);
+        // The table: every encounter the document shows, newest first, each cell from its record.
+        std::vector<size_t> order = core::chronologicalOrder(shown.encounters);
         std::reverse(order.begin(), order.end());
         ASSERT_EQ(table_.rowCount(), static_cast<int>(order.size()));
         for (int row = 0; row < table_.rowCount(); ++row) {
-            const core::Encounter& expected = file.encounters[order[static_cast<size_t>(row)]];
+            const core::Encounter& expected = shown.encounters[order[static_cast<size_t>(row)]];
             ASSERT_TRUE(ui::sameRecord(table_.encounterAt(row), expected)) << "table row " << row;
             ASSERT_EQ(table_.index(row, ui::EncounterTableModel::Winner).data().toString(), ui::toQString(expected.winner));
             ASSERT_EQ(table_.index(row, ui::EncounterTableModel::Loser).data().toString(), ui::toQString(expected.loser));
         }
         QStringList names;
-        for (const core::Encounter& e : file.encounters) names << ui::toQString(e.observer);
+        for (const core::Encounter& e : shown.encounters) names << ui::toQString(e.observer);
         names.sort();
         names.removeDuplicates();
         ASSERT_EQ(table_.observers(), names);
@@ -247,7 +387,17 @@ private:
     ui::ColonyDocument document_;
     ui::ColonyEditFacade facade_{&document_};
     ui::EncounterTableModel table_{&document_};
+    ui::AnimalTableModel animals_{&document_};
     Model model_;
+    std::optional<State> outside_;  // the file's state while the desktop has not noticed another program's write
+    std::set<std::string> session_; // uids added in the current entry session
+    core::Day today_ = core::dayFromCivil(2024, 12, 31);
+    std::string kinds_;
+    int mostCommands_ = 0;
+    size_t mostEncounters_ = 0;
+    int outsideWrites_ = 0;
+    int sessionsTakenBack_ = 0;
+    int refusedOnTop_ = 0;
 };
 
 } // namespace
@@ -260,6 +410,11 @@ TEST(EditFacadeModel, ThousandRandomStepsKeepFileCacheAndTableInStep)
         if (::testing::Test::HasFatalFailure()) return;
     }
     // The run did build up history and records (not a string of no-ops).
-    EXPECT_GT(run.commands(), 50);
-    EXPECT_GT(run.encounters(), 20u);
+    EXPECT_GT(run.mostCommands(), 20);
+    EXPECT_GT(run.mostEncounters(), 20u);
+    // Every kind of step happened, often enough to matter.
+    EXPECT_GT(run.outsideWrites(), 50);
+    EXPECT_GT(run.sessionsTakenBack(), 10);
+    std::printf("most commands %d, most encounters %zu, outside writes %d, sessions taken back %d, refused on top %d\n",
+                run.mostCommands(), run.mostEncounters(), run.outsideWrites(), run.sessionsTakenBack(), run.refusedOnTop());
 }

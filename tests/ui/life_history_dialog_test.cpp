@@ -230,3 +230,60 @@ TEST(LifeHistoryDialogs, PedigreeMenuDialogsStartFromTheAnimalSelectedInTheAnima
     EXPECT_TRUE(shown[1].startsWith(QStringLiteral("Dot (D2) · female · "))) << shown[1].toStdString();
     EXPECT_FALSE(animal(colonyIn(path), "D2").exit.has_value()); // Escape wrote nothing
 }
+
+TEST(LifeHistoryDialogs, AnAnimalChosenWithTheKeyboardInTheAnimalsViewIsTheOneWhoseDeathIsRecorded)
+{
+    // Keys only: Ctrl+1 to the Animals view, Alt+I to its search, "Dot",
+    // Tab to the table, Space on her row (the only one left); then, with the
+    // search cleared, Down from the first row (D1) to the second (D2, sorted
+    // by id) as a person scrolling the ledger would. Ctrl+Shift+D, Enter, Y.
+    TempDir dir;
+    const std::string path = makeColony(dir);
+    ui::MainWindow window;
+    ASSERT_TRUE(window.openColony(ui::toQString(path)));
+    window.show();
+    QApplication::setActiveWindow(&window);
+    QTableView* table = window.animalView()->table();
+    QTest::keyClick(focusIn(&window), Qt::Key_1, Qt::ControlModifier);
+    ASSERT_TRUE(window.animalView()->isVisible());
+    QTest::keyClick(focusIn(&window), Qt::Key_I, Qt::AltModifier);
+    QTest::keyClicks(focusIn(&window), QStringLiteral("Dot"));
+    ASSERT_EQ(window.animalView()->visibleRowCount(), 1);
+    for (int i = 0; i < 5 && QApplication::focusWidget() != table; ++i) QTest::keyClick(focusIn(&window), Qt::Key_Tab);
+    ASSERT_EQ(QApplication::focusWidget(), table);
+    QTest::keyClick(focusIn(&window), Qt::Key_Space);
+    QModelIndexList selected = table->selectionModel()->selectedRows(ui::AnimalTableModel::Id);
+    ASSERT_EQ(selected.size(), 1);
+    EXPECT_EQ(selected.front().data().toString(), QStringLiteral("D2"));
+    // The search emptied again: Tab back to the table, Down from the first row.
+    QTest::keyClick(focusIn(&window), Qt::Key_I, Qt::AltModifier);
+    QTest::keyClick(focusIn(&window), Qt::Key_A, Qt::ControlModifier);
+    QTest::keyClick(focusIn(&window), Qt::Key_Backspace);
+    ASSERT_EQ(window.animalView()->visibleRowCount(), 6);
+    for (int i = 0; i < 5 && QApplication::focusWidget() != table; ++i) QTest::keyClick(focusIn(&window), Qt::Key_Tab);
+    ASSERT_EQ(QApplication::focusWidget(), table);
+    QTest::keyClick(focusIn(&window), Qt::Key_Home, Qt::ControlModifier);
+    QTest::keyClick(focusIn(&window), Qt::Key_Down);
+    selected = table->selectionModel()->selectedRows(ui::AnimalTableModel::Id);
+    ASSERT_EQ(selected.size(), 1);
+    EXPECT_EQ(selected.front().data().toString(), QStringLiteral("D2"));
+
+    QStringList shown;
+    QStringList asked;
+    QTimer::singleShot(50, [&] {
+        auto* dialog = qobject_cast<ui::LifeEventDialog*>(QApplication::activeModalWidget());
+        if (!dialog) return;
+        shown << dialog->animalText();
+        answerNextBox(Qt::Key_Y, &asked);
+        QTest::keyClick(focusIn(dialog), Qt::Key_Return);
+    });
+    QTest::keyClick(focusIn(&window), Qt::Key_D, Qt::ControlModifier | Qt::ShiftModifier);
+    ASSERT_EQ(shown.size(), 1);
+    EXPECT_TRUE(shown[0].startsWith(QStringLiteral("Dot (D2) · female · "))) << shown[0].toStdString();
+    ASSERT_EQ(asked.size(), 1);
+    EXPECT_TRUE(asked[0].startsWith(QStringLiteral("Record the death of Dot (D2) on "))) << asked[0].toStdString();
+    const core::Colony after = colonyIn(path);
+    EXPECT_TRUE(animal(after, "D2").exit.has_value());
+    EXPECT_EQ(animal(after, "D2").exitType, core::ExitType::Died);
+    for (const char* other : {"F1", "F2", "D1", "M1", "G1"}) EXPECT_FALSE(animal(after, other).exit.has_value()) << other;
+}

@@ -122,6 +122,17 @@ HierarchyPlotsView::HierarchyPlotsView(ColonyDocument* document, QWidget* parent
 
 void HierarchyPlotsView::refillGroups()
 {
+    // Appended lines add a group to the choice only when one is new: no scan of every encounter per Enter.
+    const ColonyDocument::Change& change = document_->lastChange();
+    if (change.kind == ColonyDocument::ChangeKind::SettingsChanged || change.kind == ColonyDocument::ChangeKind::ListsChanged)
+        return;
+    if (change.kind == ColonyDocument::ChangeKind::EncountersAppended) {
+        const auto& encounters = document_->colony().encounters;
+        bool known = true;
+        for (size_t i = change.firstAppended; i < encounters.size() && known; ++i)
+            known = encounters[i].group.empty() || group_->findData(toQString(encounters[i].group)) >= 0;
+        if (known) return;
+    }
     const QSignalBlocker block(group_);
     const QString current = group_->currentData().toString();
     group_->clear();

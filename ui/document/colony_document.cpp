@@ -3,6 +3,8 @@
 
 #include "ui/document/qt_convert.h"
 
+#include <QFileInfo>
+#include <QLocale>
 #include <QUndoStack>
 
 #include <algorithm>
@@ -29,6 +31,8 @@ void ColonyDocument::adopt(core::ColonyStore store, const QString& path, bool re
 {
     // Load before replacing anything, so a file that fails to load leaves
     // the previous colony open and intact.
+    // Asked before loading: a write by another program after this is noticed later.
+    const std::int64_t version = store.dataVersion();
     core::Colony colony = store.load();
     core::ResidenceIndex residences(colony.animals, colony.residences);
     // The commands of the previous file would write to this one.
@@ -39,6 +43,7 @@ void ColonyDocument::adopt(core::ColonyStore store, const QString& path, bool re
     residences_ = std::move(residences);
     path_ = path;
     readOnly_ = readOnly;
+    knownVersion_ = version;
     emitChange({});
 }
 
@@ -63,11 +68,77 @@ void ColonyDocument::clearHistory(const QString& reason)
 void ColonyDocument::reload()
 {
     if (!store_) return;
+    const std::int64_t version = store_->dataVersion();
     core::Colony colony = store_->load();
+    knownVersion_ = version;
     residences_ = core::ResidenceIndex(colony.animals, colony.residences);
     colony_ = std::move(colony);
     colony_.reindex();
     emitChange({});
+}
+
+bool ColonyDocument::writtenElsewhere() const { return store_ && store_->dataVersion() != knownVersion_; }
+
+bool ColonyDocument::catchUpWithFile()
+{
+    if (!writtenElsewhere()) return false;
+    const QLocale locale;
+    const auto count = [&locale](size_t n) { return locale.toString(static_cast<qulonglong>(n)); };
+    const size_t animals = colony_.animals.size();
+    const size_t encounters = colony_.encounters.size();
+    const QString file = QFileInfo(path_).fileName();
+    // First the history: its commands would write records as this window last saw them.
+    clearHistory(tr("another program changed %1").arg(file));
+    try {
+        reload();
+    } catch (const std::exception&) {
+        emit changedOutside(tr("Another program changed %1 while it was open here, and it cannot be read again; "
+                               "the undo history was emptied. Nothing more is written until it can be read.")
+                                .arg(file));
+        throw;
+    }
+    emit changedOutside(tr("Another program changed %1 while it was open here (animals %2 → %3, encounters %4 → %5). "
+                           "It was read again, and the undo history was emptied so that Undo cannot change records "
+                           "this window did not write.")
+                            .arg(file, count(animals), count(colony_.animals.size()), count(encounters),
+                                 count(colony_.encounters.size())));
+    return true;
+}
+
+void ColonyDocument::catchUpLater()
+{
+    QMetaObject::invokeMethod(
+        this,
+        [this] {
+            try {
+                catchUpWithFile();
+            } catch (const std::exception& error) {
+                emit writeFailed(QString::fromUtf8(error.what()));
+            }
+        },
+        Qt::QueuedConnection);
+}
+
+void ColonyDocument::undo()
+{
+    try {
+        if (catchUpWithFile()) return;
+    } catch (const std::exception& error) {
+        emit writeFailed(QString::fromUtf8(error.what()));
+        return;
+    }
+    undoStack_->undo();
+}
+
+void ColonyDocument::redo()
+{
+    try {
+        if (catchUpWithFile()) return;
+    } catch (const std::exception& error) {
+        emit writeFailed(QString::fromUtf8(error.what()));
+        return;
+    }
+    undoStack_->redo();
 }
 
 core::ColonyStore& ColonyDocument::writableStore()

@@ -7,6 +7,7 @@
 #include <QObject>
 #include <QString>
 
+#include <cstdint>
 #include <memory>
 #include <optional>
 #include <vector>
@@ -47,6 +48,23 @@ public:
     void close();
     /// Re-reads every record from the file (after a failed write, or when another program wrote to it).
     void reload();
+
+    /// True when another program (any other connection: the command line, a
+    /// second window) has written to the file since this document last read
+    /// it; this document's own writes never count (`PRAGMA data_version`).
+    bool writtenElsewhere() const;
+    /// When another program wrote to the file: empties the undo history (its
+    /// commands remember records as they were), re-reads the file and emits
+    /// changedOutside(message); true then. Runs before every write of the
+    /// facade, before Undo and Redo, and when the main window is activated.
+    /// Throws core::ColonyFileError when the file cannot be read again (the
+    /// history is emptied all the same). Never call it from inside an undo command.
+    bool catchUpWithFile();
+    /// Undoes / redoes one step after catching up with the file; when another
+    /// program wrote, the history is gone and nothing is undone. A file that
+    /// cannot be read again is reported through writeFailed.
+    void undo();
+    void redo();
 
     /// The details of the last changed(): its kind and, for appended encounters, where they start.
     struct Change {
@@ -90,6 +108,9 @@ signals:
     void writeFailed(const QString& message);
     /// The undo history was emptied; `reason` says why, for the status bar.
     void historyCleared(const QString& reason);
+    /// Another program wrote to the file and it was read again (catchUpWithFile);
+    /// `message` names the file, what changed in numbers, and that the history was emptied.
+    void changedOutside(const QString& message);
 
 private:
     // The writers: the facade and the undo commands reach the store and the
@@ -106,6 +127,9 @@ private:
     void applyEncounterChange(const std::vector<core::Encounter>& removed, const std::vector<core::Encounter>& inserted);
     /// Announces a change that leaves the cached records as they are (lists, settings).
     void announce(ChangeKind kind);
+    /// catchUpWithFile() once the event loop runs again: for an undo command,
+    /// inside which the history may not be emptied.
+    void catchUpLater();
 
     void adopt(core::ColonyStore store, const QString& path, bool readOnly);
     void emitChange(Change change);
@@ -118,6 +142,7 @@ private:
     Change lastChange_;
     QUndoStack* undoStack_;
     mutable Snapshot snapshot_; // empty until asked for after a change
+    std::int64_t knownVersion_ = 0; // the store's dataVersion() when the file was last read
 };
 
 } // namespace hierloom::ui

@@ -24,9 +24,21 @@ ColonyEditFacade::ColonyEditFacade(ColonyDocument* document, QObject* parent) : 
 
 core::Day ColonyEditFacade::today() const { return today_ ? *today_ : core::today(); }
 
-core::FieldProblems ColonyEditFacade::writable() const
+core::FieldProblems ColonyEditFacade::catchUp(bool* reread)
+{
+    try {
+        const bool again = document_->catchUpWithFile();
+        if (reread) *reread = again;
+    } catch (const std::exception& error) {
+        return {{"", error.what()}};
+    }
+    return {};
+}
+
+core::FieldProblems ColonyEditFacade::writable()
 {
     if (!document_->isOpen()) return {{"", tr("No colony is open.").toStdString()}};
+    if (auto p = catchUp(); !p.empty()) return p;
     if (document_->isReadOnly())
         return {{"", tr("The colony is open read-only; open it for writing to change it.").toStdString()}};
     return {};
@@ -75,7 +87,9 @@ core::FieldProblems ColonyEditFacade::editEncounter(core::Encounter e)
     const auto& cache = document_->colony().encounters;
     auto it = std::lower_bound(cache.begin(), cache.end(), e.seq,
                                [](const core::Encounter& x, std::int64_t seq) { return x.seq < seq; });
-    if (it == cache.end() || it->uid != e.uid) return {{"uid", "'" + e.uid + "' is not an encounter of the colony"}};
+    if (it == cache.end() || it->uid != e.uid)
+        return {{"uid", tr("This encounter is no longer in the file (another program may have deleted it); "
+                           "nothing was changed.").toStdString()}};
     e.group.clear(); // re-derived from the residences of the (possibly new) animals
     if (auto p = checkEncounter(e); !p.empty()) return p;
     if (sameRecord(*it, e)) return {}; // nothing changed: nothing to write or undo
@@ -87,8 +101,19 @@ core::FieldProblems ColonyEditFacade::deleteEncounters(const std::vector<core::E
 {
     if (auto p = writable(); !p.empty()) return p;
     if (rows.empty()) return {};
+    // The rows as the file holds them now (another program may have changed or deleted them).
+    std::vector<core::Encounter> now;
+    const auto& cache = document_->colony().encounters;
+    for (const core::Encounter& r : rows) {
+        auto it = std::lower_bound(cache.begin(), cache.end(), r.seq,
+                                   [](const core::Encounter& x, std::int64_t seq) { return x.seq < seq; });
+        if (it == cache.end() || it->uid != r.uid)
+            return {{"uid", tr("The encounter %1 over %2 is no longer in the file (another program may have deleted "
+                               "it); nothing was deleted.").arg(toQString(r.winner), toQString(r.loser)).toStdString()}};
+        now.push_back(*it);
+    }
     std::vector<core::Encounter> none;
-    return pushEncounterChange(rows, none, text.isEmpty() ? (rows.size() == 1 ? tr("Delete 1 encounter") : tr("Delete %1 encounters").arg(rows.size())) : text);
+    return pushEncounterChange(std::move(now), none, text.isEmpty() ? (rows.size() == 1 ? tr("Delete 1 encounter") : tr("Delete %1 encounters").arg(rows.size())) : text);
 }
 
 core::FieldProblems ColonyEditFacade::pushAnimalChange(const core::AnimalChange& change, const QString& text)

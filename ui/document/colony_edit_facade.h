@@ -41,6 +41,14 @@ public:
     core::Day today() const;
     void setToday(core::Day day) { today_ = day; }
 
+    /// Re-reads the file when another program wrote to it (ColonyDocument::
+    /// catchUpWithFile, which empties the undo history with a message); every
+    /// write below does this first and then checks and applies the edit to the
+    /// file as it is now. Call it before preparing an edit from the cache (the
+    /// entry's duplicate check). Problems when the file cannot be read again;
+    /// `reread` (if given) says whether it was read again.
+    core::FieldProblems catchUp(bool* reread = nullptr);
+
     /// Checks an encounter as addEncounter would, without writing; fills its group.
     core::FieldProblems checkEncounter(core::Encounter& e) const;
     /// Adds one encounter; on success `e` carries its seq and uid.
@@ -94,7 +102,8 @@ public:
     void restoreDamagedFile(const QString& backupPath, const QString& colonyPath);
 
 private:
-    core::FieldProblems writable() const;
+    /// Catches up with the file, then refuses a closed or read-only colony.
+    core::FieldProblems writable();
     /// Pushes a command, whose first redo() writes; the problems of a failed write.
     core::FieldProblems push(ColonyCommand* command);
     core::FieldProblems pushEncounterChange(std::vector<core::Encounter> removed, std::vector<core::Encounter>& inserted,

@@ -14,6 +14,13 @@ void ColonyCommand::undo() { run(false); }
 void ColonyCommand::run(bool forward)
 {
     core::FieldProblems* first = std::exchange(firstFailure_, nullptr);
+    if (!first && document_->writtenElsewhere()) {
+        // Another program wrote since the file was read: the records this step
+        // remembers may be gone or changed, so it writes nothing. Once the
+        // stack is done, the document re-reads the file and empties the history.
+        document_->catchUpLater();
+        return;
+    }
     try {
         apply(forward);
     } catch (const std::exception& error) {
@@ -21,7 +28,8 @@ void ColonyCommand::run(bool forward)
         // No exception may leave redo()/undo() through QUndoStack, so a file
         // that cannot be read either keeps the cache and the message below says why.
         try {
-            document_->reload();
+            if (document_->writtenElsewhere()) document_->catchUpLater(); // the history goes too
+            else document_->reload();
         } catch (const std::exception&) {
         }
         if (first) {

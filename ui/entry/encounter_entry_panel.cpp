@@ -7,7 +7,9 @@
 #include "ui/document/qt_convert.h"
 #include "ui/entry/entry_words.h"
 #include "ui/entry/session_table.h"
+#include "ui/entry/entry_keys.h"
 #include "ui/entry/undo_keys.h"
+#include "ui/widgets/key_sheet.h"
 #include "ui/widgets/confirm.h"
 #include "ui/widgets/typed_date.h"
 
@@ -64,6 +66,9 @@ void showHint(QLabel* label, const QString& text)
 
 bool isError(const QLabel* label) { return label->styleSheet().contains(QLatin1String("b00020")); }
 
+/// The first key of `key` as a button shows it ("F2").
+QString keyName(EntryKey key) { return entryKeyInfo(key).sequences.front().toString(QKeySequence::NativeText); }
+
 QString samePairKey(const std::string& a, const std::string& b)
 {
     return a < b ? toQString(a + '\n' + b) : toQString(b + '\n' + a);
@@ -80,15 +85,15 @@ EncounterEntryPanel::EncounterEntryPanel(ColonyEditFacade* facade, QWidget* pare
       date_(new QLineEdit(this)),
       group_(new QComboBox(this)),
       observer_(new QComboBox(this)),
-      endButton_(new QPushButton(tr("End &Session"), this)),
+      endButton_(new QPushButton(withEntryMnemonic(tr("End Session"), EntryKey::EndSession), this)),
       dateInfo_(infoLabel(this)),
       time_(new QLineEdit(this)),
       winner_(new QLineEdit(this)),
       loser_(new QLineEdit(this)),
-      draw_(new QCheckBox(tr("Dra&w"), this)),
+      draw_(new QCheckBox(withEntryMnemonic(tr("Draw"), EntryKey::Draw), this)),
       behaviour_(new QComboBox(this)),
       note_(new QLineEdit(this)),
-      addButton_(new QPushButton(tr("Add Line (Enter)"), this)),
+      addButton_(new QPushButton(tr("Add Line (%1)").arg(keyName(EntryKey::SaveLine)), this)),
       timeInfo_(infoLabel(this)),
       winnerInfo_(infoLabel(this)),
       loserInfo_(infoLabel(this)),
@@ -98,7 +103,7 @@ EncounterEntryPanel::EncounterEntryPanel(ColonyEditFacade* facade, QWidget* pare
       list_(new QTableWidget(this)),
       count_(new QLabel(this)),
       summary_(new QLabel(this)),
-      undoSession_(new QPushButton(tr("&Undo Whole Session"), this)),
+      undoSession_(new QPushButton(withEntryMnemonic(tr("Undo Whole Session"), EntryKey::UndoSession), this)),
       refused_(new QListWidget(this)),
       undoKeys_(nullptr),
       matcher_(document_),
@@ -136,17 +141,21 @@ EncounterEntryPanel::EncounterEntryPanel(ColonyEditFacade* facade, QWidget* pare
         row->addWidget(label);
         row->addWidget(field);
     };
-    addLabelled(header, tr("&Date:"), date_);
-    addLabelled(header, tr("&Group:"), group_);
-    addLabelled(header, tr("O&bserver:"), observer_);
+    // Every Alt letter comes from the entry's one list of keys (entry_keys.h), which the help lists.
+    addLabelled(header, withEntryMnemonic(tr("Date:"), EntryKey::Date), date_);
+    addLabelled(header, withEntryMnemonic(tr("Group:"), EntryKey::Group), group_);
+    addLabelled(header, withEntryMnemonic(tr("Observer:"), EntryKey::Observer), observer_);
     header->addWidget(endButton_);
     header->addStretch(1);
 
     // The entry line, in the notebook's column order, with a message under each field.
     auto* line = new QGridLayout;
-    const QList<QPair<QString, QWidget*>> fields{{tr("&Time"), time_},          {tr("W&inner"), winner_},
-                                                 {tr("&Loser"), loser_},        {QString(), draw_},
-                                                 {tr("Be&haviour"), behaviour_}, {tr("N&ote"), note_}};
+    const QList<QPair<QString, QWidget*>> fields{{withEntryMnemonic(tr("Time"), EntryKey::Time), time_},
+                                                 {withEntryMnemonic(tr("Winner"), EntryKey::Winner), winner_},
+                                                 {withEntryMnemonic(tr("Loser"), EntryKey::Loser), loser_},
+                                                 {QString(), draw_},
+                                                 {withEntryMnemonic(tr("Behaviour"), EntryKey::Behaviour), behaviour_},
+                                                 {withEntryMnemonic(tr("Note"), EntryKey::Note), note_}};
     for (int c = 0; c < fields.size(); ++c) {
         if (!fields[c].first.isEmpty()) {
             auto* label = new QLabel(fields[c].first, this);
@@ -169,8 +178,8 @@ EncounterEntryPanel::EncounterEntryPanel(ColonyEditFacade* facade, QWidget* pare
 
     auto* footer = new QHBoxLayout;
     footer->addWidget(count_, 1);
-    auto* editButton = new QPushButton(tr("Edit Line (F2)"), this);
-    auto* deleteButton = new QPushButton(tr("Delete Line (Del)"), this);
+    auto* editButton = new QPushButton(tr("Edit Line (%1)").arg(keyName(EntryKey::ChangeRow)), this);
+    auto* deleteButton = new QPushButton(tr("Delete Line (%1)").arg(keyName(EntryKey::DeleteRows)), this);
     footer->addWidget(editButton);
     footer->addWidget(deleteButton);
     footer->addWidget(undoSession_);
@@ -180,7 +189,9 @@ EncounterEntryPanel::EncounterEntryPanel(ColonyEditFacade* facade, QWidget* pare
     layout->addWidget(dateInfo_);
     layout->addWidget(mode_);
     layout->addLayout(line);
-    auto* refusedLabel = new QLabel(tr("&Refused lines (Enter on one puts it back on the line; Esc clears the line):"), this);
+    auto* refusedLabel = new QLabel(
+        withEntryMnemonic(tr("Refused lines (Enter on one puts it back on the line; Esc clears the line):"), EntryKey::RefusedList),
+        this);
     refusedLabel->setBuddy(refused_);
     layout->addWidget(refusedLabel);
     layout->addWidget(refused_);
@@ -225,7 +236,12 @@ EncounterEntryPanel::EncounterEntryPanel(ColonyEditFacade* facade, QWidget* pare
     connect(loser_, &QLineEdit::textChanged, this, [this] { checkAnimalField(loser_, loserInfo_); });
     connect(time_, &QLineEdit::textChanged, this, &EncounterEntryPanel::checkTime);
     connect(document_, &ColonyDocument::changed, this, &EncounterEntryPanel::documentChanged);
-    undoKeys_ = new UndoKeys(this, document_->undoStack());
+    // Said where the person typing looks, besides the status bar.
+    connect(document_, &ColonyDocument::changedOutside, summary_, &QLabel::setText);
+    undoKeys_ = new UndoKeys(this, document_);
+    QList<KeySheetRow> sheet;
+    for (const EntryKeyInfo& k : entryKeys()) sheet.push_back({entryKeyText(k), entryKeyWhere(k), entryKeyWhat(k)});
+    publishKeySheet(this, tr("In the evening entry"), sheet);
     documentChanged();
 }
 
@@ -438,6 +454,13 @@ QString EncounterEntryPanel::fieldMessage(const QString& field) const
 bool EncounterEntryPanel::commitLine()
 {
     lineInfo_->clear();
+    // Another program may have written to the file: read it first, so the
+    // checks below (duplicates, residents) see what the file holds now; the
+    // typed line stays on the line whatever happens.
+    if (auto p = facade_->catchUp(); !p.empty()) {
+        refuse(p);
+        return false;
+    }
     core::Encounter e;
     e.date = sessionDay();
     bool badTime = false;

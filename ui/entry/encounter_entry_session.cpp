@@ -6,6 +6,7 @@
 #include "ui/document/colony_document.h"
 #include "ui/document/colony_edit_facade.h"
 #include "ui/document/qt_convert.h"
+#include "ui/entry/entry_keys.h"
 #include "ui/entry/entry_words.h"
 #include "ui/entry/session_table.h"
 #include "ui/widgets/typed_date.h"
@@ -132,6 +133,15 @@ void EncounterEntryPanel::editSelectedRow()
 
 void EncounterEntryPanel::deleteSelectedRows()
 {
+    // The selected rows are named by the table as it was; if another program
+    // wrote meanwhile, the table is re-read instead and nothing is deleted.
+    bool reread = false;
+    if (auto p = facade_->catchUp(&reread); !p.empty() || reread) {
+        if (p.empty()) p.push_back({"line", toStdString(tr("The table was read again from the file; nothing was "
+                                                            "deleted. Choose the line again."))});
+        showProblems(p);
+        return;
+    }
     const auto rows = dayRows();
     std::vector<core::Encounter> gone;
     for (const QModelIndex& index : list_->selectionModel()->selectedRows())
@@ -143,6 +153,11 @@ void EncounterEntryPanel::deleteSelectedRows()
 
 void EncounterEntryPanel::undoWholeSession()
 {
+    // The session's own lines as the file holds them now, never another program's.
+    if (auto p = facade_->catchUp(); !p.empty()) {
+        showProblems(p);
+        return;
+    }
     std::vector<core::Encounter> all;
     for (const core::Encounter* e : sessionRows()) all.push_back(*e);
     if (all.empty()) return;
@@ -185,29 +200,29 @@ void EncounterEntryPanel::endSession()
 
 bool EncounterEntryPanel::eventFilter(QObject* watched, QEvent* event)
 {
+    // The keys come from the entry's one list (entry_keys.h), which the help lists too.
     if (event->type() != QEvent::KeyPress) return QWidget::eventFilter(watched, event);
     const auto* key = static_cast<QKeyEvent*>(event);
-    const bool enter = key->key() == Qt::Key_Return || key->key() == Qt::Key_Enter;
     if (watched == list_) {
-        if (key->key() == Qt::Key_Delete || key->key() == Qt::Key_Backspace) {
+        if (entryKeyMatches(EntryKey::DeleteRows, key)) {
             deleteSelectedRows();
             return true;
         }
-        if (key->key() == Qt::Key_F2 || enter) {
+        if (entryKeyMatches(EntryKey::ChangeRow, key)) {
             editSelectedRow();
             return true;
         }
         return QWidget::eventFilter(watched, event);
     }
     if (watched == refused_) {
-        if (enter || key->key() == Qt::Key_F2) {
+        if (entryKeyMatches(EntryKey::RecallRefused, key)) {
             recallRefused();
             return true;
         }
         return QWidget::eventFilter(watched, event);
     }
     if (watched == date_) {
-        if (enter) {
+        if (entryKeyMatches(EntryKey::SaveLine, key)) {
             // Enter on the date: show it as stored and go on to the line.
             if (dateValid_) {
                 date_->setText(formatDay(day_));
@@ -217,11 +232,11 @@ bool EncounterEntryPanel::eventFilter(QObject* watched, QEvent* event)
         }
         return QWidget::eventFilter(watched, event);
     }
-    if (enter && key->modifiers() == Qt::NoModifier) {
+    if (entryKeyMatches(EntryKey::SaveLine, key)) {
         commitLine();
         return true;
     }
-    if (key->key() == Qt::Key_Escape && key->modifiers() == Qt::NoModifier) {
+    if (entryKeyMatches(EntryKey::ClearLine, key)) {
         cancelEdit(); // clears the line, and leaves a change of a row unsaved
         return true;
     }

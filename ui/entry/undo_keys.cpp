@@ -1,9 +1,11 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "ui/entry/undo_keys.h"
 
+#include "ui/document/colony_document.h"
+#include "ui/entry/entry_keys.h"
+
 #include <QEvent>
 #include <QKeyEvent>
-#include <QUndoStack>
 #include <QWidget>
 
 namespace hierloom::ui {
@@ -14,16 +16,14 @@ enum class Step { None, Undo, Redo };
 
 Step stepOf(const QKeyEvent* key)
 {
-    const auto mods = key->modifiers() & (Qt::ControlModifier | Qt::ShiftModifier | Qt::AltModifier | Qt::MetaModifier);
-    if (key->key() == Qt::Key_Z && mods == Qt::ControlModifier) return Step::Undo;
-    if (key->key() == Qt::Key_Z && mods == (Qt::ControlModifier | Qt::ShiftModifier)) return Step::Redo;
-    if (key->key() == Qt::Key_Y && mods == Qt::ControlModifier) return Step::Redo;
+    if (entryKeyMatches(EntryKey::UndoLine, key)) return Step::Undo;
+    if (entryKeyMatches(EntryKey::RedoLine, key)) return Step::Redo;
     return Step::None;
 }
 
 } // namespace
 
-UndoKeys::UndoKeys(QWidget* area, QUndoStack* stack) : QObject(area), stack_(stack) { watch(area); }
+UndoKeys::UndoKeys(QWidget* area, ColonyDocument* document) : QObject(area), document_(document) { watch(area); }
 
 void UndoKeys::watch(QWidget* w)
 {
@@ -42,8 +42,8 @@ bool UndoKeys::eventFilter(QObject* watched, QEvent* event)
         event->accept();
         return true;
     }
-    if (step == Step::Undo) stack_->undo();
-    else stack_->redo();
+    if (step == Step::Undo) document_->undo();
+    else document_->redo();
     return true;
 }
 

@@ -117,10 +117,12 @@ ScenarioComposer::ScenarioComposer(ColonyDocument* document, QWidget* parent)
     // A new file starts a new scenario; an edit of the record (an evening's
     // entries) keeps the changes composed so far and refreshes the choices.
     connect(document_, &ColonyDocument::changed, this, [this] {
-        if (document_->lastChange().kind == ColonyDocument::ChangeKind::Reset) {
+        const auto kind = document_->lastChange().kind;
+        if (kind == ColonyDocument::ChangeKind::Reset) {
             reset();
         } else {
-            refreshChoices();
+            // The choices are the residents and matrilines: an evening's lines leave them as they are.
+            if (kind == ColonyDocument::ChangeKind::AnimalsChanged) refreshChoices();
             emit changed();
         }
     });

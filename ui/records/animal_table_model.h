@@ -13,7 +13,8 @@ namespace hierloom::ui {
 class ColonyDocument;
 
 /// One row per animal of the open colony: identity, age, matriline, current
-/// group and status. Rebuilt whenever the document changes.
+/// group and status. Rebuilt when the animals change (or another file is
+/// read); encounter, list and settings changes leave it as it is.
 class AnimalTableModel : public QAbstractTableModel {
     Q_OBJECT
 public:

@@ -97,6 +97,31 @@ EncounterView::EncounterView(ColonyDocument* document, QWidget* parent)
 
 void EncounterView::refillChoices()
 {
+    const ColonyDocument::Change& change = document_->lastChange();
+    if (change.kind == ColonyDocument::ChangeKind::SettingsChanged) return; // nothing here comes from settings
+    if (change.kind == ColonyDocument::ChangeKind::EncountersAppended) {
+        // An evening's line: the table placed its row already; only a new
+        // observer and a later or earlier date can change the choices. No
+        // scan of every encounter and no re-fitting of the columns per Enter.
+        const QSignalBlocker blockObserver(observer_), blockFrom(from_), blockTo(to_);
+        if (observer_->count() - 1 != static_cast<int>(model_->observers().size())) {
+            const QVariant observer = observer_->currentData();
+            observer_->clear();
+            observer_->addItem(tr("Any observer"));
+            for (const QString& name : model_->observers())
+                observer_->addItem(name.isEmpty() ? tr("(none recorded)") : name, name);
+            observer_->setCurrentIndex(observer.isValid() ? std::max(0, observer_->findData(observer)) : 0);
+        }
+        const auto& encounters = document_->colony().encounters;
+        for (size_t i = change.firstAppended; i < encounters.size(); ++i) {
+            const QDate day = toQDate(encounters[i].date);
+            const bool first = i == 0; // the colony's first encounter: the range is its day
+            if (!fromCheck_->isChecked() && (first || day < from_->date())) from_->setDate(day);
+            if (!toCheck_->isChecked() && (first || day > to_->date())) to_->setDate(day);
+        }
+        updateSummary();
+        return;
+    }
     const QSignalBlocker blockAnimal(animal_), blockObserver(observer_), blockFrom(from_), blockTo(to_);
     const QString animal = animal_->currentData().toString();
     const QVariant observer = observer_->currentData();

@@ -54,6 +54,12 @@ EditMenus::EditMenus(QMainWindow* window, ColonyEditFacade* facade, std::functio
     undo_->setShortcuts({QKeySequence(Qt::CTRL | Qt::Key_Z)});
     redo_ = stack->createRedoAction(edit, tr("&Redo"));
     redo_->setShortcuts({QKeySequence(Qt::CTRL | Qt::SHIFT | Qt::Key_Z), QKeySequence(Qt::CTRL | Qt::Key_Y)});
+    // Through the document, which first notices another program's writes (and then undoes nothing).
+    ColonyDocument* document = facade->document();
+    disconnect(undo_, &QAction::triggered, stack, &QUndoStack::undo);
+    disconnect(redo_, &QAction::triggered, stack, &QUndoStack::redo);
+    connect(undo_, &QAction::triggered, document, &ColonyDocument::undo);
+    connect(redo_, &QAction::triggered, document, &ColonyDocument::redo);
     edit->addAction(undo_);
     edit->addAction(redo_);
     edit->addSeparator();

@@ -84,6 +84,8 @@ MainWindow::MainWindow(const QString& colonyPath, QWidget* parent)
     connect(document_, &ColonyDocument::historyCleared, this, [this](const QString& reason) {
         statusBar()->showMessage(tr("Undo history cleared: %1.").arg(reason), 10000);
     });
+    connect(document_, &ColonyDocument::changedOutside, this,
+            [this](const QString& message) { statusBar()->showMessage(message, 30000); });
     connect(welcome_, &WelcomePanel::openRequested, this, [this] { openDialog(false); });
     connect(welcome_, &WelcomePanel::newRequested, this, &MainWindow::newColonyDialog);
     connect(welcome_, &WelcomePanel::demoRequested, this, &MainWindow::openDemoColony);
@@ -321,6 +323,20 @@ void MainWindow::setLastFolder(const QString& fileOrFolder)
     if (fileOrFolder.isEmpty()) return;
     const QFileInfo info(fileOrFolder);
     QSettings().setValue("lastFolder", info.isDir() ? info.absoluteFilePath() : info.absolutePath());
+}
+
+void MainWindow::changeEvent(QEvent* event)
+{
+    QMainWindow::changeEvent(event);
+    if (event->type() != QEvent::ActivationChange || !isActiveWindow() || !document_->isOpen()) return;
+    // The command line may have imported into the file while the person was
+    // away: read it again now, not only at the next write.
+    try {
+        document_->catchUpWithFile();
+    } catch (const std::exception&) {
+        // Said in the status bar (changedOutside); a box here would come back
+        // each time the window is activated after closing it.
+    }
 }
 
 void MainWindow::closeEvent(QCloseEvent* event)

@@ -66,6 +66,8 @@ protected:
     /// Asks a yes/no question (offer of a backup, restore confirmation); tests override it.
     virtual bool askQuestion(const QString& title, const QString& message);
     void closeEvent(QCloseEvent* event) override;
+    /// Coming back to the window (another program may have written to the file meanwhile).
+    void changeEvent(QEvent* event) override;
 
 private:
     void buildMenus();

@@ -1,6 +1,8 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "ui/widgets/help_browser.h"
 
+#include "ui/widgets/key_sheet.h"
+
 #include <QAction>
 #include <QDialogButtonBox>
 #include <QFile>
@@ -24,7 +26,8 @@ const char* const sheetStart = "<!-- HIERLOOM_MENU_SHORTCUTS";
 const char* const sheetEnd = "<!-- /HIERLOOM_MENU_SHORTCUTS -->";
 
 /// A text browser whose shortcut sheet lists the window's real menu
-/// shortcuts, so the sheet stays true when a menu gains an action.
+/// shortcuts and the keys its views publish (key_sheet.h), so the sheet stays
+/// true when a menu gains an action or a view a key.
 class HelpTextBrowser : public QTextBrowser {
 public:
     HelpTextBrowser(QWidget* window, QWidget* parent) : QTextBrowser(parent), window_(window) {}
@@ -39,8 +42,9 @@ public:
                 const qsizetype start = html.indexOf(QLatin1String(sheetStart));
                 const qsizetype end = html.indexOf(QLatin1String(sheetEnd));
                 if (start >= 0 && end > start) {
+                    // The menus' keys, then the keys views handle themselves (the evening entry's).
                     const QString table = QStringLiteral("<table border=\"1\" cellpadding=\"4\" cellspacing=\"0\">") +
-                                          rows + QStringLiteral("</table>");
+                                          rows + QStringLiteral("</table>") + keySheetsHtml(window_);
                     html.replace(start, end + qsizetype(qstrlen(sheetEnd)) - start, table);
                     return html;
                 }
