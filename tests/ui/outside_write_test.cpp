@@ -76,7 +76,8 @@ TEST(OutsideWrite, ALineTypedAfterAnotherProgramWroteIsSavedOnTopAndUndoNeverTou
     ASSERT_EQ(cleared.size(), 1);
     EXPECT_EQ(cleared[0], QStringLiteral("another program changed entry.hierloom"));
     EXPECT_TRUE(e.panel->summaryText().startsWith(
-        QStringLiteral("Another program changed entry.hierloom while it was open here (animals 6 → 6, encounters 1 → 2).")))
+        QStringLiteral("Another program changed entry.hierloom; it was read again and the undo history emptied "
+                      "(encounters 1 → 2, animals 6 → 6)")))
         << e.panel->summaryText().toStdString();
     // The table mirrors the file: the other program's line is an earlier one.
     ASSERT_EQ(e.panel->sessionList()->rowCount(), 3);
@@ -222,7 +223,8 @@ TEST(OutsideWrite, TheMainWindowReadsTheFileAgainWhenItIsActivated)
     QApplication::setActiveWindow(&window);
     EXPECT_EQ(window.document()->colony().encounters.size(), 2u);
     EXPECT_TRUE(window.statusBar()->currentMessage().startsWith(
-        QStringLiteral("Another program changed entry.hierloom while it was open here (animals 6 → 6, encounters 0 → 2).")))
+        QStringLiteral("Another program changed entry.hierloom; it was read again and the undo history emptied "
+                      "(encounters 0 → 2, animals 6 → 6)")))
         << window.statusBar()->currentMessage().toStdString();
     // Activated again with nothing new: nothing is read.
     window.statusBar()->clearMessage();

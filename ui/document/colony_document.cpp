@@ -97,11 +97,11 @@ bool ColonyDocument::catchUpWithFile()
                                 .arg(file));
         throw;
     }
-    emit changedOutside(tr("Another program changed %1 while it was open here (animals %2 → %3, encounters %4 → %5). "
-                           "It was read again, and the undo history was emptied so that Undo cannot change records "
-                           "this window did not write.")
-                            .arg(file, count(animals), count(colony_.animals.size()), count(encounters),
-                                 count(colony_.encounters.size())));
+    // What matters first: a status bar may cut the end off.
+    emit changedOutside(tr("Another program changed %1; it was read again and the undo history emptied "
+                           "(encounters %2 → %3, animals %4 → %5), so Undo cannot change records this window did not write.")
+                            .arg(file, count(encounters), count(colony_.encounters.size()), count(animals),
+                                 count(colony_.animals.size())));
     return true;
 }
 

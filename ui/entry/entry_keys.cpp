@@ -52,7 +52,7 @@ const std::vector<EntryKeyInfo>& entryKeys()
         {EntryKey::Draw, {alt(Qt::Key_W)}, QT_TRANSLATE_NOOP("hierloom::ui::EntryKeys", "Anywhere in the entry"),
          QT_TRANSLATE_NOOP("hierloom::ui::EntryKeys", "Mark the line a draw, or not")},
         {EntryKey::Behaviour, {alt(Qt::Key_H)}, QT_TRANSLATE_NOOP("hierloom::ui::EntryKeys", "Anywhere in the entry"),
-         QT_TRANSLATE_NOOP("hierloom::ui::EntryKeys", "To the behaviour")},
+         QT_TRANSLATE_NOOP("hierloom::ui::EntryKeys", "To the behaviour (here Alt+H is not the Help menu; F1 opens help)")},
         {EntryKey::Note, {alt(Qt::Key_O)}, QT_TRANSLATE_NOOP("hierloom::ui::EntryKeys", "Anywhere in the entry"),
          QT_TRANSLATE_NOOP("hierloom::ui::EntryKeys", "To the note")},
         {EntryKey::RefusedList, {alt(Qt::Key_R)}, QT_TRANSLATE_NOOP("hierloom::ui::EntryKeys", "Anywhere in the entry"),
