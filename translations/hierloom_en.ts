@@ -76,6 +76,105 @@
     </message>
 </context>
 <context>
+    <name>hierloom::ui</name>
+    <message>
+        <source>Line</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Time</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Winner</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Loser</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Outcome</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Behaviour</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Note</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Entered</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>no observer</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>draw</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>decided</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>earlier (%1)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>this session</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>female</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>male</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>sex unknown</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>1 year</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 years</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>age unknown</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>group %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>in no group that day</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>left the colony on %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>New Group</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>There is no group &apos;%1&apos; in the colony. Create a new group named &apos;%1&apos;?</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
     <name>hierloom::ui::AboutDialog</name>
     <message>
         <source>Qt %1</source>
@@ -339,6 +438,22 @@
         <source>(unknown)</source>
         <translation type="unfinished"></translation>
     </message>
+    <message>
+        <source>No mother chosen.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>an unknown mother</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Record the birth of %1 to %2 on %3?</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Record the introduction of %1 into group %2 on %3?</source>
+        <translation type="unfinished"></translation>
+    </message>
 </context>
 <context>
     <name>hierloom::ui::AnimalTableModel</name>
@@ -506,6 +621,29 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
 </context>
 <context>
+    <name>hierloom::ui::ColonyDocument</name>
+    <message>
+        <source>another colony file was opened</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>the colony was closed</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>another program changed %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Another program changed %1 while it was open here, and it cannot be read again; the undo history was emptied. Nothing more is written until it can be read.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Another program changed %1; it was read again and the undo history emptied (encounters %2 → %3, animals %4 → %5), so Undo cannot change records this window did not write.</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
     <name>hierloom::ui::ColonyEditFacade</name>
     <message>
         <source>No colony is open.</source>
@@ -565,6 +703,50 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
     <message>
         <source>Delete %1 encounters</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>This encounter is no longer in the file (another program may have deleted it); nothing was changed.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>The encounter %1 over %2 is no longer in the file (another program may have deleted it); nothing was deleted.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Change stability thresholds</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Set species %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Change analysis settings</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>A saved scenario needs a name.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Save scenario %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Delete scenario %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>an import added records outside the undo history</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>a merge added records outside the undo history</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>the colony was restored from a backup</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -669,18 +851,6 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <translation type="unfinished"></translation>
     </message>
     <message>
-        <source>Dra&amp;w</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Add Line (Enter)</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>&amp;Undo Whole Session</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
         <source>HH:MM</source>
         <translation type="unfinished"></translation>
     </message>
@@ -690,42 +860,6 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
     <message>
         <source>note</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>&amp;Date:</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>&amp;Group:</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>O&amp;bserver:</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>&amp;Time</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>W&amp;inner</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>&amp;Loser</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Be&amp;haviour</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>N&amp;ote</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Line</source>
         <translation type="unfinished"></translation>
     </message>
     <message>
@@ -741,27 +875,11 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <translation type="unfinished"></translation>
     </message>
     <message>
-        <source>Outcome</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
         <source>Behaviour</source>
         <translation type="unfinished"></translation>
     </message>
     <message>
         <source>Note</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Edit Line (F2)</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Delete Line (Del)</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>This session (each line is saved as it is entered):</source>
         <translation type="unfinished"></translation>
     </message>
     <message>
@@ -785,19 +903,7 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <translation type="unfinished"></translation>
     </message>
     <message>
-        <source>%1 and %2 %3 are already in this session. Save this line as another encounter?</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
         <source>Not saved: a possible duplicate.</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>draw</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>decided</source>
         <translation type="unfinished"></translation>
     </message>
     <message>
@@ -817,7 +923,83 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <translation type="unfinished"></translation>
     </message>
     <message>
-        <source>End &amp;Session</source>
+        <source>Undo Whole Session</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>End Session</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Draw</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Add Line (%1)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>YYYY-MM-DD</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Date:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Group:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Observer:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Edit Line (%1)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Delete Line (%1)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Refused lines (Enter on one puts it back on the line; Esc clears the line):</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>This date and group in the file (each line is saved as it is entered):</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>In the evening entry</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Choose the observer (or type &apos;unknown&apos;); a line needs one</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>in this session</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>in the file for this day</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 and %2 %3 are already %4. Save this line as another encounter?</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 earlier</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>The table was read again from the file; nothing was deleted. Choose the line again.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Take back the %1 entered in this session for %2, group %3? Earlier lines stay.</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -900,6 +1082,101 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
     <message>
         <source>%1 of %2 encounters</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::EntryKeys</name>
+    <message>
+        <source>On the line</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Save the line (it is in the file at once)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Clear the line; leave a changed row as it was</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>In the day&apos;s table</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Put the row on the line to change it</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Delete the selected rows (one undoable step)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>In the refused lines</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Put the refused line back on the line</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Anywhere in the entry</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Undo the last line (not the letters of a field)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Redo the line undone last</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>To the date (2026-10-05 or 20261005; Enter goes on to the line)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>To the group</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>To the observer</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>To the time</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>To the winner</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>To the loser</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Mark the line a draw, or not</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>To the behaviour (here Alt+H is not the Help menu; F1 opens help)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>To the note</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>To the refused lines</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>End the session and show its summary</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Take back this session&apos;s lines, after a question</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -1280,6 +1557,34 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <source>To &amp;group:</source>
         <translation type="unfinished"></translation>
     </message>
+    <message>
+        <source>No animal chosen.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&apos;%1&apos; is not an animal of the colony</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Choose the animal.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Record the death of %1 on %2?</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Record the removal of %1 from the colony on %2?</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Choose the group to move to.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Move %1 to group %2 on %3?</source>
+        <translation type="unfinished"></translation>
+    </message>
 </context>
 <context>
     <name>hierloom::ui::ListEditorDialog</name>
@@ -1440,6 +1745,10 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
     <message>
         <source>Analysis &amp;Settings...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Undo history cleared: %1.</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -2794,6 +3103,17 @@ per animal</source>
     </message>
     <message>
         <source>Counter-dominant dyads (winner below loser before the encounter; matrilines; dates):</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::TypedDate</name>
+    <message>
+        <source>Type the date as YYYY-MM-DD or YYYYMMDD</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&apos;%1&apos; is not a real date; type it as YYYY-MM-DD or YYYYMMDD</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
