@@ -172,3 +172,37 @@ TEST(ColonyConcurrency, TwoWriterProcessesImportingAtOnceKeepTheFileWhole)
                 imp[0], imp[1], app[0], app[1], reads, slowest);
     EXPECT_LT(slowest, 2.0) << "a reader waited for a writer";
 }
+
+TEST(ColonyConcurrency, DataVersionChangesOnlyForAnotherConnectionsCommit)
+{
+    // SQLite's documentation of PRAGMA data_version: the value differs between
+    // two calls on one connection when another connection committed a change
+    // in between; this connection's own changes leave it as it was. The
+    // desktop relies on both halves (ui/document/colony_document.h).
+    TempDir dir;
+    const std::string path = dir.file("c.hierloom");
+    hierloom::test::writeGeneratedAnimals(dir.file("animals.csv"), 10);
+    {
+        ColonyStore store = ColonyStore::create(path);
+        ASSERT_TRUE(importFiles(store, {dir.file("animals.csv"), "", ""}, today()).ok());
+    }
+    ColonyStore mine = ColonyStore::open(path);
+    const std::int64_t start = mine.dataVersion();
+    mine.append({}, {}, {encounter(1)});
+    EXPECT_EQ(mine.dataVersion(), start) << "its own write counted as another's";
+    {
+        // Another program that only reads (and opens for writing without writing) changes nothing.
+        const ColonyStore reader = ColonyStore::open(path, ColonyStore::Mode::ReadOnly);
+        EXPECT_EQ(reader.encounterCount(), 1);
+        const ColonyStore idle = ColonyStore::open(path);
+        EXPECT_EQ(idle.encounterCount(), 1);
+    }
+    EXPECT_EQ(mine.dataVersion(), start);
+    {
+        ColonyStore other = ColonyStore::open(path);
+        other.append({}, {}, {encounter(2)});
+    }
+    const std::int64_t after = mine.dataVersion();
+    EXPECT_NE(after, start);
+    EXPECT_EQ(mine.dataVersion(), after); // asked again with nothing new: the same
+}
