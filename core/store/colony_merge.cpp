@@ -12,6 +12,7 @@
 #include <sqlite3.h>
 
 #include <algorithm>
+#include <array>
 #include <map>
 #include <sstream>
 #include <unordered_map>
@@ -331,13 +332,21 @@ std::vector<Record> pick(const std::vector<Record>& all, const std::unordered_se
 
 } // namespace
 
-MergeReport mergeColonies(ColonyStore& target, const ColonyStore& other, const MergeOptions& options)
+namespace {
+
+/// What the merge will do with each table (animal, residence, encounter).
+struct Decisions {
+    std::array<TablePlan, 3> plans;
+    bool fresh() const
+    {
+        return std::any_of(plans.begin(), plans.end(), [](const TablePlan& p) { return !p.fresh.empty(); });
+    }
+};
+
+/// Compares the two files and decides, writing nothing; conflicts and
+/// problems go into `report`.
+Decisions decide(const ColonyStore& target, const ColonyStore& other, MergePreference prefer, MergeReport& report)
 {
-    MergeReport report;
-    sqlite3* db = target.handle();
-    // Reads and writes in one write transaction, so that nobody changes the
-    // file between the checks and the write.
-    WriteTransaction tx(target); // rolled back unless committed below
     const std::vector<RecordTable>& tables = recordTables(); // animal, residence, encounter
     std::vector<RecordStates> ours, theirs;
     for (const RecordTable& t : tables) {
@@ -345,20 +354,16 @@ MergeReport mergeColonies(ColonyStore& target, const ColonyStore& other, const M
         theirs.push_back(readRecordStates(other, t));
     }
     fillEmptyGroups(theirs[2], ours[2], tables[2]);
+    Decisions d;
     // Encounters first, so that an animal whose encounters go too may go.
-    TablePlan encounterPlan = TableMerger(tables[2], ours[2], theirs[2], options.prefer, report,
-                                          report.skippedEncounters, other.path())
-                                  .run([](const RecordValues&) { return std::string(); });
-    TablePlan residencePlan = TableMerger(tables[1], ours[1], theirs[1], options.prefer, report,
-                                          report.skippedResidences, other.path())
-                                  .run([](const RecordValues&) { return std::string(); });
-    const std::unordered_set<std::string> goingEncounters(encounterPlan.deletes.begin(), encounterPlan.deletes.end());
-    const std::unordered_set<std::string> goingAnimals = [&] {
-        std::unordered_set<std::string> out;
-        for (const auto& [uid, v] : ours[0].current)
-            if (!theirs[0].current.count(uid) && theirs[0].deleted.count(uid)) out.insert(uid);
-        return out;
-    }();
+    d.plans[2] = TableMerger(tables[2], ours[2], theirs[2], prefer, report, report.skippedEncounters, other.path())
+                     .run([](const RecordValues&) { return std::string(); });
+    d.plans[1] = TableMerger(tables[1], ours[1], theirs[1], prefer, report, report.skippedResidences, other.path())
+                     .run([](const RecordValues&) { return std::string(); });
+    const std::unordered_set<std::string> goingEncounters(d.plans[2].deletes.begin(), d.plans[2].deletes.end());
+    std::unordered_set<std::string> goingAnimals;
+    for (const auto& [uid, v] : ours[0].current)
+        if (!theirs[0].current.count(uid) && theirs[0].deleted.count(uid)) goingAnimals.insert(uid);
     // Records here that still name an animal the other file deleted.
     auto stillNamed = [&](const RecordValues& animal) {
         const std::string id = at(animal, 0);
@@ -372,8 +377,34 @@ MergeReport mergeColonies(ColonyStore& target, const ColonyStore& other, const M
         if (offspring) out += std::string(out.empty() ? "" : " and ") + std::to_string(offspring) + " offspring";
         return out;
     };
-    TablePlan animalPlan =
-        TableMerger(tables[0], ours[0], theirs[0], options.prefer, report, report.skippedAnimals, other.path()).run(stillNamed);
+    d.plans[0] = TableMerger(tables[0], ours[0], theirs[0], prefer, report, report.skippedAnimals, other.path())
+                     .run(stillNamed);
+    return d;
+}
+
+} // namespace
+
+MergeReport mergeColonies(ColonyStore& target, const ColonyStore& other, const MergeOptions& options)
+{
+    MergeReport report;
+    if (options.backup && !options.dryRun) {
+        // SQLite cannot copy a file from the connection writing it, so the
+        // backup is taken before the write transaction, when a first look
+        // shows the merge would change something (and could go ahead).
+        MergeReport look;
+        const Decisions first = decide(target, other, options.prefer, look);
+        if (look.conflicts.empty() && look.problems.empty() && (look.changes() || first.fresh()))
+            report.backup = backupColony(target, options.now, backupsToKeep(target));
+    }
+    sqlite3* db = target.handle();
+    // Reads and writes in one write transaction, so that nobody changes the
+    // file between the checks and the write.
+    WriteTransaction tx(target); // rolled back unless committed below
+    const std::vector<RecordTable>& tables = recordTables();
+    Decisions decided = decide(target, other, options.prefer, report);
+    const TablePlan& animalPlan = decided.plans[0];
+    const TablePlan& residencePlan = decided.plans[1];
+    const TablePlan& encounterPlan = decided.plans[2];
     if (!report.conflicts.empty() || !report.problems.empty()) return report;
 
     // The records to add, from the other file, in its chronological order for encounters.
@@ -384,18 +415,12 @@ MergeReport mergeColonies(ColonyStore& target, const ColonyStore& other, const M
     for (size_t i : chronologicalOrder(theirColony.encounters))
         if (encounterPlan.fresh.count(theirColony.encounters[i].uid))
             fresh.encounters.push_back(theirColony.encounters[i]);
-    const bool changing = report.changes() || !fresh.animals.empty() || !fresh.residences.empty() ||
-                          !fresh.encounters.empty();
-    if (changing && options.backup && !options.dryRun)
-        report.backup = backupColony(target, options.now, backupsToKeep(target));
-
     // Edits and deletions first, then every record to add goes through the
     // import's checks against the colony as it stands after them.
-    const TablePlan* plans[] = {&animalPlan, &residencePlan, &encounterPlan};
     for (size_t k = 0; k < tables.size(); ++k)
-        for (const Update& u : plans[k]->updates) applyUpdate(db, tables[k], u);
+        for (const Update& u : decided.plans[k].updates) applyUpdate(db, tables[k], u);
     for (size_t k = tables.size(); k-- > 0;)
-        for (const std::string& uid : plans[k]->deletes) applyDelete(db, tables[k], uid);
+        for (const std::string& uid : decided.plans[k].deletes) applyDelete(db, tables[k], uid);
     for (Encounter& e : fresh.encounters) e.seq = 0;
     std::ostringstream animals, residences, encounters;
     writeAnimalsCsv(animals, fresh);

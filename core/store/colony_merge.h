@@ -77,7 +77,8 @@ struct MergeOptions {
     bool dryRun = false; ///< check and report, write nothing
     Day today = 0;       ///< dates after it are refused, as in an import
     /// Take a backup (backupColony, keeping `backup_keep`) before a merge
-    /// that changes anything is written.
+    /// that changes anything is written: after a first look that writes
+    /// nothing, just before the write transaction begins.
     bool backup = true;
     std::chrono::system_clock::time_point now = std::chrono::system_clock::now(); ///< names the backup
 };
