@@ -170,7 +170,9 @@ TEST(CliMergeDemo, DeletionsTravelOneSidedEditsAreTakenAndABackupIsTaken)
     // Both agree now.
     const CliResult again = runCli({"merge", d.a, "--from", d.b});
     ASSERT_EQ(again.status, 0) << again.err;
-    EXPECT_EQ(lines(again.out).size(), 1U + 1U) << again.out; // header and the kept-deleted row
+    EXPECT_EQ(lines(again.out).size(), 1U) << again.out; // the header only: deleted on both sides now
+    EXPECT_NE(again.err.find("nothing to merge"), std::string::npos) << again.err;
+    EXPECT_TRUE(hierloom::core::listBackups(d.a).empty()); // no merge into a changed anything: no backup
 }
 
 // Two demo files made apart give the same records the same uids: nothing to merge.
