@@ -157,8 +157,8 @@ void addMergeCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
             emit(ctx, text.str());
             if (!r.conflicts.empty())
                 throw BadInputError("nothing was merged: " + std::to_string(r.conflicts.size()) +
-                                    " records were changed differently in the two files since they parted (listed); "
-                                    "decide with --prefer ours or --prefer theirs");
+                                    " records were edited differently in the two files (listed); decide with "
+                                    "--prefer ours or --prefer theirs");
             if (!r.problems.empty()) {
                 ctx.err << r.problems.text();
                 throw BadInputError("nothing was merged; " + o->colony + " is unchanged");

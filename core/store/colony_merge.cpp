@@ -39,7 +39,8 @@ size_t columnIndex(const RecordTable& t, const char* column)
     return t.columns.size();
 }
 
-/// A value as a person reads it: times as HH:MM, NULL as empty.
+/// A value as a person reads it: times as HH:MM, NULL as empty, control
+/// characters (in a file written by another tool) escaped.
 std::string shown(const RecordTable& t, size_t column, const std::optional<std::string>& v)
 {
     if (!v) return {};
@@ -47,10 +48,10 @@ std::string shown(const RecordTable& t, size_t column, const std::optional<std::
         try {
             return formatTimeOfDay(std::stoi(*v));
         } catch (const std::exception&) {
-            return *v;
+            // not a number of minutes: shown as stored
         }
     }
-    return *v;
+    return printableText(*v);
 }
 
 std::string at(const RecordValues& v, size_t i) { return i < v.size() && v[i] ? *v[i] : std::string(); }
@@ -58,7 +59,8 @@ std::string at(const RecordValues& v, size_t i) { return i < v.size() && v[i] ? 
 std::string label(const RecordTable& t, const RecordValues& v)
 {
     if (isTable(t, "animal")) return "animal " + at(v, 0);
-    if (isTable(t, "residence")) return "stay of " + at(v, 0) + " in " + at(v, 1) + " from " + at(v, 2);
+    if (isTable(t, "residence"))
+        return printableText("stay of " + at(v, 0) + " in " + at(v, 1) + " from " + at(v, 2));
     return "encounter of " + at(v, 0) + " " + at(v, 2) + (at(v, 4) == "draw" ? " drew with " : " beat ") + at(v, 3);
 }
 
