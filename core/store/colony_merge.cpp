@@ -417,9 +417,11 @@ MergeReport mergeColonies(ColonyStore& target, const ColonyStore& other, const M
     for (size_t i : chronologicalOrder(theirColony.encounters))
         if (encounterPlan.fresh.count(theirColony.encounters[i].uid))
             fresh.encounters.push_back(theirColony.encounters[i]);
-    // Edits and deletions first, then every record to add goes through the
-    // import's checks against the colony as it stands after them.
-    for (size_t k = 0; k < tables.size(); ++k)
+    // Edits of animals and stays and every deletion first, then every record
+    // to add goes through the import's checks against the colony as it
+    // stands after them; edits of encounters last, as they may name an
+    // animal added just before.
+    for (size_t k = 0; k < 2; ++k)
         for (const Update& u : decided.plans[k].updates) applyUpdate(db, tables[k], u);
     for (size_t k = tables.size(); k-- > 0;)
         for (const std::string& uid : decided.plans[k].deletes) applyDelete(db, tables[k], uid);
@@ -441,6 +443,7 @@ MergeReport mergeColonies(ColonyStore& target, const ColonyStore& other, const M
         return report;
     }
     target.append(plan.animals, plan.residences, plan.encounters, "merge from " + from);
+    for (const Update& u : encounterPlan.updates) applyUpdate(db, tables[2], u);
     report.addedAnimals = std::move(plan.animals);
     report.addedResidences = std::move(plan.residences);
     report.addedEncounters = std::move(plan.encounters);

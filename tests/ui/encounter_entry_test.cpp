@@ -245,7 +245,7 @@ TEST(EncounterEntry, AnimalDialogRefusesAControlCharacterInTheName)
 {
     Entry e;
     ui::AnimalEditorDialog dialog(&e.facade, ui::AnimalEditorDialog::Mode::Add);
-    dialog.show();
+    dialog.QWidget::show();
     QApplication::setActiveWindow(&dialog);
     dialog.idEdit()->setFocus();
     QTest::keyClicks(QApplication::focusWidget(), QStringLiteral("N1"));

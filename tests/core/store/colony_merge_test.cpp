@@ -545,3 +545,29 @@ TEST(MergeTombstones, ABackupBeforeEveryMergeThatChangesSomething)
     EXPECT_TRUE(r.backup.empty());
     EXPECT_EQ(listBackups(t.a).size(), 1U);
 }
+
+// An encounter corrected in the other file to name an animal that file added:
+// the animal is added before the correction is written.
+TEST(MergeTombstones, AnEditNamingANewAnimalOfTheOtherFileIsWrittenAfterIt)
+{
+    TwoCopies t;
+    {
+        ColonyStore b = ColonyStore::open(t.b);
+        Animal n;
+        n.id = "N2";
+        n.sex = Sex::Female;
+        n.entry = day("2013-01-01");
+        n.entryType = EntryType::Introduced;
+        b.append({n}, {{"N2", "main", day("2013-01-01"), std::nullopt, ""}}, {});
+        b.exec("UPDATE encounter SET loser = 'N2' WHERE date = '2013-01-03'");
+    }
+    const MergeReport r = mergeInto(t.a, t.b);
+    EXPECT_TRUE(r.conflicts.empty());
+    EXPECT_TRUE(r.problems.empty()) << r.problems.text();
+    ASSERT_TRUE(r.written);
+    EXPECT_EQ(r.addedAnimals.size(), 1U);
+    ASSERT_EQ(r.updated.size(), 1U);
+    EXPECT_EQ(r.updated[0].detail, "loser: 'F3' here, 'N2' in the other file");
+    for (const Encounter& e : ColonyStore::open(t.a, ColonyStore::Mode::ReadOnly).loadEncounters())
+        if (formatDate(e.date) == "2013-01-03") EXPECT_EQ(e.loser, "N2");
+}
