@@ -120,6 +120,15 @@ struct Update {
     RecordValues values; // the other file's record
 };
 
+std::vector<std::string> sortedUids(const std::unordered_map<std::string, RecordValues>& records)
+{
+    std::vector<std::string> out;
+    out.reserve(records.size());
+    for (const auto& entry : records) out.push_back(entry.first);
+    std::sort(out.begin(), out.end());
+    return out;
+}
+
 /// The decisions about one table, made before anything is written.
 struct TablePlan {
     std::vector<Update> updates;
@@ -141,19 +150,21 @@ public:
     template <typename StillNamed>
     TablePlan run(const StillNamed& stillNamed)
     {
+        // In uid order, so that a report lists the same records in the same
+        // order every time (new uids are time-ordered: roughly entry order).
         std::vector<std::string> unmatchedTheirs;
-        for (const auto& [uid, values] : theirs_.current) {
+        for (const std::string& uid : sortedUids(theirs_.current)) {
             if (ours_.current.count(uid)) pair(uid, uid, "");
-            else if (ours_.deleted.count(uid)) deletedHere(uid, values);
+            else if (ours_.deleted.count(uid)) deletedHere(uid, theirs_.current.at(uid));
             else unmatchedTheirs.push_back(uid);
         }
         // The same record under two uids (set up apart, e.g. the same
         // animals.csv imported into two new files by an older version).
+        const std::vector<std::string> ourUids = sortedUids(ours_.current);
         std::unordered_map<std::string, std::vector<std::string>> ourByContent;
-        for (const auto& [uid, values] : ours_.current)
+        for (const std::string& uid : ourUids)
             if (!theirs_.current.count(uid) && !theirs_.deleted.count(uid))
-                ourByContent[contentKey(t_, values)].push_back(uid);
-        std::sort(unmatchedTheirs.begin(), unmatchedTheirs.end());
+                ourByContent[contentKey(t_, ours_.current.at(uid))].push_back(uid);
         for (const std::string& uid : unmatchedTheirs) {
             auto it = ourByContent.find(contentKey(t_, theirs_.current.at(uid)));
             if (it == ourByContent.end() || it->second.empty()) {
@@ -164,8 +175,9 @@ public:
             it->second.pop_back();
             pair(ourUid, uid, "uid in the other file: " + uid);
         }
-        for (const auto& [uid, values] : ours_.current)
-            if (!theirs_.current.count(uid) && theirs_.deleted.count(uid)) deletedThere(uid, values, stillNamed(values));
+        for (const std::string& uid : ourUids)
+            if (!theirs_.current.count(uid) && theirs_.deleted.count(uid))
+                deletedThere(uid, ours_.current.at(uid), stillNamed(ours_.current.at(uid)));
         return std::move(plan_);
     }
 
