@@ -148,12 +148,12 @@ TEST(BackupDue, TwoWritersWithABackupDueKeepTheFileAndTheBackupsWhole)
                 r[0][0], r[0][1], r[0][3], r[1][0], r[1][1], r[1][3]);
 }
 
-// Imports and merges killed with SIGKILL at seeded random moments while a
+// Imports, merges and restores killed with SIGKILL at seeded random moments while a
 // backup is due (so the kill also lands in the backup before the write, and
 // in the merge's own backup): the colony passes the integrity check and holds
 // all or none of the write, every finished backup is whole, and the next
 // backup removes the partial file a killed one left.
-TEST(BackupDue, KilledImportsAndMergesWithABackupDueLeaveEverythingWhole)
+TEST(BackupDue, KilledImportsMergesAndRestoresWithABackupDueLeaveEverythingWhole)
 {
     TempDir dir;
     const int animals = 100;
@@ -173,18 +173,29 @@ TEST(BackupDue, KilledImportsAndMergesWithABackupDueLeaveEverythingWhole)
         ColonyStore store = ColonyStore::open(other);
         ASSERT_TRUE(importFiles(store, {"", "", dir.file("encounters.csv")}, today()).ok());
     }
+    // A backup of the other laptop's file, for the restores.
+    std::string otherBackup;
+    {
+        const ColonyStore store = ColonyStore::open(other, ColonyStore::Mode::ReadOnly);
+        otherBackup = backupColony(store, std::chrono::system_clock::now(), 1000);
+    }
     const std::string colony = dir.file("run.hierloom");
     auto fresh = [&] {
         for (const char* suffix : {"", "-wal", "-shm"}) fs::remove(colony + suffix);
         fs::remove_all(backupFolder(colony));
         fs::copy_file(base, colony);
     };
-    // kind 0: scheduled backup then import; kind 1: scheduled backup then merge (which backs up again).
+    // kind 0: scheduled backup then import; kind 1: scheduled backup then merge (which backs up again);
+    // kind 2: a restore of the other laptop's backup (which backs up the replaced state first).
     auto start = [&](int kind) -> pid_t {
         const pid_t pid = ::fork();
         if (pid != 0) return pid;
         int status = 0;
         try {
+            if (kind == 2) {
+                restoreBackup(otherBackup, colony, std::chrono::system_clock::now());
+                ::_exit(0);
+            }
             ColonyStore store = ColonyStore::open(colony);
             backupIfDue(store, std::chrono::system_clock::now());
             if (kind == 0) {
@@ -201,8 +212,8 @@ TEST(BackupDue, KilledImportsAndMergesWithABackupDueLeaveEverythingWhole)
         ::_exit(status);
     };
     // Calibration: each whole run, which must succeed and take its backups.
-    std::array<double, 2> full{};
-    for (int kind = 0; kind < 2; ++kind) {
+    std::array<double, 3> full{};
+    for (int kind = 0; kind < 3; ++kind) {
         fresh();
         const auto t0 = Clock::now();
         const pid_t pid = start(kind);
@@ -211,15 +222,15 @@ TEST(BackupDue, KilledImportsAndMergesWithABackupDueLeaveEverythingWhole)
         full[static_cast<size_t>(kind)] = std::chrono::duration<double>(Clock::now() - t0).count();
         ASSERT_TRUE(WIFEXITED(status) && WEXITSTATUS(status) == 0) << "kind " << kind << " status " << status;
         ASSERT_EQ(scalar(colony, "SELECT count(*) FROM encounter"), rows);
-        EXPECT_EQ(listBackups(colony).size(), kind == 0 ? 1U : 2U);
+        EXPECT_EQ(listBackups(colony).size(), kind == 1 ? 2U : 1U);
     }
     std::mt19937_64 rng(16);
     std::uniform_real_distribution<double> part(0.0, 1.05);
-    const int killPoints = 16;
+    const int killPoints = 24;
     int none = 0, whole = 0, partialsLeft = 0;
     for (int k = 0; k < killPoints; ++k) {
         fresh();
-        const int kind = k % 2;
+        const int kind = k % 3;
         const double delay = part(rng) * full[static_cast<size_t>(kind)];
         const auto t0 = Clock::now();
         const pid_t pid = start(kind);
@@ -250,8 +261,8 @@ TEST(BackupDue, KilledImportsAndMergesWithABackupDueLeaveEverythingWhole)
         }
         EXPECT_TRUE(partialsIn(backupFolder(colony)).empty());
     }
-    std::printf("[ due-kill ] import %.2f s, merge %.2f s; %d kill points: %d left none, %d the whole write, "
-                "%d left a partial backup\n",
-                full[0], full[1], killPoints, none, whole, partialsLeft);
+    std::printf("[ due-kill ] import %.2f s, merge %.2f s, restore %.2f s; %d kill points: %d left none, %d the whole "
+                "write, %d left a partial backup\n",
+                full[0], full[1], full[2], killPoints, none, whole, partialsLeft);
     EXPECT_EQ(none + whole, killPoints);
 }
