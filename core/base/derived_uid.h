@@ -1,5 +1,6 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
+#include <cstdint>
 #include <string>
 #include <string_view>
 
@@ -12,5 +13,13 @@ namespace hierloom::core {
 /// that the same import file read into two copies of a colony gives the same
 /// records the same identities (docs/file-formats.md, "Identities").
 std::string derivedUid(std::string_view key);
+
+/// A derived uid for the `row`-th record (from 0) of one load: 48 bits from
+/// the hash of `place` (the same for the whole load), then `row` in 34 bits,
+/// then 40 bits from the hash of `key`; version 8, RFC 9562 variant. The uids
+/// of one load sort in row order, so a million of them go into the uid index
+/// one after the other, as random time-ordered uids do, instead of at random
+/// places (which made a large import about 1.5 times slower).
+std::string derivedRowUid(std::string_view place, std::uint64_t row, std::string_view key);
 
 } // namespace hierloom::core

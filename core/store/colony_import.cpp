@@ -302,13 +302,13 @@ std::int64_t importEpoch(const ColonyStore& store)
     return q.step() ? q.integer(0) : 0;
 }
 
-std::string encounterUidKey(const Encounter& e, std::int64_t epoch, std::size_t row)
+std::string encounterUid(const Encounter& e, std::int64_t epoch, std::size_t row)
 {
-    std::string key = "encounter\x1f" + std::to_string(epoch) + '\x1f' + std::to_string(row);
+    std::string key;
     for (const std::string& f : {formatDate(e.date), e.time ? formatTimeOfDay(*e.time) : std::string(), e.winner,
                                  e.loser, std::string(toString(e.outcome)), e.behaviour, e.group, e.observer, e.note})
-        key += '\x1f' + f;
-    return key;
+        key += f + '\x1f';
+    return derivedRowUid("encounter\x1f" + std::to_string(epoch), row, key);
 }
 
 void deriveUids(ImportPlan& plan, std::int64_t epoch)
@@ -319,7 +319,7 @@ void deriveUids(ImportPlan& plan, std::int64_t epoch)
     for (Residence& r : plan.residences)
         if (r.uid.empty()) r.uid = derivedUid("residence" + prefix + r.animal + '\x1f' + formatDate(r.from));
     for (std::size_t i = 0; i < plan.encounters.size(); ++i)
-        if (plan.encounters[i].uid.empty()) plan.encounters[i].uid = derivedUid(encounterUidKey(plan.encounters[i], epoch, i));
+        if (plan.encounters[i].uid.empty()) plan.encounters[i].uid = encounterUid(plan.encounters[i], epoch, i);
 }
 
 namespace {
@@ -341,7 +341,7 @@ void checkAndAppendEncounters(const ResidenceIndex& where, std::unordered_set<st
             std::size_t row = 0;
             checkEncounters(where, uids, src, today, problems, [&](Encounter& e) {
                 // The uid is made here, off the writing thread.
-                if (e.uid.empty()) e.uid = derivedUid(encounterUidKey(e, epoch, row));
+                if (e.uid.empty()) e.uid = encounterUid(e, epoch, row);
                 ++row;
                 batch.push_back(std::move(e));
                 if (batch.size() < batchRows) return true;

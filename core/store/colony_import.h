@@ -53,13 +53,14 @@ std::int64_t importEpoch(const ColonyStore& store);
 
 /// Gives each animal and residence of `plan` that has no uid one derived
 /// from `epoch` and its identity (animal id; animal and first day of a stay),
-/// and each encounter one derived from `epoch`, its row number in the import
-/// and its fields (encounterUidKey).
+/// and each encounter one derived from `epoch`, its place among the import's
+/// encounters and its fields (encounterUid).
 void deriveUids(ImportPlan& plan, std::int64_t epoch);
 
-/// The key of a derived encounter uid: `epoch`, the encounter's place among
-/// the import's encounters (`row`, from 0) and its fields.
-std::string encounterUidKey(const Encounter& e, std::int64_t epoch, std::size_t row);
+/// The derived uid of the `row`-th encounter (from 0) of an import into a
+/// colony at import epoch `epoch` (derivedRowUid: the uids of one import sort
+/// in row order).
+std::string encounterUid(const Encounter& e, std::int64_t epoch, std::size_t row);
 
 /// Paths of the files to import; empty means not given.
 struct ImportPaths {
