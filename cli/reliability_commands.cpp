@@ -136,13 +136,23 @@ void addMergeCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
             std::ostringstream text;
             CsvWriter csv(text);
             csv.writeRow({"action", "table", "uid", "record", "detail"});
-            for (const MergeConflict& c : r.conflicts) csv.writeRow({"conflict", c.table, c.uid, c.record, c.what});
+            // One row per conflicting field, with both values (and the common one when known).
+            for (const MergeConflict& c : r.conflicts)
+                for (const FieldConflict& f : c.fields)
+                    csv.writeRow({"conflict", c.table, c.uid, c.record,
+                                  f.field + ": '" + f.ours + "' here, '" + f.theirs + "' in the other file" +
+                                      (f.base ? ", '" + *f.base + "' before" : std::string())});
             for (const Animal& a : r.addedAnimals) csv.writeRow({"added", "animal", a.uid, "animal " + a.id, ""});
             for (const Residence& x : r.addedResidences)
                 csv.writeRow({"added", "residence", x.uid, x.animal + " in " + x.group + " from " + formatDate(x.from), ""});
             for (const Encounter& e : r.addedEncounters)
                 csv.writeRow({"added", "encounter", e.uid, formatDate(e.date) + " " + e.winner + " " + e.loser,
                               "seq " + std::to_string(e.seq)});
+            for (const MergeChange& c : r.updated) csv.writeRow({"updated", c.table, c.uid, c.record, c.detail});
+            for (const MergeChange& c : r.deleted) csv.writeRow({"deleted", c.table, c.uid, c.record, c.detail});
+            for (const MergeChange& c : r.keptDeleted)
+                csv.writeRow({"kept deleted", c.table, c.uid, c.record, c.detail});
+            for (const MergeChange& c : r.matched) csv.writeRow({"matched", c.table, c.uid, c.record, c.detail});
             for (const std::string& t : r.takenFromOther) csv.writeRow({"taken from other", "", "", t, ""});
             emit(ctx, text.str());
             if (!r.conflicts.empty())
@@ -153,10 +163,16 @@ void addMergeCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
                 ctx.err << r.problems.text();
                 throw BadInputError("nothing was merged; " + o->colony + " is unchanged");
             }
-            ctx.err << (r.written ? "merged: added " : "dry run: would add ") << r.addedAnimals.size() << " animals, "
-                    << r.addedResidences.size() << " residences, " << r.addedEncounters.size() << " encounters; "
-                    << "skipped " << r.skippedAnimals << " animals, " << r.skippedResidences << " residences, "
-                    << r.skippedEncounters << " encounters already here";
+            if (!r.backup.empty()) ctx.err << "backed up " << o->colony << " into " << r.backup << "\n";
+            ctx.err << (r.written ? "merged: added " : o->dryRun ? "dry run: would add " : "nothing to merge: added ")
+                    << r.addedAnimals.size() << " animals, " << r.addedResidences.size() << " residences, "
+                    << r.addedEncounters.size() << " encounters; " << (o->dryRun ? "would update " : "updated ")
+                    << r.updated.size() << " and " << (o->dryRun ? "would delete " : "deleted ") << r.deleted.size()
+                    << " records; skipped " << r.skippedAnimals << " animals, " << r.skippedResidences
+                    << " residences, " << r.skippedEncounters << " encounters already here";
+            if (!r.keptDeleted.empty()) ctx.err << "; " << r.keptDeleted.size() << " records stay deleted";
+            if (!r.matched.empty())
+                ctx.err << "; " << r.matched.size() << " records recognised by content under another uid";
             if (!r.takenFromOther.empty()) ctx.err << "; took " << r.takenFromOther.size() << " records from the other file";
             ctx.err << "\n";
         };

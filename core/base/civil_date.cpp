@@ -82,7 +82,39 @@ std::string formatDate(Day d)
 
 std::string formatDate(const std::optional<Day>& d) { return d ? formatDate(*d) : std::string(); }
 
-std::string quotedValue(std::string_view value) { return "'" + std::string(value) + "'"; }
+std::size_t controlCharacterAt(std::string_view text, std::size_t i)
+{
+    const auto c = static_cast<unsigned char>(text[i]);
+    if ((c < 0x20 && c != '\t') || c == 0x7F) return 1;
+    if (c == 0xC2 && i + 1 < text.size()) {
+        const auto d = static_cast<unsigned char>(text[i + 1]);
+        if (d >= 0x80 && d <= 0x9F) return 2;
+    }
+    return 0;
+}
+
+std::string printableText(std::string_view text)
+{
+    static const char* hex = "0123456789abcdef";
+    std::string out;
+    out.reserve(text.size());
+    for (std::size_t i = 0; i < text.size(); ++i) {
+        const std::size_t n = controlCharacterAt(text, i);
+        if (n == 0) {
+            if (text[i] == '\\') out += '\\';
+            out += text[i];
+            continue;
+        }
+        const auto c = static_cast<unsigned char>(text[i + n - 1]);
+        out += n == 1 ? "\\x" : "\\u00";
+        out += hex[c >> 4];
+        out += hex[c & 0x0f];
+        i += n - 1;
+    }
+    return out;
+}
+
+std::string quotedValue(std::string_view value) { return "'" + printableText(value) + "'"; }
 
 std::optional<int> parseTimeOfDay(std::string_view s)
 {

@@ -1,5 +1,6 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
+#include <cstddef>
 #include <optional>
 #include <string>
 #include <string_view>
@@ -30,8 +31,19 @@ std::string formatDate(Day d);
 /// Formats a day as `YYYY-MM-DD`, or empty text when the day is unknown.
 std::string formatDate(const std::optional<Day>& d);
 
-/// A value quoted for a message to a person: 'value'.
+/// A value quoted for a message to a person: 'value', its control
+/// characters escaped (printableText).
 std::string quotedValue(std::string_view value);
+
+/// True for a control character a text field may not hold: every byte below
+/// 0x20 but tab, DEL (0x7F), and the C1 controls U+0080-U+009F (UTF-8 C2 80-C2 9F).
+/// Returns the length of the control character at `text[i]` (1 or 2 bytes), 0 when none is there.
+std::size_t controlCharacterAt(std::string_view text, std::size_t i);
+
+/// `text` with each control character written as `\xNN` (C1 controls as
+/// `\u0080`...) and each backslash doubled, so a message never carries a
+/// raw NUL, escape sequence or line break to the terminal or a dialog.
+std::string printableText(std::string_view text);
 
 /// Parses `HH:MM` (24 h) into minutes after midnight; nullopt otherwise.
 std::optional<int> parseTimeOfDay(std::string_view text);

@@ -22,6 +22,7 @@ ColonyStore createDemoColonyFile(const std::string& path)
                             ImportSource{"demo encounters.csv", encounters.str()}};
     ImportPlan plan = planImport({}, {}, input, today());
     if (!plan.ok()) throw std::logic_error("the bundled demo colony does not import:\n" + plan.problems.text());
+    deriveUids(plan, 0); // every demo file gives its records the same uids, like an import into a new file
     // Built under a partial name and renamed when complete (ColonyStore::create).
     return ColonyStore::create(path, [&](ColonyStore& store) {
         store.append(plan.animals, plan.residences, plan.encounters);

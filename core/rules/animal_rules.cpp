@@ -27,6 +27,7 @@ const char* ruleName(AnimalRule rule)
     case AnimalRule::NoAncestorLoop: return "no loop of parent links";
     case AnimalRule::ParentKeepsSex: return "parent keeps its sex";
     case AnimalRule::ParentKeepsBirthOrder: return "parent stays born before offspring";
+    case AnimalRule::NameText: return "animal name without control characters";
     case AnimalRule::Count: break;
     }
     return "?";
@@ -124,6 +125,9 @@ void checkAnimalRow(const Animal& a, const AnimalContext& ctx, FieldProblems& ou
     const auto start = lifeStart(a);
     if (a.exit && start && *a.exit < *start)
         out.push_back({"exit_date", formatDate(*a.exit) + " is before the entry date " + formatDate(*start)});
+
+    // AnimalRule::NameText
+    checkPlainText(a.name, "name", out);
 }
 
 void checkAnimalLinks(const Animal& a, const AnimalContext& ctx, FieldProblems& out)

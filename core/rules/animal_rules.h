@@ -30,6 +30,7 @@ enum class AnimalRule {
     NoAncestorLoop,       // mother: no loop of parent links
     ParentKeepsSex,       // sex: an animal already a parent keeps the sex its offspring need
     ParentKeepsBirthOrder, // birth_date: an animal already a parent stays born before its offspring
+    NameText,             // name: no control character but tab
     Count
 };
 

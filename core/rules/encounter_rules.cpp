@@ -17,6 +17,7 @@ const char* ruleName(EncounterRule rule)
     case EncounterRule::InAGroup: return "animals in a group that day";
     case EncounterRule::SameGroup: return "animals in the same group";
     case EncounterRule::GroupAsGiven: return "group as given";
+    case EncounterRule::TextFields: return "encounter text without control characters";
     case EncounterRule::Count: break;
     }
     return "?";
@@ -58,6 +59,12 @@ const std::string* checkEncounterRow(const Encounter& e, const ResidenceIndex& w
     if (wi < 0) out.push_back({"winner", unknownAnimal(e.winner)});
     if (li < 0) out.push_back({"loser", unknownAnimal(e.loser)});
     if (wi >= 0 && wi == li) out.push_back({"loser", quotedValue(e.loser) + " is also the winner; an encounter needs two animals"});
+
+    // EncounterRule::TextFields (reported with the other rules of the record itself)
+    checkPlainText(e.behaviour, "behaviour", out);
+    checkPlainText(e.group, "group", out);
+    checkPlainText(e.observer, "observer", out);
+    checkPlainText(e.note, "note", out);
 
     // EncounterRule::OutcomeKnown (an Outcome holding another value)
     if (e.outcome != Outcome::Decided && e.outcome != Outcome::Draw)

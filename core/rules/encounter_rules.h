@@ -23,6 +23,7 @@ enum class EncounterRule {
     InAGroup,        // winner, loser: in some group on the date
     SameGroup,       // loser: in the winner's group on the date
     GroupAsGiven,    // group: if given, the group both were in
+    TextFields,      // behaviour, group, observer, note: no control character but tab
     Count
 };
 

@@ -11,6 +11,7 @@ const char* ruleName(ResidenceRule rule)
     switch (rule) {
     case ResidenceRule::AnimalKnown: return "stay of a known animal";
     case ResidenceRule::GroupGiven: return "stay group given";
+    case ResidenceRule::GroupText: return "stay group without control characters";
     case ResidenceRule::DatesNotInFuture: return "stay dates not in the future";
     case ResidenceRule::ToNotBeforeFrom: return "stay to not before from";
     case ResidenceRule::WithinLife: return "stay within the animal's life";
@@ -25,6 +26,7 @@ bool checkStay(const Residence& r, const ResidenceContext& ctx, FieldProblems& o
     // ResidenceRule::AnimalKnown, GroupGiven, DatesNotInFuture, ToNotBeforeFrom
     if (!ctx.animal) out.push_back({"animal", notAnAnimalOf(r.animal, ctx.known)});
     if (r.group.empty()) out.push_back({"group", "is empty"});
+    checkPlainText(r.group, "group", out); // ResidenceRule::GroupText
     const bool fromRead = !(unread & ResidenceUnread::from);
     if (fromRead && r.from > ctx.today) out.push_back({"from", inTheFuture(r.from)});
     if (r.to && *r.to > ctx.today) out.push_back({"to", inTheFuture(*r.to)});

@@ -14,6 +14,7 @@ namespace hierloom::core {
 enum class ResidenceRule {
     AnimalKnown,      // animal: an animal of the colony (or of the import's animals file)
     GroupGiven,       // group: not empty
+    GroupText,        // group: no control character but tab
     DatesNotInFuture, // from, to: not after today
     ToNotBeforeFrom,  // to: not before from
     WithinLife,       // from, to: inside the animal's life in the colony

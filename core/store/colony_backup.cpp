@@ -274,6 +274,8 @@ std::string backupColony(const ColonyStore& store, Clock::time_point now, int ke
     return backupConnection(store.handle(), store.path(), now, keep);
 }
 
+int backupsToKeep(const ColonyStore& store) { return settingInt(store, "backup_keep", defaultBackupsKept); }
+
 bool backupIfDue(const ColonyStore& store, Clock::time_point now)
 {
     double hours = defaultBackupIntervalHours;
@@ -288,7 +290,7 @@ bool backupIfDue(const ColonyStore& store, Clock::time_point now)
     const auto interval = std::chrono::duration_cast<Clock::duration>(std::chrono::duration<double>(hours * 3600.0));
     // A backup named with a future time says nothing about when the last real one was taken.
     if (!backups.empty() && !backups.front().future && now - backups.front().taken < interval) return false;
-    backupColony(store, now, settingInt(store, "backup_keep", defaultBackupsKept));
+    backupColony(store, now, backupsToKeep(store));
     return true;
 }
 

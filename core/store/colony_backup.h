@@ -42,6 +42,9 @@ std::vector<BackupFile> listBackups(const std::string& colonyPath,
 std::string backupColony(const ColonyStore& store, std::chrono::system_clock::time_point now,
                          int keep = defaultBackupsKept);
 
+/// The colony's `backup_keep` setting, or defaultBackupsKept.
+int backupsToKeep(const ColonyStore& store);
+
 /// Takes a backup when the newest one is older than the colony's
 /// `backup_interval_hours` setting (24 when unset; 0 or less turns scheduled
 /// backups off), keeping `backup_keep` (10 when unset). True when one was taken.

@@ -340,6 +340,8 @@ FieldProblems checkBehaviourCodes(const std::vector<ColonyStore::BehaviourCode>&
         else if (!seen.insert(c.code).second) out.push_back({"code", quotedValue(c.code) + " appears twice"});
         if (c.severity < 0 || c.severity > 5)
             out.push_back({"severity", std::to_string(c.severity) + " must be a whole number from 0 to 5"});
+        checkPlainText(c.code, "code", out);
+        checkPlainText(c.description, "description", out);
     }
     return out;
 }
@@ -365,6 +367,7 @@ FieldProblems checkObservers(const std::vector<std::string>& names)
     for (const std::string& n : names) {
         if (n.empty()) out.push_back({"observer", "is empty; every observer needs a name or initials"});
         else if (!seen.insert(n).second) out.push_back({"observer", quotedValue(n) + " appears twice"});
+        checkPlainText(n, "observer", out);
     }
     return out;
 }

@@ -1,6 +1,8 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "core/store/colony_import.h"
 
+#include "core/base/derived_uid.h"
+
 #include "core/store/colony_store.h"
 #include "core/base/csv_columns.h"
 #include "core/base/bounded_queue.h"
@@ -231,11 +233,11 @@ void checkEncounters(const ResidenceIndex& where, std::unordered_set<std::string
         e.winner = std::string(cols.field(f, Winner));
         e.loser = std::string(cols.field(f, Loser));
         e.group = std::string(cols.field(f, GroupCol));
-        const std::string* shared = checkEncounterRow(e, where, today, row, unread == 0);
-        if (shared) e.group = *shared;
         e.behaviour = std::string(cols.field(f, Behaviour));
         e.observer = std::string(cols.field(f, Observer));
         e.note = std::string(cols.field(f, Note));
+        const std::string* shared = checkEncounterRow(e, where, today, row, unread == 0);
+        if (shared) e.group = *shared;
         checkUid(cols.field(f, Uid), uids, row, e.uid);
         if (!row.empty()) report(row, F, line, P);
         return !P.empty() || accept(e);
@@ -292,13 +294,42 @@ ImportPlan planImport(const std::vector<Animal>& existingAnimals, const std::vec
     return plan;
 }
 
+std::int64_t importEpoch(const ColonyStore& store)
+{
+    SqliteStatement has(store.handle(), "SELECT 1 FROM sqlite_master WHERE type = 'table' AND name = 'audit'");
+    if (!has.step()) return 0;
+    SqliteStatement q(store.handle(), "SELECT coalesce(max(id), 0) FROM audit");
+    return q.step() ? q.integer(0) : 0;
+}
+
+std::string encounterUid(const Encounter& e, std::int64_t epoch, std::size_t row)
+{
+    std::string key;
+    for (const std::string& f : {formatDate(e.date), e.time ? formatTimeOfDay(*e.time) : std::string(), e.winner,
+                                 e.loser, std::string(toString(e.outcome)), e.behaviour, e.group, e.observer, e.note})
+        key += f + '\x1f';
+    return derivedRowUid("encounter\x1f" + std::to_string(epoch), row, key);
+}
+
+void deriveUids(ImportPlan& plan, std::int64_t epoch)
+{
+    const std::string prefix = '\x1f' + std::to_string(epoch) + '\x1f';
+    for (Animal& a : plan.animals)
+        if (a.uid.empty()) a.uid = derivedUid("animal" + prefix + a.id);
+    for (Residence& r : plan.residences)
+        if (r.uid.empty()) r.uid = derivedUid("residence" + prefix + r.animal + '\x1f' + formatDate(r.from));
+    for (std::size_t i = 0; i < plan.encounters.size(); ++i)
+        if (plan.encounters[i].uid.empty()) plan.encounters[i].uid = encounterUid(plan.encounters[i], epoch, i);
+}
+
 namespace {
 
 /// Checks the encounters file on a second thread while this one writes the
 /// rows that passed, in batches, through `out`. Rows stop flowing at the first
 /// problem; the caller then rolls the transaction back.
 void checkAndAppendEncounters(const ResidenceIndex& where, std::unordered_set<std::string>& uids,
-                              const ImportSource& src, Day today, ImportProblems& problems, EncounterAppender& out)
+                              const ImportSource& src, Day today, ImportProblems& problems, EncounterAppender& out,
+                              std::int64_t epoch)
 {
     constexpr std::size_t batchRows = 4096;
     BoundedQueue<std::vector<Encounter>> queue(8);
@@ -307,9 +338,11 @@ void checkAndAppendEncounters(const ResidenceIndex& where, std::unordered_set<st
         try {
             std::vector<Encounter> batch;
             batch.reserve(batchRows);
+            std::size_t row = 0;
             checkEncounters(where, uids, src, today, problems, [&](Encounter& e) {
                 // The uid is made here, off the writing thread.
-                if (e.uid.empty()) e.uid = newUid();
+                if (e.uid.empty()) e.uid = encounterUid(e, epoch, row);
+                ++row;
                 batch.push_back(std::move(e));
                 if (batch.size() < batchRows) return true;
                 const bool open = queue.push(std::move(batch));
@@ -363,8 +396,10 @@ ImportResult importFiles(ColonyStore& store, const ImportPaths& paths, Day today
     WriteTransaction tx(store, bulk ? WriteTransaction::Size::CheckedBulk : WriteTransaction::Size::Small);
     const std::vector<Animal> existingAnimals = store.loadAnimals();
     const std::vector<Residence> existingResidences = store.loadResidences();
+    const std::int64_t epoch = importEpoch(store);
     ImportPlan plan = planImport(existingAnimals, existingResidences, input, today);
     if (plan.ok()) {
+        deriveUids(plan, epoch);
         insertAnimals(store, plan.animals);
         insertResidences(store, plan.residences);
     }
@@ -376,7 +411,7 @@ ImportResult importFiles(ColonyStore& store, const ImportPaths& paths, Day today
         if (plan.ok()) {
             EncounterAppender out(store, tx);
             checkAndAppendEncounters(residenceIndexOf(existingAnimals, existingResidences, plan), uids, *encounters,
-                                     today, plan.problems, out);
+                                     today, plan.problems, out, epoch);
             if (plan.ok()) out.finish("import of " + paths.encounters);
             result.encounters = static_cast<std::size_t>(out.count());
         } else {

@@ -4,6 +4,7 @@
 #include "core/base/import_problems.h"
 #include "core/rules/identifier_rules.h"
 
+#include <cstdint>
 #include <optional>
 #include <string>
 #include <string_view>
@@ -42,6 +43,24 @@ struct ImportPlan {
 /// when the encounters file has a uid column.
 ImportPlan planImport(const std::vector<Animal>& existingAnimals, const std::vector<Residence>& existingResidences,
                       const ImportInput& input, Day today, const std::unordered_set<std::string>& encounterUids = {});
+
+/// The part of a derived uid's key that the colony gives (docs/file-formats.md,
+/// "Identities"): the highest audit row id, 0 for a file without audit rows.
+/// Two copies of a colony with the same history give the same number; any
+/// change (also a deletion) raises it, so a record imported again later gets
+/// a new uid.
+std::int64_t importEpoch(const ColonyStore& store);
+
+/// Gives each animal and residence of `plan` that has no uid one derived
+/// from `epoch` and its identity (animal id; animal and first day of a stay),
+/// and each encounter one derived from `epoch`, its place among the import's
+/// encounters and its fields (encounterUid).
+void deriveUids(ImportPlan& plan, std::int64_t epoch);
+
+/// The derived uid of the `row`-th encounter (from 0) of an import into a
+/// colony at import epoch `epoch` (derivedRowUid: the uids of one import sort
+/// in row order).
+std::string encounterUid(const Encounter& e, std::int64_t epoch, std::size_t row);
 
 /// Paths of the files to import; empty means not given.
 struct ImportPaths {

@@ -1,179 +1,399 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "core/store/colony_merge.h"
 
+#include "core/store/colony_backup.h"
 #include "core/store/colony_csv_export.h"
 #include "core/store/colony_import.h"
 #include "core/store/colony_store.h"
+#include "core/store/record_states.h"
 #include "core/store/sqlite_statement.h"
 #include "core/store/write_transaction.h"
 
 #include <sqlite3.h>
 
+#include <algorithm>
+#include <array>
+#include <map>
 #include <sstream>
 #include <unordered_map>
+#include <unordered_set>
 
 namespace hierloom::core {
 
+bool MergeReport::changes() const
+{
+    return !addedAnimals.empty() || !addedResidences.empty() || !addedEncounters.empty() || !updated.empty() ||
+           !deleted.empty() || !takenFromOther.empty();
+}
+
 namespace {
 
-using Fields = std::vector<std::pair<const char*, std::string>>;
+const char* const deletedMark = "(deleted)";
 
-Fields fieldsOf(const Animal& a)
+bool isTable(const RecordTable& t, const char* name) { return std::string(t.name) == name; }
+
+size_t columnIndex(const RecordTable& t, const char* column)
 {
-    return {{"id", a.id},
-            {"name", a.name},
-            {"sex", toString(a.sex)},
-            {"birth_date", formatDate(a.birth)},
-            {"mother", a.mother},
-            {"father", a.father},
-            {"entry_date", formatDate(a.entry)},
-            {"entry_type", toString(a.entryType)},
-            {"exit_date", formatDate(a.exit)},
-            {"exit_type", toString(a.exitType)}};
+    for (size_t i = 0; i < t.columns.size(); ++i)
+        if (std::string(t.columns[i]) == column) return i;
+    return t.columns.size();
 }
 
-Fields fieldsOf(const Residence& r)
+/// A value as a person reads it: times as HH:MM, NULL as empty, control
+/// characters (in a file written by another tool) escaped.
+std::string shown(const RecordTable& t, size_t column, const std::optional<std::string>& v)
 {
-    return {{"animal", r.animal}, {"group", r.group}, {"from", formatDate(r.from)}, {"to", formatDate(r.to)}};
-}
-
-Fields fieldsOf(const Encounter& e)
-{
-    return {{"date", formatDate(e.date)},
-            {"time", e.time ? formatTimeOfDay(*e.time) : std::string()},
-            {"winner", e.winner},
-            {"loser", e.loser},
-            {"outcome", toString(e.outcome)},
-            {"behaviour", e.behaviour},
-            {"group", e.group},
-            {"observer", e.observer},
-            {"note", e.note}};
-}
-
-std::string label(const Animal& a) { return "animal " + a.id; }
-std::string label(const Residence& r)
-{
-    return "stay of " + r.animal + " in " + r.group + " from " + formatDate(r.from);
-}
-std::string label(const Encounter& e)
-{
-    return "encounter of " + formatDate(e.date) + " " + e.winner + (e.outcome == Outcome::Draw ? " drew with " : " beat ") +
-           e.loser;
-}
-
-/// The differing fields, `name: 'x' here, 'y' in the other file`; empty when the same.
-template <typename Record>
-std::string differences(const Record& ours, const Record& theirs)
-{
-    const Fields a = fieldsOf(ours);
-    const Fields b = fieldsOf(theirs);
-    std::string out;
-    for (size_t i = 0; i < a.size(); ++i)
-        if (a[i].second != b[i].second)
-            out += std::string(out.empty() ? "" : "; ") + a[i].first + ": '" + a[i].second + "' here, '" +
-                   b[i].second + "' in the other file";
-    return out;
-}
-
-/// An encounter without a group belongs to the group both animals shared that
-/// day, which the import and the merge fill in; so an empty group on either
-/// side is not a difference.
-std::string differences(const Encounter& ours, const Encounter& theirs)
-{
-    if (!ours.group.empty() && !theirs.group.empty()) return differences<Encounter>(ours, theirs);
-    Encounter same = theirs;
-    same.group = ours.group;
-    return differences<Encounter>(ours, same);
-}
-
-template <typename Record>
-std::unordered_map<std::string, const Record*> byUid(const std::vector<Record>& records)
-{
-    std::unordered_map<std::string, const Record*> out;
-    for (const Record& r : records) out.emplace(r.uid, &r);
-    return out;
-}
-
-void updateAnimal(sqlite3* db, const std::string& uid, const Animal& a)
-{
-    SqliteStatement q(db, "UPDATE animal SET id = ?, name = ?, sex = ?, birth_date = ?, mother = ?, father = ?, "
-                          "entry_date = ?, entry_type = ?, exit_date = ?, exit_type = ? WHERE uid = ?");
-    q.bind(1, a.id);
-    q.bind(2, a.name);
-    q.bind(3, toString(a.sex));
-    q.bindNullableText(4, formatDate(a.birth));
-    q.bindNullableText(5, a.mother);
-    q.bindNullableText(6, a.father);
-    q.bindNullableText(7, formatDate(a.entry));
-    q.bindNullableText(8, toString(a.entryType));
-    q.bindNullableText(9, formatDate(a.exit));
-    q.bindNullableText(10, toString(a.exitType));
-    q.bind(11, uid);
-    q.run();
-}
-
-void updateResidence(sqlite3* db, const std::string& uid, const Residence& r)
-{
-    SqliteStatement q(db, "UPDATE residence SET animal = ?, grp = ?, from_date = ?, to_date = ? WHERE uid = ?");
-    q.bind(1, r.animal);
-    q.bind(2, r.group);
-    q.bind(3, formatDate(r.from));
-    q.bindNullableText(4, formatDate(r.to));
-    q.bind(5, uid);
-    q.run();
-}
-
-void updateEncounter(sqlite3* db, const std::string& uid, const Encounter& e)
-{
-    SqliteStatement q(db, "UPDATE encounter SET date = ?, time = ?, winner = ?, loser = ?, outcome = ?, "
-                          "behaviour = ?, grp = coalesce(nullif(?, ''), grp), observer = ?, note = ? WHERE uid = ?");
-    q.bind(1, formatDate(e.date));
-    if (e.time) q.bind(2, static_cast<std::int64_t>(*e.time));
-    else q.bindNull(2);
-    q.bind(3, e.winner);
-    q.bind(4, e.loser);
-    q.bind(5, toString(e.outcome));
-    q.bind(6, e.behaviour);
-    q.bind(7, e.group);
-    q.bind(8, e.observer);
-    q.bind(9, e.note);
-    q.bind(10, uid);
-    q.run();
-}
-
-/// Sorts one kind of record of the other file into skipped, new, conflicting
-/// or to be overwritten here (`update(ourUid, theirs)`).
-template <typename Record, typename Update, typename SameKey>
-void classify(const std::vector<Record>& ours, const std::vector<Record>& theirs, const char* table,
-              MergePreference prefer, MergeReport& report, size_t& skipped, std::vector<Record>& fresh,
-              const Update& update, const SameKey& sameKey)
-{
-    const auto mine = byUid(ours);
-    for (const Record& t : theirs) {
-        const Record* o = nullptr;
-        std::string what;
-        if (auto it = mine.find(t.uid); it != mine.end()) {
-            o = it->second;
-            what = differences(*o, t);
-            if (what.empty()) {
-                ++skipped;
-                continue;
-            }
-        } else if ((o = sameKey(t)) != nullptr) {
-            // Two records (two uids) claiming one identity, e.g. one animal id.
-            what = "another record here (uid " + o->uid + ") has the same identity; uid in the other file: " + t.uid;
-            if (const std::string d = differences(*o, t); !d.empty()) what += "; " + d;
-        } else {
-            fresh.push_back(t);
-            continue;
-        }
-        if (prefer == MergePreference::None) report.conflicts.push_back({table, o->uid, label(*o), what});
-        else if (prefer == MergePreference::Ours) ++skipped;
-        else {
-            update(o->uid, t);
-            report.takenFromOther.push_back(label(t));
+    if (!v) return {};
+    if (isTable(t, "encounter") && std::string(t.columns[column]) == "time") {
+        try {
+            return formatTimeOfDay(std::stoi(*v));
+        } catch (const std::exception&) {
+            // not a number of minutes: shown as stored
         }
     }
+    return printableText(*v);
+}
+
+std::string at(const RecordValues& v, size_t i) { return i < v.size() && v[i] ? *v[i] : std::string(); }
+
+std::string label(const RecordTable& t, const RecordValues& v)
+{
+    if (isTable(t, "animal")) return "animal " + at(v, 0);
+    if (isTable(t, "residence"))
+        return printableText("stay of " + at(v, 0) + " in " + at(v, 1) + " from " + at(v, 2));
+    return "encounter of " + at(v, 0) + " " + at(v, 2) + (at(v, 4) == "draw" ? " drew with " : " beat ") + at(v, 3);
+}
+
+/// What makes two records with different uids the same record: the animal
+/// id, the animal and first day of a stay, every field of an encounter.
+std::string contentKey(const RecordTable& t, const RecordValues& v)
+{
+    if (isTable(t, "animal")) return at(v, 0);
+    if (isTable(t, "residence")) return at(v, 0) + '\x1f' + at(v, 2);
+    std::string key;
+    for (const auto& f : v) key += (f ? "=" + *f : std::string("~")) + '\x1f';
+    return key;
+}
+
+/// The newest state of our record that the other file's record also had.
+std::optional<RecordValues> commonState(const RecordStates& ours, const std::string& ourUid,
+                                        const RecordStates& theirs, const std::string& theirUid)
+{
+    if (auto it = ours.current.find(ourUid); it != ours.current.end() && theirs.knew(theirUid, it->second))
+        return it->second;
+    if (auto it = ours.history.find(ourUid); it != ours.history.end())
+        for (auto s = it->second.rbegin(); s != it->second.rend(); ++s)
+            if (theirs.knew(theirUid, *s)) return *s;
+    return std::nullopt;
+}
+
+/// A record here and its counterpart in the other file, field by field.
+struct FieldMerge {
+    std::vector<size_t> taken;  ///< changed only in the other file
+    std::vector<size_t> clash;  ///< changed on both sides to different values
+};
+
+FieldMerge mergeFields(const RecordValues& ours, const RecordValues& theirs, const std::optional<RecordValues>& base)
+{
+    FieldMerge m;
+    for (size_t i = 0; i < ours.size(); ++i) {
+        if (ours[i] == theirs[i]) continue;
+        if (base && (*base)[i] == ours[i]) m.taken.push_back(i);
+        else if (!(base && (*base)[i] == theirs[i])) m.clash.push_back(i);
+    }
+    return m;
+}
+
+std::string describeFields(const RecordTable& t, const std::vector<size_t>& fields, const RecordValues& ours,
+                           const RecordValues& theirs)
+{
+    std::string out;
+    for (size_t i : fields)
+        out += std::string(out.empty() ? "" : "; ") + t.columns[i] + ": '" + shown(t, i, ours[i]) + "' here, '" +
+               shown(t, i, theirs[i]) + "' in the other file";
+    return out;
+}
+
+struct Update {
+    std::string uid;
+    std::vector<size_t> columns;
+    RecordValues values; // the other file's record
+};
+
+std::vector<std::string> sortedUids(const std::unordered_map<std::string, RecordValues>& records)
+{
+    std::vector<std::string> out;
+    out.reserve(records.size());
+    for (const auto& entry : records) out.push_back(entry.first);
+    std::sort(out.begin(), out.end());
+    return out;
+}
+
+/// The decisions about one table, made before anything is written.
+struct TablePlan {
+    std::vector<Update> updates;
+    std::vector<std::string> deletes;
+    std::unordered_set<std::string> fresh; ///< uids of the other file's records to add
+};
+
+class TableMerger {
+public:
+    TableMerger(const RecordTable& table, const RecordStates& ours, const RecordStates& theirs,
+                MergePreference prefer, MergeReport& report, size_t& skipped, std::string otherPath)
+        : t_(table), ours_(ours), theirs_(theirs), prefer_(prefer), report_(report), skipped_(skipped),
+          otherPath_(std::move(otherPath))
+    {
+    }
+
+    /// `stillNamed(uid)`: why an animal deleted in the other file cannot be
+    /// deleted here (records here that still name it), or empty.
+    template <typename StillNamed>
+    TablePlan run(const StillNamed& stillNamed)
+    {
+        // In uid order, so that a report lists the same records in the same
+        // order every time (new uids are time-ordered: roughly entry order).
+        std::vector<std::string> unmatchedTheirs;
+        for (const std::string& uid : sortedUids(theirs_.current)) {
+            if (ours_.current.count(uid)) pair(uid, uid, "");
+            else if (ours_.deleted.count(uid)) deletedHere(uid, theirs_.current.at(uid));
+            else unmatchedTheirs.push_back(uid);
+        }
+        // The same record under two uids (set up apart, e.g. the same
+        // animals.csv imported into two new files by an older version).
+        const std::vector<std::string> ourUids = sortedUids(ours_.current);
+        std::unordered_map<std::string, std::vector<std::string>> ourByContent;
+        for (const std::string& uid : ourUids)
+            if (!theirs_.current.count(uid) && !theirs_.deleted.count(uid))
+                ourByContent[contentKey(t_, ours_.current.at(uid))].push_back(uid);
+        for (const std::string& uid : unmatchedTheirs) {
+            auto it = ourByContent.find(contentKey(t_, theirs_.current.at(uid)));
+            if (it == ourByContent.end() || it->second.empty()) {
+                plan_.fresh.insert(uid);
+                continue;
+            }
+            const std::string ourUid = it->second.back();
+            it->second.pop_back();
+            pair(ourUid, uid, "uid in the other file: " + uid);
+        }
+        for (const std::string& uid : ourUids)
+            if (!theirs_.current.count(uid) && theirs_.deleted.count(uid))
+                deletedThere(uid, ours_.current.at(uid), stillNamed(ours_.current.at(uid)));
+        return std::move(plan_);
+    }
+
+private:
+    void conflict(const std::string& uid, const RecordValues& labelled, std::string what,
+                  std::vector<FieldConflict> fields)
+    {
+        report_.conflicts.push_back({t_.name, uid, label(t_, labelled), std::move(what), std::move(fields)});
+    }
+
+    /// Our record `ourUid` and theirs `theirUid` are one record.
+    void pair(const std::string& ourUid, const std::string& theirUid, const std::string& matchedAs)
+    {
+        const RecordValues& o = ours_.current.at(ourUid);
+        const RecordValues& th = theirs_.current.at(theirUid);
+        if (!matchedAs.empty())
+            report_.matched.push_back({t_.name, ourUid, label(t_, o), matchedAs});
+        if (o == th) {
+            ++skipped_;
+            return;
+        }
+        const std::optional<RecordValues> base = commonState(ours_, ourUid, theirs_, theirUid);
+        const FieldMerge m = mergeFields(o, th, base);
+        Update u{ourUid, m.taken, th};
+        if (!m.taken.empty())
+            report_.updated.push_back({t_.name, ourUid, label(t_, o), describeFields(t_, m.taken, o, th)});
+        if (!m.clash.empty()) {
+            if (prefer_ == MergePreference::None) {
+                std::string what = describeFields(t_, m.clash, o, th);
+                if (!matchedAs.empty())
+                    what = "another record here (uid " + ourUid + ") has the same identity; " + matchedAs + "; " + what;
+                std::vector<FieldConflict> fields;
+                for (size_t i : m.clash)
+                    fields.push_back({t_.columns[i], shown(t_, i, o[i]), shown(t_, i, th[i]),
+                                      base ? std::optional<std::string>(shown(t_, i, (*base)[i])) : std::nullopt});
+                conflict(ourUid, o, std::move(what), std::move(fields));
+            } else if (prefer_ == MergePreference::Theirs) {
+                u.columns.insert(u.columns.end(), m.clash.begin(), m.clash.end());
+                report_.takenFromOther.push_back(label(t_, th));
+            }
+        }
+        if (u.columns.empty()) ++skipped_;
+        else plan_.updates.push_back(std::move(u));
+    }
+
+    /// The other file has a record this file deleted.
+    void deletedHere(const std::string& uid, const RecordValues& theirs)
+    {
+        const RecordValues& gone = ours_.deleted.at(uid);
+        if (ours_.knew(uid, theirs)) {
+            report_.keptDeleted.push_back({t_.name, uid, label(t_, gone), "deleted here"});
+            return;
+        }
+        if (prefer_ == MergePreference::Ours) {
+            report_.keptDeleted.push_back({t_.name, uid, label(t_, gone), "deleted here; edited in the other file"});
+        } else if (prefer_ == MergePreference::Theirs) {
+            plan_.fresh.insert(uid);
+            report_.takenFromOther.push_back(label(t_, theirs));
+        } else {
+            std::vector<FieldConflict> fields;
+            std::vector<size_t> changed;
+            for (size_t i = 0; i < theirs.size(); ++i)
+                if (theirs[i] != gone[i]) {
+                    changed.push_back(i);
+                    fields.push_back({t_.columns[i], deletedMark, shown(t_, i, theirs[i]), shown(t_, i, gone[i])});
+                }
+            std::string what = "deleted here, edited in the other file since";
+            for (size_t i : changed)
+                what += std::string(i == changed.front() ? ": " : "; ") + t_.columns[i] + ": '" +
+                        shown(t_, i, gone[i]) + "' when deleted here, '" + shown(t_, i, theirs[i]) +
+                        "' in the other file";
+            conflict(uid, gone, std::move(what), std::move(fields));
+        }
+    }
+
+    /// This file has a record the other file deleted.
+    void deletedThere(const std::string& uid, const RecordValues& ours, const std::string& stillNamed)
+    {
+        const bool unchanged = theirs_.knew(uid, ours);
+        const bool wanted = unchanged || prefer_ == MergePreference::Theirs;
+        if (wanted && stillNamed.empty()) {
+            plan_.deletes.push_back(uid);
+            report_.deleted.push_back({t_.name, uid, label(t_, ours), "deleted in the other file"});
+            if (!unchanged) report_.takenFromOther.push_back(label(t_, ours));
+            return;
+        }
+        if (prefer_ == MergePreference::Ours) {
+            ++skipped_; // kept, as preferred
+            return;
+        }
+        if (wanted && prefer_ == MergePreference::Theirs) {
+            report_.problems.add(otherPath_, 0, t_.columns[0],
+                                 label(t_, ours) + " was deleted in the other file but is still named here by " +
+                                     stillNamed + "; delete or change those first");
+            return;
+        }
+        const RecordValues& gone = theirs_.deleted.at(uid);
+        std::vector<FieldConflict> fields;
+        std::string what = "deleted in the other file";
+        if (!unchanged) {
+            what += ", edited here since";
+            for (size_t i = 0; i < ours.size(); ++i)
+                if (ours[i] != gone[i]) {
+                    fields.push_back({t_.columns[i], shown(t_, i, ours[i]), deletedMark, shown(t_, i, gone[i])});
+                    what += std::string(fields.size() == 1 ? ": " : "; ") + t_.columns[i] + ": '" +
+                            shown(t_, i, ours[i]) + "' here, '" + shown(t_, i, gone[i]) + "' when deleted there";
+                }
+        }
+        if (!stillNamed.empty()) what += "; still named here by " + stillNamed;
+        if (fields.empty()) fields.push_back({"(record)", "kept", deletedMark, std::nullopt});
+        conflict(uid, ours, std::move(what), std::move(fields));
+    }
+
+    const RecordTable& t_;
+    const RecordStates& ours_;
+    const RecordStates& theirs_;
+    MergePreference prefer_;
+    MergeReport& report_;
+    size_t& skipped_;
+    std::string otherPath_;
+    TablePlan plan_;
+};
+
+void applyUpdate(sqlite3* db, const RecordTable& t, const Update& u)
+{
+    std::string sql = std::string("UPDATE ") + t.name + " SET ";
+    for (size_t k = 0; k < u.columns.size(); ++k)
+        sql += std::string(k ? ", " : "") + t.columns[u.columns[k]] + " = ?" + std::to_string(k + 1);
+    sql += " WHERE uid = ?" + std::to_string(u.columns.size() + 1);
+    SqliteStatement q(db, sql.c_str());
+    for (size_t k = 0; k < u.columns.size(); ++k) q.bindOptional(static_cast<int>(k + 1), u.values[u.columns[k]]);
+    q.bind(static_cast<int>(u.columns.size() + 1), u.uid);
+    q.run();
+}
+
+void applyDelete(sqlite3* db, const RecordTable& t, const std::string& uid)
+{
+    SqliteStatement q(db, (std::string("DELETE FROM ") + t.name + " WHERE uid = ?").c_str());
+    q.bind(1, uid);
+    q.run();
+}
+
+/// An encounter without a group belongs to the group both animals shared
+/// that day, which the import and the merge fill in; so an empty group in the
+/// other file stands for the group the same encounter has here.
+void fillEmptyGroups(RecordStates& theirs, const RecordStates& ours, const RecordTable& t)
+{
+    const size_t g = columnIndex(t, "grp");
+    auto fill = [&](const std::string& uid, RecordValues& v) {
+        if (v[g] && !v[g]->empty()) return;
+        if (auto it = ours.current.find(uid); it != ours.current.end()) v[g] = it->second[g];
+    };
+    for (auto& [uid, v] : theirs.current) fill(uid, v);
+    for (auto& [uid, states] : theirs.history)
+        for (RecordValues& v : states) fill(uid, v);
+}
+
+template <typename Record>
+std::vector<Record> pick(const std::vector<Record>& all, const std::unordered_set<std::string>& uids)
+{
+    std::vector<Record> out;
+    for (const Record& r : all)
+        if (uids.count(r.uid)) out.push_back(r);
+    return out;
+}
+
+} // namespace
+
+namespace {
+
+/// What the merge will do with each table (animal, residence, encounter).
+struct Decisions {
+    std::array<TablePlan, 3> plans;
+    bool fresh() const
+    {
+        return std::any_of(plans.begin(), plans.end(), [](const TablePlan& p) { return !p.fresh.empty(); });
+    }
+};
+
+/// Compares the two files and decides, writing nothing; conflicts and
+/// problems go into `report`.
+Decisions decide(const ColonyStore& target, const ColonyStore& other, MergePreference prefer, MergeReport& report)
+{
+    const std::vector<RecordTable>& tables = recordTables(); // animal, residence, encounter
+    std::vector<RecordStates> ours, theirs;
+    for (const RecordTable& t : tables) {
+        ours.push_back(readRecordStates(target, t));
+        theirs.push_back(readRecordStates(other, t));
+    }
+    fillEmptyGroups(theirs[2], ours[2], tables[2]);
+    Decisions d;
+    // Encounters first, so that an animal whose encounters go too may go.
+    d.plans[2] = TableMerger(tables[2], ours[2], theirs[2], prefer, report, report.skippedEncounters, other.path())
+                     .run([](const RecordValues&) { return std::string(); });
+    d.plans[1] = TableMerger(tables[1], ours[1], theirs[1], prefer, report, report.skippedResidences, other.path())
+                     .run([](const RecordValues&) { return std::string(); });
+    const std::unordered_set<std::string> goingEncounters(d.plans[2].deletes.begin(), d.plans[2].deletes.end());
+    std::unordered_set<std::string> goingAnimals;
+    for (const auto& [uid, v] : ours[0].current)
+        if (!theirs[0].current.count(uid) && theirs[0].deleted.count(uid)) goingAnimals.insert(uid);
+    // Records here that still name an animal the other file deleted.
+    auto stillNamed = [&](const RecordValues& animal) {
+        const std::string id = at(animal, 0);
+        size_t encounters = 0, offspring = 0;
+        for (const auto& [uid, e] : ours[2].current)
+            if (!goingEncounters.count(uid) && (at(e, 2) == id || at(e, 3) == id)) ++encounters;
+        for (const auto& [uid, a] : ours[0].current)
+            if (!goingAnimals.count(uid) && (at(a, 4) == id || at(a, 5) == id)) ++offspring;
+        std::string out;
+        if (encounters) out = std::to_string(encounters) + " encounter(s)";
+        if (offspring) out += std::string(out.empty() ? "" : " and ") + std::to_string(offspring) + " offspring";
+        return out;
+    };
+    d.plans[0] = TableMerger(tables[0], ours[0], theirs[0], prefer, report, report.skippedAnimals, other.path())
+                     .run(stillNamed);
+    return d;
 }
 
 } // namespace
@@ -181,34 +401,42 @@ void classify(const std::vector<Record>& ours, const std::vector<Record>& theirs
 MergeReport mergeColonies(ColonyStore& target, const ColonyStore& other, const MergeOptions& options)
 {
     MergeReport report;
+    if (options.backup && !options.dryRun) {
+        // SQLite cannot copy a file from the connection writing it, so the
+        // backup is taken before the write transaction, when a first look
+        // shows the merge would change something (and could go ahead).
+        MergeReport look;
+        const Decisions first = decide(target, other, options.prefer, look);
+        if (look.conflicts.empty() && look.problems.empty() && (look.changes() || first.fresh()))
+            report.backup = backupColony(target, options.now, backupsToKeep(target));
+    }
     sqlite3* db = target.handle();
     // Reads and writes in one write transaction, so that nobody changes the
     // file between the checks and the write.
     WriteTransaction tx(target); // rolled back unless committed below
-    const Colony ours = target.load();
-    const Colony theirs = other.load();
+    const std::vector<RecordTable>& tables = recordTables();
+    Decisions decided = decide(target, other, options.prefer, report);
+    const TablePlan& animalPlan = decided.plans[0];
+    const TablePlan& residencePlan = decided.plans[1];
+    const TablePlan& encounterPlan = decided.plans[2];
+    if (!report.conflicts.empty() || !report.problems.empty()) return report;
+
+    // The records to add, from the other file, in its chronological order for encounters.
+    const Colony theirColony = other.load();
     Colony fresh;
-    classify(
-        ours.animals, theirs.animals, "animal", options.prefer, report, report.skippedAnimals, fresh.animals,
-        [&](const std::string& uid, const Animal& a) { updateAnimal(db, uid, a); },
-        [&](const Animal& a) -> const Animal* {
-            const int i = ours.animalIndex(a.id);
-            return i < 0 ? nullptr : &ours.animals[static_cast<size_t>(i)];
-        });
-    classify(
-        ours.residences, theirs.residences, "residence", options.prefer, report, report.skippedResidences,
-        fresh.residences, [&](const std::string& uid, const Residence& r) { updateResidence(db, uid, r); },
-        [](const Residence&) -> const Residence* { return nullptr; });
-    // New encounters in the other file's chronological order, so their seq here follows it.
-    std::vector<Encounter> theirsInOrder;
-    for (size_t i : chronologicalOrder(theirs.encounters)) theirsInOrder.push_back(theirs.encounters[i]);
-    classify(
-        ours.encounters, theirsInOrder, "encounter", options.prefer, report, report.skippedEncounters,
-        fresh.encounters, [&](const std::string& uid, const Encounter& e) { updateEncounter(db, uid, e); },
-        [](const Encounter&) -> const Encounter* { return nullptr; });
-    if (!report.conflicts.empty()) return report;
-    // Every record to add goes through the import's checks, against the
-    // colony as it stands after any overwrite above.
+    fresh.animals = pick(theirColony.animals, animalPlan.fresh);
+    fresh.residences = pick(theirColony.residences, residencePlan.fresh);
+    for (size_t i : chronologicalOrder(theirColony.encounters))
+        if (encounterPlan.fresh.count(theirColony.encounters[i].uid))
+            fresh.encounters.push_back(theirColony.encounters[i]);
+    // Edits of animals and stays and every deletion first, then every record
+    // to add goes through the import's checks against the colony as it
+    // stands after them; edits of encounters last, as they may name an
+    // animal added just before.
+    for (size_t k = 0; k < 2; ++k)
+        for (const Update& u : decided.plans[k].updates) applyUpdate(db, tables[k], u);
+    for (size_t k = tables.size(); k-- > 0;)
+        for (const std::string& uid : decided.plans[k].deletes) applyDelete(db, tables[k], uid);
     for (Encounter& e : fresh.encounters) e.seq = 0;
     std::ostringstream animals, residences, encounters;
     writeAnimalsCsv(animals, fresh);
@@ -227,11 +455,12 @@ MergeReport mergeColonies(ColonyStore& target, const ColonyStore& other, const M
         return report;
     }
     target.append(plan.animals, plan.residences, plan.encounters, "merge from " + from);
+    for (const Update& u : encounterPlan.updates) applyUpdate(db, tables[2], u);
     report.addedAnimals = std::move(plan.animals);
     report.addedResidences = std::move(plan.residences);
     report.addedEncounters = std::move(plan.encounters);
     if (!options.dryRun) tx.commit(); // a dry run is rolled back
-    report.written = !options.dryRun;
+    report.written = !options.dryRun && report.changes();
     return report;
 }
 

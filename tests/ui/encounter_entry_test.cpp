@@ -24,6 +24,8 @@
 #include <QTest>
 #include <QUndoStack>
 
+#include <QClipboard>
+
 #include <gtest/gtest.h>
 
 using namespace hierloom;
@@ -212,6 +214,52 @@ TEST(EncounterEntry, AnimalDialogShowsTheImportMessageBesideTheField)
     dialog.accept();
     EXPECT_NE(dialog.result(), QDialog::Accepted);
     EXPECT_EQ(dialog.fieldMessage("id"), QStringLiteral("'F1' is already in the colony"));
+}
+
+// Issue 16: control characters reached the file from the desktop too. A line
+// edit ignores a typed control key, so they come in by pasting (Ctrl+V into the
+// focused field) text copied from elsewhere; the entry refuses them beside the
+// line with the import's words, escaped, and the cursor goes to the note.
+TEST(EncounterEntry, AControlCharacterPastedIntoTheNoteIsRefusedBesideTheField)
+{
+    Entry e;
+    if (e.focus() == e.panel->timeEdit()) e.key(Qt::Key_Tab);
+    e.type(QStringLiteral("F1"));
+    e.key(Qt::Key_Tab);
+    e.type(QStringLiteral("F2"));
+    // Tab on through the draw box and the behaviour to the note.
+    while (e.focus() != e.panel->noteEdit() && e.keys < 40) e.key(Qt::Key_Tab);
+    ASSERT_EQ(e.focus(), e.panel->noteEdit());
+    QApplication::clipboard()->setText(QStringLiteral("limp\x1b[31m"));
+    QTest::keyClick(e.focus(), Qt::Key_V, Qt::ControlModifier);
+    ASSERT_EQ(e.panel->noteEdit()->text(), QStringLiteral("limp\x1b[31m"));
+    e.key(Qt::Key_Return);
+    EXPECT_TRUE(inFile(e.path).empty());
+    EXPECT_EQ(e.panel->fieldMessage("note"),
+              QStringLiteral("'limp\\x1b[31m' holds the control character \\x1b (only tab may appear in text)"));
+    EXPECT_EQ(QApplication::focusWidget(), e.panel->noteEdit());
+}
+
+// The animal dialog refuses a name holding a NUL byte beside the name field.
+TEST(EncounterEntry, AnimalDialogRefusesAControlCharacterInTheName)
+{
+    Entry e;
+    ui::AnimalEditorDialog dialog(&e.facade, ui::AnimalEditorDialog::Mode::Add);
+    dialog.QWidget::show();
+    QApplication::setActiveWindow(&dialog);
+    dialog.idEdit()->setFocus();
+    QTest::keyClicks(QApplication::focusWidget(), QStringLiteral("N1"));
+    dialog.nameEdit()->setFocus();
+    QApplication::clipboard()->setText(QStringLiteral("Nia") + QChar(0) + QStringLiteral("x"));
+    QTest::keyClick(QApplication::focusWidget(), Qt::Key_V, Qt::ControlModifier);
+    dialog.birthEdit()->setFocus();
+    QTest::keyClicks(QApplication::focusWidget(), QStringLiteral("2019-01-01"));
+    dialog.groupBox()->setCurrentText(QStringLiteral("A"));
+    dialog.accept();
+    EXPECT_NE(dialog.result(), QDialog::Accepted);
+    EXPECT_EQ(dialog.fieldMessage("name"),
+              QStringLiteral("'Nia\\x00x' holds the control character \\x00 (only tab may appear in text)"));
+    EXPECT_EQ(core::ColonyStore::open(e.path, core::ColonyStore::Mode::ReadOnly).load().animalIndex("N1"), -1);
 }
 
 TEST(EncounterEntry, LinesCommittedBeforeAKillAreInTheFile)

@@ -222,6 +222,43 @@ TEST(ReliabilityUi, MergeDialogAddsTheOtherFilesNewEncounter)
     EXPECT_TRUE(again.report().conflicts.empty()) << again.reportText().toStdString();
 }
 
+// The merge dialog shows a field changed in both files with both values and
+// the common one, and a deletion made in the other file, before anything is written.
+TEST(ReliabilityUi, MergeDialogShowsConflictsFieldByFieldAndDeletions)
+{
+    TempDir dir;
+    const std::string ours = makeColony(dir, "ours.hierloom");
+    const std::string theirs = dir.file("theirs.hierloom");
+    std::filesystem::copy_file(ours, theirs);
+    std::string goneUid;
+    {
+        core::ColonyStore other = core::ColonyStore::open(theirs);
+        other.exec("UPDATE animal SET name = 'Tilly' WHERE id = 'D1'");
+        goneUid = other.loadEncounters().at(0).uid;
+        other.exec(("DELETE FROM encounter WHERE uid = '" + goneUid + "'").c_str());
+    }
+    {
+        core::ColonyStore here = core::ColonyStore::open(ours);
+        here.exec("UPDATE animal SET name = 'Tess' WHERE id = 'D1'");
+    }
+    TestWindow window;
+    ASSERT_TRUE(window.openColony(QString::fromStdString(ours)));
+    ui::MergeDialog dialog(window.editFacade(), &window);
+    ASSERT_TRUE(dialog.check(QString::fromStdString(theirs))) << dialog.errorText().toStdString();
+    ASSERT_EQ(dialog.report().conflicts.size(), 1u);
+    ASSERT_EQ(dialog.report().deleted.size(), 1u);
+    const QString text = dialog.reportText();
+    EXPECT_TRUE(text.contains(QStringLiteral("name: here 'Tess', in the other file 'Tilly', before 'Cleo'"))) << text.toStdString();
+    EXPECT_TRUE(text.contains(QStringLiteral("Deleted in the other file, would be deleted here (1)"))) << text.toStdString();
+    EXPECT_FALSE(dialog.canMerge());
+    const size_t backups = core::listBackups(ours).size();
+    dialog.setPreference(core::MergePreference::Ours);
+    ASSERT_TRUE(dialog.merge()) << dialog.errorText().toStdString();
+    EXPECT_EQ(window.document()->colony().encounters.size(), 2u);
+    EXPECT_EQ(core::listBackups(ours).size(), backups + 1) << "the merge took no backup";
+    EXPECT_TRUE(dialog.reportText().contains(QStringLiteral("backed up first"))) << dialog.reportText().toStdString();
+}
+
 TEST(ReliabilityUi, HistoryListsTheInsertOfANewAnimal)
 {
     TempDir dir;

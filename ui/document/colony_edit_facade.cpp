@@ -270,14 +270,20 @@ core::MergeReport ColonyEditFacade::checkMerge(const QString& otherPath)
 {
     if (auto p = writable(); !p.empty()) throw std::runtime_error(p.front().message);
     const core::ColonyStore other = core::ColonyStore::open(toStdString(otherPath), core::ColonyStore::Mode::ReadOnly);
-    return core::mergeColonies(document_->writableStore(), other, {core::MergePreference::None, true, today()});
+    core::MergeOptions options;
+    options.dryRun = true;
+    options.today = today();
+    return core::mergeColonies(document_->writableStore(), other, options);
 }
 
 core::MergeReport ColonyEditFacade::merge(const QString& otherPath, core::MergePreference preference)
 {
     if (auto p = writable(); !p.empty()) throw std::runtime_error(p.front().message);
     const core::ColonyStore other = core::ColonyStore::open(toStdString(otherPath), core::ColonyStore::Mode::ReadOnly);
-    core::MergeReport report = core::mergeColonies(document_->writableStore(), other, {preference, false, today()});
+    core::MergeOptions options; // a merge that changes the file takes a backup first
+    options.prefer = preference;
+    options.today = today();
+    core::MergeReport report = core::mergeColonies(document_->writableStore(), other, options);
     if (report.written) {
         document_->clearHistory(tr("a merge added records outside the undo history"));
         document_->reload();

@@ -436,6 +436,7 @@ void EncounterEntryPanel::showProblems(const core::FieldProblems& problems)
                      : f == "date" ? static_cast<QWidget*>(date_)
                      : f == "observer" ? static_cast<QWidget*>(observer_)
                      : f == "behaviour" ? static_cast<QWidget*>(behaviour_)
+                     : f == "note" ? static_cast<QWidget*>(note_)
                                         : static_cast<QWidget*>(winner_);
     fault->setFocus();
     if (auto* edit = qobject_cast<QLineEdit*>(fault)) edit->selectAll();

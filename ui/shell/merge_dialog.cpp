@@ -153,14 +153,38 @@ QString MergeDialog::describe(const core::MergeReport& report, bool dryRun)
                  .arg(report.skippedResidences)
                  .arg(report.skippedEncounters);
     for (const auto& a : report.addedAnimals) lines << tr("  + animal %1").arg(toQString(a.id));
+    auto changes = [&lines](const QString& title, const std::vector<core::MergeChange>& list) {
+        if (list.empty()) return;
+        lines << QString() << title.arg(list.size());
+        for (const core::MergeChange& c : list)
+            lines << (c.detail.empty() ? QStringLiteral("  %1").arg(toQString(c.record))
+                                       : QStringLiteral("  %1: %2").arg(toQString(c.record), toQString(c.detail)));
+    };
+    changes(dryRun ? tr("Edited only in the other file, would be taken (%1):") : tr("Edited only in the other file, taken (%1):"),
+            report.updated);
+    changes(dryRun ? tr("Deleted in the other file, would be deleted here (%1):")
+                   : tr("Deleted in the other file, deleted here (%1):"),
+            report.deleted);
+    changes(tr("Deleted here, stay deleted (%1):"), report.keptDeleted);
+    changes(tr("Recognised by their content under another uid (%1):"), report.matched);
     if (!report.conflicts.empty()) {
-        lines << QString() << tr("Edited differently in the two files (%n):", nullptr, static_cast<int>(report.conflicts.size()));
-        for (const core::MergeConflict& c : report.conflicts)
-            lines << QStringLiteral("  %1 %2: %3").arg(toQString(c.table), toQString(c.record), toQString(c.what));
+        lines << QString() << tr("Changed differently in both files since they parted (%n):", nullptr,
+                                 static_cast<int>(report.conflicts.size()));
+        for (const core::MergeConflict& c : report.conflicts) {
+            lines << QStringLiteral("  %1 %2").arg(toQString(c.table), toQString(c.record));
+            for (const core::FieldConflict& f : c.fields) {
+                QString line = tr("    %1: here '%2', in the other file '%3'")
+                                   .arg(toQString(f.field), toQString(f.ours), toQString(f.theirs));
+                if (f.base) line += tr(", before '%1'").arg(toQString(*f.base));
+                lines << line;
+            }
+        }
     }
     for (const std::string& t : report.takenFromOther) lines << tr("  taken from the other file: %1").arg(toQString(t));
     if (!report.problems.empty())
         lines << QString() << tr("Records that cannot be added:") << toQString(report.problems.text());
+    if (!report.backup.empty())
+        lines << QString() << tr("The colony was backed up first into %1").arg(QDir::toNativeSeparators(toQString(report.backup)));
     return lines.join(QLatin1Char('\n'));
 }
 

@@ -4,6 +4,7 @@
 // column and the same message. A rule added without a case here fails.
 #include "core/rules/animal_rules.h"
 #include "core/rules/encounter_rules.h"
+#include "core/rules/record_messages.h"
 #include "core/rules/residence_rules.h"
 #include "core/store/colony_edits.h"
 #include "import_test_support.h"
@@ -13,6 +14,7 @@
 #include <functional>
 #include <optional>
 #include <set>
+#include <vector>
 
 using namespace hierloom::core;
 using hierloom::test::TempDir;
@@ -197,6 +199,13 @@ std::optional<RuleCase> animalCase(AnimalRule rule, const Colony& colony)
     case AnimalRule::ParentKeepsBirthOrder:
         return RuleCase{std::nullopt, edited("SIRE", [](Animal& a) { a.birth = day("2015-01-01"); }), "birth_date",
                         "is not before the birth of 'D1'"};
+    case AnimalRule::NameText: {
+        // A name holding a raw escape sequence (ESC [ 2 J clears a terminal): refused, and echoed escaped.
+        Animal a = animal("N1", Sex::Female, day("2012-01-01"));
+        a.name = "Ann\x1b[2J";
+        return RuleCase{h + "N1,Ann\x1b[2J,F,2012-01-01,,,,,,\n", added(a), "name",
+                        "'Ann\\x1b[2J' holds the control character \\x1b (only tab may appear in text)"};
+    }
     case AnimalRule::Count: break;
     }
     return std::nullopt;
@@ -225,6 +234,10 @@ std::optional<RuleCase> residenceCase(ResidenceRule rule, const Colony& colony)
                         "not an animal of the colony", "the colony or of the animals file"};
     case ResidenceRule::GroupGiven:
         return RuleCase{h + "D1,,2020-01-01,\n", stay("D1", "", "2020-01-01", nullptr), "group", "is empty"};
+    case ResidenceRule::GroupText:
+        // DEL inside a group name.
+        return RuleCase{h + "D1,we\x7fst,2020-01-01,\n", stay("D1", "we\x7fst", "2020-01-01", nullptr), "group",
+                        "'we\\x7fst' holds the control character \\x7f"};
     case ResidenceRule::DatesNotInFuture:
         return RuleCase{h + "D1,west,2025-01-01,\n", stay("D1", "west", "2025-01-01", nullptr), "from", "in the future"};
     case ResidenceRule::ToNotBeforeFrom:
@@ -284,6 +297,11 @@ std::optional<RuleCase> encounterCase(EncounterRule rule, RuleColony& colony)
     case EncounterRule::GroupAsGiven:
         return RuleCase{h + "2021-01-01,,MA,D1,,,west,,\n",
                         typed("2021-01-01", "MA", "D1", [](Encounter& e) { e.group = "west"; }), "group", "differs"};
+    case EncounterRule::TextFields:
+        // The observer A<SOH>B of issue 16, which an import used to store.
+        return RuleCase{h + "2021-01-01,,MA,D1,,,,A\x01" "B,\n",
+                        typed("2021-01-01", "MA", "D1", [](Encounter& e) { e.observer = "A\x01" "B"; }), "observer",
+                        "'A\\x01B' holds the control character \\x01 (only tab may appear in text)"};
     case EncounterRule::Count: break;
     }
     return std::nullopt;
@@ -347,4 +365,35 @@ TEST(RecordRules, PassingEncounterFillsItsGroup)
     e.loser = "D1";
     EXPECT_TRUE(checkEncounter(e, where, kToday).empty());
     EXPECT_EQ(e.group, "east");
+}
+
+// A NUL byte, a C1 control and a line break in the other text fields of an
+// encounter are refused at import with FILE:LINE: column, and echoed escaped;
+// a tab is allowed.
+TEST(RecordRules, ControlCharactersInEveryEncounterTextFieldAreRefusedAndEscaped)
+{
+    RuleColony colony;
+    const std::string h = kEncounterHeader;
+    struct Case {
+        std::string row;
+        std::string column;
+        std::string shown;
+    };
+    const std::vector<Case> cases = {
+        {h + "2021-01-01,,MA,D1,,dis" + std::string(1, '\0') + "place,,,\n", "behaviour", "'dis\\x00place'"},
+        {h + "2021-01-01,,MA,D1,,,,,\"two\nlines\"\n", "note", "'two\\x0alines'"},
+        {h + "2021-01-01,,MA,D1,,,,,x\xc2\x85y\n", "note", "'x\\u0085y'"},
+        {h + "2021-01-01,,MA,D1,,,ea\x1bst,,\n", "group", "'ea\\x1bst'"},
+    };
+    for (const Case& c : cases) {
+        const auto p = colony.importProblem("encounters", c.row, c.column);
+        ASSERT_TRUE(p) << c.row;
+        EXPECT_EQ(p->message.rfind(c.shown + " holds the control character", 0), 0U) << p->message;
+        for (char ch : p->text()) EXPECT_FALSE(static_cast<unsigned char>(ch) < 0x20) << p->text();
+    }
+    EXPECT_EQ(colony.store().encounterCount(), 0);
+    // A tab is text.
+    FieldProblems none;
+    checkPlainText("a\tb", "note", none);
+    EXPECT_TRUE(none.empty());
 }

@@ -1,6 +1,9 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 // Merging field laptops: two copies of one colony file edited apart, merged both ways.
 #include "core/store/colony_merge.h"
+#include "core/store/colony_backup.h"
+#include "core/store/colony_edits.h"
+#include "core/store/colony_import.h"
 #include "core/store/colony_store.h"
 #include "import_test_support.h"
 
@@ -268,10 +271,303 @@ TEST(ColonyMerge, AnEmptyGroupFilledOnImportIsNotAConflict)
     }
     const ColonyStore b = ColonyStore::open(t.b, ColonyStore::Mode::ReadOnly);
     const MergeReport r = mergeColonies(a, b, prefer(MergePreference::Theirs));
-    EXPECT_EQ(r.takenFromOther, (std::vector<std::string>{"animal F2", "encounter of 2014-07-01 F1 beat F2"}));
+    // The note was edited in the other file only: taken as an update, not a settled conflict.
+    EXPECT_EQ(r.takenFromOther, (std::vector<std::string>{"animal F2"}));
+    ASSERT_EQ(r.updated.size(), 1U);
+    EXPECT_EQ(r.updated[0].record, "encounter of 2014-07-01 F1 beat F2");
+    EXPECT_EQ(r.updated[0].detail, "note: '' here, 'seen twice' in the other file");
     for (const Encounter& e : a.loadEncounters())
         if (e.uid == loose.uid) {
             EXPECT_EQ(e.note, "seen twice");
             EXPECT_EQ(e.group, "main");
         }
+}
+
+// ---- Merging by identity with tombstones and the common state (issue 16) ----
+
+namespace {
+
+std::string uidOfEncounter(const ColonyStore& s, const char* date)
+{
+    for (const Encounter& e : s.loadEncounters())
+        if (formatDate(e.date) == date) return e.uid;
+    return {};
+}
+
+bool hasAnimal(const ColonyStore& s, const std::string& id)
+{
+    for (const Animal& a : s.loadAnimals())
+        if (a.id == id) return true;
+    return false;
+}
+
+/// The base with a newcomer N9 (no encounters), copied to a second laptop.
+struct TwoCopies {
+    TempDir dir;
+    std::string a = dir.file("a.hierloom");
+    std::string b = dir.file("b.hierloom");
+    TwoCopies()
+    {
+        writeBase(a);
+        {
+            ColonyStore s = ColonyStore::open(a);
+            Animal n;
+            n.id = "N9";
+            n.sex = Sex::Male;
+            n.entry = day("2013-02-01");
+            n.entryType = EntryType::Introduced;
+            s.append({n}, {{"N9", "main", day("2013-02-01"), std::nullopt, ""}}, {});
+        }
+        std::filesystem::copy_file(a, b);
+    }
+};
+
+MergeReport mergeInto(const std::string& target, const std::string& from, MergePreference p = MergePreference::None,
+                      bool dryRun = false)
+{
+    ColonyStore t = ColonyStore::open(target);
+    const ColonyStore o = ColonyStore::open(from, ColonyStore::Mode::ReadOnly);
+    MergeOptions options = prefer(p);
+    options.dryRun = dryRun;
+    return mergeColonies(t, o, options);
+}
+
+} // namespace
+
+// Issue 16: an encounter and an animal deleted on laptop a came back after
+// merging laptop b's file. Now the deletion is a fact that travels both ways.
+TEST(MergeTombstones, ADeletionHereStaysAndADeletionThereIsApplied)
+{
+    TwoCopies t;
+    std::string gone;
+    {
+        ColonyStore a = ColonyStore::open(t.a);
+        gone = uidOfEncounter(a, "2013-01-02");
+        ASSERT_EQ(deleteEncounters(a, {gone}).size(), 1U);
+        a.exec("DELETE FROM animal WHERE id = 'N9'"); // its stay goes with it
+    }
+    // b merged into a: nothing comes back.
+    MergeReport r = mergeInto(t.a, t.b);
+    EXPECT_TRUE(r.conflicts.empty());
+    EXPECT_TRUE(r.addedAnimals.empty() && r.addedResidences.empty() && r.addedEncounters.empty());
+    std::set<std::string> kept;
+    for (const MergeChange& c : r.keptDeleted) kept.insert(c.record);
+    EXPECT_EQ(kept, (std::set<std::string>{"animal N9", "stay of N9 in main from 2013-02-01",
+                                           "encounter of 2013-01-02 M1 beat F1"}));
+    {
+        const ColonyStore a = ColonyStore::open(t.a, ColonyStore::Mode::ReadOnly);
+        EXPECT_EQ(a.encounterCount(), 2);
+        EXPECT_FALSE(hasAnimal(a, "N9"));
+    }
+    // a merged into b: b deletes them too.
+    r = mergeInto(t.b, t.a);
+    EXPECT_TRUE(r.conflicts.empty());
+    EXPECT_TRUE(r.problems.empty()) << r.problems.text();
+    EXPECT_EQ(r.deleted.size(), 3U);
+    EXPECT_TRUE(r.written);
+    const ColonyStore b = ColonyStore::open(t.b, ColonyStore::Mode::ReadOnly);
+    EXPECT_EQ(b.encounterCount(), 2);
+    EXPECT_TRUE(b.encounterUids().count(gone) == 0);
+    EXPECT_FALSE(hasAnimal(b, "N9"));
+}
+
+// Issue 16: an edit made on one side only was reported as a conflict and
+// `--prefer theirs` reverted it. Only fields changed on both sides conflict.
+TEST(MergeTombstones, AnEditOnOneSideIsTakenAndPreferTheirsDoesNotRevertIt)
+{
+    TwoCopies t;
+    {
+        ColonyStore a = ColonyStore::open(t.a);
+        a.exec("UPDATE animal SET name = 'Ada' WHERE id = 'F1'");
+    }
+    {
+        ColonyStore b = ColonyStore::open(t.b);
+        b.exec("UPDATE animal SET name = 'Moss' WHERE id = 'M1'");
+    }
+    // Preferring b's version decides nothing here: no field changed on both sides.
+    MergeReport r = mergeInto(t.a, t.b, MergePreference::Theirs);
+    EXPECT_TRUE(r.conflicts.empty());
+    EXPECT_TRUE(r.takenFromOther.empty());
+    ASSERT_EQ(r.updated.size(), 1U);
+    EXPECT_EQ(r.updated[0].record, "animal M1");
+    EXPECT_EQ(nameOf(ColonyStore::open(t.a, ColonyStore::Mode::ReadOnly), "F1"), "Ada");
+    EXPECT_EQ(nameOf(ColonyStore::open(t.a, ColonyStore::Mode::ReadOnly), "M1"), "Moss");
+    // The other way, without any preference: no conflict either.
+    r = mergeInto(t.b, t.a);
+    EXPECT_TRUE(r.conflicts.empty()) << r.conflicts.front().what;
+    EXPECT_EQ(nameOf(ColonyStore::open(t.b, ColonyStore::Mode::ReadOnly), "F1"), "Ada");
+    EXPECT_EQ(nameOf(ColonyStore::open(t.b, ColonyStore::Mode::ReadOnly), "M1"), "Moss");
+    // Both files now agree; merging again changes nothing.
+    r = mergeInto(t.a, t.b);
+    EXPECT_FALSE(r.changes());
+    EXPECT_FALSE(r.written);
+}
+
+// A field changed on both sides is a conflict shown with both values and the
+// common one; another field of the same record changed on one side is taken.
+TEST(MergeTombstones, ATwoSidedEditIsAConflictFieldByField)
+{
+    TwoCopies t;
+    {
+        ColonyStore a = ColonyStore::open(t.a);
+        a.exec("UPDATE animal SET name = 'Ada' WHERE id = 'F1'");
+    }
+    {
+        ColonyStore b = ColonyStore::open(t.b);
+        b.exec("UPDATE animal SET name = 'Ida', entry_type = 'introduced' WHERE id = 'F1'");
+    }
+    MergeReport r = mergeInto(t.a, t.b);
+    ASSERT_EQ(r.conflicts.size(), 1U);
+    ASSERT_EQ(r.conflicts[0].fields.size(), 1U);
+    const FieldConflict& f = r.conflicts[0].fields[0];
+    EXPECT_EQ(f.field, "name");
+    EXPECT_EQ(f.ours, "Ada");
+    EXPECT_EQ(f.theirs, "Ida");
+    ASSERT_TRUE(f.base.has_value());
+    EXPECT_EQ(*f.base, "");
+    EXPECT_FALSE(r.written);
+    // Settled for ours: our name stays, their one-sided entry type is taken.
+    r = mergeInto(t.a, t.b, MergePreference::Ours);
+    EXPECT_TRUE(r.written);
+    for (const Animal& a : ColonyStore::open(t.a, ColonyStore::Mode::ReadOnly).loadAnimals())
+        if (a.id == "F1") {
+            EXPECT_EQ(a.name, "Ada");
+            EXPECT_EQ(a.entryType, EntryType::Introduced);
+        }
+}
+
+// Deleted on one side, edited on the other since: a conflict, not a silent choice.
+TEST(MergeTombstones, DeletedAgainstEditedIsAConflict)
+{
+    TwoCopies t;
+    std::string uid;
+    {
+        ColonyStore a = ColonyStore::open(t.a);
+        uid = uidOfEncounter(a, "2013-01-03");
+        deleteEncounters(a, {uid});
+    }
+    {
+        ColonyStore b = ColonyStore::open(t.b);
+        b.exec(("UPDATE encounter SET note = 'bleeding ear' WHERE uid = '" + uid + "'").c_str());
+    }
+    MergeReport r = mergeInto(t.a, t.b);
+    ASSERT_EQ(r.conflicts.size(), 1U);
+    EXPECT_EQ(r.conflicts[0].uid, uid);
+    ASSERT_EQ(r.conflicts[0].fields.size(), 1U);
+    EXPECT_EQ(r.conflicts[0].fields[0].field, "note");
+    EXPECT_EQ(r.conflicts[0].fields[0].ours, "(deleted)");
+    EXPECT_EQ(r.conflicts[0].fields[0].theirs, "bleeding ear");
+    // The other way round, too.
+    r = mergeInto(t.b, t.a);
+    ASSERT_EQ(r.conflicts.size(), 1U);
+    EXPECT_EQ(r.conflicts[0].fields[0].theirs, "(deleted)");
+    // Preferring the other file brings the edited record back here.
+    r = mergeInto(t.a, t.b, MergePreference::Theirs);
+    EXPECT_TRUE(r.written);
+    EXPECT_EQ(ColonyStore::open(t.a, ColonyStore::Mode::ReadOnly).encounterUids().count(uid), 1U);
+}
+
+// Issue 16: two files set up from the same animals.csv failed with "19
+// records were edited differently" (each gave the same animal its own uid).
+TEST(MergeTombstones, TheSameImportIntoTwoNewFilesGivesTheSameIdentities)
+{
+    TempDir dir;
+    const std::string animals = dir.write("animals.csv", hierloom::test::kBaseAnimals);
+    const std::string residences = dir.write("residences.csv", hierloom::test::kBaseResidences);
+    const std::string encounters =
+        dir.write("encounters.csv", "date,winner,loser,note\n2021-01-01,MA,D1,\n2021-01-01,MA,D1,\n2021-01-02,D1,MA,x\n");
+    for (const char* name : {"a.hierloom", "b.hierloom"}) {
+        ColonyStore s = ColonyStore::create(dir.file(name));
+        const ImportResult r = importFiles(s, {animals, residences, encounters}, day("2024-06-30"));
+        ASSERT_TRUE(r.ok()) << r.problems.text();
+    }
+    const ColonyStore a = ColonyStore::open(dir.file("a.hierloom"), ColonyStore::Mode::ReadOnly);
+    const ColonyStore b = ColonyStore::open(dir.file("b.hierloom"), ColonyStore::Mode::ReadOnly);
+    auto uids = [](const ColonyStore& s) {
+        std::set<std::string> out;
+        for (const Animal& x : s.loadAnimals()) out.insert(x.uid);
+        for (const Residence& x : s.loadResidences()) out.insert(x.uid);
+        for (const Encounter& x : s.loadEncounters()) out.insert(x.uid);
+        return out;
+    };
+    EXPECT_EQ(uids(a), uids(b));
+    EXPECT_EQ(uids(a).size(), a.loadAnimals().size() + a.loadResidences().size() + 3U); // the twin rows differ
+    const MergeReport r = mergeInto(dir.file("a.hierloom"), dir.file("b.hierloom"));
+    EXPECT_TRUE(r.conflicts.empty());
+    EXPECT_FALSE(r.changes());
+    EXPECT_TRUE(r.matched.empty());
+    // Importing the same encounters again into one file gives new records, new uids.
+    ColonyStore again = ColonyStore::open(dir.file("a.hierloom"));
+    ASSERT_TRUE(importFiles(again, {"", "", encounters}, day("2024-06-30")).ok());
+    EXPECT_EQ(again.encounterUids().size(), 6U);
+}
+
+// Files set up apart by an older version (random uids for the same animals
+// and encounters): matched by content and said so, not conflicts or duplicates.
+TEST(MergeTombstones, RecordsUnderDifferentUidsAreMatchedByContent)
+{
+    TempDir dir;
+    writeBase(dir.file("a.hierloom"));
+    writeBase(dir.file("b.hierloom")); // the same records, fresh random uids
+    const MergeReport r = mergeInto(dir.file("a.hierloom"), dir.file("b.hierloom"));
+    EXPECT_TRUE(r.conflicts.empty()) << r.conflicts.front().what;
+    EXPECT_FALSE(r.changes());
+    EXPECT_EQ(r.matched.size(), 4U + 4U + 3U);
+    EXPECT_NE(r.matched[0].detail.find("uid in the other file: "), std::string::npos);
+    EXPECT_EQ(ColonyStore::open(dir.file("a.hierloom"), ColonyStore::Mode::ReadOnly).encounterCount(), 3);
+}
+
+// A merge that changes the file takes a backup first; a dry run and a merge
+// with nothing to do write nothing, not even a backup.
+TEST(MergeTombstones, ABackupBeforeEveryMergeThatChangesSomething)
+{
+    TwoCopies t;
+    {
+        ColonyStore b = ColonyStore::open(t.b);
+        b.exec("UPDATE animal SET name = 'Moss' WHERE id = 'M1'");
+    }
+    const std::string before = fileBytes(t.a);
+    MergeReport r = mergeInto(t.a, t.b, MergePreference::None, true);
+    EXPECT_EQ(r.updated.size(), 1U); // what would change
+    EXPECT_FALSE(r.written);
+    EXPECT_TRUE(r.backup.empty());
+    EXPECT_EQ(fileBytes(t.a), before);
+    EXPECT_TRUE(listBackups(t.a).empty());
+    r = mergeInto(t.a, t.b);
+    EXPECT_TRUE(r.written);
+    ASSERT_FALSE(r.backup.empty());
+    ASSERT_EQ(listBackups(t.a).size(), 1U);
+    EXPECT_EQ(listBackups(t.a)[0].path, r.backup);
+    // The backup holds the state before the merge.
+    EXPECT_EQ(nameOf(ColonyStore::open(r.backup, ColonyStore::Mode::ReadOnly), "M1"), "");
+    r = mergeInto(t.a, t.b);
+    EXPECT_FALSE(r.changes());
+    EXPECT_TRUE(r.backup.empty());
+    EXPECT_EQ(listBackups(t.a).size(), 1U);
+}
+
+// An encounter corrected in the other file to name an animal that file added:
+// the animal is added before the correction is written.
+TEST(MergeTombstones, AnEditNamingANewAnimalOfTheOtherFileIsWrittenAfterIt)
+{
+    TwoCopies t;
+    {
+        ColonyStore b = ColonyStore::open(t.b);
+        Animal n;
+        n.id = "N2";
+        n.sex = Sex::Female;
+        n.entry = day("2013-01-01");
+        n.entryType = EntryType::Introduced;
+        b.append({n}, {{"N2", "main", day("2013-01-01"), std::nullopt, ""}}, {});
+        b.exec("UPDATE encounter SET loser = 'N2' WHERE date = '2013-01-03'");
+    }
+    const MergeReport r = mergeInto(t.a, t.b);
+    EXPECT_TRUE(r.conflicts.empty());
+    EXPECT_TRUE(r.problems.empty()) << r.problems.text();
+    ASSERT_TRUE(r.written);
+    EXPECT_EQ(r.addedAnimals.size(), 1U);
+    ASSERT_EQ(r.updated.size(), 1U);
+    EXPECT_EQ(r.updated[0].detail, "loser: 'F3' here, 'N2' in the other file");
+    for (const Encounter& e : ColonyStore::open(t.a, ColonyStore::Mode::ReadOnly).loadEncounters())
+        if (formatDate(e.date) == "2013-01-03") EXPECT_EQ(e.loser, "N2");
 }
