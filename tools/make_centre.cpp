@@ -113,8 +113,8 @@ int main(int argc, char** argv)
         std::cerr << "make_centre: " << e.what() << "\n";
         return 1;
     }
-    csv.close();
-    if (csv.fail()) {
+    if (csv.is_open()) csv.close();
+    if (!csvDir.empty() && csv.fail()) {
         std::cerr << "make_centre: cannot write the CSV files in " << csvDir << "\n";
         return 1;
     }

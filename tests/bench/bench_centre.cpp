@@ -179,6 +179,10 @@ int main(int argc, char** argv)
         {"stability --group " + group, {cli, "stability", colony, "--group", group}},
         {"report --group " + group, {cli, "report", colony, "--group", group, "--out", pdf}},
     };
+    // Every read-only open runs PRAGMA quick_check over the whole file
+    // (docs: DEVELOPERS.md, "Quick check before writing"): a floor under every command.
+    const auto check = measure({"sqlite3", "-readonly", colony, "PRAGMA quick_check"}, groupScan, runs);
+    printRow("shell: PRAGMA quick_check (every open's check)", "shell: group's rows, full scan", check);
     for (const Row& row : groupRowsOfTable) {
         const auto m = measure(row.args, groupScan, runs);
         printRow(row.work.c_str(), "shell: group's rows, full scan", m);
