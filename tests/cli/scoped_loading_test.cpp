@@ -90,3 +90,25 @@ TEST(CliScopedLoading, DefaultWindowOfAGroupEndsAtTheFilesLastEncounter)
     ASSERT_EQ(rows.size(), 3U) << r.out;
     EXPECT_EQ(rows[1].substr(0, 5), "N2,1,");
 }
+
+TEST(CliScopedLoading, OverviewHasOneRowPerGroup)
+{
+    CliTempDir dir;
+    const std::string colony = twoGroups(dir);
+    // Hand-worked from twoGroups: on 2020-04-01 each group has its two founders,
+    // both adult (born 2010 and 2012; maturity 4 years) and each her own
+    // matriline; North last met on 2020-02-01, nothing in the 30 days from
+    // 2020-03-03; South's last encounter is the day itself. Too few encounters
+    // for any alert (20 decided ones at least), so both are calm.
+    const CliResult r = runCli({"overview", colony});
+    ASSERT_EQ(r.status, 0) << r.err;
+    EXPECT_EQ(r.out, "group,animals,adult_females,matrilines,last_encounter,encounters_30_days,stability,alerts\n"
+                     "North,2,2,2,2020-02-01,0,calm,\n"
+                     "South,2,2,2,2020-04-01,1,calm,\n");
+    EXPECT_NE(r.err.find("overview: 2020-04-01, 2 groups, 0 with alerts"), std::string::npos) << r.err;
+    // Earlier: South's second encounter is not yet there; North had its two encounters within 30 days.
+    const CliResult jan = runCli({"overview", colony, "--at", "2020-01-15"});
+    ASSERT_EQ(jan.status, 0) << jan.err;
+    EXPECT_NE(jan.out.find("North,2,2,2,2020-01-03,2,calm,\n"), std::string::npos) << jan.out;
+    EXPECT_NE(jan.out.find("South,2,2,2,2020-01-02,1,calm,\n"), std::string::npos) << jan.out;
+}
