@@ -357,10 +357,17 @@ void ColonyStore::ensureEncounterIndex()
     SqliteStatement q(db_, "SELECT 1 FROM sqlite_schema WHERE type = 'index' AND name = ?");
     q.bind(1, std::string_view(kEncounterIndexName));
     if (q.step()) return;
-    // Files made before the index: built once, a few seconds for millions of encounters.
-    WriteTransaction tx(*this);
-    exec(encounterIndexSql());
-    tx.commit();
+    // Files made before the index: built once, a few seconds for millions of
+    // encounters. The index only saves time: a file another program is
+    // writing, or a damaged one (refused at its first real write), opens
+    // without it, as before.
+    try {
+        WriteTransaction tx(*this);
+        exec(encounterIndexSql());
+        tx.commit();
+    } catch (const ColonyFileError& e) {
+        if (e.kind() != Kind::Busy && e.kind() != Kind::Damaged) throw;
+    }
 }
 
 ColonyStore::ColonyStore(ColonyStore&& other) noexcept
