@@ -10,12 +10,13 @@ using namespace hierloom::core;
 
 LoadedColony loadColony(const std::string& path) { return loadColony(path, EncounterScope{}); }
 
-LoadedColony loadColony(const std::string& path, const EncounterScope& scope, bool needLastDay)
+LoadedColony loadColony(const std::string& path, EncounterScope scope, bool needLastDay)
 {
     const ColonyStore store = ColonyStore::open(path, ColonyStore::Mode::ReadOnly);
     LoadedColony out;
     out.colony.animals = store.loadAnimals();
     out.colony.residences = store.loadResidences();
+    scope.uids = false; // no command that analyses prints or compares encounter uids
     out.colony.encounters = store.loadEncounters(scope);
     out.colony.reindex();
     out.where = ResidenceIndex(out.colony.animals, out.colony.residences);

@@ -25,12 +25,14 @@ struct LoadedColony {
     std::optional<core::Day> lastDay;
 };
 
-/// Opens a colony file read-only and loads everything, its analysis settings included.
+/// Opens a colony file read-only and loads everything but the encounters'
+/// uids, its analysis settings included.
 LoadedColony loadColony(const std::string& path);
 
 /// Same, with only the encounters a question needs (core::EncounterScope);
 /// `needLastDay` also finds the file's latest encounter day.
-LoadedColony loadColony(const std::string& path, const core::EncounterScope& scope, bool needLastDay = false);
+/// Encounters are read without their uids (no analysis uses them).
+LoadedColony loadColony(const std::string& path, core::EncounterScope scope, bool needLastDay = false);
 
 /// The scope of the common window options: the group and the dates as given.
 /// A date that does not parse is left open here; selectionOf reports it.

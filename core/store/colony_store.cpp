@@ -456,10 +456,11 @@ std::vector<Encounter> ColonyStore::loadEncounters() const
 
 std::vector<Encounter> ColonyStore::loadEncounters(const EncounterScope& scope) const
 {
-    if (scope.everything()) return loadEncounters();
+    if (scope.everything() && scope.uids) return loadEncounters();
     // Parameters: ?1 group, ?2 from, ?3 to. `grp IN (?1, '')` is two ranges
     // of encounter_by_group; the date bounds narrow each of them.
-    std::string sql = std::string("SELECT ") + kEncounterColumnsSql + " FROM encounter WHERE 1";
+    std::string sql = std::string("SELECT ") + (scope.uids ? kEncounterColumnsSql : kEncounterColumnsWithoutUidSql) +
+                      " FROM encounter WHERE 1";
     if (!scope.group.empty())
         sql += " AND grp IN (?1, '') AND (grp = ?1 OR winner IN (SELECT animal FROM residence WHERE grp = ?1))";
     if (scope.from) sql += " AND date >= ?2";
@@ -470,6 +471,7 @@ std::vector<Encounter> ColonyStore::loadEncounters(const EncounterScope& scope) 
     if (scope.from) q.bind(2, formatDate(*scope.from));
     if (scope.to) q.bind(3, formatDate(*scope.to));
     std::vector<Encounter> out;
+    if (scope.everything()) out.reserve(static_cast<size_t>(encounterCount()) + 4096);
     while (q.step()) out.push_back(readEncounterRow(q, path_));
     return out;
 }

@@ -22,6 +22,9 @@ struct EncounterScope {
     std::string group;
     std::optional<Day> from;
     std::optional<Day> to;
+    /// false: every uid is left empty (analyses never read them; at millions
+    /// of encounters the 36-character texts are a sixth of the memory).
+    bool uids = true;
 
     bool everything() const { return group.empty() && !from && !to; }
 };

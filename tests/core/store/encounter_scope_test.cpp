@@ -84,6 +84,22 @@ TEST(EncounterScope, GroupReadsItsRowsAndUngroupedRowsOfItsAnimalsInEntryOrder)
               (std::vector<std::int64_t>{2, 3, 4}));
     EXPECT_EQ(seqs(store.loadEncounters(EncounterScope{})), (std::vector<std::int64_t>{1, 2, 3, 4, 5, 6, 7}));
     EXPECT_EQ(store.lastEncounterDay(), parseDate("2020-04-01"));
+    // Without uids: the same rows and fields, every uid empty.
+    const std::vector<Encounter> with = store.loadEncounters(EncounterScope{"North", {}, {}});
+    EncounterScope bare{"North", {}, {}};
+    bare.uids = false;
+    const std::vector<Encounter> without = store.loadEncounters(bare);
+    ASSERT_EQ(without.size(), with.size());
+    for (size_t i = 0; i < with.size(); ++i) {
+        EXPECT_EQ(with[i].uid.size(), 36U);
+        EXPECT_EQ(without[i].uid, "");
+        EXPECT_EQ(without[i].seq, with[i].seq);
+        EXPECT_EQ(without[i].winner, with[i].winner);
+        EXPECT_EQ(without[i].group, with[i].group);
+    }
+    EncounterScope all;
+    all.uids = false;
+    EXPECT_EQ(seqs(store.loadEncounters(all)), (std::vector<std::int64_t>{1, 2, 3, 4, 5, 6, 7}));
 }
 
 TEST(EncounterScope, GroupQueryUsesTheIndexAndOlderFilesGetItOnTheirFirstWrite)
