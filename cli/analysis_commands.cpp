@@ -38,7 +38,7 @@ struct RanksOptions {
 
 void runRanks(CommandContext& ctx, const RanksOptions& o)
 {
-    const LoadedColony loaded = loadColony(o.colony);
+    const LoadedColony loaded = loadColony(o.colony, scopeOf(o.window));
     const AnalysisSettings settings = analysisSettingsOf(loaded, o.analysis, o.window.draws);
     const SelectionOptions sel = withDefaultWindow(selectionOf(o.window, loaded), settings, loaded);
     reportAnalysisSettings(ctx, "ranks", settings, &o.analysis, o.window.draws);
@@ -127,7 +127,7 @@ void addMatrixCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
     cmd->add_option("--out", ctx.outFile, "write the CSV to this file instead of standard output");
     cmd->callback([&ctx, &action, o] {
         action = [&ctx, o] {
-            const LoadedColony loaded = loadColony(o->colony);
+            const LoadedColony loaded = loadColony(o->colony, scopeOf(o->window));
             const AnalysisSettings settings = analysisSettingsOf(loaded, o->analysis, o->window.draws);
             const SelectionOptions sel = withDefaultWindow(selectionOf(o->window, loaded), settings, loaded);
             reportAnalysisSettings(ctx, "matrix", settings, &o->analysis, o->window.draws);
@@ -176,7 +176,7 @@ void addMetricsCommand(CLI::App& app, CommandContext& ctx, CommandAction& action
     cmd->add_option("--out", ctx.outFile, "write the CSV to this file instead of standard output");
     cmd->callback([&ctx, &action, o] {
         action = [&ctx, o] {
-            const LoadedColony loaded = loadColony(o->colony);
+            const LoadedColony loaded = loadColony(o->colony, scopeOf(o->window));
             const AnalysisSettings settings = analysisSettingsOf(loaded, {}, o->window.draws);
             SelectionOptions sel = withDefaultWindow(selectionOf(o->window, loaded), settings, loaded);
             reportAnalysisSettings(ctx, "metrics", settings, nullptr, o->window.draws);

@@ -90,11 +90,9 @@ void reportAnalysisSettings(CommandContext& ctx, const char* command, const Anal
 SelectionOptions withDefaultWindow(SelectionOptions selection, const AnalysisSettings& settings,
                                    const LoadedColony& loaded)
 {
-    if (selection.from || selection.to || settings.windowDays <= 0 || loaded.colony.encounters.empty())
-        return selection;
-    Day last = loaded.colony.encounters.front().date;
-    for (const Encounter& e : loaded.colony.encounters) last = std::max(last, e.date);
-    selection.from = defaultWindowStart(settings, last);
+    // The window ends at the file's last encounter, whichever group it belongs to.
+    if (selection.from || selection.to || settings.windowDays <= 0 || !loaded.lastDay) return selection;
+    selection.from = defaultWindowStart(settings, *loaded.lastDay);
     return selection;
 }
 

@@ -8,14 +8,35 @@ namespace hierloom::cli {
 
 using namespace hierloom::core;
 
-LoadedColony loadColony(const std::string& path)
+LoadedColony loadColony(const std::string& path) { return loadColony(path, EncounterScope{}); }
+
+LoadedColony loadColony(const std::string& path, EncounterScope scope, bool needLastDay)
 {
     const ColonyStore store = ColonyStore::open(path, ColonyStore::Mode::ReadOnly);
     LoadedColony out;
-    out.colony = store.load();
+    out.colony.animals = store.loadAnimals();
+    out.colony.residences = store.loadResidences();
+    scope.uids = false; // no command that analyses prints or compares encounter uids
+    out.colony.encounters = store.loadEncounters(scope);
+    out.colony.reindex();
     out.where = ResidenceIndex(out.colony.animals, out.colony.residences);
     out.settings = readAnalysisSettings(store);
+    if (scope.everything()) {
+        for (const Encounter& e : out.colony.encounters)
+            if (!out.lastDay || e.date > *out.lastDay) out.lastDay = e.date;
+    } else if (needLastDay || out.settings.windowDays > 0) {
+        out.lastDay = store.lastEncounterDay();
+    }
     return out;
+}
+
+EncounterScope scopeOf(const WindowOptions& o)
+{
+    EncounterScope scope;
+    scope.group = o.group;
+    scope.from = parseDate(o.from);
+    scope.to = parseDate(o.to);
+    return scope;
 }
 
 SelectionOptions selectionOf(const WindowOptions& o, const LoadedColony& loaded)

@@ -6,20 +6,37 @@
 #include "core/ranks/analysis_settings.h"
 #include "core/ranks/encounter_selection.h"
 #include "core/base/residence_index.h"
+#include "core/store/colony_store.h"
 
+#include <optional>
 #include <string>
 
 namespace hierloom::cli {
 
-/// A colony read for analysis, with its residence index and stored analysis settings.
+/// A colony read for analysis, with its residence index and stored analysis
+/// settings. Animals and residences are always whole; the encounters are
+/// those of the scope it was loaded with.
 struct LoadedColony {
     core::Colony colony;
     core::ResidenceIndex where;
     core::AnalysisSettings settings;
+    /// The file's latest encounter day (every group): known when everything was
+    /// loaded, when the settings have a default window, or when asked for.
+    std::optional<core::Day> lastDay;
 };
 
-/// Opens a colony file read-only and loads everything, its analysis settings included.
+/// Opens a colony file read-only and loads everything but the encounters'
+/// uids, its analysis settings included.
 LoadedColony loadColony(const std::string& path);
+
+/// Same, with only the encounters a question needs (core::EncounterScope);
+/// `needLastDay` also finds the file's latest encounter day.
+/// Encounters are read without their uids (no analysis uses them).
+LoadedColony loadColony(const std::string& path, core::EncounterScope scope, bool needLastDay = false);
+
+/// The scope of the common window options: the group and the dates as given.
+/// A date that does not parse is left open here; selectionOf reports it.
+core::EncounterScope scopeOf(const WindowOptions& options);
 
 /// Turns the common window options into a selection, checking them; without
 /// --draws the colony's draw setting applies.

@@ -36,6 +36,7 @@ int run(int argc, const char* const* argv, std::ostream& out, std::ostream& err)
     addScenarioCommand(app, ctx, action);
     addStabilityCommand(app, ctx, action);
     addReportCommand(app, ctx, action);
+    addOverviewCommand(app, ctx, action);
     addBackupCommand(app, ctx, action);
     addRestoreCommand(app, ctx, action);
     addMergeCommand(app, ctx, action);

@@ -65,7 +65,12 @@ std::string rankText(const std::optional<int>& r) { return r ? std::to_string(*r
 void runInherit(CommandContext& ctx, const InheritOptions& o)
 {
     if (o.dyads + o.monthly + o.acquisition > 1) throw BadInputError("choose one of --dyads, --monthly, --acquisition");
-    const LoadedColony loaded = loadColony(o.colony);
+    // The encounters of the group (every group without --group) up to --at;
+    // without --at the file's last encounter day is the date.
+    EncounterScope scope;
+    scope.group = o.group;
+    if (!o.monthly) scope.to = parseDate(o.at);
+    const LoadedColony loaded = loadColony(o.colony, scope, o.at.empty() && !o.monthly && !o.acquisition);
     WindowOptions window;
     window.group = o.group;
     window.draws = o.draws;
@@ -111,6 +116,7 @@ void runInherit(CommandContext& ctx, const InheritOptions& o)
         emit(ctx, out.str());
         return;
     }
+    if (!opt.at) opt.at = loaded.lastDay;
     InheritancePrediction p;
     try {
         p = predictInheritance(loaded.colony, loaded.where, lines, opt);

@@ -60,7 +60,8 @@ struct StabilityCommandOptions {
 
 void runStability(CommandContext& ctx, const StabilityCommandOptions& o)
 {
-    const LoadedColony loaded = loadColony(o.colony);
+    // Elo runs over the group's whole record; --from and --to only choose the periods shown.
+    const LoadedColony loaded = loadColony(o.colony, EncounterScope{o.group, {}, {}});
     checkGroup(loaded, o.group);
     const StoredStability stored = storedStability(o.colony);
     const AnalysisSettings settings = analysisSettingsOf(loaded, o.analysis, o.draws);
@@ -108,7 +109,7 @@ struct ReportOptions {
 void runReport(CommandContext& ctx, const ReportOptions& o)
 {
 #ifdef HIERLOOM_HAVE_REPORT
-    const LoadedColony loaded = loadColony(o.colony);
+    const LoadedColony loaded = loadColony(o.colony, EncounterScope{o.group, {}, {}});
     checkGroup(loaded, o.group);
     const StoredStability stored = storedStability(o.colony);
     report::HierarchyReportOptions ro;

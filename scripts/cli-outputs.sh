@@ -57,6 +57,16 @@ run maternal-ranks maternal-ranks "$colony"
 run export-tables export-tables "$colony" --dir tables --every year --randomisations 50
 run export export "$colony" --dir exported
 run history history "$colony" --help
+# One group and windows: these read only the encounters they can use.
+run ranks-group ranks "$colony" --group "North Corral" --from 2023-01-01 --to 2024-06-30
+run ranks-window ranks "$colony" --method ds --from 2023-03-01 --to 2023-09-30
+run matrix-group matrix "$colony" --group "North Corral" --order id --from 2025-01-01
+run metrics-group metrics "$colony" --group "North Corral" --randomisations 50 --threads 1
+run inherit-group inherit "$colony" --group "North Corral"
+run inherit-group-at inherit "$colony" --group "North Corral" --at 2024-03-31 --dyads
+run inherit-group-acquisition inherit "$colony" --group "North Corral" --acquisition --at 2024-12-31
+run inherit-group-monthly inherit "$colony" --group "North Corral" --monthly --at 2024-12-31
+run report-group report "$colony" --group "North Corral" --at 2024-12-31 --out report.pdf
 run bad-date ranks "$colony" --from 2023-02-30
 run bad-group ranks "$colony" --group nowhere
 run missing-file ranks "$work/missing.hierloom"

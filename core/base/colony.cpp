@@ -37,9 +37,28 @@ std::vector<size_t> chronologicalOrder(const std::vector<Encounter>& encounters)
     std::iota(order.begin(), order.end(), size_t{0});
     // Records are mostly entered in date order: check in one pass before sorting.
     if (std::is_sorted(encounters.begin(), encounters.end(), encounterBefore)) return order;
-    std::stable_sort(order.begin(), order.end(), [&](size_t a, size_t b) {
-        return encounterBefore(encounters[a], encounters[b]);
+    // Sorting small keys rather than indices into the records: the same order
+    // as a stable sort by encounterBefore (the index breaks the remaining
+    // ties), without a cache miss per comparison (a third of whole-file
+    // `ranks` on 3,000,000 encounters went to that comparison).
+    struct Key {
+        Day date;
+        int time; // untimed last
+        std::int64_t seq;
+        size_t index;
+    };
+    std::vector<Key> keys(encounters.size());
+    for (size_t i = 0; i < encounters.size(); ++i) {
+        const Encounter& e = encounters[i];
+        keys[i] = {e.date, e.time.value_or(24 * 60), e.seq, i};
+    }
+    std::sort(keys.begin(), keys.end(), [](const Key& a, const Key& b) {
+        if (a.date != b.date) return a.date < b.date;
+        if (a.time != b.time) return a.time < b.time;
+        if (a.seq != b.seq) return a.seq < b.seq;
+        return a.index < b.index;
     });
+    for (size_t i = 0; i < keys.size(); ++i) order[i] = keys[i].index;
     return order;
 }
 

@@ -170,6 +170,13 @@ const char* schemaVersion2Sql()
     return sql.c_str();
 }
 
+const char* encounterIndexSql()
+{
+    // grp first: a group's rows (and the rows without a group) are one range
+    // each; date second: a window within the group narrows that range.
+    return "CREATE INDEX IF NOT EXISTS encounter_by_group ON encounter(grp, date);";
+}
+
 const char* sessionSql()
 {
     return R"SQL(

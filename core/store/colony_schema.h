@@ -24,6 +24,14 @@ const char* schemaVersion2Sql();
 std::string auditTriggerSql(const std::string& table, const std::string& action);
 std::string auditTriggerDropSql(const std::string& table, const std::string& action);
 
+/// The indexes that let a question about one group read only that group's
+/// encounters (docs/file-formats.md, "Indexes"). Not a schema version of its
+/// own: an index changes nothing an older program reads or writes, so a file
+/// of any version gets it when this program first opens it for writing.
+const char* encounterIndexSql();
+/// Whether the file already has them.
+constexpr const char* kEncounterIndexName = "encounter_by_group";
+
 /// SQL run on every connection to a version-2 file: the per-connection
 /// `session_user` (who is writing) and the TEMP trigger that stamps it on
 /// each new audit row. TEMP objects because a trigger stored in the file

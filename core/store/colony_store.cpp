@@ -210,6 +210,7 @@ ColonyStore ColonyStore::create(const std::string& path, const std::function<voi
                 WriteTransaction tx(store);
                 store.exec(schemaVersion1Sql());
                 store.exec(schemaVersion2Sql());
+                store.exec(encounterIndexSql());
                 store.exec(("PRAGMA application_id = " + std::to_string(colonyApplicationId)).c_str());
                 store.exec(("PRAGMA user_version = " + std::to_string(currentSchemaVersion)).c_str());
                 tx.commit();
@@ -288,7 +289,10 @@ ColonyStore ColonyStore::open(const std::string& path, Mode mode)
                                                           "); open it once for writing to update it");
         store.migrate(version);
     }
-    if (mode == Mode::ReadWrite) store.startSession();
+    if (mode == Mode::ReadWrite) {
+        store.startSession();
+        store.ensureEncounterIndex();
+    }
     return store;
 }
 
@@ -346,6 +350,24 @@ void ColonyStore::migrate(int fromVersion)
         tx.commit();
     }
     exec("PRAGMA journal_mode = WAL");
+}
+
+void ColonyStore::ensureEncounterIndex()
+{
+    SqliteStatement q(db_, "SELECT 1 FROM sqlite_schema WHERE type = 'index' AND name = ?");
+    q.bind(1, std::string_view(kEncounterIndexName));
+    if (q.step()) return;
+    // Files made before the index: built once, a few seconds for millions of
+    // encounters. The index only saves time: a file another program is
+    // writing, or a damaged one (refused at its first real write), opens
+    // without it, as before.
+    try {
+        WriteTransaction tx(*this);
+        exec(encounterIndexSql());
+        tx.commit();
+    } catch (const ColonyFileError& e) {
+        if (e.kind() != Kind::Busy && e.kind() != Kind::Damaged) throw;
+    }
 }
 
 ColonyStore::ColonyStore(ColonyStore&& other) noexcept
@@ -436,6 +458,37 @@ std::vector<Encounter> ColonyStore::loadEncounters() const
     out.reserve(static_cast<size_t>(encounterCount()) + 4096);
     while (q.step()) out.push_back(readEncounterRow(q, path_));
     return out;
+}
+
+std::vector<Encounter> ColonyStore::loadEncounters(const EncounterScope& scope) const
+{
+    if (scope.everything() && scope.uids) return loadEncounters();
+    // Parameters: ?1 group, ?2 from, ?3 to. `grp IN (?1, '')` is two ranges
+    // of encounter_by_group; the date bounds narrow each of them.
+    std::string sql = std::string("SELECT ") + (scope.uids ? kEncounterColumnsSql : kEncounterColumnsWithoutUidSql) +
+                      " FROM encounter WHERE 1";
+    if (!scope.group.empty())
+        sql += " AND grp IN (?1, '') AND (grp = ?1 OR winner IN (SELECT animal FROM residence WHERE grp = ?1))";
+    if (scope.from) sql += " AND date >= ?2";
+    if (scope.to) sql += " AND date <= ?3";
+    sql += " ORDER BY seq";
+    SqliteStatement q(db_, sql.c_str());
+    if (!scope.group.empty()) q.bind(1, scope.group);
+    if (scope.from) q.bind(2, formatDate(*scope.from));
+    if (scope.to) q.bind(3, formatDate(*scope.to));
+    std::vector<Encounter> out;
+    if (scope.everything()) out.reserve(static_cast<size_t>(encounterCount()) + 4096);
+    while (q.step()) out.push_back(readEncounterRow(q, path_));
+    return out;
+}
+
+std::optional<Day> ColonyStore::lastEncounterDay() const
+{
+    SqliteStatement q(db_, "SELECT max(date) FROM encounter");
+    if (!q.step() || q.isNull(0)) return std::nullopt;
+    const std::optional<Day> d = parseDate(q.text(0));
+    if (!d) throw ColonyFileError(Kind::Damaged, path_ + ": holds an impossible date '" + q.text(0) + "'");
+    return d;
 }
 
 Colony ColonyStore::load() const

@@ -14,6 +14,21 @@ struct sqlite3;
 
 namespace hierloom::core {
 
+/// Which encounters a question needs: those that may belong to `group` (its
+/// own rows, and rows without a group whose winner ever lived in it; empty:
+/// every group) dated within [from, to]. A superset of what the selection of
+/// docs/methods.md keeps, read through the encounter_by_group index.
+struct EncounterScope {
+    std::string group;
+    std::optional<Day> from;
+    std::optional<Day> to;
+    /// false: every uid is left empty (analyses never read them; at millions
+    /// of encounters the 36-character texts are a sixth of the memory).
+    bool uids = true;
+
+    bool everything() const { return group.empty() && !from && !to; }
+};
+
 /// A colony file: one SQLite database (WAL journal, foreign keys on) holding
 /// the animals, residences, encounters, observers, behaviour codes and
 /// settings. Every write runs in one transaction, so a write is whole or absent.
@@ -56,6 +71,10 @@ public:
     std::vector<Residence> loadResidences() const;
     /// Encounters in entry order (seq ascending).
     std::vector<Encounter> loadEncounters() const;
+    /// The encounters of a scope, in entry order (seq ascending).
+    std::vector<Encounter> loadEncounters(const EncounterScope& scope) const;
+    /// The date of the file's latest encounter (every group), if any.
+    std::optional<Day> lastEncounterDay() const;
     /// Everything: animals, residences and encounters.
     Colony load() const;
     std::int64_t encounterCount() const;
@@ -116,6 +135,7 @@ public:
 private:
     ColonyStore(sqlite3* db, std::string path) : db_(db), path_(std::move(path)) {}
     void migrate(int fromVersion);
+    void ensureEncounterIndex();
     void startSession();
 
     sqlite3* db_ = nullptr;

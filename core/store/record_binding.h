@@ -35,6 +35,10 @@ void bindResidenceColumns(SqliteStatement& q, const Residence& r);
 /// `dateText` (the formatted date) must stay unchanged until the statement runs.
 void bindEncounterColumns(SqliteStatement& q, const Encounter& e, const std::string& dateText);
 
+/// The same columns with an empty text in place of the uid (same positions).
+inline constexpr const char* kEncounterColumnsWithoutUidSql =
+    "seq, '', date, time, winner, loser, outcome, behaviour, grp, observer, note";
+
 /// The encounter in the current row of a query that selected kEncounterColumnsSql.
 /// A date that is not a real date means the file was changed outside the program:
 /// throws ColonyFileError (Damaged) naming `path`.

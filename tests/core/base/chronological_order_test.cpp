@@ -1,0 +1,36 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+// chronologicalOrder against its definition (docs/methods.md: date, time with
+// untimed last, entry order), brute force on random records with many ties.
+#include "core/base/colony.h"
+
+#include <gtest/gtest.h>
+
+#include <algorithm>
+#include <numeric>
+#include <random>
+
+using namespace hierloom::core;
+
+TEST(ChronologicalOrder, EqualsAStableSortByTheDefinition)
+{
+    std::mt19937 rng(17);
+    for (int round = 0; round < 50; ++round) {
+        std::vector<Encounter> encounters(1 + rng() % 300);
+        for (Encounter& e : encounters) {
+            e.date = -3 + static_cast<Day>(rng() % 8); // dates before 1970 too
+            if (rng() % 3 != 0) e.time = static_cast<int>(rng() % 4) * 480; // 00:00, 08:00, 16:00, 24:00 (bad data)
+            e.seq = static_cast<std::int64_t>(rng() % 5); // repeated seq: unsaved records
+        }
+        // The reference: indices stable-sorted by the comparison that defines the order.
+        std::vector<size_t> expected(encounters.size());
+        std::iota(expected.begin(), expected.end(), size_t{0});
+        std::stable_sort(expected.begin(), expected.end(),
+                         [&](size_t a, size_t b) { return encounterBefore(encounters[a], encounters[b]); });
+        EXPECT_EQ(chronologicalOrder(encounters), expected) << "round " << round;
+    }
+    // Already in order: the identity.
+    std::vector<Encounter> sorted(3);
+    sorted[1].date = 1;
+    sorted[2].date = 2;
+    EXPECT_EQ(chronologicalOrder(sorted), (std::vector<size_t>{0, 1, 2}));
+}
