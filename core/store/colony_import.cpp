@@ -208,9 +208,10 @@ void planResidences(const std::vector<Animal>& allAnimals, const std::vector<Res
 void checkEncounters(const ResidenceIndex& where, std::unordered_set<std::string>& uids, const ImportSource& src,
                      Day today, ImportProblems& P, const std::function<bool(Encounter&)>& accept)
 {
-    enum { DateCol, Time, Winner, Loser, OutcomeCol, Behaviour, GroupCol, Observer, Note, Uid };
+    enum { DateCol, Time, Winner, Loser, OutcomeCol, Behaviour, GroupCol, Observer, Note, Uid, WinnerSupport, LoserSupport };
     CsvColumns cols({{"date", true}, {"time", false}, {"winner", true}, {"loser", true}, {"outcome", false},
-                     {"behaviour", false}, {"group", false}, {"observer", false}, {"note", false}, {"uid", false}});
+                     {"behaviour", false}, {"group", false}, {"observer", false}, {"note", false}, {"uid", false},
+                     {"winner_support", false}, {"loser_support", false}});
     const std::string& F = src.name;
     FieldProblems row; // reused: no allocation while rows pass
     forEachRow(src, cols, P, [&](const std::vector<std::string_view>& f, int line) {
@@ -231,6 +232,8 @@ void checkEncounters(const ResidenceIndex& where, std::unordered_set<std::string
         e.winner = std::string(cols.field(f, Winner));
         e.loser = std::string(cols.field(f, Loser));
         e.group = std::string(cols.field(f, GroupCol));
+        if (const std::string_view cell = cols.field(f, WinnerSupport); !cell.empty()) e.winnerSupport = splitSupporters(cell);
+        if (const std::string_view cell = cols.field(f, LoserSupport); !cell.empty()) e.loserSupport = splitSupporters(cell);
         const std::string* shared = checkEncounterRow(e, where, today, row, unread == 0);
         if (shared) e.group = *shared;
         e.behaviour = std::string(cols.field(f, Behaviour));

@@ -5,6 +5,7 @@
 #include "core/store/colony_import.h"
 #include "core/store/colony_store.h"
 #include "core/store/sqlite_statement.h"
+#include "core/store/support_rows.h"
 #include "core/store/write_transaction.h"
 
 #include <sqlite3.h>
@@ -47,7 +48,9 @@ Fields fieldsOf(const Encounter& e)
             {"behaviour", e.behaviour},
             {"group", e.group},
             {"observer", e.observer},
-            {"note", e.note}};
+            {"note", e.note},
+            {"winner_support", joinSupporters(e.winnerSupport)},
+            {"loser_support", joinSupporters(e.loserSupport)}};
 }
 
 std::string label(const Animal& a) { return "animal " + a.id; }
@@ -139,6 +142,9 @@ void updateEncounter(sqlite3* db, const std::string& uid, const Encounter& e)
     q.bind(9, e.note);
     q.bind(10, uid);
     q.run();
+    Encounter supported = e;
+    supported.uid = uid;
+    replaceSupportRows(db, supported);
 }
 
 /// Sorts one kind of record of the other file into skipped, new, conflicting
