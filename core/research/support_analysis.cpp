@@ -3,6 +3,8 @@
 
 #include "core/pedigree/rank_acquisition.h"
 #include "core/pedigree/relatedness.h"
+#include "core/ranks/elo_rating.h"
+#include "core/ranks/encounter_selection.h"
 #include "core/ranks/parallel_randomisation.h"
 
 #include <algorithm>
@@ -73,6 +75,38 @@ std::optional<double> indexOf(long long highGiven, long long highOpp, long long 
     return (static_cast<double>(highGiven) / static_cast<double>(highOpp)) /
            (static_cast<double>(lowGiven) / static_cast<double>(lowOpp));
 }
+
+/// Elo ratings of one group after each day (Neumann et al. 2011), from one
+/// pass over its encounters: the observed scores predictInheritance reads,
+/// without a run from the first encounter for every date asked.
+class DailyScores {
+public:
+    DailyScores(const Colony& colony, const ResidenceIndex& where, const std::string& group, const EloSettings& elo)
+    {
+        SelectionOptions s;
+        s.group = group;
+        s.draws = elo.draws;
+        selection_ = selectEncounters(colony, where, s);
+        history_ = eloDailyHistory(selection_.size(), selection_.bouts, selection_.days, elo);
+    }
+
+    /// The ratings after the last encounter dated on or before d (as eloScoresAt).
+    ObservedScores on(Day d) const
+    {
+        ObservedScores out;
+        auto after = std::upper_bound(history_.begin(), history_.end(), d,
+                                      [](Day x, const EloDay& day) { return x < day.day; });
+        if (after == history_.begin()) return out;
+        const EloDay& day = *(after - 1);
+        for (int i = 0; i < selection_.size(); ++i)
+            if (day.rated[static_cast<size_t>(i)]) out.emplace(selection_.ids[static_cast<size_t>(i)], day.rating[static_cast<size_t>(i)]);
+        return out;
+    }
+
+private:
+    EncounterSelection selection_;
+    std::vector<EloDay> history_;
+};
 
 } // namespace
 
@@ -220,6 +254,7 @@ SupportAnalysis analyseSupport(const Colony& colony, const ResidenceIndex& where
     // Mothers and the rule: a mother's act for her daughter against another
     // female, both placed by the inheritance rule on that day.
     std::map<std::pair<Day, std::string>, InheritancePrediction> predictions;
+    std::map<std::string, DailyScores> scoresOf; // by group
     auto isFemale = [&](int a) { return colony.animals[static_cast<size_t>(a)].sex == Sex::Female; };
     auto motherOf = [&](int a) {
         const int node = lines.index(colony.animals[static_cast<size_t>(a)].id);
@@ -236,13 +271,12 @@ SupportAnalysis analyseSupport(const Colony& colony, const ResidenceIndex& where
             if (std::find(helpers.begin(), helpers.end(), mother) == helpers.end()) continue;
             auto [at, fresh] = predictions.try_emplace({f.e->date, f.e->group});
             if (fresh) {
-                InheritanceOptions o;
-                o.at = f.e->date;
-                o.rule = options.rule;
-                o.maturityYears = options.maturityYears;
-                o.group = f.e->group;
-                o.elo = options.elo;
-                at->second = predictInheritance(colony, where, lines, o);
+                // predictInheritance at that date and group, with one Elo pass per group.
+                auto scores = scoresOf.find(f.e->group);
+                if (scores == scoresOf.end())
+                    scores = scoresOf.try_emplace(f.e->group, colony, where, f.e->group, options.elo).first;
+                const RankedFemales ranked = rankedFemalesOn(lines, where, f.e->date, f.e->group, options.maturityYears);
+                at->second = predictOrder(lines, ranked, scores->second.on(f.e->date), options.rule);
             }
             const int pd = at->second.find(colony.animals[static_cast<size_t>(daughter)].id);
             const int po = at->second.find(colony.animals[static_cast<size_t>(opponent)].id);
