@@ -43,6 +43,8 @@ TEST(EntrySupport, SupportersOfBothSidesAreTypedAndStored)
     EXPECT_EQ(rows[0].winnerSupport, std::vector<std::string>{"F2"});
     EXPECT_EQ(rows[0].loserSupport, std::vector<std::string>{"D1"});
     EXPECT_TRUE(e.panel->winnerSupportEdit()->text().isEmpty()); // the line is cleared for the next one
+    // The day's table shows them in its last column.
+    EXPECT_EQ(e.panel->sessionList()->item(0, 8)->text(), QStringLiteral("winner's side: F2 · loser's side: D1"));
 }
 
 TEST(EntrySupport, TheSecondWordIsCompletedAloneAndTwoSupportersAreKept)
