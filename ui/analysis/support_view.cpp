@@ -147,9 +147,8 @@ void SupportView::recompute()
 
     const auto& mother = analysis_.classes[static_cast<size_t>(core::KinClass::Mother)];
     const auto& unrelated = analysis_.classes[static_cast<size_t>(core::KinClass::Unrelated)];
-    auto number = [](const std::optional<double>& v) {
-        return v ? toQString(core::formatNumber(*v)) : QStringLiteral("-");
-    };
+    // Three significant digits on screen; the tables below and the exports keep every digit.
+    auto number = [](const std::optional<double>& v) { return v ? QString::number(*v, 'g', 3) : QStringLiteral("-"); };
     summary_->setText(
         analysis_.acts == 0
             ? tr("%1 encounters, no supporters recorded.").arg(analysis_.encounters)
