@@ -1,7 +1,12 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 // The planted maternal-support pattern of the demo colony (demo-colony/README.md).
 #include "core/demo/demo_colony.h"
+#include "core/pedigree/inheritance_prediction.h"
+#include "core/pedigree/matriline.h"
 #include "core/research/support_analysis.h"
+
+#include <algorithm>
+#include <map>
 
 #include <gtest/gtest.h>
 
@@ -48,4 +53,42 @@ TEST(DemoSupport, AMotherBacksTheYoungerOfTwoFightingDaughters)
     }
     EXPECT_GT(younger, 20);
     EXPECT_EQ(elder, 0);
+}
+
+TEST(DemoSupport, TheMothersShareEqualsOnePredictionPerActComputedAfresh)
+{
+    // Brute force for the one-Elo-pass shortcut: predictInheritance (a full Elo
+    // run up to the date) for every mother's act for a daughter against a female.
+    const Colony c = generateDemoColony();
+    const ResidenceIndex where(c.animals, c.residences);
+    const Matrilines lines(c);
+    SupportOptions o;
+    o.iterations = 0;
+    const SupportAnalysis a = analyseSupport(c, where, o);
+    auto animal = [&](const std::string& id) -> const Animal& { return c.animals[static_cast<size_t>(c.animalIndex(id))]; };
+    std::map<Day, InheritancePrediction> byDay;
+    int counted = 0, below = 0;
+    for (const Encounter& e : c.encounters)
+        for (int side = 0; side < 2; ++side) {
+            const std::string& daughter = side == 0 ? e.winner : e.loser;
+            const std::string& opponent = side == 0 ? e.loser : e.winner;
+            const std::vector<std::string>& helpers = side == 0 ? e.winnerSupport : e.loserSupport;
+            const std::string& mother = animal(daughter).mother;
+            if (mother.empty() || animal(daughter).sex != Sex::Female || animal(opponent).sex != Sex::Female) continue;
+            if (std::find(helpers.begin(), helpers.end(), mother) == helpers.end()) continue;
+            auto [at, fresh] = byDay.try_emplace(e.date);
+            if (fresh) {
+                InheritanceOptions io;
+                io.at = e.date;
+                io.group = e.group;
+                at->second = predictInheritance(c, where, lines, io);
+            }
+            const int pd = at->second.find(daughter), po = at->second.find(opponent);
+            if (pd < 0 || po < 0) continue;
+            ++counted;
+            if (po > pd) ++below;
+        }
+    EXPECT_EQ(a.motherActsAgainstFemales, counted);
+    EXPECT_EQ(a.motherActsAgainstBelow, below);
+    EXPECT_GT(counted, 100);
 }
