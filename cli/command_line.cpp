@@ -32,6 +32,7 @@ int run(int argc, const char* const* argv, std::ostream& out, std::ostream& err)
     addSexRatioCommand(app, ctx, action);
     addMaternalRanksCommand(app, ctx, action);
     addExportTablesCommand(app, ctx, action);
+    addSupportCommand(app, ctx, action);
     addInheritCommand(app, ctx, action);
     addScenarioCommand(app, ctx, action);
     addStabilityCommand(app, ctx, action);

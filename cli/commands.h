@@ -20,6 +20,7 @@ void addMetricsCommand(CLI::App& app, CommandContext& ctx, CommandAction& action
 void addSexRatioCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 void addMaternalRanksCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 void addExportTablesCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
+void addSupportCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 void addInheritCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 void addScenarioCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 void addStabilityCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);

@@ -263,7 +263,7 @@ void addExportTablesCommand(CLI::App& app, CommandContext& ctx, CommandAction& a
 {
     auto* cmd = app.add_subcommand("export-tables", "write the research tables as CSV files into a folder");
     cmd->footer("Tables: ranks by period, win matrix, metrics by period, maternal ranks, sex ratio, discordance\n"
-                "by month. In the files, "
+                "by month; with supporters in the record also the kin-support tables of `support`. In the files, "
                 "text cells starting with = + - @ get a leading ' so a spreadsheet cannot run them.");
     auto o = std::make_shared<ExportTablesOptions>();
     addBirthOptions(*cmd, o->births, true);

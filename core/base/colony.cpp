@@ -22,6 +22,43 @@ void Colony::reindex()
     for (size_t i = 0; i < animals.size(); ++i) index_.emplace(animals[i].id, static_cast<int>(i));
 }
 
+bool takesPart(const Encounter& e, std::string_view id)
+{
+    if (e.winner == id || e.loser == id) return true;
+    return std::find(e.winnerSupport.begin(), e.winnerSupport.end(), id) != e.winnerSupport.end() ||
+           std::find(e.loserSupport.begin(), e.loserSupport.end(), id) != e.loserSupport.end();
+}
+
+bool hasSupporters(const std::vector<Encounter>& encounters)
+{
+    return std::any_of(encounters.begin(), encounters.end(),
+                       [](const Encounter& e) { return !e.winnerSupport.empty() || !e.loserSupport.empty(); });
+}
+
+std::vector<std::string> splitSupporters(std::string_view cell)
+{
+    std::vector<std::string> out;
+    size_t i = 0;
+    while (i < cell.size()) {
+        while (i < cell.size() && (cell[i] == ' ' || cell[i] == '\t')) ++i;
+        size_t j = i;
+        while (j < cell.size() && cell[j] != ' ' && cell[j] != '\t') ++j;
+        if (j > i) out.emplace_back(cell.substr(i, j - i));
+        i = j;
+    }
+    return out;
+}
+
+std::string joinSupporters(const std::vector<std::string>& ids)
+{
+    std::string out;
+    for (const std::string& id : ids) {
+        if (!out.empty()) out += ' ';
+        out += id;
+    }
+    return out;
+}
+
 bool encounterBefore(const Encounter& a, const Encounter& b)
 {
     if (a.date != b.date) return a.date < b.date;

@@ -5,6 +5,7 @@
 #include <cstdint>
 #include <optional>
 #include <string>
+#include <string_view>
 #include <unordered_map>
 #include <vector>
 
@@ -52,6 +53,10 @@ struct Encounter {
     std::string note;
     std::int64_t seq = 0; // order of entry or import
     std::string uid;
+    /// Animals that joined the fight on the winner's or the loser's side
+    /// (coalitionary support), in the order recorded; empty when none.
+    std::vector<std::string> winnerSupport;
+    std::vector<std::string> loserSupport;
 };
 
 /// The whole record of a colony, as plain values.
@@ -68,6 +73,18 @@ struct Colony {
 private:
     std::unordered_map<std::string, int> index_;
 };
+
+/// True when `id` is the winner, the loser or a supporter of `e`.
+bool takesPart(const Encounter& e, std::string_view id);
+
+/// True when any encounter carries a supporter.
+bool hasSupporters(const std::vector<Encounter>& encounters);
+
+/// Supporter ids of one cell of encounters.csv: separated by spaces (runs of
+/// spaces count as one), none when empty.
+std::vector<std::string> splitSupporters(std::string_view cell);
+/// The cell text of a list of supporters: ids joined by one space.
+std::string joinSupporters(const std::vector<std::string>& ids);
 
 /// Encounter order of docs/methods.md: date, then time (untimed last), then entry order.
 bool encounterBefore(const Encounter& a, const Encounter& b);

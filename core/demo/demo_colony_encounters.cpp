@@ -69,11 +69,59 @@ constexpr const char* kNotes[] = {
     "\"bite\" without a visible wound",
 };
 
+bool adultOn(const DemoAnimal& a, Day d) { return d >= anniversary(a.birth, 4); }
+
+/// The planted maternal-support pattern (demo-colony/README.md): supporters
+/// drawn from their own stream, so the encounters themselves do not change.
+/// `pos` marks the animals that may take part that day (>= 0).
+void addSupporters(const DemoPopulation& pop, const std::vector<int>& pos, int w, int l, Day d, DemoRandom& rng,
+                   Encounter& enc)
+{
+    auto& A = pop.animals;
+    auto at = [&](int i) -> const DemoAnimal& { return A[static_cast<size_t>(i)]; };
+    auto free = [&](int i) {
+        if (i < 0 || i == w || i == l || pos[static_cast<size_t>(i)] < 0) return false;
+        const std::string& id = at(i).id;
+        return std::find(enc.winnerSupport.begin(), enc.winnerSupport.end(), id) == enc.winnerSupport.end() &&
+               std::find(enc.loserSupport.begin(), enc.loserSupport.end(), id) == enc.loserSupport.end();
+    };
+    auto join = [&](int i, bool winnerSide) { (winnerSide ? enc.winnerSupport : enc.loserSupport).push_back(at(i).id); };
+    const int mw = at(w).mother, ml = at(l).mother;
+    if (mw >= 0 && mw == ml) {
+        // Two of her offspring fighting: the mother backs the younger one.
+        if (free(mw) && adultOn(at(mw), d) && rng.chance(0.35)) join(mw, at(w).birth > at(l).birth);
+    } else {
+        for (int side = 0; side < 2; ++side) {
+            const int f = side == 0 ? w : l;
+            const int m = at(f).mother;
+            // Mothers back their offspring, the young ones (under six) the more.
+            const double p = d < anniversary(at(f).birth, 6) ? 0.40 : 0.22;
+            if (m >= 0 && free(m) && adultOn(at(m), d) && rng.chance(p)) join(m, side == 0);
+        }
+    }
+    for (int side = 0; side < 2; ++side) {
+        const int f = side == 0 ? w : l;
+        const int m = at(f).mother;
+        if (m < 0) continue;
+        // Grandmothers and adult maternal sisters now and then.
+        if (const int g = at(m).mother; g >= 0 && free(g) && adultOn(at(g), d) && rng.chance(0.06)) join(g, side == 0);
+        for (int s : at(m).children)
+            if (s != f && at(s).sex == Sex::Female && free(s) && adultOn(at(s), d) && rng.chance(0.04)) join(s, side == 0);
+    }
+    // Now and then an unrelated adult joins the winner's side.
+    if (rng.chance(0.10)) {
+        const int u = static_cast<int>(rng.below(A.size()));
+        const char lu = at(u).line;
+        if (free(u) && adultOn(at(u), d) && (lu == 0 || (lu != at(w).line && lu != at(l).line))) join(u, true);
+    }
+}
+
 } // namespace
 
 std::vector<Encounter> generateDemoEncounters(const DemoPopulation& pop, std::uint64_t seed)
 {
     DemoRandom rng(splitMix64(seed ^ 0xE2C0E2C0ULL));
+    DemoRandom supportRng(splitMix64(seed ^ 0x5A9905E7ULL)); // the supporters' own stream
     const std::vector<std::string> observers = demoObservers();
     const Day start = toDay(demo::kRecordStart);
     const Day end = toDay(demo::kRecordEnd);
@@ -179,6 +227,7 @@ std::vector<Encounter> generateDemoEncounters(const DemoPopulation& pop, std::ui
             }
             enc.winner = pop.animals[static_cast<size_t>(draw || aWins ? a : b)].id;
             enc.loser = pop.animals[static_cast<size_t>(draw || aWins ? b : a)].id;
+            addSupporters(pop, pos, draw || aWins ? a : b, draw || aWins ? b : a, d, supportRng, enc);
             if (rng.chance(0.006)) enc.note = kNotes[rng.below(std::size(kNotes))];
             enc.group = demo::kGroup;
             enc.observer = minute < 12 * 60 ? morning : afternoon;

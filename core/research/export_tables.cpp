@@ -1,5 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "core/research/export_tables.h"
+#include "core/research/support_tables.h"
+#include "core/ranks/parallel_randomisation.h"
 
 #include "core/base/csv_writer.h"
 #include "core/pedigree/discordance.h"
@@ -247,6 +249,24 @@ std::vector<ExportTable> researchTables(const Colony& colony, const ResidenceInd
     out.push_back(sexRatioTable(analysis));
     out.push_back(rankThirdsTable(analysis));
     out.push_back(discordanceByMonthTable(colony, where, o.selection, o.ranks.elo, o.maturityYears));
+    // The kin-support tables only for a record that has supporters, so older exports keep their files.
+    if (hasSupporters(colony.encounters)) {
+        SupportOptions so;
+        so.group = o.selection.group;
+        so.from = o.selection.from;
+        so.to = o.selection.to;
+        so.iterations = o.randomisations;
+        so.seed = o.seed;
+        so.threads = o.threads == 0 ? defaultThreadCount() : o.threads;
+        so.maturityYears = o.maturityYears;
+        so.elo = o.ranks.elo;
+        so.elo.draws = o.selection.draws;
+        const SupportAnalysis support = analyseSupport(colony, where, so);
+        out.push_back(supportPairsTable(support));
+        out.push_back(supportSummaryTable(support));
+        out.push_back(supportDaughtersTable(support));
+        out.push_back(supportMatrixTable(support));
+    }
     return out;
 }
 

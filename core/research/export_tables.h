@@ -89,7 +89,8 @@ struct ResearchExportOptions {
 };
 
 /// Every research table: ranks by period, win matrix, metrics by period,
-/// maternal ranks, sex-ratio figures, rank thirds and discordance by month.
+/// maternal ranks, sex-ratio figures, rank thirds and discordance by month;
+/// with supporters in the record also the four kin-support tables (support_tables.h).
 std::vector<ExportTable> researchTables(const Colony& colony, const ResidenceIndex& where,
                                         const ResearchExportOptions& options);
 

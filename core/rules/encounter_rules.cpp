@@ -2,6 +2,7 @@
 #include "core/rules/encounter_rules.h"
 
 #include "core/rules/record_messages.h"
+#include "core/rules/support_rules.h"
 
 namespace hierloom::core {
 
@@ -45,8 +46,11 @@ std::string shownTime(int minutes) { return minutes < 0 ? std::to_string(minutes
 
 } // namespace
 
-const std::string* checkEncounterRow(const Encounter& e, const ResidenceIndex& where, Day today, FieldProblems& out,
-                                     bool dateRead)
+namespace {
+
+/// The rules about the winner and the loser (EncounterRule).
+const std::string* checkPair(const Encounter& e, const ResidenceIndex& where, Day today, FieldProblems& out,
+                             bool dateRead)
 {
     // EncounterRule::DateNotInFuture, TimeOfDay
     const bool dateOk = dateRead && e.date <= today;
@@ -102,6 +106,17 @@ const std::string* checkEncounterRow(const Encounter& e, const ResidenceIndex& w
         return nullptr;
     }
     return &winnerGroup;
+}
+
+} // namespace
+
+const std::string* checkEncounterRow(const Encounter& e, const ResidenceIndex& where, Day today, FieldProblems& out,
+                                     bool dateRead)
+{
+    const std::string* shared = checkPair(e, where, today, out, dateRead);
+    // The supporters' rules (core/rules/support_rules.h), after the pair's.
+    if (!e.winnerSupport.empty() || !e.loserSupport.empty()) checkSupporters(e, where, shared, out);
+    return shared;
 }
 
 FieldProblems checkEncounter(Encounter& e, const ResidenceIndex& where, Day today)

@@ -35,8 +35,8 @@ std::string notATimeOfDay(std::string_view shown);
 /// "'won' must be decided or draw": likewise for an outcome.
 std::string notAnOutcome(std::string_view shown);
 
-/// Appends the problems of `e` to `out` without building any text while the
-/// encounter passes; `dateRead` false (the import could not read the date)
+/// Appends the problems of `e` (its supporters' too, support_rules.h) to `out`
+/// without building any text while the encounter passes; `dateRead` false (the import could not read the date)
 /// leaves out the rules about that day. Returns the group both animals were
 /// in when every rule about the day passed, else nullptr.
 const std::string* checkEncounterRow(const Encounter& e, const ResidenceIndex& where, Day today, FieldProblems& out,

@@ -51,8 +51,13 @@ void writeEncountersCsv(std::ostream& out, const Colony& colony)
 {
     CsvWriter csv(out);
     const bool uids = hasUids(colony.encounters);
-    csv.writeRow(withUid({"date", "time", "winner", "loser", "outcome", "behaviour", "group", "observer", "note"},
-                         uids, "uid"));
+    // The supporter columns come after the uid, and only when some encounter
+    // has supporters, so a colony without them exports as it always did.
+    const bool support = hasSupporters(colony.encounters);
+    std::vector<std::string> header =
+        withUid({"date", "time", "winner", "loser", "outcome", "behaviour", "group", "observer", "note"}, uids, "uid");
+    if (support) header.insert(header.end(), {"winner_support", "loser_support"});
+    csv.writeRow(header);
     // Entry order: seq ascending, ties (equal seq) kept as stored.
     std::vector<size_t> order(colony.encounters.size());
     std::iota(order.begin(), order.end(), size_t{0});
@@ -61,9 +66,12 @@ void writeEncountersCsv(std::ostream& out, const Colony& colony)
     });
     for (size_t i : order) {
         const Encounter& e = colony.encounters[i];
-        csv.writeRow(withUid({formatDate(e.date), e.time ? formatTimeOfDay(*e.time) : std::string(), e.winner,
-                              e.loser, toString(e.outcome), e.behaviour, e.group, e.observer, e.note},
-                             uids, e.uid));
+        std::vector<std::string> row =
+            withUid({formatDate(e.date), e.time ? formatTimeOfDay(*e.time) : std::string(), e.winner, e.loser,
+                     toString(e.outcome), e.behaviour, e.group, e.observer, e.note},
+                    uids, e.uid);
+        if (support) row.insert(row.end(), {joinSupporters(e.winnerSupport), joinSupporters(e.loserSupport)});
+        csv.writeRow(row);
     }
 }
 

@@ -8,6 +8,7 @@
 #include "core/store/record_binding.h"
 #include "core/base/residence_index.h"
 #include "core/store/sqlite_statement.h"
+#include "core/store/support_rows.h"
 #include "core/store/write_transaction.h"
 
 #include <sqlite3.h>
@@ -129,7 +130,7 @@ AnimalChange planAnimalEdit(const Colony& colony, const Animal& input, Day today
     const auto start = lifeStart(a);
     int before = 0, afterExit = 0;
     for (const Encounter& e : colony.encounters) {
-        if (e.winner != a.id && e.loser != a.id) continue;
+        if (!takesPart(e, a.id)) continue; // as a supporter too
         if (start && e.date < *start) ++before;
         if (a.exit && e.date > *a.exit) ++afterExit;
     }
@@ -201,7 +202,7 @@ AnimalChange planMove(const Colony& colony, const std::string& id, const std::st
         const Day end = oldEnd.value_or(ResidenceIndex::openEnd);
         int n = 0;
         for (const Encounter& e : colony.encounters)
-            if ((e.winner == id || e.loser == id) && e.date >= date && e.date <= end) ++n;
+            if (takesPart(e, id) && e.date >= date && e.date <= end) ++n;
         if (n > 0)
             c.problems.push_back({"from", quotedValue(id) + " has " + std::to_string(n) + " encounter" + (n == 1 ? "" : "s") +
                                               " in " + quotedValue(oldGroup) + " on or after " + formatDate(date)});
@@ -263,6 +264,7 @@ void writeEncounterChange(ColonyStore& store, const std::vector<Encounter>& remo
         {
             SqliteStatement del(db, "DELETE FROM encounter WHERE uid = ?");
             for (const Encounter& e : remove) {
+                deleteSupportRows(db, e.uid);
                 del.bind(1, e.uid);
                 del.run();
             }
@@ -270,6 +272,7 @@ void writeEncounterChange(ColonyStore& store, const std::vector<Encounter>& remo
         if (insert.empty()) return;
         std::int64_t seq = highestEncounterSeq(db);
         SqliteStatement ins(db, kInsertEncounterSql);
+        SupportWriter support(db);
         SqliteStatement obs(db, "INSERT OR IGNORE INTO observer(name) VALUES (?)");
         std::string date;
         for (Encounter& e : insert) {
@@ -278,6 +281,7 @@ void writeEncounterChange(ColonyStore& store, const std::vector<Encounter>& remo
             date = formatDate(e.date);
             bindEncounterColumns(ins, e, date);
             ins.run();
+            support.add(e);
             if (!e.observer.empty()) {
                 obs.bind(1, e.observer);
                 obs.run();
@@ -324,7 +328,10 @@ std::vector<Encounter> encountersByUid(const ColonyStore& store, const std::vect
     std::vector<Encounter> out;
     for (const std::string& uid : uids) {
         q.bind(1, uid);
-        if (q.step()) out.push_back(readEncounterRow(q, store.path()));
+        if (q.step()) {
+            out.push_back(readEncounterRow(q, store.path()));
+            loadSupportRowsOf(store.handle(), out.back());
+        }
         q.reset();
     }
     std::sort(out.begin(), out.end(), [](const Encounter& a, const Encounter& b) { return a.seq < b.seq; });

@@ -210,9 +210,10 @@ void planResidences(const std::vector<Animal>& allAnimals, const std::vector<Res
 void checkEncounters(const ResidenceIndex& where, std::unordered_set<std::string>& uids, const ImportSource& src,
                      Day today, ImportProblems& P, const std::function<bool(Encounter&)>& accept)
 {
-    enum { DateCol, Time, Winner, Loser, OutcomeCol, Behaviour, GroupCol, Observer, Note, Uid };
+    enum { DateCol, Time, Winner, Loser, OutcomeCol, Behaviour, GroupCol, Observer, Note, Uid, WinnerSupport, LoserSupport };
     CsvColumns cols({{"date", true}, {"time", false}, {"winner", true}, {"loser", true}, {"outcome", false},
-                     {"behaviour", false}, {"group", false}, {"observer", false}, {"note", false}, {"uid", false}});
+                     {"behaviour", false}, {"group", false}, {"observer", false}, {"note", false}, {"uid", false},
+                     {"winner_support", false}, {"loser_support", false}});
     const std::string& F = src.name;
     FieldProblems row; // reused: no allocation while rows pass
     forEachRow(src, cols, P, [&](const std::vector<std::string_view>& f, int line) {
@@ -233,6 +234,8 @@ void checkEncounters(const ResidenceIndex& where, std::unordered_set<std::string
         e.winner = std::string(cols.field(f, Winner));
         e.loser = std::string(cols.field(f, Loser));
         e.group = std::string(cols.field(f, GroupCol));
+        if (const std::string_view cell = cols.field(f, WinnerSupport); !cell.empty()) e.winnerSupport = splitSupporters(cell);
+        if (const std::string_view cell = cols.field(f, LoserSupport); !cell.empty()) e.loserSupport = splitSupporters(cell);
         e.behaviour = std::string(cols.field(f, Behaviour));
         e.observer = std::string(cols.field(f, Observer));
         e.note = std::string(cols.field(f, Note));

@@ -79,6 +79,7 @@ namespace {
 struct AuditedTable {
     const char* name;
     std::vector<const char*> columns;
+    const char* uidColumn = "uid"; // the audit row's uid: the record's own, or its encounter's
 };
 
 /// json_object('col', ROW.col, ...) for the columns of one table.
@@ -105,10 +106,18 @@ const std::vector<AuditedTable>& auditedTables()
     return tables;
 }
 
+/// The table added by version 3; its rows are filed under their encounter's uid.
+const AuditedTable& supportTable()
+{
+    static const AuditedTable table{"encounter_support", {"encounter", "animal", "side"}, "encounter"};
+    return table;
+}
+
 const AuditedTable& auditedTable(const std::string& name)
 {
     for (const AuditedTable& t : auditedTables())
         if (name == t.name) return t;
+    if (name == supportTable().name) return supportTable();
     throw std::invalid_argument("no audited table " + name);
 }
 
@@ -147,13 +156,13 @@ std::string auditTriggerSql(const std::string& table, const std::string& action)
                              (action == "insert" ? "INSERT" : action == "update" ? "UPDATE" : "DELETE") + " ON " +
                              table + " WHEN NOT EXISTS (SELECT 1 FROM audit_pause) BEGIN\n";
     if (action == "insert")
-        return head + "  INSERT INTO audit(tbl, uid, action, new_values) VALUES ('" + table + "', new.uid, 'insert', " +
+        return head + "  INSERT INTO audit(tbl, uid, action, new_values) VALUES ('" + table + "', new." + t.uidColumn + ", 'insert', " +
                jsonOf(t, "new") + ");\nEND;\n";
     if (action == "update")
         return head + "  INSERT INTO audit(tbl, uid, action, old_values, new_values) VALUES ('" + table +
-               "', new.uid, 'update', " + jsonOf(t, "old") + ", " + jsonOf(t, "new") + ");\nEND;\n";
+               "', new." + t.uidColumn + ", 'update', " + jsonOf(t, "old") + ", " + jsonOf(t, "new") + ");\nEND;\n";
     if (action == "delete")
-        return head + "  INSERT INTO audit(tbl, uid, action, old_values) VALUES ('" + table + "', old.uid, 'delete', " +
+        return head + "  INSERT INTO audit(tbl, uid, action, old_values) VALUES ('" + table + "', old." + t.uidColumn + ", 'delete', " +
                jsonOf(t, "old") + ");\nEND;\n";
     throw std::invalid_argument("no audit trigger for " + action);
 }
@@ -175,6 +184,27 @@ const char* encounterIndexSql()
     // grp first: a group's rows (and the rows without a group) are one range
     // each; date second: a window within the group narrows that range.
     return "CREATE INDEX IF NOT EXISTS encounter_by_group ON encounter(grp, date);";
+}
+
+const char* schemaVersion3Sql()
+{
+    // One row per supporter. Keyed by the encounter's uid (never changed by an
+    // edit) so that the audit rows sit in the encounter's own history; the
+    // rowid keeps the order in which the supporters were recorded.
+    static const std::string sql = [] {
+        std::string out = R"SQL(
+CREATE TABLE encounter_support (
+  encounter  TEXT NOT NULL REFERENCES encounter(uid) ON UPDATE CASCADE ON DELETE CASCADE,
+  animal     TEXT NOT NULL REFERENCES animal(id) ON UPDATE CASCADE,
+  side       TEXT NOT NULL CHECK (side IN ('winner', 'loser')),
+  PRIMARY KEY (encounter, animal)
+);
+CREATE INDEX encounter_support_by_animal ON encounter_support(animal);
+)SQL";
+        for (const char* action : {"insert", "update", "delete"}) out += auditTriggerSql(supportTable().name, action);
+        return out;
+    }();
+    return sql.c_str();
 }
 
 const char* sessionSql()

@@ -8,7 +8,7 @@ namespace hierloom::core {
 constexpr int colonyApplicationId = 0x48524C4D;
 
 /// The schema version this build writes (`PRAGMA user_version`).
-constexpr int currentSchemaVersion = 2;
+constexpr int currentSchemaVersion = 3;
 
 /// SQL creating the version-1 schema.
 const char* schemaVersion1Sql();
@@ -18,8 +18,14 @@ const char* schemaVersion1Sql();
 /// residences and encounters (old and new values as JSON via json_object).
 const char* schemaVersion2Sql();
 
-/// The version-2 audit trigger of one table ("animal", "residence",
-/// "encounter") and action ("insert", "update", "delete"), exactly as the
+/// SQL taking a version-2 schema to version 3: the `encounter_support`
+/// table (one row per supporter of an encounter: the encounter's uid, the
+/// animal and its side) and its audit triggers, which file each row under
+/// the encounter's uid. Self-contained: it needs nothing but version 2.
+const char* schemaVersion3Sql();
+
+/// The audit trigger of one table ("animal", "residence", "encounter"
+/// from version 2, "encounter_support" from version 3) and action ("insert", "update", "delete"), exactly as the
 /// schema creates it, and the statement dropping it.
 std::string auditTriggerSql(const std::string& table, const std::string& action);
 std::string auditTriggerDropSql(const std::string& table, const std::string& action);

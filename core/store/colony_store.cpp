@@ -8,6 +8,7 @@
 #include "core/store/record_appender.h"
 #include "core/store/record_binding.h"
 #include "core/store/sqlite_uri.h"
+#include "core/store/support_rows.h"
 #include "core/store/write_transaction.h"
 #include "core/store/sqlite_statement.h"
 
@@ -211,6 +212,7 @@ ColonyStore ColonyStore::create(const std::string& path, const std::function<voi
                 store.exec(schemaVersion1Sql());
                 store.exec(schemaVersion2Sql());
                 store.exec(encounterIndexSql());
+                store.exec(schemaVersion3Sql());
                 store.exec(("PRAGMA application_id = " + std::to_string(colonyApplicationId)).c_str());
                 store.exec(("PRAGMA user_version = " + std::to_string(currentSchemaVersion)).c_str());
                 tx.commit();
@@ -344,6 +346,9 @@ void ColonyStore::migrate(int fromVersion)
             } else if (v == 1) {
                 // Version 2 adds the audit trail; existing records keep no history before it.
                 exec(schemaVersion2Sql());
+            } else if (v == 2) {
+                // Version 3 adds the supporters of encounters (none in an older file).
+                exec(schemaVersion3Sql());
             }
             exec(("PRAGMA user_version = " + std::to_string(v + 1)).c_str());
         }
@@ -457,6 +462,7 @@ std::vector<Encounter> ColonyStore::loadEncounters() const
     // times; the headroom keeps an evening's new entries from moving them all.
     out.reserve(static_cast<size_t>(encounterCount()) + 4096);
     while (q.step()) out.push_back(readEncounterRow(q, path_));
+    loadSupportRows(db_, out);
     return out;
 }
 

@@ -34,7 +34,7 @@ void insertResidences(ColonyStore& store, std::vector<Residence>& residences)
 }
 
 EncounterAppender::EncounterAppender(ColonyStore& store, const WriteTransaction& transaction)
-    : store_(store), bulk_(transaction.bulk()), insert_(store.handle(), kInsertEncounterSql)
+    : store_(store), bulk_(transaction.bulk()), insert_(store.handle(), kInsertEncounterSql), support_(store.handle())
 {
     nextSeq_ = highestEncounterSeq(store.handle()) + 1;
     firstSeq_ = nextSeq_;
@@ -50,6 +50,7 @@ void EncounterAppender::add(Encounter& e)
     }
     bindEncounterColumns(insert_, e, date_);
     insert_.run();
+    support_.add(e);
     ++count_;
     if (!e.observer.empty() && e.observer != lastObserver_) {
         lastObserver_ = e.observer;

@@ -2,6 +2,7 @@
 #pragma once
 #include "core/base/colony.h"
 #include "core/store/sqlite_statement.h"
+#include "core/store/support_rows.h"
 
 #include <cstdint>
 #include <string>
@@ -20,7 +21,8 @@ void insertAnimals(ColonyStore& store, std::vector<Animal>& animals);
 void insertResidences(ColonyStore& store, std::vector<Residence>& residences);
 
 /// Adds encounters one by one: each gets the next seq after the file's
-/// largest (written back) and a uid if it has none; observers are recorded.
+/// largest (written back) and a uid if it has none; its supporters and the
+/// observers are recorded.
 /// In a bulk transaction finish() writes the one audit row naming the source
 /// and the seq range; otherwise the schema's trigger audits every row.
 class EncounterAppender {
@@ -39,6 +41,7 @@ private:
     ColonyStore& store_;
     bool bulk_;
     SqliteStatement insert_;
+    SupportWriter support_;
     std::int64_t nextSeq_ = 1;
     std::int64_t firstSeq_ = 1;
     std::int64_t count_ = 0;

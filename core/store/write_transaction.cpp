@@ -46,6 +46,7 @@ WriteTransaction::WriteTransaction(ColonyStore& store, Size size)
             // The trigger's per-row check costs a fifth of a bulk load; dropping
             // it inside the transaction is undone by any rollback.
             store_.exec(auditTriggerDropSql("encounter", "insert").c_str());
+            store_.exec(auditTriggerDropSql("encounter_support", "insert").c_str());
         } catch (...) {
             sqlite3_exec(store_.handle(), nested_ ? "ROLLBACK TO write_records; RELEASE write_records" : "ROLLBACK",
                          nullptr, nullptr, nullptr);
@@ -57,7 +58,10 @@ WriteTransaction::WriteTransaction(ColonyStore& store, Size size)
 
 void WriteTransaction::commit()
 {
-    if (bulk_) store_.exec(auditTriggerSql("encounter", "insert").c_str());
+    if (bulk_) {
+        store_.exec(auditTriggerSql("encounter", "insert").c_str());
+        store_.exec(auditTriggerSql("encounter_support", "insert").c_str());
+    }
     if (!nested_) countFileWrite(store_); // every -wal this program writes carries the file's identity
     store_.exec(nested_ ? "RELEASE write_records" : "COMMIT");
     done_ = true;

@@ -59,7 +59,7 @@ TEST(CliHelp, EveryCommandIsListed)
     const auto names = commandNames();
     // The commands of docs/file-formats.md at least; more may be added.
     for (const char* expected : {"init", "import", "export", "demo", "ranks", "matrix", "metrics", "sex-ratio",
-                                 "maternal-ranks", "export-tables", "inherit", "scenario"})
+                                 "maternal-ranks", "export-tables", "support", "inherit", "scenario"})
         EXPECT_NE(std::find(names.begin(), names.end(), expected), names.end()) << expected;
 }
 

@@ -135,7 +135,9 @@ TEST(ResearchExportDialog, WritesTheCoreTables)
     dialog.setSpreadsheet(true);
     ASSERT_TRUE(dialog.exportTables()) << ui::toStdString(dialog.report());
     const std::vector<std::string> names{"ranks_by_period", "win_matrix", "metrics_by_period", "maternal_ranks",
-                                         "sex_ratio", "sex_ratio_by_rank_third", "discordance_by_month"};
+                                         "sex_ratio", "sex_ratio_by_rank_third", "discordance_by_month",
+                                         // the demo records supporters: the kin-support tables too
+                                         "support_pairs", "support_summary", "support_daughters", "support_matrix"};
     ASSERT_EQ(dialog.writtenFiles().size(), static_cast<int>(names.size()));
     for (const std::string& n : names) {
         const std::string text = readFile(out.file("tables/" + n + ".csv"));

@@ -10,6 +10,7 @@ class MatrixView;
 class PredictionView;
 class RankTimelineView;
 class SexRatioView;
+class SupportView;
 
 /// The plot views of the main window and the selection that links them
 /// (made by ui/shell/view_registry.h).
@@ -20,6 +21,7 @@ struct AnalysisViews {
     MatrixView* matrix = nullptr;
     HierarchyPlotsView* hierarchy = nullptr;
     SexRatioView* sexRatio = nullptr;
+    SupportView* support = nullptr;
 };
 
 } // namespace hierloom::ui

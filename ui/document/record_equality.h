@@ -15,8 +15,10 @@ namespace hierloom::ui {
 
 inline bool sameRecord(const core::Encounter& a, const core::Encounter& b)
 {
-    return std::tie(a.date, a.time, a.winner, a.loser, a.outcome, a.behaviour, a.group, a.observer, a.note, a.seq, a.uid) ==
-           std::tie(b.date, b.time, b.winner, b.loser, b.outcome, b.behaviour, b.group, b.observer, b.note, b.seq, b.uid);
+    return std::tie(a.date, a.time, a.winner, a.loser, a.outcome, a.behaviour, a.group, a.observer, a.note, a.seq, a.uid,
+                    a.winnerSupport, a.loserSupport) ==
+           std::tie(b.date, b.time, b.winner, b.loser, b.outcome, b.behaviour, b.group, b.observer, b.note, b.seq, b.uid,
+                    b.winnerSupport, b.loserSupport);
 }
 
 inline bool sameRecord(const core::Animal& a, const core::Animal& b)

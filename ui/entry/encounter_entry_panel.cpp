@@ -9,6 +9,7 @@
 #include "ui/entry/session_table.h"
 #include "ui/entry/entry_keys.h"
 #include "ui/entry/undo_keys.h"
+#include "ui/entry/word_completer.h"
 #include "ui/widgets/key_sheet.h"
 #include "ui/widgets/confirm.h"
 #include "ui/widgets/typed_date.h"
@@ -93,10 +94,14 @@ EncounterEntryPanel::EncounterEntryPanel(ColonyEditFacade* facade, QWidget* pare
       draw_(new QCheckBox(withEntryMnemonic(tr("Draw"), EntryKey::Draw), this)),
       behaviour_(new QComboBox(this)),
       note_(new QLineEdit(this)),
+      winnerSupport_(new QLineEdit(this)),
+      loserSupport_(new QLineEdit(this)),
       addButton_(new QPushButton(tr("Add Line (%1)").arg(keyName(EntryKey::SaveLine)), this)),
       timeInfo_(infoLabel(this)),
       winnerInfo_(infoLabel(this)),
       loserInfo_(infoLabel(this)),
+      winnerSupportInfo_(infoLabel(this)),
+      loserSupportInfo_(infoLabel(this)),
       lineInfo_(infoLabel(this)),
       mode_(new QLabel(this)),
       completions_(new QStringListModel(this)),
@@ -124,6 +129,14 @@ EncounterEntryPanel::EncounterEntryPanel(ColonyEditFacade* facade, QWidget* pare
     note_->setPlaceholderText(tr("note"));
     for (QLineEdit* edit : {winner_, loser_}) {
         auto* completer = new QCompleter(completions_, edit);
+        completer->setCaseSensitivity(Qt::CaseInsensitive);
+        completer->setCompletionMode(QCompleter::PopupCompletion);
+        edit->setCompleter(completer);
+    }
+    for (QLineEdit* edit : {winnerSupport_, loserSupport_}) {
+        // Several animals, one word each: the word being typed is completed.
+        edit->setPlaceholderText(tr("ids or names, separated by spaces"));
+        auto* completer = new WordCompleter(completions_, edit);
         completer->setCaseSensitivity(Qt::CaseInsensitive);
         completer->setCompletionMode(QCompleter::PopupCompletion);
         edit->setCompleter(completer);
@@ -169,6 +182,17 @@ EncounterEntryPanel::EncounterEntryPanel(ColonyEditFacade* facade, QWidget* pare
     line->addWidget(winnerInfo_, 2, 1);
     line->addWidget(loserInfo_, 2, 2);
     line->addWidget(lineInfo_, 2, 3, 1, 4);
+    // The supporters of each side, under the winner and the loser.
+    auto* winnerSupportLabel = new QLabel(withEntryMnemonic(tr("Winner's supporters"), EntryKey::WinnerSupport), this);
+    winnerSupportLabel->setBuddy(winnerSupport_);
+    auto* loserSupportLabel = new QLabel(withEntryMnemonic(tr("Loser's supporters"), EntryKey::LoserSupport), this);
+    loserSupportLabel->setBuddy(loserSupport_);
+    line->addWidget(winnerSupportLabel, 3, 0);
+    line->addWidget(winnerSupport_, 3, 1);
+    line->addWidget(loserSupportLabel, 3, 2, Qt::AlignRight);
+    line->addWidget(loserSupport_, 3, 3, 1, 3);
+    line->addWidget(winnerSupportInfo_, 4, 1);
+    line->addWidget(loserSupportInfo_, 4, 3, 1, 3);
     line->setColumnStretch(1, 2);
     line->setColumnStretch(2, 2);
     line->setColumnStretch(5, 4);
@@ -208,10 +232,13 @@ EncounterEntryPanel::EncounterEntryPanel(ColonyEditFacade* facade, QWidget* pare
     setTabOrder(loser_, draw_);
     setTabOrder(draw_, behaviour_);
     setTabOrder(behaviour_, note_);
-    setTabOrder(note_, list_);
+    setTabOrder(note_, winnerSupport_);
+    setTabOrder(winnerSupport_, loserSupport_);
+    setTabOrder(loserSupport_, list_);
     setTabOrder(list_, refused_);
     for (QWidget* w : {static_cast<QWidget*>(time_), static_cast<QWidget*>(winner_), static_cast<QWidget*>(loser_),
-                       static_cast<QWidget*>(draw_), static_cast<QWidget*>(behaviour_), static_cast<QWidget*>(note_)})
+                       static_cast<QWidget*>(draw_), static_cast<QWidget*>(behaviour_), static_cast<QWidget*>(note_),
+                       static_cast<QWidget*>(winnerSupport_), static_cast<QWidget*>(loserSupport_)})
         w->installEventFilter(this);
     list_->installEventFilter(this);
     refused_->installEventFilter(this);
@@ -223,7 +250,8 @@ EncounterEntryPanel::EncounterEntryPanel(ColonyEditFacade* facade, QWidget* pare
 
     connect(addButton_, &QPushButton::clicked, this, &EncounterEntryPanel::commitLine);
     // Enter on an open completion list reaches the field directly (not through the filter).
-    for (QLineEdit* edit : {winner_, loser_}) connect(edit, &QLineEdit::returnPressed, this, &EncounterEntryPanel::commitLine);
+    for (QLineEdit* edit : {winner_, loser_, winnerSupport_, loserSupport_})
+        connect(edit, &QLineEdit::returnPressed, this, &EncounterEntryPanel::commitLine);
     connect(endButton_, &QPushButton::clicked, this, &EncounterEntryPanel::endSession);
     connect(editButton, &QPushButton::clicked, this, &EncounterEntryPanel::editSelectedRow);
     connect(deleteButton, &QPushButton::clicked, this, &EncounterEntryPanel::deleteSelectedRows);
@@ -234,6 +262,8 @@ EncounterEntryPanel::EncounterEntryPanel(ColonyEditFacade* facade, QWidget* pare
     connect(observer_, &QComboBox::currentTextChanged, this, &EncounterEntryPanel::headerChanged);
     connect(winner_, &QLineEdit::textChanged, this, [this] { checkAnimalField(winner_, winnerInfo_); });
     connect(loser_, &QLineEdit::textChanged, this, [this] { checkAnimalField(loser_, loserInfo_); });
+    connect(winnerSupport_, &QLineEdit::textChanged, this, [this] { checkSupportField(winnerSupport_, winnerSupportInfo_); });
+    connect(loserSupport_, &QLineEdit::textChanged, this, [this] { checkSupportField(loserSupport_, loserSupportInfo_); });
     connect(time_, &QLineEdit::textChanged, this, &EncounterEntryPanel::checkTime);
     connect(document_, &ColonyDocument::changed, this, &EncounterEntryPanel::documentChanged);
     // Said where the person typing looks, besides the status bar.
@@ -329,6 +359,40 @@ void EncounterEntryPanel::headerChanged()
     checkDate();
     checkAnimalField(winner_, winnerInfo_);
     checkAnimalField(loser_, loserInfo_);
+    checkSupportField(winnerSupport_, winnerSupportInfo_);
+    checkSupportField(loserSupport_, loserSupportInfo_);
+}
+
+std::vector<std::string> EncounterEntryPanel::supporterIds(const QLineEdit* edit, std::optional<std::string>& problem) const
+{
+    std::vector<std::string> ids;
+    for (const std::string& word : core::splitSupporters(toStdString(edit->text()))) {
+        const AnimalMatcher::Match m = matcher_.resolve(toQString(word));
+        if (m.error && !problem) problem = toStdString(*m.error);
+        ids.push_back(m.id);
+    }
+    return ids;
+}
+
+void EncounterEntryPanel::checkSupportField(QLineEdit* edit, QLabel* info)
+{
+    std::optional<std::string> problem;
+    const std::vector<std::string> ids = supporterIds(edit, problem);
+    if (ids.empty()) {
+        info->clear();
+        return;
+    }
+    if (problem) {
+        showError(info, toQString(*problem));
+        return;
+    }
+    // Each one in the session's group that day, in the encounter rules' words.
+    for (const std::string& id : ids)
+        if (auto m = core::checkEncounterAnimal(id, toStdString(group_->currentText()), sessionDay(), document_->residences())) {
+            showError(info, toQString(*m));
+            return;
+        }
+    showHint(info, toQString(core::joinSupporters(ids)));
 }
 
 void EncounterEntryPanel::checkAnimalField(QLineEdit* edit, QLabel* info)
@@ -415,7 +479,7 @@ void EncounterEntryPanel::checkDate()
 
 void EncounterEntryPanel::clearMessages()
 {
-    for (QLabel* l : {timeInfo_, winnerInfo_, loserInfo_, lineInfo_}) l->clear();
+    for (QLabel* l : {timeInfo_, winnerInfo_, loserInfo_, winnerSupportInfo_, loserSupportInfo_, lineInfo_}) l->clear();
 }
 
 void EncounterEntryPanel::showProblems(const core::FieldProblems& problems)
@@ -423,6 +487,8 @@ void EncounterEntryPanel::showProblems(const core::FieldProblems& problems)
     for (const core::FieldProblem& p : problems) {
         QLabel* target = p.field == "winner" ? winnerInfo_
                          : p.field == "loser" ? loserInfo_
+                         : p.field == "winner_support" ? winnerSupportInfo_
+                         : p.field == "loser_support" ? loserSupportInfo_
                          : p.field == "time"  ? timeInfo_
                          : p.field == "date" || p.field == "observer" ? dateInfo_
                                               : lineInfo_;
@@ -433,6 +499,8 @@ void EncounterEntryPanel::showProblems(const core::FieldProblems& problems)
     const std::string& f = problems.front().field;
     QWidget* fault = f == "time" ? static_cast<QWidget*>(time_)
                      : f == "loser" ? static_cast<QWidget*>(loser_)
+                     : f == "winner_support" ? static_cast<QWidget*>(winnerSupport_)
+                     : f == "loser_support" ? static_cast<QWidget*>(loserSupport_)
                      : f == "date" ? static_cast<QWidget*>(date_)
                      : f == "observer" ? static_cast<QWidget*>(observer_)
                      : f == "behaviour" ? static_cast<QWidget*>(behaviour_)
@@ -448,6 +516,8 @@ QString EncounterEntryPanel::fieldMessage(const QString& field) const
                           : field == QLatin1String("time")   ? timeInfo_
                           : field == QLatin1String("winner") ? winnerInfo_
                           : field == QLatin1String("loser")  ? loserInfo_
+                          : field == QLatin1String("winner_support") ? winnerSupportInfo_
+                          : field == QLatin1String("loser_support")  ? loserSupportInfo_
                                                              : lineInfo_;
     return isError(label) ? label->text() : QString();
 }
@@ -475,6 +545,9 @@ bool EncounterEntryPanel::commitLine()
     e.group = toStdString(group_->currentText());
     e.observer = toStdString(observer_->currentText().trimmed());
     e.note = toStdString(note_->text().trimmed());
+    std::optional<std::string> winnerSideProblem, loserSideProblem;
+    e.winnerSupport = supporterIds(winnerSupport_, winnerSideProblem);
+    e.loserSupport = supporterIds(loserSupport_, loserSideProblem);
 
     core::FieldProblems problems;
     if (!dateValid_) problems.push_back({"date", toStdString(typedDateProblem(date_->text()))});
@@ -483,6 +556,8 @@ bool EncounterEntryPanel::commitLine()
     if (badTime) problems.push_back({"time", toStdString(tr("'%1' is not a time of day in the form HH:MM (24 h)").arg(time_->text().trimmed()))});
     if (w.partial) problems.push_back({"winner", toStdString(*w.error)});
     if (l.partial) problems.push_back({"loser", toStdString(*l.error)});
+    if (winnerSideProblem) problems.push_back({"winner_support", *winnerSideProblem});
+    if (loserSideProblem) problems.push_back({"loser_support", *loserSideProblem});
     // The session's group: each animal must be in it that day (same words as the import otherwise).
     for (const auto& [id, field] : {std::pair{e.winner, "winner"}, std::pair{e.loser, "loser"}})
         if (!id.empty() && problemFor(problems, field).empty())
@@ -541,7 +616,7 @@ bool EncounterEntryPanel::commitLine()
 
 void EncounterEntryPanel::clearLine()
 {
-    for (QLineEdit* edit : {time_, winner_, loser_, note_}) edit->clear();
+    for (QLineEdit* edit : {time_, winner_, loser_, note_, winnerSupport_, loserSupport_}) edit->clear();
     draw_->setChecked(false);
     clearMessages();
 }

@@ -62,7 +62,8 @@ public:
     /// Puts the keyboard focus on the first field of the entry line.
     void focusEntry();
 
-    /// The message shown beside a field ("date", "observer", "time", "winner", "loser", "line"), or empty.
+    /// The message shown beside a field ("date", "observer", "time", "winner", "loser",
+    /// "winner_support", "loser_support", "line"), or empty.
     QString fieldMessage(const QString& field) const;
     /// Lines entered in this session that are now in the file.
     int sessionRowCount() const;
@@ -80,6 +81,9 @@ public:
     QCheckBox* drawBox() const { return draw_; }
     QComboBox* behaviourBox() const { return behaviour_; }
     QLineEdit* noteEdit() const { return note_; }
+    /// The supporters of each side: ids or names separated by spaces, completed like the winner and loser.
+    QLineEdit* winnerSupportEdit() const { return winnerSupport_; }
+    QLineEdit* loserSupportEdit() const { return loserSupport_; }
     QTableWidget* sessionList() const { return list_; }
     QListWidget* refusedList() const { return refused_; }
 
@@ -93,6 +97,9 @@ private:
     void refreshList();
     void headerChanged();
     void checkAnimalField(QLineEdit* edit, QLabel* info);
+    void checkSupportField(QLineEdit* edit, QLabel* info);
+    /// The ids typed in a supporters field; `problem` gets the first word that is not one animal.
+    std::vector<std::string> supporterIds(const QLineEdit* edit, std::optional<std::string>& problem) const;
     void checkTime();
     void dateTyped();
     void checkDate();
@@ -101,7 +108,7 @@ private:
     void showProblems(const core::FieldProblems& problems);
     void refuse(const core::FieldProblems& problems);
     void recallRefused();
-    /// The entry line as typed: time, winner, loser, draw, behaviour, note.
+    /// The entry line as typed: time, winner, loser, draw, behaviour, note, supporters of each side.
     QStringList typedFields() const;
     void clearMessages();
     void clearLine();
@@ -127,10 +134,14 @@ private:
     QCheckBox* draw_;
     QComboBox* behaviour_;
     QLineEdit* note_;
+    QLineEdit* winnerSupport_;
+    QLineEdit* loserSupport_;
     QPushButton* addButton_;
     QLabel* timeInfo_;
     QLabel* winnerInfo_;
     QLabel* loserInfo_;
+    QLabel* winnerSupportInfo_;
+    QLabel* loserSupportInfo_;
     QLabel* lineInfo_;
     QLabel* mode_;
     QStringListModel* completions_;

@@ -77,7 +77,7 @@ QString EncounterEntryPanel::summaryText() const { return summary_->text(); }
 QStringList EncounterEntryPanel::typedFields() const
 {
     return {time_->text(), winner_->text(), loser_->text(), draw_->isChecked() ? QStringLiteral("1") : QString(),
-            behaviour_->currentText(), note_->text()};
+            behaviour_->currentText(), note_->text(), winnerSupport_->text(), loserSupport_->text()};
 }
 
 void EncounterEntryPanel::refuse(const core::FieldProblems& problems)
@@ -111,6 +111,8 @@ void EncounterEntryPanel::recallRefused()
     draw_->setChecked(!f.value(3).isEmpty());
     behaviour_->setCurrentText(f.value(4));
     note_->setText(f.value(5));
+    winnerSupport_->setText(f.value(6));
+    loserSupport_->setText(f.value(7));
     time_->setFocus();
 }
 
@@ -127,6 +129,8 @@ void EncounterEntryPanel::editSelectedRow()
     draw_->setChecked(e.outcome == core::Outcome::Draw);
     behaviour_->setCurrentText(toQString(e.behaviour));
     note_->setText(toQString(e.note));
+    winnerSupport_->setText(toQString(core::joinSupporters(e.winnerSupport)));
+    loserSupport_->setText(toQString(core::joinSupporters(e.loserSupport)));
     mode_->setText(tr("Changing line %1: Enter saves it, Esc cancels.").arg(row + 1));
     time_->setFocus();
 }

@@ -28,6 +28,8 @@ enum class EntryKey {
     Draw,
     Behaviour,
     Note,
+    WinnerSupport,
+    LoserSupport,
     RefusedList,
     EndSession,
     UndoSession,

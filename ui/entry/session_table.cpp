@@ -16,14 +16,23 @@ QString tr(const char* text) { return QCoreApplication::translate("hierloom::ui:
 
 void setUpSessionTable(QTableWidget* table)
 {
-    table->setColumnCount(8);
+    table->setColumnCount(9);
     table->setHorizontalHeaderLabels({tr("Line"), tr("Time"), tr("Winner"), tr("Loser"), tr("Outcome"),
-                                      tr("Behaviour"), tr("Note"), tr("Entered")});
+                                      tr("Behaviour"), tr("Note"), tr("Entered"), tr("Supporters")});
     table->setEditTriggers(QAbstractItemView::NoEditTriggers);
     table->setSelectionBehavior(QAbstractItemView::SelectRows);
     table->verticalHeader()->hide();
     table->horizontalHeader()->setStretchLastSection(true);
     table->setAlternatingRowColors(true);
+}
+
+/// "winner's side: F2 · loser's side: D1", or empty without supporters.
+static QString supportersText(const core::Encounter& e)
+{
+    QStringList parts;
+    if (!e.winnerSupport.empty()) parts << tr("winner's side: %1").arg(toQString(core::joinSupporters(e.winnerSupport)));
+    if (!e.loserSupport.empty()) parts << tr("loser's side: %1").arg(toQString(core::joinSupporters(e.loserSupport)));
+    return parts.join(QStringLiteral(" · "));
 }
 
 QString idAndName(const std::string& id, const core::Colony& colony)
@@ -49,7 +58,8 @@ void fillSessionTable(QTableWidget* table, const std::vector<const core::Encount
                                 e.outcome == core::Outcome::Draw ? tr("draw") : tr("decided"),
                                 toQString(e.behaviour),
                                 toQString(e.note),
-                                earlier ? tr("earlier (%1)").arg(who) : tr("this session")};
+                                earlier ? tr("earlier (%1)").arg(who) : tr("this session"),
+                                supportersText(e)};
         for (int c = 0; c < cells.size(); ++c) {
             auto* item = new QTableWidgetItem(cells[c]);
             item->setData(Qt::UserRole, toQString(e.uid));

@@ -104,6 +104,8 @@ QVariant EncounterTableModel::data(const QModelIndex& index, int role) const
     case Group: return toQString(e.group);
     case Observer: return toQString(e.observer);
     case Note: return toQString(e.note);
+    case WinnerSupport: return toQString(core::joinSupporters(e.winnerSupport));
+    case LoserSupport: return toQString(core::joinSupporters(e.loserSupport));
     default: return {};
     }
 }
@@ -121,6 +123,8 @@ QVariant EncounterTableModel::headerData(int section, Qt::Orientation orientatio
     case Group: return tr("Group");
     case Observer: return tr("Observer");
     case Note: return tr("Note");
+    case WinnerSupport: return tr("Winner's supporters");
+    case LoserSupport: return tr("Loser's supporters");
     default: return {};
     }
 }

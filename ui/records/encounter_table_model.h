@@ -18,7 +18,7 @@ class ColonyDocument;
 class EncounterTableModel : public QAbstractTableModel {
     Q_OBJECT
 public:
-    enum Column { Date, Time, Winner, Loser, Outcome, Behaviour, Group, Observer, Note, ColumnCount };
+    enum Column { Date, Time, Winner, Loser, Outcome, Behaviour, Group, Observer, Note, WinnerSupport, LoserSupport, ColumnCount };
 
     explicit EncounterTableModel(const ColonyDocument* document, QObject* parent = nullptr);
 

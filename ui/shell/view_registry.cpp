@@ -6,6 +6,7 @@
 #include "ui/analysis/prediction_view.h"
 #include "ui/analysis/rank_timeline_view.h"
 #include "ui/analysis/sex_ratio_view.h"
+#include "ui/analysis/support_view.h"
 #include "ui/entry/encounter_entry_panel.h"
 #include "ui/planning/planner_view.h"
 #include "ui/planning/stability_view.h"
@@ -46,6 +47,9 @@ const std::vector<ViewEntry>& viewRegistry()
          [](const ViewContext& c) { return c.parts.manager.planner = new PlannerView(c.facade, c.window); }},
         {"stability", QT_TRANSLATE_NOOP("hierloom::ui::ViewRegistry", "&Stability"), Qt::Key_0,
          [](const ViewContext& c) { return c.parts.manager.stability = new StabilityView(c.facade, c.window); }},
+        // Ctrl+1 ... Ctrl+0 are taken: kin support takes Ctrl+K.
+        {"support", QT_TRANSLATE_NOOP("hierloom::ui::ViewRegistry", "Supp&ort"), Qt::Key_K,
+         [](const ViewContext& c) { return c.parts.analysis.support = new SupportView(c.document, c.window); }},
     };
     return views;
 }

@@ -207,8 +207,15 @@ TEST(ExportTables, ResearchTablesHoldEveryTable)
     const auto tables = researchTables(d.colony, d.where, o);
     std::vector<std::string> names;
     for (const ExportTable& t : tables) names.push_back(t.name);
+    // The demo records supporters, so the four kin-support tables follow (docs/file-formats.md).
     EXPECT_EQ(names, (std::vector<std::string>{"ranks_by_period", "win_matrix", "metrics_by_period", "maternal_ranks",
-                                                "sex_ratio", "sex_ratio_by_rank_third", "discordance_by_month"}));
+                                                "sex_ratio", "sex_ratio_by_rank_third", "discordance_by_month",
+                                                "support_pairs", "support_summary", "support_daughters",
+                                                "support_matrix"}));
+    // Without supporters the export holds the seven tables it always did.
+    Colony bare = d.colony;
+    for (Encounter& e : bare.encounters) e.winnerSupport.clear(), e.loserSupport.clear();
+    EXPECT_EQ(researchTables(bare, d.where, o).size(), 7U);
     // The maternal table and the sex-ratio figures agree: used births = births_used.
     int used = 0;
     for (const auto& row : tables[3].rows) used += row[11] == "1";

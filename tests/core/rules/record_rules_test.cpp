@@ -6,6 +6,7 @@
 #include "core/rules/encounter_rules.h"
 #include "core/rules/record_messages.h"
 #include "core/rules/residence_rules.h"
+#include "core/rules/support_rules.h"
 #include "core/store/colony_edits.h"
 #include "import_test_support.h"
 
@@ -307,6 +308,41 @@ std::optional<RuleCase> encounterCase(EncounterRule rule, RuleColony& colony)
     return std::nullopt;
 }
 
+std::optional<RuleCase> supportCase(SupportRule rule, RuleColony& colony)
+{
+    // MA beats D1 in east on 2021-01-01; D2 is there too, SIRE is in west.
+    auto typed = [&colony](std::vector<std::string> winnerSide, std::vector<std::string> loserSide) {
+        return [&colony, winnerSide, loserSide] {
+            Encounter e;
+            e.date = day("2021-01-01");
+            e.winner = "MA";
+            e.loser = "D1";
+            e.winnerSupport = winnerSide;
+            e.loserSupport = loserSide;
+            std::vector<Encounter> one{e};
+            const FieldProblems p = insertEncounters(colony.store(), one, kToday);
+            EXPECT_EQ(colony.store().encounterCount(), 0) << "a refused encounter was written";
+            return p;
+        };
+    };
+    const std::string h = "date,time,winner,loser,outcome,behaviour,group,observer,note,winner_support,loser_support\n";
+    const std::string row = "2021-01-01,,MA,D1,,,,,,";
+    switch (rule) {
+    case SupportRule::SupporterKnown:
+        return RuleCase{h + row + "NOPE,\n", typed({"NOPE"}, {}), "winner_support", "not an animal of the colony"};
+    case SupportRule::NotAParticipant:
+        return RuleCase{h + row + "D1,\n", typed({"D1"}, {}), "winner_support", "is the loser"};
+    case SupportRule::ListedOnce:
+        return RuleCase{h + row + ",D2  D2\n", typed({}, {"D2", "D2"}), "loser_support", "listed twice"};
+    case SupportRule::OneSide:
+        return RuleCase{h + row + "D2,D2\n", typed({"D2"}, {"D2"}), "loser_support", "also supports the winner"};
+    case SupportRule::PresentInGroup:
+        return RuleCase{h + row + "SIRE,\n", typed({"SIRE"}, {}), "winner_support", "was in group 'west'"};
+    case SupportRule::Count: break;
+    }
+    return std::nullopt;
+}
+
 /// Runs the case of every value of `Rule` below its Count; a value without a case fails.
 template <typename Rule, typename MakeCase>
 void expectEveryRuleBothWays(RuleColony& colony, const std::string& file, MakeCase makeCase)
@@ -347,10 +383,31 @@ TEST(RecordRules, EveryEncounterRuleReadsTheSameInAnImportAndByHand)
     expectEveryRuleBothWays<EncounterRule>(colony, "encounters", [&](EncounterRule r) { return encounterCase(r, colony); });
 }
 
+TEST(RecordRules, EverySupportRuleReadsTheSameInAnImportAndByHand)
+{
+    RuleColony colony;
+    expectEveryRuleBothWays<SupportRule>(colony, "encounters", [&](SupportRule r) { return supportCase(r, colony); });
+}
+
+TEST(RecordRules, ASupporterDeadThatDayIsRefusedWithItsLine)
+{
+    // D2 died on 2023-02-01 (kBaseAnimals); line 3 names her as a supporter on 2023-05-01.
+    RuleColony colony;
+    ImportPaths paths;
+    TempDir dir;
+    paths.encounters = dir.write("e.csv", "date,winner,loser,loser_support\n2021-01-01,MA,D1,D2\n2023-05-01,MA,D1,D2\n");
+    const ImportResult r = importFiles(colony.store(), paths, kToday);
+    ASSERT_FALSE(r.ok());
+    EXPECT_EQ(r.problems.list().front().text(),
+              paths.encounters + ":3: loser_support: 'D2' was not alive in the colony on 2023-05-01");
+    EXPECT_EQ(colony.store().encounterCount(), 0);
+}
+
 TEST(RecordRules, EveryRuleHasItsOwnName)
 {
     std::set<std::string> names;
-    const int rules = addNames<AnimalRule>(names) + addNames<ResidenceRule>(names) + addNames<EncounterRule>(names);
+    const int rules = addNames<AnimalRule>(names) + addNames<ResidenceRule>(names) + addNames<EncounterRule>(names) +
+                      addNames<SupportRule>(names);
     EXPECT_EQ(names.size(), static_cast<size_t>(rules));
     EXPECT_EQ(names.count("?"), 0U);
 }

@@ -207,7 +207,7 @@ TEST(ColonyStore, MigratesVersion1ToTheAuditedSchemaKeepingRecordsAndABackup)
     EXPECT_THROW(ColonyStore::open(path, ColonyStore::Mode::ReadOnly), ColonyFileError);
     {
         ColonyStore store = ColonyStore::open(path);
-        EXPECT_EQ(store.schemaVersion(), 2);
+        EXPECT_EQ(store.schemaVersion(), currentSchemaVersion);
         const Colony c = store.load();
         ASSERT_EQ(c.animals.size(), 2U);
         EXPECT_EQ(c.animals[0].uid, "11111111-1111-4111-8111-111111111111");
@@ -260,7 +260,7 @@ TEST(ColonyStore, EveryDamagedOrForeignFileGetsAClearMessageAndStaysUntouched)
     sqlite3_exec(db, "CREATE TABLE photo(name, data); INSERT INTO photo VALUES ('a', x'00ff')", nullptr, nullptr, nullptr);
     sqlite3_close(db);
     const std::string newer = dir.file("newer.hierloom");
-    ColonyStore::create(newer).exec("PRAGMA user_version = 3");
+    ColonyStore::create(newer).exec(("PRAGMA user_version = " + std::to_string(currentSchemaVersion + 1)).c_str());
 
     struct Case {
         std::string path;

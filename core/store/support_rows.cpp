@@ -1,0 +1,75 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#include "core/store/support_rows.h"
+
+#include <algorithm>
+
+namespace hierloom::core {
+
+namespace {
+
+constexpr const char* kInsertSupportSql = "INSERT INTO encounter_support(encounter, animal, side) VALUES (?,?,?)";
+
+void addRow(Encounter& e, const std::string& animal, const std::string& side)
+{
+    (side == "winner" ? e.winnerSupport : e.loserSupport).push_back(animal);
+}
+
+} // namespace
+
+SupportWriter::SupportWriter(sqlite3* db) : insert_(db, kInsertSupportSql) {}
+
+void SupportWriter::add(const Encounter& e)
+{
+    if (e.winnerSupport.empty() && e.loserSupport.empty()) return;
+    addSide(e, e.winnerSupport, "winner");
+    addSide(e, e.loserSupport, "loser");
+}
+
+void SupportWriter::addSide(const Encounter& e, const std::vector<std::string>& ids, const char* side)
+{
+    for (const std::string& id : ids) {
+        insert_.bind(1, e.uid);
+        insert_.bind(2, id);
+        insert_.bind(3, side);
+        insert_.run();
+    }
+}
+
+void deleteSupportRows(sqlite3* db, const std::string& encounterUid)
+{
+    SqliteStatement del(db, "DELETE FROM encounter_support WHERE encounter = ?");
+    del.bind(1, encounterUid);
+    del.run();
+}
+
+void replaceSupportRows(sqlite3* db, const Encounter& e)
+{
+    deleteSupportRows(db, e.uid);
+    SupportWriter(db).add(e);
+}
+
+void loadSupportRows(sqlite3* db, std::vector<Encounter>& encounters)
+{
+    // Joined on the encounter so the rows arrive in seq order; a walk along the
+    // loaded encounters (also in seq order) then places them without a map.
+    SqliteStatement q(db, "SELECT e.seq, s.animal, s.side FROM encounter_support s JOIN encounter e "
+                          "ON e.uid = s.encounter ORDER BY e.seq, s.rowid");
+    size_t at = 0;
+    while (q.step()) {
+        const std::int64_t seq = q.integer(0);
+        while (at < encounters.size() && encounters[at].seq < seq) ++at;
+        if (at == encounters.size()) break;
+        if (encounters[at].seq == seq) addRow(encounters[at], q.text(1), q.text(2));
+    }
+}
+
+void loadSupportRowsOf(sqlite3* db, Encounter& e)
+{
+    e.winnerSupport.clear();
+    e.loserSupport.clear();
+    SqliteStatement q(db, "SELECT animal, side FROM encounter_support WHERE encounter = ? ORDER BY rowid");
+    q.bind(1, e.uid);
+    while (q.step()) addRow(e, q.text(0), q.text(1));
+}
+
+} // namespace hierloom::core

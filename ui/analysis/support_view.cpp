@@ -1,0 +1,208 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#include "ui/analysis/support_view.h"
+
+#include "core/base/number_format.h"
+#include "core/pedigree/matriline.h"
+#include "core/ranks/parallel_randomisation.h"
+#include "core/research/support_tables.h"
+#include "ui/document/colony_document.h"
+#include "ui/document/document_settings.h"
+#include "ui/document/qt_convert.h"
+#include "ui/document/visible_refresh.h"
+#include "ui/widgets/matriline_palette.h"
+
+#include <QComboBox>
+#include <QHBoxLayout>
+#include <QHeaderView>
+#include <QLabel>
+#include <QSignalBlocker>
+#include <QSpinBox>
+#include <QTabWidget>
+#include <QTableWidget>
+#include <QVBoxLayout>
+
+#include <set>
+
+namespace hierloom::ui {
+
+namespace {
+
+/// Fills a table from the cells of a research table (the same text the exports write).
+void fill(QTableWidget* table, const core::ExportTable& t)
+{
+    table->clear();
+    table->setColumnCount(static_cast<int>(t.header.size()));
+    table->setRowCount(static_cast<int>(t.rows.size()));
+    QStringList header;
+    for (const std::string& h : t.header) header << toQString(h);
+    table->setHorizontalHeaderLabels(header);
+    for (int r = 0; r < static_cast<int>(t.rows.size()); ++r)
+        for (int c = 0; c < static_cast<int>(t.rows[static_cast<size_t>(r)].size()); ++c)
+            table->setItem(r, c, new QTableWidgetItem(toQString(t.rows[static_cast<size_t>(r)][static_cast<size_t>(c)])));
+    table->resizeColumnsToContents();
+}
+
+QTableWidget* readOnlyTable(QWidget* parent)
+{
+    auto* t = new QTableWidget(parent);
+    t->setEditTriggers(QAbstractItemView::NoEditTriggers);
+    t->setSelectionBehavior(QAbstractItemView::SelectItems);
+    return t;
+}
+
+} // namespace
+
+SupportView::SupportView(ColonyDocument* document, QWidget* parent)
+    : QWidget(parent),
+      document_(document),
+      group_(new QComboBox(this)),
+      permutations_(new QSpinBox(this)),
+      summary_(new QLabel(this)),
+      pairs_(readOnlyTable(this)),
+      matrix_(readOnlyTable(this)),
+      daughters_(readOnlyTable(this)),
+      refresh_(nullptr)
+{
+    setObjectName(QStringLiteral("support"));
+    permutations_->setRange(0, 100000);
+    permutations_->setValue(199);
+    summary_->setWordWrap(true);
+    summary_->setTextInteractionFlags(Qt::TextSelectableByMouse);
+
+    auto* options = new QHBoxLayout;
+    auto addLabelled = [&](const QString& text, QWidget* field) {
+        auto* label = new QLabel(text, this);
+        label->setBuddy(field);
+        options->addWidget(label);
+        options->addWidget(field);
+    };
+    addLabelled(tr("&Group:"), group_);
+    addLabelled(tr("&Permutations:"), permutations_);
+    options->addStretch(1);
+
+    auto* tabs = new QTabWidget(this);
+    tabs->addTab(matrix_, tr("Support matrix (row for column: given/opportunities)"));
+    tabs->addTab(pairs_, tr("Pairs"));
+    tabs->addTab(daughters_, tr("Daughters' rise"));
+
+    auto* layout = new QVBoxLayout(this);
+    layout->addLayout(options);
+    layout->addWidget(summary_);
+    layout->addWidget(new QLabel(tr("Rank figures use the winner and the loser only; supporters enter these figures "
+                                    "alone (docs/methods.md, \"Kin support\")."),
+                                 this));
+    layout->addWidget(tabs, 1);
+
+    refresh_ = new VisibleRefresh(this, [this] { recompute(); });
+    connect(group_, &QComboBox::currentIndexChanged, this, [this] {
+        if (!loading_) recompute();
+    });
+    connect(permutations_, &QSpinBox::editingFinished, this, [this] { recompute(); });
+    connect(document_, &ColonyDocument::changed, this, [this] {
+        refreshGroups();
+        refresh_->request();
+    });
+    refreshGroups();
+    refresh_->request();
+}
+
+void SupportView::refreshGroups()
+{
+    loading_ = true;
+    const QString current = group_->currentData().toString();
+    const QSignalBlocker block(group_);
+    group_->clear();
+    group_->addItem(tr("every group"), QString());
+    std::set<std::string> groups;
+    for (const core::Residence& r : document_->colony().residences) groups.insert(r.group);
+    for (const std::string& g : groups) group_->addItem(toQString(g), toQString(g));
+    const int at = group_->findData(current);
+    group_->setCurrentIndex(at < 0 ? 0 : at);
+    loading_ = false;
+}
+
+void SupportView::setGroup(const QString& group)
+{
+    const int at = group_->findData(group);
+    group_->setCurrentIndex(at < 0 ? 0 : at);
+    recompute();
+}
+
+void SupportView::setPermutations(int n)
+{
+    permutations_->setValue(n);
+    recompute();
+}
+
+void SupportView::recompute()
+{
+    core::SupportOptions o;
+    const core::AnalysisSettings settings = documentAnalysisSettings(document_);
+    o.group = toStdString(group_->currentData().toString());
+    o.iterations = permutations_->value();
+    o.threads = core::defaultThreadCount(); // the result is the same with any count
+    o.maturityYears = settings.maturityYears;
+    o.elo = settings.elo;
+    analysis_ = core::analyseSupport(document_->colony(), document_->residences(), o);
+
+    const auto& mother = analysis_.classes[static_cast<size_t>(core::KinClass::Mother)];
+    const auto& unrelated = analysis_.classes[static_cast<size_t>(core::KinClass::Unrelated)];
+    // Three significant digits on screen; the tables below and the exports keep every digit.
+    auto number = [](const std::optional<double>& v) { return v ? QString::number(*v, 'g', 3) : QStringLiteral("-"); };
+    summary_->setText(
+        analysis_.acts == 0
+            ? tr("%1 encounters, no supporters recorded.").arg(analysis_.encounters)
+            : tr("%1 encounters, %2 support acts. Rate of mothers for their offspring %3, of pairs with r < 0.125 "
+                 "%4; nepotism index %5, permutation p %6 (%7 permutations, seed %8). Mothers' acts for a daughter "
+                 "against a female the rule puts below her: %9 of %10.")
+                  .arg(analysis_.encounters)
+                  .arg(analysis_.acts)
+                  .arg(number(mother.rate), number(unrelated.rate), number(analysis_.nepotismIndex),
+                       number(analysis_.test.p))
+                  .arg(analysis_.test.iterations)
+                  .arg(analysis_.test.seed)
+                  .arg(analysis_.motherActsAgainstBelow)
+                  .arg(analysis_.motherActsAgainstFemales));
+    fill(pairs_, core::supportPairsTable(analysis_));
+    fill(daughters_, core::supportDaughtersTable(analysis_));
+    showMatrix();
+}
+
+void SupportView::showMatrix()
+{
+    // Rank order; a coloured strip of the row animal's matriline in column 0
+    // and of the column animal's above the first row.
+    const core::ExportTable t = core::supportMatrixTable(analysis_);
+    const int n = static_cast<int>(analysis_.order.size());
+    const MatrilinePalette palette(core::Matrilines(document_->colony()));
+    matrix_->clear();
+    matrix_->setRowCount(n + 1);
+    matrix_->setColumnCount(n + 1);
+    QStringList columns{QString()}, rows{tr("line")};
+    for (const std::string& id : analysis_.order) {
+        columns << toQString(id);
+        rows << toQString(id);
+    }
+    matrix_->setHorizontalHeaderLabels(columns);
+    matrix_->setVerticalHeaderLabels(rows);
+    for (int i = 0; i < n; ++i) {
+        const QColor colour = palette.colour(analysis_.matriarchs[static_cast<size_t>(i)]);
+        const QString tip = tr("matriline of %1").arg(toQString(analysis_.matriarchs[static_cast<size_t>(i)]));
+        auto* rowStrip = new QTableWidgetItem;
+        rowStrip->setBackground(colour);
+        rowStrip->setToolTip(tip);
+        matrix_->setItem(i + 1, 0, rowStrip);
+        auto* columnStrip = new QTableWidgetItem;
+        columnStrip->setBackground(colour);
+        columnStrip->setToolTip(tip);
+        matrix_->setItem(0, i + 1, columnStrip);
+        const auto& cells = t.rows[static_cast<size_t>(i)];
+        for (int j = 0; j < n; ++j)
+            matrix_->setItem(i + 1, j + 1, new QTableWidgetItem(toQString(cells[static_cast<size_t>(j) + 2])));
+    }
+    matrix_->resizeColumnsToContents();
+    matrix_->setColumnWidth(0, matrix_->fontMetrics().horizontalAdvance(QStringLiteral("MM")));
+    matrix_->setRowHeight(0, matrix_->fontMetrics().height() / 2 + 2);
+}
+
+} // namespace hierloom::ui

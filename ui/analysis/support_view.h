@@ -1,0 +1,54 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#pragma once
+#include "core/research/support_analysis.h"
+
+#include <QWidget>
+
+class QComboBox;
+class QLabel;
+class QSpinBox;
+class QTableWidget;
+
+namespace hierloom::ui {
+
+class ColonyDocument;
+class VisibleRefresh;
+
+/// The Support tab (docs/methods.md "Kin support"): who joins whose fights.
+/// The figures of the `support` command for a group, the per-pair table, the
+/// support matrix ordered by rank with a matriline colour strip beside the
+/// rows and above the columns, and the daughters' rise beside their mothers'
+/// support. Recomputed when shown after a change (ui/document/visible_refresh.h).
+class SupportView : public QWidget {
+    Q_OBJECT
+public:
+    explicit SupportView(ColonyDocument* document, QWidget* parent = nullptr);
+
+    /// Empty: every group.
+    void setGroup(const QString& group);
+    void setPermutations(int n);
+
+    const core::SupportAnalysis& analysis() const { return analysis_; }
+    QLabel* summary() const { return summary_; }
+    QTableWidget* pairTable() const { return pairs_; }
+    QTableWidget* matrixTable() const { return matrix_; }
+    QTableWidget* daughterTable() const { return daughters_; }
+
+private:
+    void refreshGroups();
+    void recompute();
+    void showMatrix();
+
+    ColonyDocument* document_;
+    QComboBox* group_;
+    QSpinBox* permutations_;
+    QLabel* summary_;
+    QTableWidget* pairs_;
+    QTableWidget* matrix_;
+    QTableWidget* daughters_;
+    VisibleRefresh* refresh_;
+    core::SupportAnalysis analysis_;
+    bool loading_ = false;
+};
+
+} // namespace hierloom::ui
