@@ -33,6 +33,7 @@ int run(int argc, const char* const* argv, std::ostream& out, std::ostream& err)
     addMaternalRanksCommand(app, ctx, action);
     addExportTablesCommand(app, ctx, action);
     addInheritCommand(app, ctx, action);
+    addDynamicsCommand(app, ctx, action);
     addScenarioCommand(app, ctx, action);
     addStabilityCommand(app, ctx, action);
     addReportCommand(app, ctx, action);

@@ -21,6 +21,7 @@ void addSexRatioCommand(CLI::App& app, CommandContext& ctx, CommandAction& actio
 void addMaternalRanksCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 void addExportTablesCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 void addInheritCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
+void addDynamicsCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 void addScenarioCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 void addStabilityCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 void addReportCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);

@@ -135,7 +135,8 @@ TEST(ResearchExportDialog, WritesTheCoreTables)
     dialog.setSpreadsheet(true);
     ASSERT_TRUE(dialog.exportTables()) << ui::toStdString(dialog.report());
     const std::vector<std::string> names{"ranks_by_period", "win_matrix", "metrics_by_period", "maternal_ranks",
-                                         "sex_ratio", "sex_ratio_by_rank_third", "discordance_by_month"};
+                                         "sex_ratio", "sex_ratio_by_rank_third", "discordance_by_month",
+                                         "rank_changes", "foresight"};
     ASSERT_EQ(dialog.writtenFiles().size(), static_cast<int>(names.size()));
     for (const std::string& n : names) {
         const std::string text = readFile(out.file("tables/" + n + ".csv"));

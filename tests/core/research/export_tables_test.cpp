@@ -208,7 +208,8 @@ TEST(ExportTables, ResearchTablesHoldEveryTable)
     std::vector<std::string> names;
     for (const ExportTable& t : tables) names.push_back(t.name);
     EXPECT_EQ(names, (std::vector<std::string>{"ranks_by_period", "win_matrix", "metrics_by_period", "maternal_ranks",
-                                                "sex_ratio", "sex_ratio_by_rank_third", "discordance_by_month"}));
+                                                "sex_ratio", "sex_ratio_by_rank_third", "discordance_by_month",
+                                                "rank_changes", "foresight"}));
     // The maternal table and the sex-ratio figures agree: used births = births_used.
     int used = 0;
     for (const auto& row : tables[3].rows) used += row[11] == "1";
