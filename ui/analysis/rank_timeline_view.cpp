@@ -66,6 +66,7 @@ RankTimelineView::RankTimelineView(ColonyDocument* document, AnimalSelection* se
       groupBox_(new QComboBox(this)),
       ageBox_(new QComboBox(this)),
       marksBox_(new QComboBox(this)),
+      changeBox_(new QComboBox(this)),
       slider_(new QSlider(Qt::Horizontal, this)),
       dateLabel_(new QLabel(this))
 {
@@ -73,6 +74,10 @@ RankTimelineView::RankTimelineView(ColonyDocument* document, AnimalSelection* se
     stepBox_->addItems({tr("Monthly"), tr("Weekly")});
     ageBox_->addItems({tr("All ages"), tr("Young adults (under 8)"), tr("Prime (8 to 15)"), tr("Old (16 and over)")});
     marksBox_->addItems({tr("Discordance: selected female"), tr("Discordance: all females"), tr("Discordance: none")});
+    changeBox_->setObjectName(QStringLiteral("changeColouring"));
+    changeBox_->addItems({tr("Rank changes: plain"), tr("Rank changes: active or passive")});
+    changeBox_->setToolTip(tr("Mark each change of rank between checkpoints: active (won or lost among the females "
+                              "ranked before and after), passive (females above her left or entered), or both"));
     lineBox_->addItem(tr("All matrilines"), QString());
     groupBox_->addItem(tr("All groups"), QString());
     auto* controls = new QHBoxLayout;
@@ -84,6 +89,8 @@ RankTimelineView::RankTimelineView(ColonyDocument* document, AnimalSelection* se
     controls->addWidget(groupBox_);
     controls->addWidget(ageBox_);
     controls->addWidget(marksBox_);
+    controls->addWidget(changeBox_);
+    controls->addWidget(new HelpButton(QStringLiteral("active_passive"), this));
     controls->addWidget(progress_, 1);
     controls->addStretch();
     controls->addWidget(makeExportButton(plot_, QStringLiteral("rank-timeline"), this));
@@ -138,6 +145,7 @@ RankTimelineView::RankTimelineView(ColonyDocument* document, AnimalSelection* se
     connect(groupBox_, &QComboBox::currentIndexChanged, this, [this] { setGroup(groupBox_->currentData().toString()); });
     connect(ageBox_, &QComboBox::currentIndexChanged, this, [this](int i) { setAgeClass(static_cast<AgeClass>(i)); });
     connect(marksBox_, &QComboBox::currentIndexChanged, this, [this](int i) { setMarks(static_cast<Marks>(i)); });
+    connect(changeBox_, &QComboBox::currentIndexChanged, this, [this](int i) { setChangeColouring(i == 1); });
     connect(slider_, &QSlider::valueChanged, this, [this](int k) {
         if (k >= 0 && k < static_cast<int>(timeline_.checkpoints.size()))
             selection_->setDay(timeline_.checkpoints[static_cast<size_t>(k)]);
@@ -186,6 +194,7 @@ void RankTimelineView::adopt(core::RankTimeline timeline, MatrilinePalette palet
 {
     timeline_ = std::move(timeline);
     palette_ = std::move(palette);
+    rankChanges_ = core::timelineRankChanges(timeline_);
     // Matriline and group choices, keeping the current ones where they still exist.
     {
         const QSignalBlocker block(lineBox_);
@@ -233,6 +242,7 @@ void RankTimelineView::rebuildPlot()
     plot_->clearItems();
     lines_.clear();
     events_.clear();
+    changes_.clear();
     const size_t nCheck = timeline_.checkpoints.size();
     // Legend: one entry per matriline, then the markers.
     for (int l = 0; l < palette_.lineCount(); ++l) {
@@ -290,6 +300,24 @@ void RankTimelineView::rebuildPlot()
         g->setScatterStyle(QCPScatterStyle(s.shape, QPen(Qt::black, 1.2), QBrush(Qt::white), 8));
         g->setName(tr(s.name));
         events_[s.kind] = g;
+    }
+    if (colourChanges_) {
+        const std::pair<ChangeKind, const char*> kinds[] = {
+            {ChangeKind::Active, QT_TR_NOOP("Rank change: active")},
+            {ChangeKind::Passive, QT_TR_NOOP("Rank change: passive")},
+            {ChangeKind::Both, QT_TR_NOOP("Rank change: both")}};
+        for (const auto& [kind, name] : kinds) {
+            QCPGraph* g = plot_->addGraph();
+            g->setLineStyle(QCPGraph::lsNone);
+            // Okabe-Ito vermillion, sky blue and reddish purple: told apart with any colour vision.
+            const QColor c = kind == ChangeKind::Active    ? QColor(0xD5, 0x5E, 0x00)
+                             : kind == ChangeKind::Passive ? QColor(0x56, 0xB4, 0xE9)
+                                                           : QColor(0xCC, 0x79, 0xA7);
+            g->setScatterStyle(QCPScatterStyle(QCPScatterStyle::ssDisc, QPen(Qt::black, 0.6), QBrush(c), 7));
+            g->setName(tr(name));
+            g->setLayer(QStringLiteral("selected"));
+            changes_[kind] = g;
+        }
     }
     QCPGraph* discordKey = plot_->addGraph();
     discordKey->setLineStyle(QCPGraph::lsNone);
@@ -370,6 +398,22 @@ void RankTimelineView::applyFilters()
         }
     }
     for (auto& [kind, graph] : events_) graph->setData(events[kind].first, events[kind].second);
+    if (colourChanges_) {
+        std::map<ChangeKind, std::pair<QVector<double>, QVector<double>>> marks;
+        std::vector<bool> visible(timeline_.females.size(), false);
+        for (const Line& line : lines_) visible[static_cast<size_t>(line.female)] = line.graph->visible();
+        for (const core::TimelineRankChange& c : rankChanges_) {
+            if (c.change.total == 0 || !visible[static_cast<size_t>(c.female)]) continue;
+            const core::RankTimelinePoint& pt =
+                timeline_.females[static_cast<size_t>(c.female)].points[static_cast<size_t>(c.point)];
+            const std::optional<double> v = valueOf(pt);
+            if (!v) continue;
+            auto& m = marks[kindOf(c.change)];
+            m.first << keyOf(pt.day);
+            m.second << *v;
+        }
+        for (auto& [kind, graph] : changes_) graph->setData(marks[kind].first, marks[kind].second);
+    }
     plot_->replot(QCustomPlot::rpQueuedReplot);
 }
 
@@ -486,6 +530,27 @@ bool RankTimelineView::marksShown(const Line& line) const
     if (!line.marks || !line.graph->visible() || marks_ == Marks::None) return false;
     return marks_ == Marks::All ||
            toQString(timeline_.females[static_cast<size_t>(line.female)].animal) == selection_->animal();
+}
+
+void RankTimelineView::setChangeColouring(bool on)
+{
+    const QSignalBlocker block(changeBox_);
+    changeBox_->setCurrentIndex(on ? 1 : 0);
+    if (on == colourChanges_) return;
+    colourChanges_ = on;
+    rebuildPlot();
+}
+
+QCPGraph* RankTimelineView::changesOf(ChangeKind kind) const
+{
+    const auto it = changes_.find(kind);
+    return it == changes_.end() ? nullptr : it->second;
+}
+
+RankTimelineView::ChangeKind RankTimelineView::kindOf(const core::RankChange& c)
+{
+    if (c.active != 0 && c.passive != 0) return ChangeKind::Both;
+    return c.active != 0 ? ChangeKind::Active : ChangeKind::Passive;
 }
 
 void RankTimelineView::setAgeClass(AgeClass ageClass)
