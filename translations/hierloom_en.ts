@@ -76,6 +76,105 @@
     </message>
 </context>
 <context>
+    <name>hierloom::ui</name>
+    <message>
+        <source>Line</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Time</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Winner</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Loser</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Outcome</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Behaviour</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Note</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Entered</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>no observer</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>draw</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>decided</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>earlier (%1)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>this session</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>female</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>male</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>sex unknown</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>1 year</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 years</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>age unknown</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>group %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>in no group that day</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>left the colony on %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>New Group</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>There is no group &apos;%1&apos; in the colony. Create a new group named &apos;%1&apos;?</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
     <name>hierloom::ui::AboutDialog</name>
     <message>
         <source>Qt %1</source>
@@ -220,6 +319,26 @@
         <source>The colony is open read-only, so they cannot be changed.</source>
         <translation type="unfinished"></translation>
     </message>
+    <message>
+        <source>Start value for everyone</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Youngest ascendancy: just below her mother</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Eldest first: just below her last older sister</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Where a daughter whose mother is rated enters the Elo ranking: between the animal the rule puts just above her and the one rated below that animal (docs: Rule-informed Elo). Used by rank tables, rank changes and the report; the comparisons with the inheritance rule keep the plain start.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Daughters&apos; Elo sta&amp;rt:</source>
+        <translation type="unfinished"></translation>
+    </message>
 </context>
 <context>
     <name>hierloom::ui::AnimalEditorDialog</name>
@@ -337,6 +456,22 @@
     </message>
     <message>
         <source>(unknown)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>No mother chosen.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>an unknown mother</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Record the birth of %1 to %2 on %3?</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Record the introduction of %1 into group %2 on %3?</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -506,6 +641,17 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
 </context>
 <context>
+    <name>hierloom::ui::ColonyDocument</name>
+    <message>
+        <source>another colony file was opened</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>the colony was closed</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
     <name>hierloom::ui::ColonyEditFacade</name>
     <message>
         <source>No colony is open.</source>
@@ -565,6 +711,42 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
     <message>
         <source>Delete %1 encounters</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Change stability thresholds</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Set species %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Change analysis settings</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>A saved scenario needs a name.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Save scenario %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Delete scenario %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>an import added records outside the undo history</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>a merge added records outside the undo history</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>the colony was restored from a backup</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -725,43 +907,11 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <translation type="unfinished"></translation>
     </message>
     <message>
-        <source>Line</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Time</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Winner</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Loser</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Outcome</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Behaviour</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Note</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
         <source>Edit Line (F2)</source>
         <translation type="unfinished"></translation>
     </message>
     <message>
         <source>Delete Line (Del)</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>This session (each line is saved as it is entered):</source>
         <translation type="unfinished"></translation>
     </message>
     <message>
@@ -785,19 +935,7 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <translation type="unfinished"></translation>
     </message>
     <message>
-        <source>%1 and %2 %3 are already in this session. Save this line as another encounter?</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
         <source>Not saved: a possible duplicate.</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>draw</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>decided</source>
         <translation type="unfinished"></translation>
     </message>
     <message>
@@ -818,6 +956,46 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
     <message>
         <source>End &amp;Session</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Undo Whole Session</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>YYYY-MM-DD</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Refused lines (Enter on one puts it back on the line; Esc clears the line):</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>This date and group in the file (each line is saved as it is entered):</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Choose the observer (or type &apos;unknown&apos;); a line needs one</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>in this session</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>in the file for this day</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 and %2 %3 are already %4. Save this line as another encounter?</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 earlier</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Take back the %1 entered in this session for %2, group %3? Earlier lines stay.</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -1118,6 +1296,18 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <source>Coefficient of relatedness</source>
         <translation type="unfinished"></translation>
     </message>
+    <message>
+        <source>Rule-informed Elo</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Active and passive rank changes</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Foresight of the rule and Elo</source>
+        <translation type="unfinished"></translation>
+    </message>
 </context>
 <context>
     <name>hierloom::ui::HierarchyPlotsView</name>
@@ -1280,6 +1470,34 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <source>To &amp;group:</source>
         <translation type="unfinished"></translation>
     </message>
+    <message>
+        <source>No animal chosen.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&apos;%1&apos; is not an animal of the colony</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Choose the animal.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Record the death of %1 on %2?</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Record the removal of %1 from the colony on %2?</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Choose the group to move to.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Move %1 to group %2 on %3?</source>
+        <translation type="unfinished"></translation>
+    </message>
 </context>
 <context>
     <name>hierloom::ui::ListEditorDialog</name>
@@ -1440,6 +1658,10 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
     <message>
         <source>Analysis &amp;Settings...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Undo history cleared: %1.</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -1956,6 +2178,62 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <source>line of %1</source>
         <translation type="unfinished"></translation>
     </message>
+    <message>
+        <source>&lt;b&gt;How much does inheritance explain?&lt;/b&gt;</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Model</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Log-likelihood</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Per encounter</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Brier</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Winners predicted</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Year</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Elo</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Rule-informed Elo</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Rule alone</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 of %2 (%3%)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>No decided encounters.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Every decided encounter of the record, each model&apos;s chance for its winner beforehand. The %1 rule could compare %2 of %3; the animal it places higher won %4 of them (its fitted win probability). A coin scores %5 per encounter and a Brier score of 0.25.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>none</source>
+        <translation type="unfinished"></translation>
+    </message>
 </context>
 <context>
     <name>hierloom::ui::ProgressStrip</name>
@@ -2116,6 +2394,30 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
     <message>
         <source>Discordance: none</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Rank changes: plain</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Rank changes: active or passive</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Mark each change of rank between checkpoints: active (won or lost among the females ranked before and after), passive (females above her left or entered), or both</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Rank change: active</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Rank change: passive</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Rank change: both</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -2794,6 +3096,17 @@ per animal</source>
     </message>
     <message>
         <source>Counter-dominant dyads (winner below loser before the encounter; matrilines; dates):</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::TypedDate</name>
+    <message>
+        <source>Type the date as YYYY-MM-DD or YYYYMMDD</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&apos;%1&apos; is not a real date; type it as YYYY-MM-DD or YYYYMMDD</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
