@@ -62,15 +62,16 @@ EloStartRule startRuleOf(SiblingRule rule)
     return rule == SiblingRule::Eldest ? EloStartRule::Eldest : EloStartRule::Youngest;
 }
 
-/// Whether the rule's order of day d puts each pair's winner higher, for the bouts [first, last) of that day.
+/// Whether the rule's order of day d puts each pair's winner higher, for the
+/// bouts [first, last) of that day; `rating` and `rated` are plain Elo before the day.
 void judgeDay(const Matrilines& lines, const ResidenceIndex& where, const SelectionOptions& selection,
-              const ForesightOptions& o, const EncounterSelection& sel, const EloRun& before, size_t first,
-              size_t last, std::vector<ForesightEncounter>& out)
+              const ForesightOptions& o, const EncounterSelection& sel, const std::vector<double>& rating,
+              const std::vector<unsigned char>& rated, size_t first, size_t last, std::vector<ForesightEncounter>& out)
 {
     const Day d = sel.days[first];
     ObservedScores observed;
     for (int i = 0; i < sel.size(); ++i)
-        if (before.rated[static_cast<size_t>(i)]) observed.emplace(sel.ids[static_cast<size_t>(i)], before.rating[static_cast<size_t>(i)]);
+        if (rated[static_cast<size_t>(i)]) observed.emplace(sel.ids[static_cast<size_t>(i)], rating[static_cast<size_t>(i)]);
     const RankedFemales ranked = rankedFemalesOn(lines, where, d, selection.group, o.maturityYears);
     const InheritancePrediction p = predictOrder(lines, ranked, observed, o.rule);
     std::set<std::string, std::less<>> placed; // matrilines placed by an observed rank
@@ -99,28 +100,27 @@ Foresight computeForesight(const Colony& colony, const ResidenceIndex& where, co
     EloSettings elo = o.elo;
     elo.draws = selection.draws;
     const int n = sel.size();
-    // Plain Elo read before each day's first bout (for the matriline order) and before every bout.
-    std::vector<size_t> dayStarts;
-    for (size_t b = 0; b < sel.days.size(); ++b)
-        if (b == 0 || sel.days[b] != sel.days[b - 1]) dayStarts.push_back(b);
     const EloFamily family = eloFamilyOf(colony, sel.ids);
     const PresentOn present = residencePresence(sel.ids, where, selection.group);
-    const EloTrace plain = traceElo(n, sel.bouts, sel.days, elo, EloStartRule::None, family, present, dayStarts);
-    const EloTrace informed = traceElo(n, sel.bouts, sel.days, elo, startRuleOf(o.rule), family, present, {});
-
     std::vector<ForesightEncounter> all(sel.bouts.size());
     for (size_t b = 0; b < sel.bouts.size(); ++b) {
-        ForesightEncounter& e = all[b];
-        e.day = sel.days[b];
-        e.winner = sel.ids[static_cast<size_t>(sel.bouts[b].winner)];
-        e.loser = sel.ids[static_cast<size_t>(sel.bouts[b].loser)];
-        e.elo = plain.winnerChance[b];
-        e.informedElo = informed.winnerChance[b];
+        all[b].day = sel.days[b];
+        all[b].winner = sel.ids[static_cast<size_t>(sel.bouts[b].winner)];
+        all[b].loser = sel.ids[static_cast<size_t>(sel.bouts[b].loser)];
     }
+    // Plain Elo: the rule's matriline order is judged from its ratings before each day's first bout.
     const Matrilines lines(colony);
-    for (size_t k = 0; k < dayStarts.size(); ++k) {
-        const size_t last = k + 1 < dayStarts.size() ? dayStarts[k + 1] : sel.bouts.size();
-        judgeDay(lines, where, selection, o, sel, plain.checkpoints[k], dayStarts[k], last, all);
+    const EloObserver judge = [&](size_t b, const std::vector<double>& rating, const std::vector<unsigned char>& rated) {
+        if (b > 0 && sel.days[b] == sel.days[b - 1]) return;
+        size_t last = b + 1;
+        while (last < sel.days.size() && sel.days[last] == sel.days[b]) ++last;
+        judgeDay(lines, where, selection, o, sel, rating, rated, b, last, all);
+    };
+    const EloTrace plain = traceElo(n, sel.bouts, sel.days, elo, EloStartRule::None, family, present, {}, judge);
+    const EloTrace informed = traceElo(n, sel.bouts, sel.days, elo, startRuleOf(o.rule), family, present, {});
+    for (size_t b = 0; b < sel.bouts.size(); ++b) {
+        all[b].elo = plain.winnerChance[b];
+        all[b].informedElo = informed.winnerChance[b];
     }
     // Decided encounters only; the rule's probability fitted on them.
     for (size_t b = 0; b < sel.bouts.size(); ++b) {

@@ -111,7 +111,7 @@ std::optional<double> informedStart(int f, const std::vector<double>& rating, co
 
 EloTrace traceElo(int n, const std::vector<Bout>& bouts, const std::vector<Day>& days, const EloSettings& settings,
                   EloStartRule rule, const EloFamily& family, const PresentOn& present,
-                  const std::vector<size_t>& boutCounts)
+                  const std::vector<size_t>& boutCounts, const EloObserver& observe)
 {
     detail::checkBoutIndices(n, bouts);
     if (days.size() != bouts.size()) throw std::invalid_argument("traceElo: one day per bout is needed");
@@ -172,6 +172,7 @@ EloTrace traceElo(int n, const std::vector<Bout>& bouts, const std::vector<Day>&
                     }
             }
         }
+        if (observe) observe(b, rating, rated);
         trace.winnerChance[b] = eloExpected(rating[static_cast<size_t>(bout.winner)] - rating[static_cast<size_t>(bout.loser)],
                                             settings.curve);
         detail::eloStepsFor<true>(settings.curve, &bout, &bout + 1, rating.data(), rated.data(), settings.k,

@@ -63,13 +63,19 @@ struct EloTrace {
     std::vector<std::optional<double>> entry;    ///< per animal: its informed start, when it had one
 };
 
+/// Called before bout `b` is rated, with the ratings and rated flags (0/1) as they stand.
+using EloObserver =
+    std::function<void(size_t b, const std::vector<double>& rating, const std::vector<unsigned char>& rated)>;
+
 /// Sequential Elo (as runElo, identical numbers) where each animal entering
 /// the ranking at its first counted bout starts where the start rule puts it
 /// (informedStart, with the ratings of the animals rated before that bout and
 /// present that day); with EloStartRule::None it is plain Elo. Read at the
 /// given bout counts (any order); a count beyond the bouts throws std::out_of_range.
+/// `observe`, when set, sees the ratings before every bout (after any informed
+/// start of its animals), so a caller can read them without a copy per bout.
 EloTrace traceElo(int n, const std::vector<Bout>& bouts, const std::vector<Day>& days, const EloSettings& settings,
                   EloStartRule rule, const EloFamily& family, const PresentOn& present,
-                  const std::vector<size_t>& boutCounts);
+                  const std::vector<size_t>& boutCounts, const EloObserver& observe = {});
 
 } // namespace hierloom::core

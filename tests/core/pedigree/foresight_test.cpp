@@ -139,3 +139,28 @@ TEST(Foresight, InformedEloGivesTheDaughterHerPlaceBeforehand)
     EXPECT_NEAR(f.encounters[1].informedElo, 1.0 / (1.0 + std::pow(10.0, -0.5)), 1e-12);
     EXPECT_NEAR(f.encounters[1].elo, 1.0 / (1.0 + std::pow(10.0, -50.0 / 400.0)), 1e-12);
 }
+
+TEST(Foresight, TwoMatrilinesAreComparedOnlyOnceBothArePlacedTheDayBefore)
+{
+    // Two founders, P and Q, each her own matriline. On 1 March P beats Q
+    // twice: neither line had an observed rank before that day, so neither
+    // encounter is comparable (docs/methods.md "Foresight": matrilines placed
+    // by Elo after the day before). On 2 March P's line stands above Q's: P's
+    // win conforms, Q's win does not; p = 1/2 by maximum likelihood.
+    const Colony c = PedigreeBuilder()
+                         .female("P", "2000-01-01")
+                         .female("Q", "2000-01-01")
+                         .win("2020-03-01", "P", "Q", 2)
+                         .win("2020-03-02", "P", "Q")
+                         .win("2020-03-02", "Q", "P")
+                         .build();
+    const ResidenceIndex where(c.animals, c.residences);
+    const Foresight f = computeForesight(c, where, SelectionOptions{}, ForesightOptions{});
+    ASSERT_EQ(f.encounters.size(), 4u);
+    EXPECT_FALSE(f.encounters[0].ruleConforms);
+    EXPECT_FALSE(f.encounters[1].ruleConforms);
+    EXPECT_EQ(f.encounters[2].ruleConforms, true);
+    EXPECT_EQ(f.encounters[3].ruleConforms, false);
+    EXPECT_EQ(f.comparable, 2);
+    EXPECT_DOUBLE_EQ(*f.ruleWinProbability, 0.5);
+}
