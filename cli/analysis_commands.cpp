@@ -45,7 +45,8 @@ void runRanks(CommandContext& ctx, const RanksOptions& o)
     RankOptions r;
     r.method = *parseRankMethod(o.method);
     r.elo = settings.elo;
-    r.startRule = r.method == RankMethod::Elo ? settings.startRule : EloStartRule::None;
+    const bool takesRule = rankMethodInfo(r.method).takesStartRule;
+    r.startRule = takesRule ? settings.startRule : EloStartRule::None;
     r.at = optionDate(o.at, "--at");
     r.optimiseK = o.optimiseK;
     r.randomise = o.randomise;
@@ -55,13 +56,12 @@ void runRanks(CommandContext& ctx, const RanksOptions& o)
     if (r.method != RankMethod::Elo && (r.at || o.optimiseK || o.randomise > 0))
         throw BadInputError("--at, --optimise-k and --randomise go with --method elo");
     if (r.method != RankMethod::DavidsScore && o.corrected) throw BadInputError("--corrected goes with --method ds");
-    if (r.method != RankMethod::Elo && !o.analysis.startRule.empty())
-        throw BadInputError("--start-rule goes with --method elo");
+    if (!takesRule && !o.analysis.startRule.empty()) throw BadInputError("--start-rule goes with --method elo");
     if (r.startRule != EloStartRule::None && (o.optimiseK || o.randomise > 0))
         throw BadInputError(std::string("the start rule ") + toString(r.startRule) +
                             " cannot be combined with --optimise-k or --randomise (--start-rule none switches it off)");
     // Elo tables end with the start rule used (docs/file-formats.md); the other methods keep their columns.
-    const bool elo = r.method == RankMethod::Elo;
+    const bool elo = takesRule;
     const std::string ruleCell = std::string(",") + toString(r.startRule);
     std::ostringstream out;
     if (!o.every.empty()) {

@@ -9,6 +9,7 @@
 #include "core/pedigree/matriline.h"
 #include "core/base/number_format.h"
 #include "core/ranks/parallel_randomisation.h"
+#include "core/ranks/rank_method_registry.h"
 #include "core/ranks/win_matrix.h"
 
 #include <charconv>
@@ -30,7 +31,7 @@ class AnimalColumns {
 public:
     AnimalColumns(const Colony& colony, const ResidenceIndex& where, const RankOptions& options)
         : colony_(colony), where_(where), lines_(colony),
-          startRule_(options.method == RankMethod::Elo ? toString(options.startRule) : "")
+          startRule_(rankMethodInfo(options.method).takesStartRule ? toString(options.startRule) : "")
     {
     }
 
