@@ -17,6 +17,8 @@
 #include <QTest>
 
 #include <gtest/gtest.h>
+
+#include <algorithm>
 #include <qcustomplot.h>
 
 using namespace hierloom;
@@ -72,9 +74,10 @@ TEST(DynamicsViews, PredictionViewShowsTheForesightOfEachModel)
             years += r.model == core::ForesightModel::Rule ? 1 : 0;
             continue;
         }
-        EXPECT_EQ(table->item(row, 1)->text(), QString::number(r.score.logLikelihood, 'f', 1));
+        EXPECT_EQ(table->item(row, 1)->text(), QString::number(r.score.logLikelihood, 'f', 0));
         EXPECT_EQ(table->item(row, 3)->text(), QString::number(*r.score.brier, 'f', 3));
-        EXPECT_TRUE(table->item(row, 4)->text().startsWith(QString::number(r.score.predicted) + QStringLiteral(" of ")));
+        EXPECT_EQ(table->item(row, 4)->text(), QString::number(*r.score.sharePredicted * 100, 'f', 1) + QStringLiteral("%"));
+        EXPECT_TRUE(table->item(row, 4)->toolTip().startsWith(QString::number(r.score.predicted) + QStringLiteral(" of ")));
         ++row;
     }
     // The plot: one line per model, one point per year (the share of winners predicted).
@@ -137,6 +140,18 @@ TEST(DynamicsViews, TimelineColoursEachRankChangeActiveOrPassive)
         EXPECT_TRUE(found);
         break;
     }
+    // With a female selected, only her changes are marked.
+    const core::TimelineRankChange& first = *std::find_if(changes.begin(), changes.end(), [](const auto& c) {
+        return c.change.total != 0;
+    });
+    const std::string& who = view.timeline().females[static_cast<size_t>(first.female)].animal;
+    int hers = 0;
+    for (const core::TimelineRankChange& c : changes)
+        hers += c.change.total != 0 && view.timeline().females[static_cast<size_t>(c.female)].animal == who;
+    selection.setAnimal(QString::fromStdString(who));
+    int marked = 0;
+    for (Kind k : {Kind::Active, Kind::Passive, Kind::Both}) marked += view.changesOf(k)->data()->size();
+    EXPECT_EQ(marked, hers);
     QTest::keyClick(QApplication::focusWidget(), Qt::Key_Up);
     EXPECT_FALSE(view.changeColouring());
     EXPECT_EQ(view.changesOf(Kind::Active), nullptr);

@@ -93,8 +93,14 @@ PredictionView::PredictionView(ColonyDocument* document, AnimalSelection* select
     sideLayout->addWidget(foresightLabel_);
     foresightTable_->setObjectName(QStringLiteral("foresight"));
     foresightTable_->setHorizontalHeaderLabels(
-        {tr("Model"), tr("Log-likelihood"), tr("Per encounter"), tr("Brier"), tr("Winners predicted")});
-    foresightTable_->horizontalHeader()->setStretchLastSection(true);
+        {tr("Model"), tr("Log-lik."), tr("Per enc."), tr("Brier"), tr("Pred.")});
+    const QString headerTips[] = {tr("The model"), tr("Log-likelihood: the sum of ln p over the winners (higher is better)"),
+                                  tr("Log-likelihood per encounter (a coin: -0.693)"),
+                                  tr("Brier score: the mean of (1 - p) squared (lower is better; a coin: 0.25)"),
+                                  tr("Share of winners given more than 1/2")};
+    for (int c = 0; c < 5; ++c) foresightTable_->horizontalHeaderItem(c)->setToolTip(headerTips[c]);
+    foresightTable_->horizontalHeader()->setSectionResizeMode(QHeaderView::Stretch);
+    foresightTable_->horizontalHeader()->setSectionResizeMode(0, QHeaderView::ResizeToContents);
     foresightTable_->verticalHeader()->hide();
     foresightTable_->setEditTriggers(QAbstractItemView::NoEditTriggers);
     foresightTable_->setSelectionBehavior(QAbstractItemView::SelectRows);
@@ -104,11 +110,16 @@ PredictionView::PredictionView(ColonyDocument* document, AnimalSelection* select
     foresightPlot_->yAxis->setLabel(tr("Winners predicted"));
     foresightPlot_->yAxis->setRange(0, 1);
     foresightPlot_->xAxis->setLabel(tr("Year"));
+    // The legend in a row of its own under the plot, so it hides no line.
+    auto* foresightLegend = new QCPLayoutGrid;
+    foresightPlot_->plotLayout()->addElement(1, 0, foresightLegend);
+    foresightPlot_->plotLayout()->setRowStretchFactor(1, 0.001);
+    foresightLegend->addElement(0, 0, foresightPlot_->legend);
+    foresightPlot_->legend->setFillOrder(QCPLegend::foColumnsFirst);
     foresightPlot_->legend->setVisible(true);
     QFont small = font();
     small.setPointSizeF(small.pointSizeF() * 0.8);
     foresightPlot_->legend->setFont(small);
-    foresightPlot_->axisRect()->insetLayout()->setInsetAlignment(0, Qt::AlignBottom | Qt::AlignRight);
     sideLayout->addWidget(foresightPlot_, 1);
     auto* split = new QSplitter(Qt::Horizontal, this);
     split->addWidget(plot_);
@@ -298,22 +309,18 @@ void PredictionView::adoptForesight(core::Foresight foresight)
             foresightTable_->insertRow(row);
             const QString cells[] = {
                 modelName(model),
-                sc.encounters ? QString::number(sc.logLikelihood, 'f', 1) : QString(),
+                sc.encounters ? QString::number(sc.logLikelihood, 'f', 0) : QString(),
                 sc.encounters ? QString::number(sc.logLikelihood / sc.encounters, 'f', 3) : QString(),
                 sc.brier ? QString::number(*sc.brier, 'f', 3) : QString(),
-                sc.sharePredicted ? tr("%1 of %2 (%3%)")
-                                        .arg(sc.predicted)
-                                        .arg(sc.encounters)
-                                        .arg(*sc.sharePredicted * 100, 0, 'f', 1)
-                                  : QString()};
+                sc.sharePredicted ? tr("%1%").arg(*sc.sharePredicted * 100, 0, 'f', 1) : QString()};
             for (int c = 0; c < 5; ++c) {
                 auto* item = new QTableWidgetItem(cells[c]);
+                if (c == 4) item->setToolTip(tr("%1 of %2 winners given more than 1/2").arg(sc.predicted).arg(sc.encounters));
                 if (c == 0) item->setForeground(colours[m].darker(120));
                 foresightTable_->setItem(row, c, item);
             }
         }
     }
-    foresightTable_->resizeColumnsToContents();
     foresightPlot_->xAxis->setRange(firstYear - 0.5, std::max(lastYear, firstYear) + 0.5);
     auto ticker = QSharedPointer<QCPAxisTickerFixed>::create();
     ticker->setTickStep(1);

@@ -75,7 +75,7 @@ RankTimelineView::RankTimelineView(ColonyDocument* document, AnimalSelection* se
     ageBox_->addItems({tr("All ages"), tr("Young adults (under 8)"), tr("Prime (8 to 15)"), tr("Old (16 and over)")});
     marksBox_->addItems({tr("Discordance: selected female"), tr("Discordance: all females"), tr("Discordance: none")});
     changeBox_->setObjectName(QStringLiteral("changeColouring"));
-    changeBox_->addItems({tr("Rank changes: plain"), tr("Rank changes: active or passive")});
+    changeBox_->addItems({tr("Changes: plain"), tr("Changes: active/passive")});
     changeBox_->setToolTip(tr("Mark each change of rank between checkpoints: active (won or lost among the females "
                               "ranked before and after), passive (females above her left or entered), or both"));
     lineBox_->addItem(tr("All matrilines"), QString());
@@ -89,8 +89,6 @@ RankTimelineView::RankTimelineView(ColonyDocument* document, AnimalSelection* se
     controls->addWidget(groupBox_);
     controls->addWidget(ageBox_);
     controls->addWidget(marksBox_);
-    controls->addWidget(changeBox_);
-    controls->addWidget(new HelpButton(QStringLiteral("active_passive"), this));
     controls->addWidget(progress_, 1);
     controls->addStretch();
     controls->addWidget(makeExportButton(plot_, QStringLiteral("rank-timeline"), this));
@@ -105,6 +103,9 @@ RankTimelineView::RankTimelineView(ColonyDocument* document, AnimalSelection* se
     dates->addWidget(new QLabel(tr("Date:"), this));
     dates->addWidget(slider_, 1);
     dates->addWidget(dateLabel_);
+    // Beside the dates (the row above is full): colour each change of rank by its kind.
+    dates->addWidget(changeBox_);
+    dates->addWidget(new HelpButton(QStringLiteral("active_passive"), this));
     dateLabel_->setMinimumWidth(90);
     auto* layout = new QVBoxLayout(this);
     layout->addLayout(controls);
@@ -313,7 +314,7 @@ void RankTimelineView::rebuildPlot()
             const QColor c = kind == ChangeKind::Active    ? QColor(0xD5, 0x5E, 0x00)
                              : kind == ChangeKind::Passive ? QColor(0x56, 0xB4, 0xE9)
                                                            : QColor(0xCC, 0x79, 0xA7);
-            g->setScatterStyle(QCPScatterStyle(QCPScatterStyle::ssDisc, QPen(Qt::black, 0.6), QBrush(c), 7));
+            g->setScatterStyle(QCPScatterStyle(QCPScatterStyle::ssCircle, QPen(c.darker(160), 0.8), QBrush(c), 6));
             g->setName(tr(name));
             g->setLayer(QStringLiteral("selected"));
             changes_[kind] = g;
@@ -398,23 +399,33 @@ void RankTimelineView::applyFilters()
         }
     }
     for (auto& [kind, graph] : events_) graph->setData(events[kind].first, events[kind].second);
-    if (colourChanges_) {
-        std::map<ChangeKind, std::pair<QVector<double>, QVector<double>>> marks;
-        std::vector<bool> visible(timeline_.females.size(), false);
-        for (const Line& line : lines_) visible[static_cast<size_t>(line.female)] = line.graph->visible();
-        for (const core::TimelineRankChange& c : rankChanges_) {
-            if (c.change.total == 0 || !visible[static_cast<size_t>(c.female)]) continue;
-            const core::RankTimelinePoint& pt =
-                timeline_.females[static_cast<size_t>(c.female)].points[static_cast<size_t>(c.point)];
-            const std::optional<double> v = valueOf(pt);
-            if (!v) continue;
-            auto& m = marks[kindOf(c.change)];
-            m.first << keyOf(pt.day);
-            m.second << *v;
-        }
-        for (auto& [kind, graph] : changes_) graph->setData(marks[kind].first, marks[kind].second);
-    }
+    fillChangeMarks();
     plot_->replot(QCustomPlot::rpQueuedReplot);
+}
+
+void RankTimelineView::fillChangeMarks()
+{
+    if (!colourChanges_) return;
+    // The selected female's changes when one is selected, else every shown line's.
+    const QString selected = selection_->animal();
+    const bool any = lineIndexOf(selected) >= 0;
+    std::map<ChangeKind, std::pair<QVector<double>, QVector<double>>> marks;
+    std::vector<bool> shown(timeline_.females.size(), false);
+    for (const Line& line : lines_) {
+        const auto& f = timeline_.females[static_cast<size_t>(line.female)];
+        shown[static_cast<size_t>(line.female)] = line.graph->visible() && (!any || toQString(f.animal) == selected);
+    }
+    for (const core::TimelineRankChange& c : rankChanges_) {
+        if (c.change.total == 0 || !shown[static_cast<size_t>(c.female)]) continue;
+        const core::RankTimelinePoint& pt =
+            timeline_.females[static_cast<size_t>(c.female)].points[static_cast<size_t>(c.point)];
+        const std::optional<double> v = valueOf(pt);
+        if (!v) continue;
+        auto& m = marks[kindOf(c.change)];
+        m.first << keyOf(pt.day);
+        m.second << *v;
+    }
+    for (auto& [kind, graph] : changes_) graph->setData(marks[kind].first, marks[kind].second);
 }
 
 void RankTimelineView::applySelection()
@@ -435,6 +446,7 @@ void RankTimelineView::applySelection()
         // The selected line is drawn on a layer of its own, above the others.
         line.graph->setLayer(me ? QStringLiteral("selected") : QStringLiteral("main"));
     }
+    fillChangeMarks();
     plot_->replot(QCustomPlot::rpQueuedReplot);
 }
 

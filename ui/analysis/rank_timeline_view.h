@@ -60,7 +60,8 @@ public:
     void setGroup(const QString& group);
     void setAgeClass(AgeClass ageClass);
     void setMarks(Marks marks);
-    /// Marks each change of rank between checkpoints as active, passive or both.
+    /// Marks each change of rank between checkpoints as active, passive or both
+    /// (the selected female's when one is selected, else every shown line's).
     void setChangeColouring(bool on);
     bool changeColouring() const { return colourChanges_; }
     /// The markers of one kind of rank change (nullptr while changes are not coloured).
@@ -97,6 +98,7 @@ private:
     void rebuildPlot();
     void applyFilters();
     void applySelection();
+    void fillChangeMarks();
     void showDay(core::Day day);
     void hover(QMouseEvent* event);
     void click(QMouseEvent* event);
