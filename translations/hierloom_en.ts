@@ -2187,14 +2187,6 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <translation type="unfinished"></translation>
     </message>
     <message>
-        <source>Log-likelihood</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Per encounter</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
         <source>Brier</source>
         <translation type="unfinished"></translation>
     </message>
@@ -2219,10 +2211,6 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <translation type="unfinished"></translation>
     </message>
     <message>
-        <source>%1 of %2 (%3%)</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
         <source>No decided encounters.</source>
         <translation type="unfinished"></translation>
     </message>
@@ -2232,6 +2220,46 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
     <message>
         <source>none</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Log-lik.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Per enc.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Pred.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>The model</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Log-likelihood: the sum of ln p over the winners (higher is better)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Log-likelihood per encounter (a coin: -0.693)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Brier score: the mean of (1 - p) squared (lower is better; a coin: 0.25)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Share of winners given more than 1/2</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1%</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 of %2 winners given more than 1/2</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -2397,14 +2425,6 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <translation type="unfinished"></translation>
     </message>
     <message>
-        <source>Rank changes: plain</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Rank changes: active or passive</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
         <source>Mark each change of rank between checkpoints: active (won or lost among the females ranked before and after), passive (females above her left or entered), or both</source>
         <translation type="unfinished"></translation>
     </message>
@@ -2418,6 +2438,14 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
     <message>
         <source>Rank change: both</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Changes: plain</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Changes: active/passive</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
