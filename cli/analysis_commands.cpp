@@ -45,6 +45,8 @@ void runRanks(CommandContext& ctx, const RanksOptions& o)
     RankOptions r;
     r.method = *parseRankMethod(o.method);
     r.elo = settings.elo;
+    const bool takesRule = rankMethodInfo(r.method).takesStartRule;
+    r.startRule = takesRule ? settings.startRule : EloStartRule::None;
     r.at = optionDate(o.at, "--at");
     r.optimiseK = o.optimiseK;
     r.randomise = o.randomise;
@@ -54,13 +56,20 @@ void runRanks(CommandContext& ctx, const RanksOptions& o)
     if (r.method != RankMethod::Elo && (r.at || o.optimiseK || o.randomise > 0))
         throw BadInputError("--at, --optimise-k and --randomise go with --method elo");
     if (r.method != RankMethod::DavidsScore && o.corrected) throw BadInputError("--corrected goes with --method ds");
+    if (!takesRule && !o.analysis.startRule.empty()) throw BadInputError("--start-rule goes with --method elo");
+    if (r.startRule != EloStartRule::None && (o.optimiseK || o.randomise > 0))
+        throw BadInputError(std::string("the start rule ") + toString(r.startRule) +
+                            " cannot be combined with --optimise-k or --randomise (--start-rule none switches it off)");
+    // Elo tables end with the start rule used (docs/file-formats.md); the other methods keep their columns.
+    const bool elo = takesRule;
+    const std::string ruleCell = std::string(",") + toString(r.startRule);
     std::ostringstream out;
     if (!o.every.empty()) {
         if (r.at || o.randomise > 0) throw BadInputError("--every cannot be combined with --at or --randomise");
-        out << "period_start,period_end,animal,rank,score\n";
+        out << "period_start,period_end,animal,rank,score" << (elo ? ",start_rule" : "") << "\n";
         for (const PeriodRankRow& p : computeRanksByPeriod(loaded.colony, loaded.where, sel, r, *parsePeriodLength(o.every)))
             out << formatDate(p.period.start) << ',' << formatDate(p.period.end) << ',' << csvField(p.row.animal) << ','
-                << p.row.rank << ',' << formatNumber(p.row.score) << '\n';
+                << p.row.rank << ',' << formatNumber(p.row.score) << (elo ? ruleCell : "") << '\n';
         emit(ctx, out.str());
         return;
     }
@@ -68,14 +77,17 @@ void runRanks(CommandContext& ctx, const RanksOptions& o)
     if (table.rows.empty()) ctx.err << "hierloom-cli: no animal could be ranked in this window\n";
     if (r.method == RankMethod::Elo && table.kUsed)
         ctx.err << "elo: k = " << formatNumber(*table.kUsed) << (o.optimiseK ? " (optimised)" : "")
+                << ", start rule " << toString(r.startRule)
                 << ", ranked among animals resident on " << (table.rankedOn ? formatDate(*table.rankedOn) : "-") << "\n";
     out << "animal,rank,score";
     if (o.randomise > 0) out << ",rating_low,rating_high,mean_rank";
+    if (elo) out << ",start_rule";
     out << '\n';
     for (const RankRow& row : table.rows) {
         out << csvField(row.animal) << ',' << row.rank << ',' << formatNumber(row.score);
         if (o.randomise > 0)
             out << ',' << formatNumber(row.low) << ',' << formatNumber(row.high) << ',' << formatNumber(row.meanRank);
+        if (elo) out << ruleCell;
         out << '\n';
     }
     emit(ctx, out.str());
@@ -94,6 +106,7 @@ void addRanksCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
     cmd->add_option("--at", o->at, "elo: ratings at this date, ranked among the animals resident that day "
                                       "(default: after the window's last encounter)");
     addEloOptions(*cmd, o->analysis, "elo: ");
+    addStartRuleOption(*cmd, o->analysis, "elo: ");
     cmd->add_flag("--optimise-k", o->optimiseK, "elo: use the maximum-likelihood k (Foerster et al. 2016)");
     cmd->add_option("--randomise", o->randomise, "elo: randomised Elo over N random orders (default: off)")
         ->check(CLI::Range(1, 1000000));

@@ -39,6 +39,16 @@ void addEloOptions(CLI::App& command, AnalysisOverrides& o, const std::string& p
         ->check(CLI::IsMember({"logistic", "normal"}));
 }
 
+void addStartRuleOption(CLI::App& command, AnalysisOverrides& o, const std::string& prefix)
+{
+    command
+        .add_option("--start-rule", o.startRule,
+                    prefix + "where a daughter whose mother is rated enters the ranking: youngest (just below her "
+                             "mother, above her older sisters), eldest (just below her last older sister) or none "
+                             "(the start value) (" + kColonyDefault + toString(EloStartRule::None) + ")")
+        ->check(CLI::IsMember({"none", "youngest", "eldest"}));
+}
+
 void addMaturityOption(CLI::App& command, AnalysisOverrides& o)
 {
     o.maturityOption = command
@@ -64,6 +74,7 @@ AnalysisSettings analysisSettingsOf(const LoadedColony& loaded, const AnalysisOv
     if (o.kOption && o.kOption->count() > 0) s.elo.k = o.k;
     if (o.startOption && o.startOption->count() > 0) s.elo.start = o.start;
     if (!o.curve.empty()) s.elo.curve = *parseEloCurve(o.curve);
+    if (!o.startRule.empty()) s.startRule = *parseEloStartRule(o.startRule);
     if (o.maturityOption && o.maturityOption->count() > 0) s.maturityYears = o.maturityYears;
     if (!draws.empty()) s.elo.draws = *parseDrawPolicy(draws);
     return s;
@@ -80,6 +91,7 @@ void reportAnalysisSettings(CommandContext& ctx, const char* command, const Anal
         add(o->kOption && o->kOption->count() > 0, "--k");
         add(o->startOption && o->startOption->count() > 0, "--start");
         add(!o->curve.empty(), "--curve");
+        add(!o->startRule.empty(), "--start-rule");
         add(o->maturityOption && o->maturityOption->count() > 0, "--maturity-years");
     }
     add(!draws.empty(), "--draws");

@@ -19,6 +19,7 @@ struct AnalysisOverrides {
     double k = 0;
     double start = 0;
     std::string curve;
+    std::string startRule; ///< --start-rule; empty: the colony's setting
     int maturityYears = 0;
     CLI::Option* kOption = nullptr;
     CLI::Option* startOption = nullptr;
@@ -27,6 +28,8 @@ struct AnalysisOverrides {
 
 /// Adds --k, --start and --curve (`prefix` starts their help, e.g. "elo: ").
 void addEloOptions(CLI::App& command, AnalysisOverrides& options, const std::string& prefix = "Elo: ");
+/// Adds --start-rule none|youngest|eldest (rule-informed Elo, docs/methods.md).
+void addStartRuleOption(CLI::App& command, AnalysisOverrides& options, const std::string& prefix = "Elo: ");
 /// Adds --maturity-years.
 void addMaturityOption(CLI::App& command, AnalysisOverrides& options);
 /// Adds --draws alone, for commands without the window options.

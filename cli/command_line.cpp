@@ -34,6 +34,7 @@ int run(int argc, const char* const* argv, std::ostream& out, std::ostream& err)
     addExportTablesCommand(app, ctx, action);
     addSupportCommand(app, ctx, action);
     addInheritCommand(app, ctx, action);
+    addDynamicsCommand(app, ctx, action);
     addScenarioCommand(app, ctx, action);
     addStabilityCommand(app, ctx, action);
     addReportCommand(app, ctx, action);

@@ -22,6 +22,7 @@ void addMaternalRanksCommand(CLI::App& app, CommandContext& ctx, CommandAction& 
 void addExportTablesCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 void addSupportCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 void addInheritCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
+void addDynamicsCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 void addScenarioCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 void addStabilityCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 void addReportCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);

@@ -121,6 +121,7 @@ void runReport(CommandContext& ctx, const ReportOptions& o)
     const AnalysisSettings settings = analysisSettingsOf(loaded, o.analysis, o.draws);
     reportAnalysisSettings(ctx, "report", settings, &o.analysis, o.draws);
     ro.elo = settings.elo;
+    ro.startRule = settings.startRule;
     ro.maturityYears = settings.maturityYears;
     // QPdfWriter needs a GUI application; without a display the offscreen platform serves.
     if (qEnvironmentVariableIsEmpty("QT_QPA_PLATFORM")) qputenv("QT_QPA_PLATFORM", "offscreen");
@@ -178,6 +179,7 @@ void addReportCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
     cmd->add_option("--out", o->out, "the PDF file to write")->required();
     addDrawsOption(*cmd, o->draws);
     addEloOptions(*cmd, o->analysis);
+    addStartRuleOption(*cmd, o->analysis, "observed order and recent changes: ");
     addMaturityOption(*cmd, o->analysis);
     cmd->callback([&ctx, &action, o] { action = [&ctx, o] { runReport(ctx, *o); }; });
 }

@@ -212,6 +212,8 @@ void runExportTables(CommandContext& ctx, const ExportTablesOptions& o)
     r.selection = selectionOf(o.births.window, loaded);
     r.ranks.method = *parseRankMethod(o.method);
     r.ranks.elo = settings.elo;
+    if (r.ranks.method == RankMethod::Elo) r.ranks.startRule = settings.startRule;
+    if (settings.startRule == EloStartRule::Eldest) r.foresightRule = SiblingRule::Eldest;
     if (!o.every.empty()) r.every = parsePeriodLength(o.every);
     for (const std::string& w : o.windows) r.windows.push_back(parseWindow(w));
     r.randomisations = o.randomisations;
@@ -263,10 +265,11 @@ void addExportTablesCommand(CLI::App& app, CommandContext& ctx, CommandAction& a
 {
     auto* cmd = app.add_subcommand("export-tables", "write the research tables as CSV files into a folder");
     cmd->footer("Tables: ranks by period, win matrix, metrics by period, maternal ranks, sex ratio, discordance\n"
-                "by month; with supporters in the record also the kin-support tables of `support`. In the files, "
+                "by month, rank changes (active and passive) and foresight; with supporters in the record also the kin-support tables of `support`. In the files, "
                 "text cells starting with = + - @ get a leading ' so a spreadsheet cannot run them.");
     auto o = std::make_shared<ExportTablesOptions>();
     addBirthOptions(*cmd, o->births, true);
+    addStartRuleOption(*cmd, o->births.analysis, "ranks_by_period and rank_changes (elo): ");
     cmd->add_option("--dir", o->dir, "folder to write the tables into (created if missing)")->required();
     cmd->add_option("--every", o->every, "periods of the rank and metrics tables: day, week, month or year "
                                          "(default: the whole window as one period)")

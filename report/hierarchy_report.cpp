@@ -2,6 +2,7 @@
 #include "report/hierarchy_report.h"
 
 #include "core/pedigree/discordance.h"
+#include "core/pedigree/foresight.h"
 #include "core/pedigree/matriline.h"
 #include "core/planning/planning_caution.h"
 #include "core/ranks/rank_table.h"
@@ -16,6 +17,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <iterator>
 #include <stdexcept>
 
 namespace hierloom::report {
@@ -31,7 +33,7 @@ std::string lineOf(const Matrilines& lines, const std::string& id)
 }
 
 std::map<std::string, int> eloRanks(const Colony& colony, const ResidenceIndex& where, const std::string& group, Day at,
-                                    const EloSettings& elo, std::vector<RankRow>* rows = nullptr)
+                                    const EloSettings& elo, EloStartRule startRule, std::vector<RankRow>* rows = nullptr)
 {
     SelectionOptions sel;
     sel.group = group;
@@ -39,6 +41,7 @@ std::map<std::string, int> eloRanks(const Colony& colony, const ResidenceIndex& 
     sel.draws = elo.draws;
     RankOptions ro;
     ro.elo = elo;
+    ro.startRule = startRule;
     ro.at = at;
     const RankTable t = computeRanks(colony, where, sel, ro);
     std::map<std::string, int> out;
@@ -51,7 +54,7 @@ void observedAndPredicted(ReportLayout& doc, const Colony& colony, const Residen
                           const HierarchyReportOptions& o, Day at, const InheritancePrediction& p)
 {
     std::vector<RankRow> rows;
-    eloRanks(colony, where, o.group, at, o.elo, &rows);
+    eloRanks(colony, where, o.group, at, o.elo, o.startRule, &rows);
     ReportTable observed;
     observed.header = {QObject::tr("#"), QObject::tr("Animal"), QObject::tr("Sex"), QObject::tr("Matriline"),
                        QObject::tr("Elo")};
@@ -73,13 +76,14 @@ void observedAndPredicted(ReportLayout& doc, const Colony& colony, const Residen
         predicted.highlighted.push_back(f.discordantDyads > 0);
     }
     doc.heading(QObject::tr("Observed and predicted order"));
-    doc.paragraph(QObject::tr("Left: every resident of the group with an Elo rating on %1, highest first, with the "
-                              "matriline (named after its matriarch). Right: the order the matrilineal inheritance "
+    doc.paragraph(QObject::tr("Left: every resident of the group with an Elo rating on %1 (start rule %4), highest "
+                              "first, with the matriline (named after its matriarch). Right: the order the matrilineal inheritance "
                               "rule predicts for the mature females (%2 ascendancy, maturity %3 years); Obs. = her "
                               "observed rank among them, Disc. = pairs whose observed order reverses the "
                               "prediction (tinted).")
                       .arg(qs(formatDate(at)), qs(toString(o.rule)))
-                      .arg(o.maturityYears),
+                      .arg(o.maturityYears)
+                      .arg(qs(toString(o.startRule))),
                   true);
     doc.sideBySide(observed, QObject::tr("Observed order (Elo)"), predicted, QObject::tr("Predicted order (inheritance)"));
 }
@@ -114,10 +118,10 @@ void rankChanges(ReportLayout& doc, const Colony& colony, const ResidenceIndex& 
                  const HierarchyReportOptions& o, Day at)
 {
     const Day before = at - o.changeDays;
-    const auto now = eloRanks(colony, where, o.group, at, o.elo);
+    const auto now = eloRanks(colony, where, o.group, at, o.elo, o.startRule);
     std::map<std::string, int> then;
     try {
-        then = eloRanks(colony, where, o.group, before, o.elo);
+        then = eloRanks(colony, where, o.group, before, o.elo, o.startRule);
     } catch (const std::exception&) {
         // No encounters that early: nothing to compare.
     }
@@ -157,6 +161,71 @@ void rankChanges(ReportLayout& doc, const Colony& colony, const ResidenceIndex& 
                           (moved[i].first > 0 ? QStringLiteral("+") : QString()) + QString::number(moved[i].first)});
     }
     doc.table(t);
+}
+
+void foresight(ReportLayout& doc, const Colony& colony, const ResidenceIndex& where, const HierarchyReportOptions& o,
+               Day at)
+{
+    SelectionOptions sel;
+    sel.group = o.group;
+    sel.to = at;
+    sel.draws = o.elo.draws;
+    ForesightOptions fo;
+    fo.rule = o.rule;
+    fo.maturityYears = o.maturityYears;
+    fo.elo = o.elo;
+    const Foresight f = computeForesight(colony, where, sel, fo);
+    doc.heading(QObject::tr("How much does inheritance explain"));
+    doc.paragraph(QObject::tr("For each decided encounter up to %1, the chance each model gave the winner beforehand: "
+                              "the %2 inheritance rule alone (the animal it places higher wins with one probability, "
+                              "fitted: %3, on %4 of %5 encounters it could compare), plain Elo, and Elo whose "
+                              "daughters start where the rule places them. Higher log-likelihood and lower Brier "
+                              "score are better; a coin scores %6 per encounter and a Brier score of 0.25.")
+                      .arg(qs(formatDate(at)), qs(toString(o.rule)),
+                           f.ruleWinProbability ? QString::number(*f.ruleWinProbability, 'f', 3) : QObject::tr("undefined"))
+                      .arg(f.comparable)
+                      .arg(f.encounters.size())
+                      .arg(std::log(0.5), 0, 'f', 3),
+                  true);
+    auto modelName = [](ForesightModel m) {
+        switch (m) {
+        case ForesightModel::Elo: return QObject::tr("Elo");
+        case ForesightModel::InformedElo: return QObject::tr("Rule-informed Elo");
+        case ForesightModel::Rule: break;
+        }
+        return QObject::tr("Rule alone");
+    };
+    ReportTable t;
+    t.header = {QObject::tr("Model"), QObject::tr("Encounters"), QObject::tr("Log-likelihood"),
+                QObject::tr("Per encounter"), QObject::tr("Brier"), QObject::tr("Winners predicted")};
+    t.widths = {1.6, 1, 1.2, 1.1, 0.8, 1.3};
+    for (const ForesightRow& r : f.rows) {
+        if (r.year) continue;
+        const ForesightScore& s = r.score;
+        t.rows.push_back({modelName(r.model), QString::number(s.encounters),
+                          s.encounters ? QString::number(s.logLikelihood, 'f', 1) : QString(),
+                          s.encounters ? QString::number(s.logLikelihood / s.encounters, 'f', 3) : QString(),
+                          s.brier ? QString::number(*s.brier, 'f', 3) : QString(),
+                          s.sharePredicted ? QString::number(*s.sharePredicted * 100, 'f', 1) + QStringLiteral("%")
+                                           : QString()});
+    }
+    doc.table(t);
+    // Share of winners predicted per year, one line per model.
+    std::vector<int> years;
+    for (const ForesightRow& r : f.rows)
+        if (r.model == ForesightModel::Rule && r.year) years.push_back(*r.year);
+    if (years.size() < 2) return;
+    const QColor colours[] = {QColor(0xe6, 0x9f, 0x00), QColor(0x00, 0x72, 0xb2), QColor(0x00, 0x9e, 0x73)};
+    std::vector<ChartSeries> series;
+    for (size_t m = 0; m < std::size(kForesightModels); ++m) {
+        ChartSeries c{modelName(kForesightModels[m]), colours[m], {}, std::nullopt, {}};
+        for (const ForesightRow& r : f.rows)
+            if (r.model == kForesightModels[m] && r.year) c.values.push_back(r.score.sharePredicted);
+        series.push_back(std::move(c));
+    }
+    QStringList labels;
+    for (int y : years) labels << QString::number(y);
+    doc.chart(QObject::tr("Share of winners each model predicted, per year"), series, labels);
 }
 
 void stability(ReportLayout& doc, const Colony& colony, const ResidenceIndex& where, const Matrilines& lines,
@@ -241,7 +310,8 @@ void stability(ReportLayout& doc, const Colony& colony, const ResidenceIndex& wh
 
 } // namespace
 
-int paintHierarchyReport(QPagedPaintDevice& device, const Colony& colony, const HierarchyReportOptions& o)
+int paintHierarchyReport(QPagedPaintDevice& device, const Colony& colony, const HierarchyReportOptions& o,
+                         QStringList* headings)
 {
     const ResidenceIndex where(colony.animals, colony.residences);
     if (where.group(o.group) < 0) throw std::invalid_argument("no group '" + o.group + "' in the colony");
@@ -282,10 +352,12 @@ int paintHierarchyReport(QPagedPaintDevice& device, const Colony& colony, const 
     doc.caution(qs(kPlanningCaution));
     discordances(doc, lines, p);
     rankChanges(doc, colony, where, lines, o, at);
+    foresight(doc, colony, where, o, at);
     stability(doc, colony, where, lines, o, at);
     doc.heading(QObject::tr("Methods and references"));
     for (const QString& m : methodsText(o.elo)) doc.paragraph(m, true);
     doc.finish();
+    if (headings) *headings = doc.headings();
     return doc.pages();
 }
 

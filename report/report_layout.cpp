@@ -97,6 +97,7 @@ void ReportLayout::title(const QString& text, const QString& subtitle)
 
 void ReportLayout::heading(const QString& text)
 {
+    headings_ << text;
     const double h = textHeightMm(text, headingFont_, pageWidthMm_);
     ensure(h + 20); // keep a heading with the start of what follows
     yMm_ += 2;

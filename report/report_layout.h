@@ -54,9 +54,12 @@ public:
     void finish();
 
     int pages() const { return pages_; }
+    /// Every heading painted so far, in order (what a test can check without reading the PDF back).
+    const QStringList& headings() const { return headings_; }
     double widthMm() const;
 
 private:
+    QStringList headings_;
     double px(double mm) const { return mm * dotsPerMm_; }
     double remainingMm() const;
     void ensure(double mm);

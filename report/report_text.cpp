@@ -39,6 +39,10 @@ QStringList methodsText(const core::EloSettings& elo)
                     "ascendancy; Kawamura 1958; Datta 1988)."),
         QObject::tr("Agreement: discordant pairs, conformity = 1 - discordant / comparable pairs, and Kendall's tau-b "
                     "between predicted and observed ranks (Kendall 1945)."),
+        QObject::tr("Foresight: for each decided encounter, the probability each model gave the winner beforehand - "
+                    "the inheritance rule alone with one win probability fitted by maximum likelihood, plain Elo, and "
+                    "Elo whose daughters start where the rule places them; log-likelihood, Brier score (Brier 1950) "
+                    "and the share of winners predicted."),
         QObject::tr("Stability: counter-dominance, rank changes and severe aggression per period as described above; "
                     "thresholds are the colony file's settings."),
         QObject::tr("References: Albers PCH, de Vries H (2001) Elo-rating as a tool in the sequential estimation of "

@@ -40,7 +40,7 @@ std::optional<DrawPolicy> parseDrawPolicy(std::string_view text)
 
 std::string describeAnalysisSettings(const AnalysisSettings& s)
 {
-    return "k " + formatNumber(s.elo.k) + ", start " + formatNumber(s.elo.start) + ", curve " + toString(s.elo.curve) +
+    return "k " + formatNumber(s.elo.k) + ", start " + formatNumber(s.elo.start) + ", start rule " + toString(s.startRule) + ", curve " + toString(s.elo.curve) +
            ", draws " + toString(s.elo.draws) + ", maturity " + std::to_string(s.maturityYears) + " years, window " +
            (s.windowDays == 0 ? std::string("all data") : "last " + std::to_string(s.windowDays) + " days");
 }

@@ -2,6 +2,7 @@
 #pragma once
 #include "core/base/civil_date.h"
 #include "core/ranks/elo_rating.h"
+#include "core/ranks/informed_elo.h"
 
 #include <optional>
 #include <string>
@@ -20,11 +21,13 @@ inline constexpr int kMaxMaturityYears = 50;
 inline constexpr int kMaxWindowDays = 36500;
 
 /// The settings every analysis starts from: the Elo rating (k, start value,
-/// curve, draw policy; defaults in EloSettings), the maturity age and the
+/// curve, draw policy; defaults in EloSettings; the start rule), the maturity age and the
 /// default window. Views, reports and the command line read one of these
 /// from the colony file (core/store/analysis_settings_store.h), so they agree.
 struct AnalysisSettings {
     EloSettings elo;
+    /// Where daughters enter the Elo ranking (docs/methods.md "Rule-informed Elo"); off by default.
+    EloStartRule startRule = EloStartRule::None;
     int maturityYears = kDefaultMaturityYears;
     /// Default window: 0 = all data, else the last N days up to the last encounter.
     int windowDays = 0;
@@ -32,7 +35,7 @@ struct AnalysisSettings {
     bool operator==(const AnalysisSettings& o) const
     {
         return elo.k == o.elo.k && elo.start == o.elo.start && elo.curve == o.elo.curve &&
-               elo.draws == o.elo.draws && maturityYears == o.maturityYears && windowDays == o.windowDays;
+               elo.draws == o.elo.draws && startRule == o.startRule && maturityYears == o.maturityYears && windowDays == o.windowDays;
     }
 };
 
@@ -48,8 +51,8 @@ std::optional<EloCurve> parseEloCurve(std::string_view text);
 const char* toString(DrawPolicy draws);
 std::optional<DrawPolicy> parseDrawPolicy(std::string_view text);
 
-/// One line for people: "k 100, start 1000, curve logistic, draws half,
-/// maturity 4 years, window all data".
+/// One line for people: "k 100, start 1000, start rule none, curve logistic,
+/// draws half, maturity 4 years, window all data".
 std::string describeAnalysisSettings(const AnalysisSettings& settings);
 
 /// First day of the default window ending on `lastDay`; nullopt for all data.

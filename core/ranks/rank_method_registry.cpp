@@ -8,7 +8,10 @@ namespace hierloom::core {
 const std::vector<RankMethodInfo>& rankMethods()
 {
     static const std::vector<RankMethodInfo> methods = {
-        {RankMethod::Elo, "elo", "Elo rating", "sequential Elo ratings, updated encounter by encounter", "elo", true},
+        {RankMethod::Elo, "elo", "Elo rating",
+         "sequential Elo ratings, updated encounter by encounter (daughters may start where the inheritance rule "
+         "places them)",
+         "elo", true, true},
         {RankMethod::DavidsScore, "ds", "David's score",
          "David's score from the proportions of wins in each dyad", "davids_score", true},
         {RankMethod::Isi, "isi", "I&SI", "the order with the fewest inconsistencies and least total strength of them",

@@ -18,6 +18,8 @@ struct RankMethodInfo {
     const char* computes;    ///< what it computes, one short phrase
     const char* helpKey;     ///< anchor of its entry in the help's methods page
     bool hasScore;           ///< ranks come with a score (the rank table's score column)
+    /// Takes a start rule (docs/methods.md "Rule-informed Elo"); its tables end with `start_rule`.
+    bool takesStartRule = false;
 };
 
 /// Every rank method, in the order offered (the default first).

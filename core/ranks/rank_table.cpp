@@ -12,6 +12,7 @@
 
 #include <algorithm>
 #include <numeric>
+#include <stdexcept>
 
 namespace hierloom::core {
 
@@ -78,6 +79,8 @@ RankTable computeRanks(const Colony& colony, const ResidenceIndex& where, const 
         table.rows = matrixRanks(sel.ids, sel.bouts, o, selection.draws);
         return table;
     }
+    if (o.startRule != EloStartRule::None && (o.optimiseK || o.randomise > 0))
+        throw std::invalid_argument("a start rule cannot be combined with the optimised k or randomised Elo");
     // Elo: ratings after the last bout dated on or before the ranking day.
     std::optional<Day> day = o.at ? o.at : (selection.to ? selection.to : sel.lastDay);
     if (!day) return table;
@@ -89,7 +92,12 @@ RankTable computeRanks(const Colony& colony, const ResidenceIndex& where, const 
     if (o.optimiseK) {
         if (const auto best = optimiseEloK(n, bouts, settings, threadsOf(o))) settings.k = best->k;
     }
-    const EloRun run = runElo(n, bouts, settings);
+    const EloRun run = o.startRule == EloStartRule::None
+                           ? runElo(n, bouts, settings)
+                           : std::move(traceElo(n, bouts, std::vector<Day>(sel.days.begin(), sel.days.begin() + static_cast<std::ptrdiff_t>(count)),
+                                                settings, o.startRule, eloFamilyOf(colony, sel.ids),
+                                                residencePresence(sel.ids, where, selection.group), {count})
+                                           .checkpoints.front());
     table.kUsed = settings.k;
     if (run.decided > 0) table.logLikelihood = run.logLikelihood;
     table.rankedOn = day;
@@ -129,12 +137,19 @@ std::vector<PeriodRankRow> computeRanksByPeriod(const Colony& colony, const Resi
         return static_cast<size_t>(std::upper_bound(sel.days.begin(), sel.days.end(), d) - sel.days.begin());
     };
     if (o.method == RankMethod::Elo) {
+        if (o.startRule != EloStartRule::None && o.optimiseK)
+            throw std::invalid_argument("a start rule cannot be combined with the optimised k");
         EloSettings settings = eloSettingsOf(o, selection);
         if (o.optimiseK)
             if (const auto best = optimiseEloK(sel.size(), sel.bouts, settings, threadsOf(o))) settings.k = best->k;
         std::vector<size_t> counts;
         for (const CalendarPeriod& p : periods) counts.push_back(boutIndex(p.end));
-        const std::vector<EloRun> runs = eloAtCheckpoints(sel.size(), sel.bouts, counts, settings);
+        const std::vector<EloRun> runs =
+            o.startRule == EloStartRule::None
+                ? eloAtCheckpoints(sel.size(), sel.bouts, counts, settings)
+                : traceElo(sel.size(), sel.bouts, sel.days, settings, o.startRule, eloFamilyOf(colony, sel.ids),
+                           residencePresence(sel.ids, where, selection.group), counts)
+                      .checkpoints;
         for (size_t k = 0; k < periods.size(); ++k) {
             std::vector<bool> include = residentMask(sel.ids, where, periods[k].end, selection.group);
             for (size_t i = 0; i < include.size(); ++i) include[i] = include[i] && runs[k].rated[i];

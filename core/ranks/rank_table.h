@@ -4,6 +4,7 @@
 #include "core/base/colony.h"
 #include "core/ranks/elo_rating.h"
 #include "core/ranks/encounter_selection.h"
+#include "core/ranks/informed_elo.h"
 
 #include <cstdint>
 #include <optional>
@@ -21,6 +22,7 @@ std::optional<RankMethod> parseRankMethod(std::string_view text);
 struct RankOptions {
     RankMethod method = RankMethod::Elo;
     EloSettings elo;            // k, start, curve (draws come from the selection)
+    EloStartRule startRule = EloStartRule::None; // Elo: rule-informed start (docs/methods.md)
     std::optional<Day> at;      // Elo: ratings at this date
     bool optimiseK = false;     // Elo: use the maximum-likelihood k (Foerster et al. 2016)
     int randomise = 0;          // Elo: randomised Elo with this many orders (0: off)

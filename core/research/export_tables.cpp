@@ -3,12 +3,15 @@
 #include "core/research/support_tables.h"
 #include "core/ranks/parallel_randomisation.h"
 
+#include "core/research/dynamics_tables.h"
+
 #include "core/base/csv_writer.h"
 #include "core/pedigree/discordance.h"
 #include "core/ranks/hierarchy_metrics.h"
 #include "core/pedigree/matriline.h"
 #include "core/base/number_format.h"
 #include "core/ranks/parallel_randomisation.h"
+#include "core/ranks/rank_method_registry.h"
 #include "core/ranks/win_matrix.h"
 
 #include <charconv>
@@ -22,13 +25,17 @@ namespace hierloom::core {
 
 namespace {
 
-const std::vector<std::string> kRankHeader{"period_start", "period_end", "animal", "rank", "score",
-                                           "matriline",    "age_years",  "sex",    "group"};
+const std::vector<std::string> kRankHeader{"period_start", "period_end", "animal", "rank",      "score",     "matriline",
+                                           "age_years",    "sex",        "group",  "start_rule"};
 
 /// Adds the descriptive columns of one ranked animal on a period's last day.
 class AnimalColumns {
 public:
-    AnimalColumns(const Colony& colony, const ResidenceIndex& where) : colony_(colony), where_(where), lines_(colony) {}
+    AnimalColumns(const Colony& colony, const ResidenceIndex& where, const RankOptions& options)
+        : colony_(colony), where_(where), lines_(colony),
+          startRule_(rankMethodInfo(options.method).takesStartRule ? toString(options.startRule) : "")
+    {
+    }
 
     std::vector<std::string> row(const CalendarPeriod& p, const RankRow& r) const
     {
@@ -43,6 +50,7 @@ public:
         const int w = where_.animal(r.animal);
         const int g = w >= 0 ? where_.groupOn(w, p.end) : -1;
         out.push_back(g >= 0 ? where_.groups()[static_cast<size_t>(g)] : std::string());
+        out.push_back(startRule_); // Elo's start rule (docs/methods.md); empty for the other methods
         return out;
     }
 
@@ -50,6 +58,7 @@ private:
     const Colony& colony_;
     const ResidenceIndex& where_;
     Matrilines lines_;
+    std::string startRule_;
 };
 
 std::string cellOf(const std::optional<int>& v) { return v ? std::to_string(*v) : std::string(); }
@@ -75,7 +84,7 @@ ExportTable rankTableByPeriod(const Colony& colony, const ResidenceIndex& where,
                               const RankOptions& options, PeriodLength every)
 {
     ExportTable t{"ranks_by_period", kRankHeader, {}};
-    const AnimalColumns columns(colony, where);
+    const AnimalColumns columns(colony, where, options);
     for (const PeriodRankRow& p : computeRanksByPeriod(colony, where, selection, options, every))
         t.rows.push_back(columns.row(p.period, p.row));
     return t;
@@ -85,7 +94,7 @@ ExportTable rankTableByWindows(const Colony& colony, const ResidenceIndex& where
                                const RankOptions& options, const std::vector<CalendarPeriod>& windows)
 {
     ExportTable t{"ranks_by_period", kRankHeader, {}};
-    const AnimalColumns columns(colony, where);
+    const AnimalColumns columns(colony, where, options);
     for (const CalendarPeriod& w : windows) {
         SelectionOptions s = selection;
         RankOptions o = options;
@@ -249,6 +258,19 @@ std::vector<ExportTable> researchTables(const Colony& colony, const ResidenceInd
     out.push_back(sexRatioTable(analysis));
     out.push_back(rankThirdsTable(analysis));
     out.push_back(discordanceByMonthTable(colony, where, o.selection, o.ranks.elo, o.maturityYears));
+    // Rank dynamics (docs/methods.md): Elo ranks with the chosen start rule, changes per period of
+    // --every (months when the export has custom windows or one period), and the models' foresight.
+    RankOptions elo = o.ranks;
+    elo.method = RankMethod::Elo;
+    elo.optimiseK = false;
+    elo.randomise = 0;
+    const PeriodLength changeEvery = o.every && o.windows.empty() ? *o.every : PeriodLength::Month;
+    out.push_back(rankChangesTable(rankChangesByPeriod(colony, where, o.selection, elo, changeEvery), elo.startRule));
+    ForesightOptions f;
+    f.rule = o.foresightRule;
+    f.maturityYears = o.maturityYears;
+    f.elo = o.ranks.elo;
+    out.push_back(foresightTable(computeForesight(colony, where, o.selection, f)));
     // The kin-support tables only for a record that has supporters, so older exports keep their files.
     if (hasSupporters(colony.encounters)) {
         SupportOptions so;

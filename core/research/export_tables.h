@@ -5,6 +5,7 @@
 #include "core/ranks/analysis_settings.h"
 #include "core/ranks/encounter_selection.h"
 #include "core/research/maternal_rank.h"
+#include "core/pedigree/inheritance_prediction.h"
 #include "core/ranks/rank_table.h"
 #include "core/base/residence_index.h"
 #include "core/research/sex_ratio_analysis.h"
@@ -30,7 +31,7 @@ struct ExportTable {
 /// methods, as `ranks --every` computes it (Elo continues over the window and
 /// is read at each period's last day; David's score and I&SI per period), with
 /// the animal's matriline (its matriarch; Kawamura 1958), age in whole years,
-/// sex and group on the period's last day added at the end.
+/// sex and group on the period's last day and the Elo start rule (empty for the other methods) added at the end.
 ExportTable rankTableByPeriod(const Colony& colony, const ResidenceIndex& where, const SelectionOptions& selection,
                               const RankOptions& options, PeriodLength every);
 
@@ -86,11 +87,14 @@ struct ResearchExportOptions {
     unsigned threads = 0;
     int gestationDays = 165;
     int maturityYears = kDefaultMaturityYears;
+    /// Sibling rule of the foresight table's rule and rule-informed Elo models.
+    SiblingRule foresightRule = SiblingRule::Youngest;
 };
 
 /// Every research table: ranks by period, win matrix, metrics by period,
-/// maternal ranks, sex-ratio figures, rank thirds and discordance by month;
-/// with supporters in the record also the four kin-support tables (support_tables.h).
+/// maternal ranks, sex-ratio figures, rank thirds, discordance by month, rank
+/// changes (active and passive) and foresight (docs/methods.md); with supporters
+/// in the record also the four kin-support tables (support_tables.h).
 std::vector<ExportTable> researchTables(const Colony& colony, const ResidenceIndex& where,
                                         const ResearchExportOptions& options);
 

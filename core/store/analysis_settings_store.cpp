@@ -55,6 +55,7 @@ AnalysisSettings readAnalysisSettings(const ColonyStore& store)
     if (const auto start = parsed<double>(store.setting(kEloStart))) accept([&] { s.elo.start = *start; });
     if (const auto curve = parseEloCurve(store.setting(kEloCurve))) s.elo.curve = *curve;
     if (const auto draws = parseDrawPolicy(store.setting(kDraws))) s.elo.draws = *draws;
+    if (const auto rule = parseEloStartRule(store.setting(kEloStartRule))) s.startRule = *rule;
     if (const auto days = parsed<int>(store.setting(kWindowDays))) accept([&] { s.windowDays = *days; });
     try {
         s.maturityYears = readSpeciesSettings(store).maturityYears;
@@ -84,6 +85,9 @@ SettingValues analysisSettingValues(const ColonyStore& store, const AnalysisSett
         {kEloStart, formatNumber(s.elo.start)},
         {kEloCurve, std::string(toString(s.elo.curve))},
         {kDraws, std::string(toString(s.elo.draws))},
+        // No start rule (the default) is no row, so files written before the option read the same.
+        {kEloStartRule, s.startRule == EloStartRule::None ? std::optional<std::string>()
+                                                          : std::optional<std::string>(toString(s.startRule))},
         {kWindowDays, std::to_string(s.windowDays)},
         // A maturity age equal to the species' default is no override.
         {kMaturitySettingKey, s.maturityYears == speciesDefault ? std::optional<std::string>()

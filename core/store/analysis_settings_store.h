@@ -15,6 +15,7 @@ inline constexpr const char* kEloK = "analysis.elo_k";
 inline constexpr const char* kEloStart = "analysis.elo_start";
 inline constexpr const char* kEloCurve = "analysis.elo_curve";
 inline constexpr const char* kDraws = "analysis.draws";
+inline constexpr const char* kEloStartRule = "analysis.elo_start_rule";
 inline constexpr const char* kWindowDays = "analysis.window_days";
 } // namespace analysis_keys
 

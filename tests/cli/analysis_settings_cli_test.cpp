@@ -37,11 +37,14 @@ void store(const std::string& path, const AnalysisSettings& s)
     writeAnalysisSettings(file, s);
 }
 
-/// The score column of `animal` in a ranks CSV.
+/// The score column (the third: animal,rank,score,...) of `animal` in a ranks CSV.
 double scoreOf(const std::string& csv, const std::string& animal)
 {
     for (const std::string& line : lines(csv))
-        if (line.rfind(animal + ",", 0) == 0) return std::stod(line.substr(line.rfind(',') + 1));
+        if (line.rfind(animal + ",", 0) == 0) {
+            const size_t second = line.find(',', line.find(',') + 1);
+            return std::stod(line.substr(second + 1, line.find(',', second + 1) - second - 1));
+        }
     ADD_FAILURE() << animal << " not in\n" << csv;
     return 0;
 }
@@ -57,7 +60,7 @@ TEST(CliAnalysisSettings, StoredKChangesRanks)
     ASSERT_EQ(before.status, 0) << before.err;
     EXPECT_DOUBLE_EQ(scoreOf(before.out, "A"), 1050);
     EXPECT_DOUBLE_EQ(scoreOf(before.out, "B"), 950);
-    EXPECT_NE(before.err.find("ranks: settings: k 100, start 1000, curve logistic, draws half, maturity 4 years, "
+    EXPECT_NE(before.err.find("ranks: settings: k 100, start 1000, start rule none, curve logistic, draws half, maturity 4 years, "
                               "window all data (the colony's settings)\n"),
               std::string::npos)
         << before.err;
@@ -85,7 +88,7 @@ TEST(CliAnalysisSettings, OptionsOverrideStoredValuesForOneRun)
     // k from the option, start from the file: 2000 + 20/2.
     EXPECT_DOUBLE_EQ(scoreOf(r.out, "A"), 2010);
     EXPECT_DOUBLE_EQ(scoreOf(r.out, "B"), 1990);
-    EXPECT_NE(r.err.find("ranks: settings: k 20, start 2000, curve logistic, draws half, maturity 4 years, window "
+    EXPECT_NE(r.err.find("ranks: settings: k 20, start 2000, start rule none, curve logistic, draws half, maturity 4 years, window "
                          "all data (the colony's settings; this run: --k)\n"),
               std::string::npos)
         << r.err;

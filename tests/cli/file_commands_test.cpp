@@ -93,6 +93,6 @@ TEST(CliFiles, OutFileIsWrittenWhole)
     EXPECT_TRUE(r.out.empty());
     const auto rows = lines(CliTempDir::read(dir.file("ranks.csv")));
     ASSERT_GT(rows.size(), 10U);
-    EXPECT_EQ(rows[0], "animal,rank,score");
+    EXPECT_EQ(rows[0], "animal,rank,score,start_rule"); // Elo tables end with the start rule used
     EXPECT_FALSE(std::filesystem::exists(dir.file("ranks.csv.part")));
 }

@@ -15,6 +15,8 @@
 #include "ui/document/qt_convert.h"
 #include "ui/document/document_settings.h"
 #include "ui/shell/view_registry.h"
+#include "ui/planning/report_dialog.h"
+#include "core/demo/demo_colony.h"
 
 #include <QAction>
 #include <QApplication>
@@ -190,4 +192,39 @@ TEST(AnalysisSettingsDialog, KeystrokesChangeTheMatrixView)
     for (int i : core::orderByMethod(decided, core::RankMethod::Elo, stored.elo))
         order << ui::toQString(decided.ids[static_cast<size_t>(i)]);
     EXPECT_EQ(matrix->order(), order);
+}
+
+TEST(AnalysisSettingsDialog, StartRuleTypedReachesTheReport)
+{
+    OpenWindow w;
+    // A person opens the dialog, tabs to the daughters' Elo start (k, start,
+    // curve, draws, start rule), picks the next choice and presses Enter.
+    std::string typed;
+    QTimer::singleShot(0, [&typed] {
+        auto* dialog = qobject_cast<QDialog*>(QApplication::activeModalWidget());
+        if (!dialog) {
+            typed = "no dialog";
+            return;
+        }
+        QTimer::singleShot(5000, dialog, [dialog] { dialog->reject(); });
+        QApplication::setActiveWindow(dialog);
+        if (!QTest::qWaitForWindowActive(dialog) || !QApplication::focusWidget()) {
+            typed = "the dialog has no focus";
+            return;
+        }
+        for (int i = 0; i < 4; ++i) QTest::keyClick(QApplication::focusWidget(), Qt::Key_Tab);
+        const QString at = QApplication::focusWidget()->objectName();
+        QTest::keyClick(QApplication::focusWidget(), Qt::Key_Down);
+        QTest::keyClick(QApplication::focusWidget(), Qt::Key_Return);
+        typed = dialog->isVisible() ? "Enter left the dialog open" : at.toStdString();
+    });
+    w.window.analysisSettingsAction()->trigger();
+    ASSERT_EQ(typed, "eloStartRule");
+    EXPECT_TRUE(w.window.errors.isEmpty()) << w.window.errors.join('\n').toStdString();
+    const core::AnalysisSettings stored = ui::documentAnalysisSettings(w.window.document());
+    EXPECT_EQ(stored.startRule, core::EloStartRule::Youngest);
+    EXPECT_EQ(stored.elo.k, 100); // the rest unchanged
+    // The report takes it for its observed order, as the command line does.
+    EXPECT_EQ(ui::documentReportOptions(w.window.document(), core::demo::kGroup, std::nullopt).startRule,
+              core::EloStartRule::Youngest);
 }

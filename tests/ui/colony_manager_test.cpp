@@ -25,6 +25,7 @@
 #include <QLabel>
 #include <QLineEdit>
 #include <QListWidget>
+#include <QPdfWriter>
 #include <QProcess>
 #include <QRegularExpression>
 #include <QStandardPaths>
@@ -206,4 +207,20 @@ TEST(HierarchyReport, DemoReportIsAValidPdf)
     EXPECT_THROW(report::writeHierarchyReportPdf(pdf, document.colony(),
                                                  ui::documentReportOptions(&document, "No Such Group", std::nullopt)),
                  std::invalid_argument);
+}
+
+// The report has the foresight section ("how much does inheritance explain"), after the recent changes.
+TEST(HierarchyReport, HasTheForesightSection)
+{
+    TempDir dir;
+    ui::ColonyDocument document;
+    document.open(QString::fromStdString(demoFile(dir)));
+    QPdfWriter writer(QString::fromStdString(dir.file("r.pdf")));
+    QStringList headings;
+    report::paintHierarchyReport(writer, document.colony(),
+                                 ui::documentReportOptions(&document, core::demo::kGroup, std::nullopt), &headings);
+    const qsizetype changes = headings.indexOf(QStringLiteral("Recent rank changes"));
+    const qsizetype foresight = headings.indexOf(QStringLiteral("How much does inheritance explain"));
+    ASSERT_GE(changes, 0) << headings.join(QStringLiteral(" | ")).toStdString();
+    EXPECT_EQ(foresight, changes + 1);
 }

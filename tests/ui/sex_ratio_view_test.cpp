@@ -136,6 +136,7 @@ TEST(ResearchExportDialog, WritesTheCoreTables)
     ASSERT_TRUE(dialog.exportTables()) << ui::toStdString(dialog.report());
     const std::vector<std::string> names{"ranks_by_period", "win_matrix", "metrics_by_period", "maternal_ranks",
                                          "sex_ratio", "sex_ratio_by_rank_third", "discordance_by_month",
+                                         "rank_changes", "foresight",
                                          // the demo records supporters: the kin-support tables too
                                          "support_pairs", "support_summary", "support_daughters", "support_matrix"};
     ASSERT_EQ(dialog.writtenFiles().size(), static_cast<int>(names.size()));

@@ -25,6 +25,7 @@ AnalysisSettingsDialog::AnalysisSettingsDialog(const core::AnalysisSettings& cur
       start_(new QDoubleSpinBox(this)),
       curve_(new QComboBox(this)),
       draws_(new QComboBox(this)),
+      startRule_(new QComboBox(this)),
       maturity_(new QSpinBox(this)),
       window_(new QSpinBox(this))
 {
@@ -39,6 +40,14 @@ AnalysisSettingsDialog::AnalysisSettingsDialog(const core::AnalysisSettings& cur
     curve_->addItem(tr("Normal"), static_cast<int>(core::EloCurve::Normal));
     draws_->addItem(tr("Count half to each side"), static_cast<int>(core::DrawPolicy::Half));
     draws_->addItem(tr("Ignore"), static_cast<int>(core::DrawPolicy::Ignore));
+    startRule_->setObjectName(QStringLiteral("eloStartRule"));
+    startRule_->addItem(tr("Start value for everyone"), static_cast<int>(core::EloStartRule::None));
+    startRule_->addItem(tr("Youngest ascendancy: just below her mother"), static_cast<int>(core::EloStartRule::Youngest));
+    startRule_->addItem(tr("Eldest first: just below her last older sister"), static_cast<int>(core::EloStartRule::Eldest));
+    startRule_->setToolTip(tr("Where a daughter whose mother is rated enters the Elo ranking: between the animal the "
+                              "rule puts just above her and the one rated below that animal (docs: Rule-informed Elo). "
+                              "Used by rank tables, rank changes and the report; the comparisons with the "
+                              "inheritance rule keep the plain start."));
     maturity_->setRange(0, core::kMaxMaturityYears);
     maturity_->setSuffix(tr(" years"));
     window_->setRange(0, core::kMaxWindowDays);
@@ -50,6 +59,7 @@ AnalysisSettingsDialog::AnalysisSettingsDialog(const core::AnalysisSettings& cur
     form->addRow(tr("Elo &start value:"), start_);
     form->addRow(tr("Expectation &curve:"), curve_);
     form->addRow(tr("&Draws:"), draws_);
+    form->addRow(tr("Daughters' Elo sta&rt:"), startRule_);
     form->addRow(tr("&Maturity age:"), maturity_);
     form->addRow(tr("Default &window (last days):"), window_);
     const core::AnalysisSettings d = defaults;
@@ -84,6 +94,7 @@ void AnalysisSettingsDialog::setSettings(const core::AnalysisSettings& s)
     start_->setValue(s.elo.start);
     curve_->setCurrentIndex(curve_->findData(static_cast<int>(s.elo.curve)));
     draws_->setCurrentIndex(draws_->findData(static_cast<int>(s.elo.draws)));
+    startRule_->setCurrentIndex(startRule_->findData(static_cast<int>(s.startRule)));
     maturity_->setValue(s.maturityYears);
     window_->setValue(s.windowDays);
 }
@@ -95,6 +106,7 @@ core::AnalysisSettings AnalysisSettingsDialog::settings() const
     s.elo.start = start_->value();
     s.elo.curve = static_cast<core::EloCurve>(curve_->currentData().toInt());
     s.elo.draws = static_cast<core::DrawPolicy>(draws_->currentData().toInt());
+    s.startRule = static_cast<core::EloStartRule>(startRule_->currentData().toInt());
     s.maturityYears = maturity_->value();
     s.windowDays = window_->value();
     return s;

@@ -13,8 +13,8 @@ namespace hierloom::ui {
 class ColonyDocument;
 class ColonyEditFacade;
 
-/// Analysis > Analysis Settings...: the Elo k, start value, curve and draw
-/// policy, the maturity age and the default window that every view, the
+/// Analysis > Analysis Settings...: the Elo k, start value, curve, draw
+/// policy and start rule (docs/methods.md "Rule-informed Elo"), the maturity age and the default window that every view, the
 /// report and the command line start from (kept in the colony file).
 class AnalysisSettingsDialog : public QDialog {
     Q_OBJECT
@@ -31,6 +31,7 @@ private:
     QDoubleSpinBox* start_;
     QComboBox* curve_;
     QComboBox* draws_;
+    QComboBox* startRule_;
     QSpinBox* maturity_;
     QSpinBox* window_;
 };

@@ -20,6 +20,9 @@
 #include <QTableWidget>
 #include <QVBoxLayout>
 
+#include <cmath>
+#include <iterator>
+
 #include <qcustomplot.h>
 
 namespace hierloom::ui {
@@ -47,8 +50,12 @@ PredictionView::PredictionView(ColonyDocument* document, AnimalSelection* select
       dyads_(new QTableWidget(0, 3, this)),
       ruleBox_(new QComboBox(this)),
       dateEdit_(new QDateEdit(this)),
-      summaryLabel_(new QLabel(this))
+      summaryLabel_(new QLabel(this)),
+      foresightLabel_(new QLabel(this)),
+      foresightTable_(new QTableWidget(0, 5, this)),
+      foresightPlot_(new QCustomPlot(this))
 {
+    ruleBox_->setObjectName(QStringLiteral("rule"));
     ruleBox_->addItems({tr("Youngest ascendancy"), tr("Eldest first")});
     dateEdit_->setCalendarPopup(true);
     dateEdit_->setDisplayFormat(QStringLiteral("yyyy-MM-dd"));
@@ -74,6 +81,46 @@ PredictionView::PredictionView(ColonyDocument* document, AnimalSelection* select
     sideLayout->addWidget(summaryLabel_);
     sideLayout->addWidget(dyads_, 1);
     summaryLabel_->setWordWrap(true);
+    // How much the rule explains: each model's foresight of the record's encounters.
+    auto* foresightHeader = new QHBoxLayout;
+    auto* foresightTitle = new QLabel(tr("<b>How much does inheritance explain?</b>"), this);
+    foresightHeader->addWidget(foresightTitle);
+    foresightHeader->addWidget(new HelpButton(QStringLiteral("foresight"), this));
+    foresightHeader->addStretch();
+    foresightHeader->addWidget(makeExportButton(foresightPlot_, QStringLiteral("foresight"), this));
+    sideLayout->addLayout(foresightHeader);
+    foresightLabel_->setWordWrap(true);
+    sideLayout->addWidget(foresightLabel_);
+    foresightTable_->setObjectName(QStringLiteral("foresight"));
+    foresightTable_->setHorizontalHeaderLabels(
+        {tr("Model"), tr("Log-lik."), tr("Per enc."), tr("Brier"), tr("Pred.")});
+    const QString headerTips[] = {tr("The model"), tr("Log-likelihood: the sum of ln p over the winners (higher is better)"),
+                                  tr("Log-likelihood per encounter (a coin: -0.693)"),
+                                  tr("Brier score: the mean of (1 - p) squared (lower is better; a coin: 0.25)"),
+                                  tr("Share of winners given more than 1/2")};
+    for (int c = 0; c < 5; ++c) foresightTable_->horizontalHeaderItem(c)->setToolTip(headerTips[c]);
+    foresightTable_->horizontalHeader()->setSectionResizeMode(QHeaderView::Stretch);
+    foresightTable_->horizontalHeader()->setSectionResizeMode(0, QHeaderView::ResizeToContents);
+    foresightTable_->verticalHeader()->hide();
+    foresightTable_->setEditTriggers(QAbstractItemView::NoEditTriggers);
+    foresightTable_->setSelectionBehavior(QAbstractItemView::SelectRows);
+    foresightTable_->setMaximumHeight(130);
+    sideLayout->addWidget(foresightTable_);
+    foresightPlot_->setMinimumHeight(170);
+    foresightPlot_->yAxis->setLabel(tr("Winners predicted"));
+    foresightPlot_->yAxis->setRange(0, 1);
+    foresightPlot_->xAxis->setLabel(tr("Year"));
+    // The legend in a row of its own under the plot, so it hides no line.
+    auto* foresightLegend = new QCPLayoutGrid;
+    foresightPlot_->plotLayout()->addElement(1, 0, foresightLegend);
+    foresightPlot_->plotLayout()->setRowStretchFactor(1, 0.001);
+    foresightLegend->addElement(0, 0, foresightPlot_->legend);
+    foresightPlot_->legend->setFillOrder(QCPLegend::foColumnsFirst);
+    foresightPlot_->legend->setVisible(true);
+    QFont small = font();
+    small.setPointSizeF(small.pointSizeF() * 0.8);
+    foresightPlot_->legend->setFont(small);
+    sideLayout->addWidget(foresightPlot_, 1);
     auto* split = new QSplitter(Qt::Horizontal, this);
     split->addWidget(plot_);
     split->addWidget(side);
@@ -133,6 +180,7 @@ void PredictionView::recompute()
     if (!document_->isOpen() || document_->colony().encounters.empty()) {
         runner_->cancel();
         adopt({}, {}, {}, {});
+        adoptForesight({});
         return;
     }
     core::InheritanceOptions options;
@@ -146,15 +194,22 @@ void PredictionView::recompute()
         const QSignalBlocker block(dateEdit_);
         dateEdit_->setDate(toQDate(*options.at));
     }
+    core::ForesightOptions foresightOptions;
+    foresightOptions.rule = rule_;
+    foresightOptions.maturityYears = settings.maturityYears;
+    foresightOptions.elo = settings.elo;
+    core::SelectionOptions record;
+    record.draws = settings.elo.draws;
     const ColonyDocument::Snapshot snapshot = document_->snapshot();
     auto colony = snapshot.colony;
     auto where = snapshot.residences;
-    runner_->start([this, colony, where, options](const std::atomic<bool>& cancel, const ComputeRunner::Progress& progress) {
+    runner_->start([this, colony, where, options, foresightOptions, record](const std::atomic<bool>& cancel,
+                                                                          const ComputeRunner::Progress& progress) {
         const core::Matrilines lines(*colony);
-        progress(0, 2);
+        progress(0, 3);
         auto p = std::make_shared<core::InheritancePrediction>(core::predictInheritance(*colony, *where, lines, options));
         if (cancel) return ComputeRunner::Apply();
-        progress(1, 2);
+        progress(1, 3);
         auto s = std::make_shared<core::DiscordanceSummary>(core::summariseDiscordance(lines, *p));
         auto palette = std::make_shared<MatrilinePalette>(lines);
         auto names = std::make_shared<std::vector<std::string>>();
@@ -171,10 +226,14 @@ void PredictionView::recompute()
                                  ? colony->animals[static_cast<size_t>(a)].name
                                  : f.animal);
         }
-        progress(2, 2);
-        return ComputeRunner::Apply([this, p, s, palette, names, lineNames] {
+        if (cancel) return ComputeRunner::Apply();
+        progress(2, 3);
+        auto f = std::make_shared<core::Foresight>(core::computeForesight(*colony, *where, record, foresightOptions));
+        progress(3, 3);
+        return ComputeRunner::Apply([this, p, s, palette, names, lineNames, f] {
             lineNames_ = *lineNames;
             adopt(std::move(*p), std::move(*s), *palette, *names);
+            adoptForesight(std::move(*f));
         });
     });
 }
@@ -214,6 +273,77 @@ void PredictionView::adopt(core::InheritancePrediction prediction, core::Discord
                 .arg(summary_.conformity ? QString::number(*summary_.conformity, 'f', 3) : tr("undefined"))
                 .arg(summary_.tauB ? QString::number(*summary_.tauB, 'f', 3) : tr("undefined")));
     rebuildPlot();
+}
+
+void PredictionView::adoptForesight(core::Foresight foresight)
+{
+    foresight_ = std::move(foresight);
+    static const QColor colours[] = {QColor(0xE6, 0x9F, 0x00), QColor(0x00, 0x72, 0xB2), QColor(0x00, 0x9E, 0x73)};
+    auto modelName = [](core::ForesightModel m) {
+        switch (m) {
+        case core::ForesightModel::Elo: return tr("Elo");
+        case core::ForesightModel::InformedElo: return tr("Rule-informed Elo");
+        case core::ForesightModel::Rule: break;
+        }
+        return tr("Rule alone");
+    };
+    foresightTable_->setRowCount(0);
+    foresightPlot_->clearGraphs();
+    double firstYear = 0, lastYear = 0;
+    for (size_t m = 0; m < std::size(core::kForesightModels); ++m) {
+        const core::ForesightModel model = core::kForesightModels[m];
+        QCPGraph* g = foresightPlot_->addGraph();
+        g->setName(modelName(model));
+        g->setPen(QPen(colours[m], 2));
+        g->setScatterStyle(QCPScatterStyle(QCPScatterStyle::ssDisc, 5));
+        for (const core::ForesightRow& r : foresight_.rows) {
+            if (r.model != model) continue;
+            const core::ForesightScore& sc = r.score;
+            if (r.year) {
+                if (sc.sharePredicted) g->addData(*r.year, *sc.sharePredicted);
+                firstYear = firstYear == 0 ? *r.year : std::min<double>(firstYear, *r.year);
+                lastYear = std::max<double>(lastYear, *r.year);
+                continue;
+            }
+            const int row = foresightTable_->rowCount();
+            foresightTable_->insertRow(row);
+            const QString cells[] = {
+                modelName(model),
+                sc.encounters ? QString::number(sc.logLikelihood, 'f', 0) : QString(),
+                sc.encounters ? QString::number(sc.logLikelihood / sc.encounters, 'f', 3) : QString(),
+                sc.brier ? QString::number(*sc.brier, 'f', 3) : QString(),
+                sc.sharePredicted ? tr("%1%").arg(*sc.sharePredicted * 100, 0, 'f', 1) : QString()};
+            for (int c = 0; c < 5; ++c) {
+                auto* item = new QTableWidgetItem(cells[c]);
+                if (c == 4) item->setToolTip(tr("%1 of %2 winners given more than 1/2").arg(sc.predicted).arg(sc.encounters));
+                if (c == 0) item->setForeground(colours[m].darker(120));
+                foresightTable_->setItem(row, c, item);
+            }
+        }
+    }
+    foresightPlot_->xAxis->setRange(firstYear - 0.5, std::max(lastYear, firstYear) + 0.5);
+    auto ticker = QSharedPointer<QCPAxisTickerFixed>::create();
+    ticker->setTickStep(1);
+    ticker->setScaleStrategy(QCPAxisTickerFixed::ssMultiples);
+    foresightPlot_->xAxis->setTicker(ticker);
+    foresightPlot_->xAxis->setNumberFormat(QStringLiteral("f"));
+    foresightPlot_->xAxis->setNumberPrecision(0);
+    foresightPlot_->replot(QCustomPlot::rpQueuedReplot);
+    if (foresight_.encounters.empty()) {
+        foresightLabel_->setText(tr("No decided encounters."));
+        return;
+    }
+    foresightLabel_->setText(
+        tr("Every decided encounter of the record, each model's chance for its winner beforehand. The %1 rule "
+           "could compare %2 of %3; the animal it places higher won %4 of them (its fitted win probability). "
+           "A coin scores %5 per encounter and a Brier score of 0.25.")
+            .arg(toQString(core::toString(foresight_.rule)))
+            .arg(foresight_.comparable)
+            .arg(foresight_.encounters.size())
+            .arg(foresight_.ruleWinProbability ? QString::number(*foresight_.ruleWinProbability * 100, 'f', 1) +
+                                                     QStringLiteral("%")
+                                               : tr("none"))
+            .arg(std::log(0.5), 0, 'f', 3));
 }
 
 void PredictionView::rebuildPlot()

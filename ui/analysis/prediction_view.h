@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
 #include "core/pedigree/discordance.h"
+#include "core/pedigree/foresight.h"
 #include "core/pedigree/inheritance_prediction.h"
 #include "ui/widgets/matriline_palette.h"
 
@@ -29,7 +30,10 @@ class ProgressStrip;
 /// Elo order in the right, a line joining each female's two places; lines of
 /// females in a discordant dyad are drawn bold, the others faint, so the
 /// crossings stand out. Below, the discordant dyads with their categories
-/// (core::summariseDiscordance).
+/// (core::summariseDiscordance), and how much the rule explains: the foresight
+/// of the rule alone, plain Elo and rule-informed Elo over the record
+/// (core::computeForesight), as a table and a plot of the share of winners
+/// each model predicted per year.
 class PredictionView : public QWidget {
     Q_OBJECT
 public:
@@ -39,6 +43,9 @@ public:
     QCustomPlot* plot() const { return plot_; }
     ComputeRunner* runner() const { return runner_; }
     QTableWidget* dyadTable() const { return dyads_; }
+    QTableWidget* foresightTable() const { return foresightTable_; }
+    QCustomPlot* foresightPlot() const { return foresightPlot_; }
+    const core::Foresight& foresight() const { return foresight_; }
     const core::InheritancePrediction& prediction() const { return prediction_; }
     const core::DiscordanceSummary& summary() const { return summary_; }
 
@@ -56,6 +63,7 @@ public slots:
 private:
     void adopt(core::InheritancePrediction prediction, core::DiscordanceSummary summary, MatrilinePalette palette,
                std::vector<std::string> names);
+    void adoptForesight(core::Foresight foresight);
     void rebuildPlot();
 
     ColonyDocument* document_;
@@ -67,10 +75,14 @@ private:
     QComboBox* ruleBox_;
     QDateEdit* dateEdit_;
     QLabel* summaryLabel_;
+    QLabel* foresightLabel_;
+    QTableWidget* foresightTable_;
+    QCustomPlot* foresightPlot_;
 
     core::SiblingRule rule_ = core::SiblingRule::Youngest;
     core::InheritancePrediction prediction_;
     core::DiscordanceSummary summary_;
+    core::Foresight foresight_;
     MatrilinePalette palette_;
     std::vector<std::string> names_; ///< display name of each female of prediction_
     std::map<std::string, std::string> lineNames_; ///< matriarch id -> name

@@ -66,6 +66,7 @@ RankTimelineView::RankTimelineView(ColonyDocument* document, AnimalSelection* se
       groupBox_(new QComboBox(this)),
       ageBox_(new QComboBox(this)),
       marksBox_(new QComboBox(this)),
+      changeBox_(new QComboBox(this)),
       slider_(new QSlider(Qt::Horizontal, this)),
       dateLabel_(new QLabel(this))
 {
@@ -73,6 +74,10 @@ RankTimelineView::RankTimelineView(ColonyDocument* document, AnimalSelection* se
     stepBox_->addItems({tr("Monthly"), tr("Weekly")});
     ageBox_->addItems({tr("All ages"), tr("Young adults (under 8)"), tr("Prime (8 to 15)"), tr("Old (16 and over)")});
     marksBox_->addItems({tr("Discordance: selected female"), tr("Discordance: all females"), tr("Discordance: none")});
+    changeBox_->setObjectName(QStringLiteral("changeColouring"));
+    changeBox_->addItems({tr("Changes: plain"), tr("Changes: active/passive")});
+    changeBox_->setToolTip(tr("Mark each change of rank between checkpoints: active (won or lost among the females "
+                              "ranked before and after), passive (females above her left or entered), or both"));
     lineBox_->addItem(tr("All matrilines"), QString());
     groupBox_->addItem(tr("All groups"), QString());
     auto* controls = new QHBoxLayout;
@@ -98,6 +103,9 @@ RankTimelineView::RankTimelineView(ColonyDocument* document, AnimalSelection* se
     dates->addWidget(new QLabel(tr("Date:"), this));
     dates->addWidget(slider_, 1);
     dates->addWidget(dateLabel_);
+    // Beside the dates (the row above is full): colour each change of rank by its kind.
+    dates->addWidget(changeBox_);
+    dates->addWidget(new HelpButton(QStringLiteral("active_passive"), this));
     dateLabel_->setMinimumWidth(90);
     auto* layout = new QVBoxLayout(this);
     layout->addLayout(controls);
@@ -138,6 +146,7 @@ RankTimelineView::RankTimelineView(ColonyDocument* document, AnimalSelection* se
     connect(groupBox_, &QComboBox::currentIndexChanged, this, [this] { setGroup(groupBox_->currentData().toString()); });
     connect(ageBox_, &QComboBox::currentIndexChanged, this, [this](int i) { setAgeClass(static_cast<AgeClass>(i)); });
     connect(marksBox_, &QComboBox::currentIndexChanged, this, [this](int i) { setMarks(static_cast<Marks>(i)); });
+    connect(changeBox_, &QComboBox::currentIndexChanged, this, [this](int i) { setChangeColouring(i == 1); });
     connect(slider_, &QSlider::valueChanged, this, [this](int k) {
         if (k >= 0 && k < static_cast<int>(timeline_.checkpoints.size()))
             selection_->setDay(timeline_.checkpoints[static_cast<size_t>(k)]);
@@ -186,6 +195,7 @@ void RankTimelineView::adopt(core::RankTimeline timeline, MatrilinePalette palet
 {
     timeline_ = std::move(timeline);
     palette_ = std::move(palette);
+    rankChanges_ = core::timelineRankChanges(timeline_);
     // Matriline and group choices, keeping the current ones where they still exist.
     {
         const QSignalBlocker block(lineBox_);
@@ -233,6 +243,7 @@ void RankTimelineView::rebuildPlot()
     plot_->clearItems();
     lines_.clear();
     events_.clear();
+    changes_.clear();
     const size_t nCheck = timeline_.checkpoints.size();
     // Legend: one entry per matriline, then the markers.
     for (int l = 0; l < palette_.lineCount(); ++l) {
@@ -290,6 +301,24 @@ void RankTimelineView::rebuildPlot()
         g->setScatterStyle(QCPScatterStyle(s.shape, QPen(Qt::black, 1.2), QBrush(Qt::white), 8));
         g->setName(tr(s.name));
         events_[s.kind] = g;
+    }
+    if (colourChanges_) {
+        const std::pair<ChangeKind, const char*> kinds[] = {
+            {ChangeKind::Active, QT_TR_NOOP("Rank change: active")},
+            {ChangeKind::Passive, QT_TR_NOOP("Rank change: passive")},
+            {ChangeKind::Both, QT_TR_NOOP("Rank change: both")}};
+        for (const auto& [kind, name] : kinds) {
+            QCPGraph* g = plot_->addGraph();
+            g->setLineStyle(QCPGraph::lsNone);
+            // Okabe-Ito vermillion, sky blue and reddish purple: told apart with any colour vision.
+            const QColor c = kind == ChangeKind::Active    ? QColor(0xD5, 0x5E, 0x00)
+                             : kind == ChangeKind::Passive ? QColor(0x56, 0xB4, 0xE9)
+                                                           : QColor(0xCC, 0x79, 0xA7);
+            g->setScatterStyle(QCPScatterStyle(QCPScatterStyle::ssCircle, QPen(c.darker(160), 0.8), QBrush(c), 6));
+            g->setName(tr(name));
+            g->setLayer(QStringLiteral("selected"));
+            changes_[kind] = g;
+        }
     }
     QCPGraph* discordKey = plot_->addGraph();
     discordKey->setLineStyle(QCPGraph::lsNone);
@@ -370,7 +399,33 @@ void RankTimelineView::applyFilters()
         }
     }
     for (auto& [kind, graph] : events_) graph->setData(events[kind].first, events[kind].second);
+    fillChangeMarks();
     plot_->replot(QCustomPlot::rpQueuedReplot);
+}
+
+void RankTimelineView::fillChangeMarks()
+{
+    if (!colourChanges_) return;
+    // The selected female's changes when one is selected, else every shown line's.
+    const QString selected = selection_->animal();
+    const bool any = lineIndexOf(selected) >= 0;
+    std::map<ChangeKind, std::pair<QVector<double>, QVector<double>>> marks;
+    std::vector<bool> shown(timeline_.females.size(), false);
+    for (const Line& line : lines_) {
+        const auto& f = timeline_.females[static_cast<size_t>(line.female)];
+        shown[static_cast<size_t>(line.female)] = line.graph->visible() && (!any || toQString(f.animal) == selected);
+    }
+    for (const core::TimelineRankChange& c : rankChanges_) {
+        if (c.change.total == 0 || !shown[static_cast<size_t>(c.female)]) continue;
+        const core::RankTimelinePoint& pt =
+            timeline_.females[static_cast<size_t>(c.female)].points[static_cast<size_t>(c.point)];
+        const std::optional<double> v = valueOf(pt);
+        if (!v) continue;
+        auto& m = marks[kindOf(c.change)];
+        m.first << keyOf(pt.day);
+        m.second << *v;
+    }
+    for (auto& [kind, graph] : changes_) graph->setData(marks[kind].first, marks[kind].second);
 }
 
 void RankTimelineView::applySelection()
@@ -391,6 +446,7 @@ void RankTimelineView::applySelection()
         // The selected line is drawn on a layer of its own, above the others.
         line.graph->setLayer(me ? QStringLiteral("selected") : QStringLiteral("main"));
     }
+    fillChangeMarks();
     plot_->replot(QCustomPlot::rpQueuedReplot);
 }
 
@@ -486,6 +542,27 @@ bool RankTimelineView::marksShown(const Line& line) const
     if (!line.marks || !line.graph->visible() || marks_ == Marks::None) return false;
     return marks_ == Marks::All ||
            toQString(timeline_.females[static_cast<size_t>(line.female)].animal) == selection_->animal();
+}
+
+void RankTimelineView::setChangeColouring(bool on)
+{
+    const QSignalBlocker block(changeBox_);
+    changeBox_->setCurrentIndex(on ? 1 : 0);
+    if (on == colourChanges_) return;
+    colourChanges_ = on;
+    rebuildPlot();
+}
+
+QCPGraph* RankTimelineView::changesOf(ChangeKind kind) const
+{
+    const auto it = changes_.find(kind);
+    return it == changes_.end() ? nullptr : it->second;
+}
+
+RankTimelineView::ChangeKind RankTimelineView::kindOf(const core::RankChange& c)
+{
+    if (c.active != 0 && c.passive != 0) return ChangeKind::Both;
+    return c.active != 0 ? ChangeKind::Active : ChangeKind::Passive;
 }
 
 void RankTimelineView::setAgeClass(AgeClass ageClass)

@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
 #include "core/pedigree/rank_timeline.h"
+#include "core/pedigree/timeline_rank_changes.h"
 #include "ui/widgets/matriline_palette.h"
 
 #include <QWidget>
@@ -39,6 +40,9 @@ public:
     /// Whose discordance markers are drawn: every female's crowd the plot, so
     /// by default only the selected female's.
     enum class Marks { Selected, All, None };
+    /// How a step of a line is coloured when rank changes are coloured
+    /// (docs/methods.md "Active and passive rank changes").
+    enum class ChangeKind { Active, Passive, Both };
 
     RankTimelineView(ColonyDocument* document, AnimalSelection* selection, QWidget* parent = nullptr);
     ~RankTimelineView() override;
@@ -56,6 +60,16 @@ public:
     void setGroup(const QString& group);
     void setAgeClass(AgeClass ageClass);
     void setMarks(Marks marks);
+    /// Marks each change of rank between checkpoints as active, passive or both
+    /// (the selected female's when one is selected, else every shown line's).
+    void setChangeColouring(bool on);
+    bool changeColouring() const { return colourChanges_; }
+    /// The markers of one kind of rank change (nullptr while changes are not coloured).
+    QCPGraph* changesOf(ChangeKind kind) const;
+    /// Every step between checkpoints of the current timeline with its split.
+    const std::vector<core::TimelineRankChange>& rankChanges() const { return rankChanges_; }
+    /// The kind of a step that changed rank (total != 0).
+    static ChangeKind kindOf(const core::RankChange& change);
 
     /// Female lines shown after the filters.
     int visibleLineCount() const;
@@ -84,6 +98,7 @@ private:
     void rebuildPlot();
     void applyFilters();
     void applySelection();
+    void fillChangeMarks();
     void showDay(core::Day day);
     void hover(QMouseEvent* event);
     void click(QMouseEvent* event);
@@ -104,10 +119,14 @@ private:
     QComboBox* groupBox_;
     QComboBox* ageBox_;
     QComboBox* marksBox_;
+    QComboBox* changeBox_;
     QSlider* slider_;
     QLabel* dateLabel_;
     QCPItemStraightLine* dayLine_ = nullptr;
     std::map<core::LifeEventKind, QCPGraph*> events_;
+    std::map<ChangeKind, QCPGraph*> changes_;
+    std::vector<core::TimelineRankChange> rankChanges_;
+    bool colourChanges_ = false;
 
     core::RankTimeline timeline_;
     MatrilinePalette palette_;

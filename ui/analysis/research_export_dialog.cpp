@@ -142,6 +142,9 @@ std::optional<core::ResearchExportOptions> ResearchExportDialog::options(QString
     // The colony's analysis settings, as the `export-tables` command uses them.
     const core::AnalysisSettings settings = documentAnalysisSettings(document_);
     o.ranks.elo = settings.elo;
+    // Elo's start rule and the foresight's sibling rule follow the colony's setting, as export-tables does.
+    if (o.ranks.method == core::RankMethod::Elo) o.ranks.startRule = settings.startRule;
+    if (settings.startRule == core::EloStartRule::Eldest) o.foresightRule = core::SiblingRule::Eldest;
     o.selection.draws = settings.elo.draws;
     const QString period = period_->currentData().toString();
     if (period == QLatin1String("custom")) {

@@ -31,6 +31,7 @@ report::HierarchyReportOptions documentReportOptions(ColonyDocument* document, c
     o.colonyName = toStdString(QFileInfo(document->path()).fileName());
     const core::AnalysisSettings settings = documentAnalysisSettings(document);
     o.elo = settings.elo;
+    o.startRule = settings.startRule;
     o.maturityYears = settings.maturityYears;
     if (const core::ColonyStore* store = document->store()) {
         o.thresholds = core::readStabilityThresholds(*store);

@@ -32,6 +32,14 @@ TEST(RankMethodRegistry, OneEntryPerMethodWithUniqueCodes)
     EXPECT_FALSE(parseRankMethod("ELO"));
 }
 
+TEST(RankMethodRegistry, OnlyEloTakesAStartRule)
+{
+    // docs/methods.md "Rule-informed Elo": an option of the Elo rating alone.
+    EXPECT_TRUE(rankMethodInfo(RankMethod::Elo).takesStartRule);
+    EXPECT_FALSE(rankMethodInfo(RankMethod::DavidsScore).takesStartRule);
+    EXPECT_FALSE(rankMethodInfo(RankMethod::Isi).takesStartRule);
+}
+
 TEST(RankMethodRegistry, EntriesAsTheProgramNamesThem)
 {
     EXPECT_EQ(rankMethodCodes(), (std::vector<std::string>{"elo", "ds", "isi"}));

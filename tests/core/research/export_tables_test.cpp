@@ -210,12 +210,12 @@ TEST(ExportTables, ResearchTablesHoldEveryTable)
     // The demo records supporters, so the four kin-support tables follow (docs/file-formats.md).
     EXPECT_EQ(names, (std::vector<std::string>{"ranks_by_period", "win_matrix", "metrics_by_period", "maternal_ranks",
                                                 "sex_ratio", "sex_ratio_by_rank_third", "discordance_by_month",
-                                                "support_pairs", "support_summary", "support_daughters",
-                                                "support_matrix"}));
-    // Without supporters the export holds the seven tables it always did.
+                                                "rank_changes", "foresight", "support_pairs", "support_summary",
+                                                "support_daughters", "support_matrix"}));
+    // Without supporters the export holds nine tables (no kin-support tables).
     Colony bare = d.colony;
     for (Encounter& e : bare.encounters) e.winnerSupport.clear(), e.loserSupport.clear();
-    EXPECT_EQ(researchTables(bare, d.where, o).size(), 7U);
+    EXPECT_EQ(researchTables(bare, d.where, o).size(), 9U);
     // The maternal table and the sex-ratio figures agree: used births = births_used.
     int used = 0;
     for (const auto& row : tables[3].rows) used += row[11] == "1";

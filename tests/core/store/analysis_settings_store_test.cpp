@@ -26,7 +26,8 @@ TEST(AnalysisSettings, DefaultsAreThoseOfMethods)
     EXPECT_EQ(s.maturityYears, 4);
     EXPECT_EQ(s.windowDays, 0);
     EXPECT_EQ(describeAnalysisSettings(s),
-              "k 100, start 1000, curve logistic, draws half, maturity 4 years, window all data");
+              "k 100, start 1000, start rule none, curve logistic, draws half, maturity 4 years, window all data");
+    EXPECT_EQ(s.startRule, EloStartRule::None);
 }
 
 TEST(AnalysisSettings, ValidationRefusesNonFiniteAndOutOfRange)
@@ -83,6 +84,7 @@ TEST(AnalysisSettingsStore, RoundTripThroughTheFile)
     s.elo.draws = DrawPolicy::Ignore;
     s.maturityYears = 6;
     s.windowDays = 365;
+    s.startRule = EloStartRule::Eldest;
     {
         ColonyStore store = ColonyStore::create(path);
         writeAnalysisSettings(store, s);
@@ -91,6 +93,7 @@ TEST(AnalysisSettingsStore, RoundTripThroughTheFile)
     EXPECT_EQ(readAnalysisSettings(again), s);
     EXPECT_EQ(again.setting(analysis_keys::kEloK), "37.5");
     EXPECT_EQ(again.setting(analysis_keys::kEloCurve), "normal");
+    EXPECT_EQ(again.setting(analysis_keys::kEloStartRule), "eldest");
     // The maturity age is the species setting's override, not a second copy.
     EXPECT_EQ(again.setting(kMaturitySettingKey), "6");
     EXPECT_EQ(readSpeciesSettings(again).maturityYears, 6);
