@@ -2,6 +2,7 @@
 // ranks, matrix and metrics: the hierarchy figures of docs/methods.md as CSV.
 #include "cli/analysis_options.h"
 #include "cli/colony_loading.h"
+#include "cli/code_help.h"
 #include "cli/commands.h"
 
 #include "core/ranks/hierarchy_metrics.h"
@@ -156,6 +157,10 @@ void addMatrixCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
 void addMetricsCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
 {
     auto* cmd = app.add_subcommand("metrics", "linearity, steepness, transitivity and other hierarchy figures");
+    cmd->footer(codesHelp(core::CodeKind::Metric,
+                          {"animals", "encounters", "dyads", "known_dyads", "unknown_share", "landau_h", "h_prime",
+                           "h_prime_p", "dci", "steepness", "steepness_p", "ttri", "ttri_p", "elo_k_optimal",
+                           "elo_loglik", "seed", "randomisations"}));
     struct Options {
         std::string colony;
         WindowOptions window;
