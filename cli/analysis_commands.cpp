@@ -114,7 +114,7 @@ void addMatrixCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
         std::string colony;
         WindowOptions window;
         AnalysisOverrides analysis;
-        std::string order = "isi";
+        std::string order = rankMethodInfo(kDefaultMatrixOrder).code;
     };
     auto o = std::make_shared<Options>();
     cmd->add_option("COLONY_FILE", o->colony, "the colony file")->required();
@@ -122,7 +122,8 @@ void addMatrixCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
     std::vector<std::string> orders = rankMethodCodes();
     orders.push_back("id");
     cmd->add_option("--order", o->order,
-                    "order of rows and columns: " + rankMethodChoicesText() + ", or id (default: isi)")
+                    "order of rows and columns: " + rankMethodChoicesText() + ", or id (default: " +
+                        rankMethodInfo(kDefaultMatrixOrder).code + ")")
         ->check(CLI::IsMember(orders));
     addEloOptions(*cmd, o->analysis, "--order elo: ");
     cmd->add_option("--out", ctx.outFile, "write the CSV to this file instead of standard output");

@@ -20,6 +20,10 @@ struct RankMethodInfo {
     bool hasScore;           ///< ranks come with a score (the rank table's score column)
 };
 
+/// The default order of the win matrix, in the `matrix` command and the
+/// desktop's Matrix view alike.
+constexpr RankMethod kDefaultMatrixOrder = RankMethod::Isi;
+
 /// Every rank method, in the order offered (the default first).
 const std::vector<RankMethodInfo>& rankMethods();
 

@@ -168,33 +168,6 @@ TEST(HierarchyPlotsView, OneGroupOrAll)
     }
 }
 
-TEST(PlotExport, PublicationSizedPngAndPdf)
-{
-    DemoDocument demo;
-    ui::HierarchyPlotsView view(demo.document());
-    finish(view.runner());
-    TempDir dir;
-    const QString png = QString::fromStdString(dir.file("h.png")), pdf = QString::fromStdString(dir.file("h.pdf"));
-    ASSERT_TRUE(ui::exportPng(view.plot(), png));
-    const QImage image(png);
-    // 180 mm at 300 dpi = 2126 px; laid out at 96 dpi (680 px) and scaled by 300/96.
-    EXPECT_NEAR(image.width(), 2126, 2);
-    EXPECT_NEAR(image.height(), 1417, 2); // 120 mm
-    EXPECT_NEAR(image.dotsPerMeterX(), 300 / 0.0254, 2);
-    ASSERT_TRUE(ui::exportPdf(view.plot(), pdf));
-    QFile file(pdf);
-    ASSERT_TRUE(file.open(QIODevice::ReadOnly));
-    const QByteArray bytes = file.readAll();
-    EXPECT_TRUE(bytes.startsWith("%PDF"));
-    // The page is 180 x 120 mm = 510.2 x 340.2 points.
-    const QRegularExpression box(QStringLiteral("/MediaBox \\[0 0 ([0-9.]+) ([0-9.]+)\\]"));
-    const auto match = box.match(QString::fromLatin1(bytes));
-    ASSERT_TRUE(match.hasMatch());
-    EXPECT_NEAR(match.captured(1).toDouble(), 510.2, 1);
-    EXPECT_NEAR(match.captured(2).toDouble(), 340.2, 1);
-    EXPECT_TRUE(view.plot()->legend->visible());
-}
-
 TEST(MainWindowViews, PlotTabsOpenByName)
 {
     DemoDocument demo;

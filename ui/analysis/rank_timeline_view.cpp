@@ -8,6 +8,7 @@
 #include "ui/document/visible_refresh.h"
 #include "ui/document/compute_runner.h"
 #include "ui/analysis/pedigree_view.h"
+#include "ui/widgets/figure_caption.h"
 #include "ui/widgets/plot_export.h"
 #include "ui/widgets/progress_strip.h"
 #include "ui/document/qt_convert.h"
@@ -86,7 +87,22 @@ RankTimelineView::RankTimelineView(ColonyDocument* document, AnimalSelection* se
     controls->addWidget(marksBox_);
     controls->addWidget(progress_, 1);
     controls->addStretch();
-    controls->addWidget(makeExportButton(plot_, QStringLiteral("rank-timeline"), this));
+    PlotFigure figure;
+    figure.plot = plot_;
+    figure.baseName = QStringLiteral("rank-timeline");
+    figure.title = tr("Ranks over time");
+    figure.singleHeightMm = 100;
+    figure.doubleHeightMm = 130;
+    figure.caption = [this] {
+        std::optional<core::Day> from, to;
+        if (!timeline_.checkpoints.empty()) {
+            from = timeline_.checkpoints.front();
+            to = timeline_.checkpoints.back();
+        }
+        return caption::join({caption::group(group_), caption::window(from, to), stepBox_->currentText().toLower(),
+                              caption::elo(documentAnalysisSettings(document_).elo)});
+    };
+    controls->addWidget(makeExportButton(figure, this));
 
     auto* split = new QSplitter(Qt::Horizontal, this);
     split->addWidget(plot_);

@@ -68,6 +68,15 @@ QString wrapped(const QString& text, const QFont& font, double width)
     return lines.join(QLatin1Char('\n'));
 }
 
+/// The legend's items (a wrapped legend's grid may hold empty cells).
+std::vector<QCPAbstractLegendItem*> legendItems(QCPLegend* legend)
+{
+    std::vector<QCPAbstractLegendItem*> out;
+    for (int i = 0; i < legend->itemCount(); ++i)
+        if (QCPAbstractLegendItem* item = legend->item(i)) out.push_back(item);
+    return out;
+}
+
 void layOut(QCustomPlot* plot, const QRect& viewport)
 {
     plot->setViewport(viewport);
@@ -121,13 +130,13 @@ public:
             const QSize icon = legend->iconSize();
             later([legend, font, wrap, icon] {
                 legend->setFont(font);
-                for (int i = 0; i < legend->itemCount(); ++i) legend->item(i)->setFont(font);
+                for (QCPAbstractLegendItem* item : legendItems(legend)) item->setFont(font);
                 legend->setIconSize(icon);
                 legend->setWrap(wrap);
                 legend->setFillOrder(legend->fillOrder(), true);
             });
             legend->setFont(printFont(tickPx));
-            for (int i = 0; i < legend->itemCount(); ++i) legend->item(i)->setFont(printFont(tickPx));
+            for (QCPAbstractLegendItem* item : legendItems(legend)) item->setFont(printFont(tickPx));
             legend->setIconSize(18, 9);
             fitLegend(legend, viewport.width() - 8);
         }
@@ -176,13 +185,15 @@ private:
     /// The most legend columns whose widest entries fit in `width`.
     static void fitLegend(QCPLegend* legend, int width)
     {
-        const int n = legend->itemCount();
+        const std::vector<QCPAbstractLegendItem*> items = legendItems(legend);
+        const int n = static_cast<int>(items.size());
         if (n == 0) return;
         for (int columns = n; columns >= 1; --columns) {
             std::vector<int> widest(static_cast<size_t>(columns), 0);
             for (int i = 0; i < n; ++i)
                 widest[static_cast<size_t>(i % columns)] =
-                    std::max(widest[static_cast<size_t>(i % columns)], legend->item(i)->minimumOuterSizeHint().width());
+                    std::max(widest[static_cast<size_t>(i % columns)],
+                             items[static_cast<size_t>(i)]->minimumOuterSizeHint().width());
             int total = legend->margins().left() + legend->margins().right() + (columns - 1) * legend->columnSpacing();
             for (int w : widest) total += w;
             if (total <= width || columns == 1) {
@@ -202,12 +213,17 @@ private:
                 QSharedPointer<QCPAxisTicker> ticker = a->ticker();
                 if (!ticker || ticker.dynamicCast<QCPAxisTickerText>()) continue;
                 const int count = ticker->tickCount();
+                const QCPAxisTicker::TickStepStrategy strategy = ticker->tickStepStrategy();
                 const bool vertical = a->orientation() == Qt::Vertical;
-                const double room = vertical ? rect->height() / (2.2 * line) : rect->width() / (6.5 * line);
+                const double room = vertical ? rect->height() / (2.5 * line) : rect->width() / (6.5 * line);
                 const int wanted = std::clamp(static_cast<int>(room), 2, std::max(2, count));
                 if (wanted == count) continue;
-                later([ticker, count] { ticker->setTickCount(count); });
+                later([ticker, count, strategy] {
+                    ticker->setTickCount(count);
+                    ticker->setTickStepStrategy(strategy);
+                });
                 ticker->setTickCount(wanted);
+                ticker->setTickStepStrategy(QCPAxisTicker::tssMeetTickCount);
             }
     }
 
@@ -312,37 +328,37 @@ void copyFigure(const PlotFigure& figure, const FigureSize& size)
     QApplication::clipboard()->setImage(figureImage(figure, size));
 }
 
-QToolButton* makeExportButton(const PlotFigure& figure, QWidget* parent)
+FigureExportButton::FigureExportButton(PlotFigure figure, QWidget* parent) : QToolButton(parent), figure_(std::move(figure))
 {
-    followPlotPalette(figure.plot);
-    auto* button = new QToolButton(parent);
-    button->setObjectName(QStringLiteral("exportFigure"));
-    button->setText(QObject::tr("Export"));
-    button->setToolTip(QObject::tr("Save the plot as a journal figure (one column, 85 mm, or two columns, 175 mm; "
-                                   "PNG at 300 dpi, SVG or PDF), with a caption line, or copy it"));
-    button->setPopupMode(QToolButton::InstantPopup);
-    auto* menu = new QMenu(button);
-    auto save = [figure, parent](bool doubleColumn) {
-        const QString png = QObject::tr("PNG image, 300 dpi (*.png)"), svg = QObject::tr("SVG drawing (*.svg)"),
-                      pdf = QObject::tr("PDF document (*.pdf)");
-        QString chosen = png;
-        const QString suggested = exportFolder() + QLatin1Char('/') + figure.baseName +
-                                  (doubleColumn ? QStringLiteral("-175mm.png") : QStringLiteral("-85mm.png"));
-        QString path = QFileDialog::getSaveFileName(parent, QObject::tr("Export Figure"), suggested,
-                                                    QStringList{png, svg, pdf}.join(QStringLiteral(";;")), &chosen);
-        if (path.isEmpty()) return;
-        if (!figureFormatOf(path))
-            path += chosen == svg ? QStringLiteral(".svg") : chosen == pdf ? QStringLiteral(".pdf") : QStringLiteral(".png");
-        QSettings().setValue(QStringLiteral("plotExportFolder"), QFileInfo(path).absolutePath());
-        if (!exportFigure(figure, path, figure.size(doubleColumn)))
-            QMessageBox::warning(parent, QObject::tr("Export Failed"),
-                                 QObject::tr("%1 could not be written.").arg(QDir::toNativeSeparators(path)));
-    };
-    menu->addAction(QObject::tr("One-Column Figure (85 mm)..."), button, [save] { save(false); });
-    menu->addAction(QObject::tr("Two-Column Figure (175 mm)..."), button, [save] { save(true); });
-    menu->addAction(QObject::tr("&Copy to Clipboard"), button, [figure] { copyFigure(figure, figure.size(true)); });
-    button->setMenu(menu);
-    return button;
+    followPlotPalette(figure_.plot);
+    setObjectName(QStringLiteral("exportFigure"));
+    setText(tr("Export"));
+    setToolTip(tr("Save the plot as a journal figure (one column, 85 mm, or two columns, 175 mm; PNG at 300 dpi, "
+                  "SVG or PDF) with a caption line naming group, window, method and parameters, or copy it"));
+    setPopupMode(QToolButton::InstantPopup);
+    auto* menu = new QMenu(this);
+    menu->addAction(tr("One-Column Figure (85 mm)..."), this, [this] { save(false); });
+    menu->addAction(tr("Two-Column Figure (175 mm)..."), this, [this] { save(true); });
+    menu->addAction(tr("&Copy to Clipboard"), this, [this] { copyFigure(figure_, figure_.size(true)); });
+    setMenu(menu);
 }
+
+void FigureExportButton::save(bool doubleColumn)
+{
+    const QString png = tr("PNG image, 300 dpi (*.png)"), svg = tr("SVG drawing (*.svg)"), pdf = tr("PDF document (*.pdf)");
+    QString chosen = png;
+    const QString suggested = exportFolder() + QLatin1Char('/') + figure_.baseName +
+                              (doubleColumn ? QStringLiteral("-175mm.png") : QStringLiteral("-85mm.png"));
+    QString path = QFileDialog::getSaveFileName(this, tr("Export Figure"), suggested,
+                                                QStringList{png, svg, pdf}.join(QStringLiteral(";;")), &chosen);
+    if (path.isEmpty()) return;
+    if (!figureFormatOf(path))
+        path += chosen == svg ? QStringLiteral(".svg") : chosen == pdf ? QStringLiteral(".pdf") : QStringLiteral(".png");
+    QSettings().setValue(QStringLiteral("plotExportFolder"), QFileInfo(path).absolutePath());
+    if (!exportFigure(figure_, path, figure_.size(doubleColumn)))
+        QMessageBox::warning(this, tr("Export Failed"), tr("%1 could not be written.").arg(QDir::toNativeSeparators(path)));
+}
+
+QToolButton* makeExportButton(const PlotFigure& figure, QWidget* parent) { return new FigureExportButton(figure, parent); }
 
 } // namespace hierloom::ui

@@ -1,13 +1,13 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
 #include <QString>
+#include <QToolButton>
 
 #include <functional>
 #include <optional>
 
 class QCPPainter;
 class QCustomPlot;
-class QToolButton;
 class QWidget;
 
 namespace hierloom::ui {
@@ -66,9 +66,20 @@ bool exportFigure(const PlotFigure& figure, const QString& path, const FigureSiz
 /// Puts the figure on the clipboard as an image of `size`.
 void copyFigure(const PlotFigure& figure, const FigureSize& size);
 
-/// A tool button with a menu: one-column figure, two-column figure (each as
-/// PNG, SVG or PDF by the chosen file type) and Copy. It also makes the plot
-/// follow the light/dark palette on screen.
+/// The Export button of a plot: a menu with a one-column figure, a two-column
+/// figure (each as PNG, SVG or PDF by the chosen file type) and Copy. It also
+/// makes the plot follow the light/dark palette on screen.
+class FigureExportButton : public QToolButton {
+    Q_OBJECT
+public:
+    FigureExportButton(PlotFigure figure, QWidget* parent);
+    const PlotFigure& figure() const { return figure_; }
+
+private:
+    void save(bool doubleColumn);
+    PlotFigure figure_;
+};
+
 QToolButton* makeExportButton(const PlotFigure& figure, QWidget* parent);
 
 } // namespace hierloom::ui

@@ -53,7 +53,8 @@ void applyPlotColours(QCustomPlot* plot, const PlotColours& c)
         border.setColor(c.axis);
         legend->setBorderPen(border);
         legend->setTextColor(c.text);
-        for (int i = 0; i < legend->itemCount(); ++i) legend->item(i)->setTextColor(c.text);
+        for (int i = 0; i < legend->itemCount(); ++i)
+            if (QCPAbstractLegendItem* item = legend->item(i)) item->setTextColor(c.text);
     }
     for (QCPLayoutElement* e : plot->plotLayout()->elements(true))
         if (auto* text = qobject_cast<QCPTextElement*>(e)) text->setTextColor(c.text);
