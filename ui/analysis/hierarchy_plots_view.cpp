@@ -54,8 +54,8 @@ HierarchyPlotsView::HierarchyPlotsView(ColonyDocument* document, QWidget* parent
     figure.plot = plot_;
     figure.baseName = QStringLiteral("hierarchy-by-month");
     figure.title = tr("The hierarchy month by month");
-    figure.singleHeightMm = 125;
-    figure.doubleHeightMm = 150;
+    figure.singleHeightMm = 170;
+    figure.doubleHeightMm = 170;
     figure.caption = [this] {
         const core::AnalysisSettings settings = documentAnalysisSettings(document_);
         std::optional<core::Day> from, to;

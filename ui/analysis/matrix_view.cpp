@@ -50,12 +50,11 @@ QString labelText(const std::string& name)
     return full.size() > 14 ? full.left(13) + QChar(0x2026) : full;
 }
 
-/// Every `step`-th of the n animal labels (0, step, 2 step...), plus the header at `headerAt`.
-QMap<double, QString> thinned(const QStringList& labels, int step, double headerAt, const QString& header)
+/// Every `step`-th of the n labels (0, step, 2 step...).
+QMap<double, QString> thinned(const QStringList& labels, int step)
 {
     QMap<double, QString> ticks;
     for (int i = 0; i < labels.size(); i += step) ticks.insert(i, labels[i]);
-    ticks.insert(headerAt, header);
     return ticks;
 }
 
@@ -153,11 +152,19 @@ MatrixView::MatrixView(ColonyDocument* document, QWidget* parent)
 
     plot_->yAxis->setRangeReversed(true);
     plot_->xAxis2->setVisible(true);
-    plot_->xAxis->setTickLabels(false);
     plot_->xAxis2->setTickLabelRotation(-90);
     plot_->xAxis2->setLabel(tr("Loser"));
     plot_->yAxis->setLabel(tr("Winner"));
-    for (QCPAxis* a : {plot_->xAxis, plot_->xAxis2, plot_->yAxis}) {
+    // Totals as the labels of the other two sides, laid out (and thinned) like the names.
+    plot_->yAxis2->setVisible(true);
+    plot_->yAxis2->setRangeReversed(true);
+    plot_->yAxis2->setLabel(tr("Won (row total)"));
+    plot_->xAxis->setTickLabels(true);
+    plot_->xAxis->setTickLabelRotation(-90);
+    plot_->xAxis->setLabel(tr("Lost (column total)"));
+    connect(plot_->yAxis, qOverload<const QCPRange&>(&QCPAxis::rangeChanged), plot_->yAxis2,
+            qOverload<const QCPRange&>(&QCPAxis::setRange));
+    for (QCPAxis* a : {plot_->xAxis, plot_->xAxis2, plot_->yAxis, plot_->yAxis2}) {
         a->grid()->setVisible(false);
         a->setSubTicks(false);
     }
@@ -392,7 +399,6 @@ void MatrixView::rebuildPlot()
     };
     rowTotals_.clear();
     columnTotals_.clear();
-    cellCounts_.clear();
     double all = 0;
     for (int i = 0; i < n; ++i) {
         double won = 0, lost = 0;
@@ -401,11 +407,8 @@ void MatrixView::rebuildPlot()
             lost += matrix_.s(j, i);
         }
         all += won;
-        rowTotals_ << text(n - 0.2, i, countText(won), Qt::AlignLeft | Qt::AlignVCenter);
-        // Column totals turned upright so wide numbers of neighbouring columns do not collide.
-        QCPItemText* t = text(i, n - 0.2, countText(lost), Qt::AlignRight | Qt::AlignVCenter);
-        t->setRotation(-90);
-        columnTotals_ << t;
+        rowTotals_ << countText(won);
+        columnTotals_ << countText(lost);
     }
     if (n <= 40) // larger matrices: the counts are in the hover text
         for (int i = 0; i < n; ++i)
@@ -416,13 +419,13 @@ void MatrixView::rebuildPlot()
     // the headers of the totals are ticks of their own, so no axis line crosses them.
     QFont tickFont = font();
     tickFont.setPointSizeF(tickFont.pointSizeF() * 0.85);
-    for (QCPAxis* a : {plot_->xAxis, plot_->xAxis2, plot_->yAxis}) {
+    for (QCPAxis* a : {plot_->xAxis, plot_->xAxis2, plot_->yAxis, plot_->yAxis2}) {
         a->setTicker(QSharedPointer<QCPAxisTickerText>::create());
         a->setTickLabelFont(tickFont);
     }
-    plot_->xAxis->setRange(-1.5, n + 2);
-    plot_->xAxis2->setRange(-1.5, n + 2);
-    plot_->yAxis->setRange(-1.5, n + 3.5);
+    plot_->xAxis->setRange(-1.5, n - 0.5);
+    plot_->xAxis2->setRange(-1.5, n - 0.5);
+    plot_->yAxis->setRange(-1.5, n - 0.5);
     connect(plot_->xAxis, qOverload<const QCPRange&>(&QCPAxis::rangeChanged), plot_->xAxis2,
             qOverload<const QCPRange&>(&QCPAxis::setRange), Qt::UniqueConnection);
     plot_->legend->setVisible(true);
@@ -456,12 +459,11 @@ void MatrixView::relabel()
     auto set = [](QCPAxis* axis, const QMap<double, QString>& ticks) {
         if (auto t = axis->ticker().dynamicCast<QCPAxisTickerText>()) t->setTicks(ticks);
     };
-    set(plot_->yAxis, thinned(labels, rowStep_, n + 0.8, tr("Lost")));
-    set(plot_->xAxis2, thinned(labels, columnStep_, n + 0.5, tr("Won")));
-    set(plot_->xAxis, {});
-    // Totals only where their row or column is labelled; counts only in cells wide enough for them.
-    for (int i = 0; i < rowTotals_.size(); ++i) rowTotals_[i]->setVisible(i % rowStep_ == 0);
-    for (int i = 0; i < columnTotals_.size(); ++i) columnTotals_[i]->setVisible(i % columnStep_ == 0);
+    set(plot_->yAxis, thinned(labels, rowStep_));
+    set(plot_->xAxis2, thinned(labels, columnStep_));
+    // Totals where their row or column is labelled; counts only in cells wide enough for them.
+    set(plot_->yAxis2, thinned(rowTotals_, rowStep_));
+    set(plot_->xAxis, thinned(columnTotals_, columnStep_));
     const double cellWidth = std::abs(plot_->xAxis->coordToPixel(1) - plot_->xAxis->coordToPixel(0));
     const double cellHeight = std::abs(plot_->yAxis->coordToPixel(1) - plot_->yAxis->coordToPixel(0));
     for (QCPItemText* t : cellCounts_) {
@@ -489,8 +491,8 @@ QStringList MatrixView::columnLabels() const
 void MatrixView::fitAll()
 {
     const int n = matrix_.n;
-    plot_->xAxis->setRange(-1.5, n + 2);
-    plot_->yAxis->setRange(-1.5, n + 3.5);
+    plot_->xAxis->setRange(-1.5, n - 0.5);
+    plot_->yAxis->setRange(-1.5, n - 0.5);
     plot_->replot(QCustomPlot::rpQueuedReplot);
 }
 

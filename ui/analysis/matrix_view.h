@@ -63,11 +63,11 @@ public:
     QString describeCell(int row, int column) const;
     /// The hover text of a row or column label: the animal's full name and id.
     QString describeAnimal(int index) const;
-    /// Label positions shown on the left (row) axis after thinning: every
-    /// k-th animal when the rows are too close for every name, plus the
-    /// "Lost" header.
+    /// Names shown on the left (row) axis after thinning: every k-th animal
+    /// when the rows are too close for every name. The right axis shows the
+    /// same rows' totals won, the bottom axis the columns' totals lost.
     QStringList rowLabels() const;
-    /// The same for the top (column) axis, with the "Won" header.
+    /// The same for the top (column) axis.
     QStringList columnLabels() const;
     /// The method box (its items are drawn as plain text: "I&SI").
     QComboBox* methodBox() const { return methodBox_; }
@@ -112,7 +112,8 @@ private:
     MatrilinePalette palette_;
     QCPGraph* marks_ = nullptr;
     int boundaries_ = 0;
-    QList<QCPItemText*> rowTotals_, columnTotals_, cellCounts_;
+    QStringList rowTotals_, columnTotals_; ///< wins per row, losses per column, as shown
+    QList<QCPItemText*> cellCounts_;
     int rowStep_ = 1, columnStep_ = 1; ///< every k-th label shown
 };
 

@@ -25,6 +25,8 @@
 
 #include <qcustomplot.h>
 
+#include <algorithm>
+
 namespace hierloom::ui {
 
 namespace {
@@ -64,8 +66,10 @@ PredictionView::PredictionView(ColonyDocument* document, AnimalSelection* select
     figure.plot = plot_;
     figure.baseName = QStringLiteral("predicted-vs-observed");
     figure.title = tr("Predicted and observed order of the females");
-    figure.singleHeightMm = 120;
-    figure.doubleHeightMm = 150;
+    // One printed line (about 3.6 mm) per ranked female, plus title, axis and caption.
+    figure.height = [this](bool doubleColumn) {
+        return std::max(doubleColumn ? 110.0 : 90.0, 45.0 + 3.6 * static_cast<double>(prediction_.females.size()));
+    };
     figure.caption = [this] {
         const core::AnalysisSettings settings = documentAnalysisSettings(document_);
         return caption::join({tr("on %1").arg(formatDay(prediction_.at)),

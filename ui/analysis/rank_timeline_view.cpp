@@ -143,6 +143,9 @@ RankTimelineView::RankTimelineView(ColonyDocument* document, AnimalSelection* se
     QFont legendFont = font();
     legendFont.setPointSizeF(legendFont.pointSizeF() * 0.85);
     plot_->legend->setFont(legendFont);
+    // A long legend (many matrilines) takes a second column rather than being cut at the bottom.
+    connect(plot_, &QCustomPlot::beforeReplot, this,
+            [this] { fitLegendToHeight(plot_->legend, plot_->axisRect()->outerRect().height()); });
     plot_->setMouseTracking(true);
     plot_->addLayer(QStringLiteral("selected"), plot_->layer(QStringLiteral("main")), QCustomPlot::limAbove);
     plot_->setMinimumWidth(400);

@@ -409,7 +409,7 @@ void SexRatioView::showPlot()
         auto* count = new QCPItemText(plot_);
         count->position->setCoords(k + 1, 0.97);
         count->setPositionAlignment(Qt::AlignHCenter | Qt::AlignTop);
-        count->setText(tr("%1 sons / %2 births").arg(t.sons).arg(t.births));
+        count->setText(tr("%1 sons\n%2 births").arg(t.sons).arg(t.births));
         if (!t.proportion) continue; // no births in this third: nothing to draw
         x << k + 1;
         y << *t.proportion;

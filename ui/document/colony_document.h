@@ -90,6 +90,9 @@ signals:
     void writeFailed(const QString& message);
     /// The undo history was emptied; `reason` says why, for the status bar.
     void historyCleared(const QString& reason);
+    /// An edit was undone (`undone` true) or redone; `text` is the edit's name
+    /// ("Enter NC004 over NC012"), for the status bar.
+    void historyStepped(bool undone, const QString& text);
 
 private:
     // The writers: the facade and the undo commands reach the store and the

@@ -127,28 +127,41 @@ public:
         if (QCPLegend* legend = plot->legend) {
             const QFont font = legend->font();
             const int wrap = legend->wrap();
+            const QCPLayoutGrid::FillOrder order = legend->fillOrder();
             const QSize icon = legend->iconSize();
-            later([legend, font, wrap, icon] {
+            later([legend, font, wrap, icon, order] {
                 legend->setFont(font);
                 for (QCPAbstractLegendItem* item : legendItems(legend)) item->setFont(font);
                 legend->setIconSize(icon);
                 legend->setWrap(wrap);
-                legend->setFillOrder(legend->fillOrder(), true);
+                legend->setFillOrder(order, true);
             });
             legend->setFont(printFont(tickPx));
             for (QCPAbstractLegendItem* item : legendItems(legend)) item->setFont(printFont(tickPx));
             legend->setIconSize(18, 9);
-            fitLegend(legend, viewport.width() - 8);
+            // A legend beside the plot (a layout of several columns) lists its entries one under another.
+            if (plot->plotLayout()->columnCount() > 1) {
+                legend->setWrap(1);
+                legend->setFillOrder(QCPLayoutGrid::foColumnsFirst, true);
+            } else {
+                fitLegend(legend, viewport.width() - 8);
+            }
         }
-        const double lineWidth = viewport.width() - 12;
-        if (!figure.title.isEmpty())
-            addLine(0, wrapped(figure.title, printFont(titlePx, true), lineWidth), printFont(titlePx, true));
-        addLine(plot->plotLayout()->rowCount(), wrapped(figureCaption(figure), printFont(tickPx), lineWidth),
-                printFont(tickPx));
+        // First wrapped to the first column's share of the page, then to the width that column got.
+        const double lineWidth = (viewport.width() - 12.0) / std::max(1, plot->plotLayout()->columnCount());
+        if (!figure.title.isEmpty()) addLine(0, figure.title, printFont(titlePx, true), lineWidth);
+        addLine(plot->plotLayout()->rowCount(), figureCaption(figure), printFont(tickPx), lineWidth);
 
         layOut(plot, viewport);
+        for (size_t i = 0; i < lines_.size(); ++i)
+            lines_[i]->setText(wrapped(texts_[i], lines_[i]->font(), lines_[i]->outerRect().width() - 12.0));
+        layOut(plot, viewport);
         fitTickCounts();
-        if (figure.preparePrint) figure.preparePrint();
+        // Twice: what the view hides or thins changes the margins, and so the room it judged by.
+        for (int pass = 0; pass < 2 && figure.preparePrint; ++pass) {
+            figure.preparePrint();
+            layOut(plot, viewport);
+        }
         layOut(plot, viewport);
     }
 
@@ -170,11 +183,12 @@ public:
 private:
     void later(std::function<void()> undo) { undo_.push_back(std::move(undo)); }
 
-    void addLine(int row, const QString& text, const QFont& font)
+    void addLine(int row, const QString& text, const QFont& font, double width)
     {
         QCPLayoutGrid* layout = plot_->plotLayout();
         layout->insertRow(row);
-        auto* line = new QCPTextElement(plot_, text, font);
+        auto* line = new QCPTextElement(plot_, wrapped(text, font, width), font);
+        texts_.push_back(text);
         line->setTextColor(Qt::black);
         line->setMargins(QMargins(4, 3, 4, 3));
         layout->addElement(row, 0, line);
@@ -232,7 +246,25 @@ private:
     QRect oldViewport_;
     std::vector<std::function<void()>> undo_;
     std::vector<QCPTextElement*> lines_;
+    QStringList texts_; ///< the lines' texts before wrapping
 };
+
+} // namespace
+
+void fitLegendToHeight(QCPLegend* legend, int height)
+{
+    const std::vector<QCPAbstractLegendItem*> items = legendItems(legend);
+    if (items.empty() || height <= 0) return;
+    int itemHeight = 1;
+    for (QCPAbstractLegendItem* item : items) itemHeight = std::max(itemHeight, item->minimumOuterSizeHint().height());
+    const int room = height - legend->margins().top() - legend->margins().bottom();
+    const int perColumn = std::max(1, (room + legend->rowSpacing()) / (itemHeight + legend->rowSpacing()));
+    if (legend->fillOrder() == QCPLayoutGrid::foRowsFirst && legend->wrap() == perColumn) return;
+    legend->setWrap(perColumn);
+    legend->setFillOrder(QCPLayoutGrid::foRowsFirst, true);
+}
+
+namespace {
 
 QString exportFolder()
 {
@@ -263,7 +295,8 @@ QImage figureImage(const PlotFigure& figure, const FigureSize& size)
 
 FigureSize PlotFigure::size(bool doubleColumn, int dpi) const
 {
-    return doubleColumn ? FigureSize{kDoubleColumnMm, doubleHeightMm, dpi} : FigureSize{kSingleColumnMm, singleHeightMm, dpi};
+    const double h = height ? height(doubleColumn) : doubleColumn ? doubleHeightMm : singleHeightMm;
+    return {doubleColumn ? kDoubleColumnMm : kSingleColumnMm, h, dpi};
 }
 
 std::optional<FigureFormat> figureFormatOf(const QString& path)

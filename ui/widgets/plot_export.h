@@ -6,6 +6,7 @@
 #include <functional>
 #include <optional>
 
+class QCPLegend;
 class QCPPainter;
 class QCustomPlot;
 class QWidget;
@@ -39,6 +40,9 @@ struct PlotFigure {
     /// size, before the second layout and the drawing: the view may hide what
     /// cannot be read at that size (everything it changes is put back after).
     std::function<void()> preparePrint;
+    /// When set, the height in mm at one or two columns (true), for plots
+    /// whose height follows what they show (one line per animal).
+    std::function<double(bool doubleColumn)> height;
 
     FigureSize size(bool doubleColumn, int dpi = 300) const;
 };
@@ -81,5 +85,10 @@ private:
 };
 
 QToolButton* makeExportButton(const PlotFigure& figure, QWidget* parent);
+
+/// Arranges a legend beside a plot in as many columns as it needs so that no
+/// entry falls below `height` pixels (the plot's height): a long legend is
+/// never clipped.
+void fitLegendToHeight(QCPLegend* legend, int height);
 
 } // namespace hierloom::ui
