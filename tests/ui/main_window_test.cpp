@@ -9,6 +9,7 @@
 #include "ui/records/animal_table_model.h"
 #include "ui/records/animal_view.h"
 #include "ui/document/colony_document.h"
+#include "ui/document/colony_edit_facade.h"
 #include "ui/records/encounter_table_model.h"
 #include "ui/records/encounter_view.h"
 #include "ui/shell/import_dialog.h"

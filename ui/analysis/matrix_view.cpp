@@ -466,6 +466,15 @@ void MatrixView::relabel()
     set(plot_->xAxis, thinned(columnTotals_, columnStep_));
     const double cellWidth = std::abs(plot_->xAxis->coordToPixel(1) - plot_->xAxis->coordToPixel(0));
     const double cellHeight = std::abs(plot_->yAxis->coordToPixel(1) - plot_->yAxis->coordToPixel(0));
+    // Crosses no larger than the cells (a figure's cells can be a few pixels).
+    if (marks_) {
+        QCPScatterStyle style = marks_->scatterStyle();
+        style.setSize(std::clamp(std::min(cellWidth, cellHeight) * 0.7, 1.5, 9.0));
+        QPen pen = style.pen();
+        pen.setWidthF(std::clamp(std::min(cellWidth, cellHeight) * 0.15, 0.4, 1.3));
+        style.setPen(pen);
+        marks_->setScatterStyle(style);
+    }
     for (QCPItemText* t : cellCounts_) {
         const QFontMetricsF m(t->font());
         t->setVisible(m.horizontalAdvance(t->text()) + 2 <= cellWidth && m.height() <= cellHeight);
