@@ -140,8 +140,11 @@ MatrixView::MatrixView(ColonyDocument* document, QWidget* parent)
                                       : QCoreApplication::translate("hierloom::core::DisplayName", "animal id");
         return caption::join({caption::group(group_), caption::window(toDay(fromEdit_->date()), toDay(toEdit_->date())),
                               tr("ordered by %1").arg(order), tr("%1 animals").arg(matrix_.n),
-                              tr("crosses: wins against the order; names thinned to every %1th where rows are narrow")
-                                  .arg(std::max(rowStep_, columnStep_))});
+                              tr("crosses: wins against the order"),
+                              std::max(rowStep_, columnStep_) > 1
+                                  ? tr("one name (and total) in %1 shown where rows are narrow")
+                                        .arg(std::max(rowStep_, columnStep_))
+                                  : QString()});
     };
     figure.preparePrint = [this] { relabel(); };
     controls->addWidget(makeExportButton(figure, this));

@@ -404,18 +404,19 @@ void SexRatioView::showPlot()
     half->point1->setCoords(0, 0.5);
     half->point2->setCoords(1, 0.5);
     half->setPen(QPen(Qt::gray, 1, Qt::DashLine));
+    // The counts under each third's name, where no point or interval can cover them.
+    const QString names[] = {tr("Low\n(rel. rank < 1/3)"), tr("Middle\n(1/3 to < 2/3)"), tr("High\n(2/3 and above)")};
+    auto ticker = QSharedPointer<QCPAxisTickerText>::create();
     for (int k = 0; k < 3; ++k) {
         const core::RankThird& t = analysis_.thirds[static_cast<size_t>(k)];
-        auto* count = new QCPItemText(plot_);
-        count->position->setCoords(k + 1, 0.97);
-        count->setPositionAlignment(Qt::AlignHCenter | Qt::AlignTop);
-        count->setText(tr("%1 sons\n%2 births").arg(t.sons).arg(t.births));
+        ticker->addTick(k + 1, tr("%1\n%2 sons\nof %3 births").arg(names[k]).arg(t.sons).arg(t.births));
         if (!t.proportion) continue; // no births in this third: nothing to draw
         x << k + 1;
         y << *t.proportion;
         minus << *t.proportion - t.low.value_or(*t.proportion);
         plus << t.high.value_or(*t.proportion) - *t.proportion;
     }
+    plot_->xAxis->setTicker(ticker);
     plot_->graph(0)->setData(x, y, true);
     if (auto* bars = qobject_cast<QCPErrorBars*>(plot_->plottable(1))) bars->setData(minus, plus);
     plot_->replot();

@@ -139,13 +139,27 @@ public:
             legend->setFont(printFont(tickPx));
             for (QCPAbstractLegendItem* item : legendItems(legend)) item->setFont(printFont(tickPx));
             legend->setIconSize(18, 9);
-            // A legend beside the plot (a layout of several columns) lists its entries one under another.
-            if (plot->plotLayout()->columnCount() > 1) {
-                legend->setWrap(1);
-                legend->setFillOrder(QCPLayoutGrid::foColumnsFirst, true);
-            } else {
-                fitLegend(legend, viewport.width() - 8);
+            // A legend beside the plot (a layout of several columns) goes under it on paper,
+            // where the plot keeps the page's width; it is put back afterwards.
+            auto* parent = qobject_cast<QCPLayoutGrid*>(legend->layout());
+            QCPLayoutGrid* top = plot->plotLayout();
+            if (top->columnCount() > 1 && parent && legend->visible()) {
+                int index = -1;
+                for (int i = 0; i < parent->elementCount(); ++i)
+                    if (parent->elementAt(i) == legend) index = i;
+                int row = 0, column = 0;
+                parent->indexToRowCol(index, row, column);
+                parent->take(legend);
+                const int below = top->rowCount();
+                top->insertRow(below);
+                top->addElement(below, 0, legend);
+                top->setRowStretchFactor(below, 0.001);
+                later([top, parent, legend, row, column] {
+                    top->take(legend);
+                    parent->addElement(row, column, legend);
+                });
             }
+            fitLegend(legend, viewport.width() - 8);
         }
         // First wrapped to the first column's share of the page, then to the width that column got.
         const double lineWidth = (viewport.width() - 12.0) / std::max(1, plot->plotLayout()->columnCount());
