@@ -136,7 +136,9 @@ void reportSexRatio(CommandContext& ctx, const std::vector<MaternalRankRow>& bir
     if (a.birthsLeftOut > 0) {
         std::map<std::string, int> reasons;
         for (const MaternalRankRow& b : births)
-            if (b.exclusion != BirthExclusion::None) ++reasons[std::string(describe(b.exclusion))];
+            if (b.exclusion != BirthExclusion::None)
+                ++reasons[b.conceivedBeforeRecord ? std::string("conceived before the record began")
+                                                  : std::string(describe(b.exclusion))];
         ctx.err << "sex-ratio: " << a.birthsLeftOut << " of " << births.size() << " births left out";
         for (const auto& [why, n] : reasons) ctx.err << "; " << n << ": " << why;
         ctx.err << " (--births FILE lists each birth and its reason)\n";

@@ -190,8 +190,10 @@ std::vector<MaternalRankRow> computeMaternalRanks(const Colony& colony, const Re
         rankAt(r.mother, r.atConception);
         rankAt(r.mother, r.atBirth);
         r.exclusion = r.sex == Sex::Unknown ? BirthExclusion::UnknownSex : r.atConception.problem;
-        if (r.exclusion == BirthExclusion::MotherNotResident)
+        if (r.exclusion == BirthExclusion::MotherNotResident) {
             r.detail = notResidentDetail(r.mother, where, r.atConception.day, group, recordStart);
+            r.conceivedBeforeRecord = recordStart && r.atConception.day < *recordStart;
+        }
     }
     return rows;
 }

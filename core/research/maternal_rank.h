@@ -61,6 +61,8 @@ struct MaternalRankRow {
     /// mother_not_resident: she arrived after conception, had left, was in
     /// another group or away); empty otherwise.
     std::string detail;
+    /// Conceived before the record's first encounter (left out as mother_not_resident).
+    bool conceivedBeforeRecord = false;
 };
 
 /// What is not a birth of the analysis: founders, and animals born before

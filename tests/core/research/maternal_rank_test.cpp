@@ -201,6 +201,7 @@ TEST(MaternalRank, FoundersAndAnimalsBornBeforeTheRecordAreNotBirths)
     EXPECT_EQ(rows[0].offspring, "Q");
     EXPECT_EQ(rows[0].exclusion, BirthExclusion::MotherNotResident);
     EXPECT_EQ(rows[0].detail, "conceived on 2018-09-17, before the record began on 2019-01-05");
+    EXPECT_TRUE(rows[0].conceivedBeforeRecord);
     const BirthCounting c = countNonBirths(colony, where, options());
     EXPECT_EQ(c.recordStart, start);
     EXPECT_EQ(c.founders, 3);
