@@ -13,6 +13,11 @@
 #include "ui/records/encounter_table_model.h"
 #include "ui/records/encounter_view.h"
 #include "ui/shell/import_dialog.h"
+#include "ui/analysis/analysis_views.h"
+#include "ui/analysis/hierarchy_plots_view.h"
+#include "ui/widgets/plot_palette.h"
+
+#include <qcustomplot.h>
 
 #include <QAction>
 #include <QApplication>
@@ -333,4 +338,23 @@ TEST(MainWindow, UndoAndRedoNameTheEditInTheStatusBar)
     // The menu's wording: "Undo" and the edit's name, never "Undo Take back".
     for (QAction* action : window.findChildren<QAction*>())
         EXPECT_FALSE(action->text().contains(QStringLiteral("Take back"))) << action->text().toStdString();
+}
+
+// View > Plot Background: plots on screen follow the choice.
+TEST(MainWindow, PlotBackgroundMenuTurnsPlotsDark)
+{
+    TempDir dir;
+    TestWindow window;
+    ASSERT_TRUE(window.openColony(QString::fromStdString(makeColony(dir))));
+    auto* dark = window.findChild<QAction*>(QStringLiteral("plot-palette-dark"));
+    auto* light = window.findChild<QAction*>(QStringLiteral("plot-palette-light"));
+    ASSERT_NE(dark, nullptr);
+    ASSERT_NE(light, nullptr);
+    QCustomPlot* plot = window.analysisViews().hierarchy->plot();
+    dark->trigger();
+    plot->replot(QCustomPlot::rpImmediateRefresh);
+    EXPECT_EQ(plot->axisRect(0)->axis(QCPAxis::atLeft)->tickLabelColor(), ui::plotColours(ui::PlotPalette::Dark).text);
+    light->trigger();
+    plot->replot(QCustomPlot::rpImmediateRefresh);
+    EXPECT_EQ(plot->axisRect(0)->axis(QCPAxis::atLeft)->tickLabelColor(), QColor(Qt::black));
 }
