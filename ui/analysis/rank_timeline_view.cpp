@@ -139,6 +139,7 @@ RankTimelineView::RankTimelineView(ColonyDocument* document, AnimalSelection* se
     side->addElement(0, 0, plot_->legend);
     side->addElement(1, 0, new QCPLayoutElement(plot_));
     side->setRowStretchFactor(0, 0.001);
+    side->setMargins(QMargins(2, 0, 4, 2)); // the legend's frame stays inside the plot's edge
     plot_->legend->setVisible(true);
     QFont legendFont = font();
     legendFont.setPointSizeF(legendFont.pointSizeF() * 0.85);
