@@ -184,6 +184,9 @@ TEST(MainWindow, AnimalColumnsShowAgeMatriarchGroupAndStatus)
     ASSERT_GE(d1, 0);
     ASSERT_GE(x1, 0);
     EXPECT_EQ(cell(model, d2, C::Founder), "F1");
+    // A male without a recorded mother heads no matriline: no matriarch, not himself.
+    EXPECT_EQ(cell(model, rowOf(model, "M1"), C::Founder), "");
+    EXPECT_EQ(cell(model, rowOf(model, "F1"), C::Founder), "F1");
     EXPECT_EQ(cell(model, d2, C::Mother), "D1");
     EXPECT_EQ(cell(model, d1, C::Age), "6");      // born 2015-04-03, on 2022-01-01
     EXPECT_EQ(cell(model, d1, C::Group), "main"); // no residences.csv: one group 'main'
