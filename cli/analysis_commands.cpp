@@ -2,6 +2,7 @@
 // ranks, matrix and metrics: the hierarchy figures of docs/methods.md as CSV.
 #include "cli/analysis_options.h"
 #include "cli/colony_loading.h"
+#include "cli/code_help.h"
 #include "cli/commands.h"
 
 #include "core/ranks/hierarchy_metrics.h"
@@ -126,7 +127,7 @@ void addMatrixCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
         std::string colony;
         WindowOptions window;
         AnalysisOverrides analysis;
-        std::string order = "isi";
+        std::string order = rankMethodInfo(kDefaultMatrixOrder).code;
     };
     auto o = std::make_shared<Options>();
     cmd->add_option("COLONY_FILE", o->colony, "the colony file")->required();
@@ -134,7 +135,8 @@ void addMatrixCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
     std::vector<std::string> orders = rankMethodCodes();
     orders.push_back("id");
     cmd->add_option("--order", o->order,
-                    "order of rows and columns: " + rankMethodChoicesText() + ", or id (default: isi)")
+                    "order of rows and columns: " + rankMethodChoicesText() + ", or id (default: " +
+                        rankMethodInfo(kDefaultMatrixOrder).code + ")")
         ->check(CLI::IsMember(orders));
     addEloOptions(*cmd, o->analysis, "--order elo: ");
     cmd->add_option("--out", ctx.outFile, "write the CSV to this file instead of standard output");
@@ -169,6 +171,10 @@ void addMatrixCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
 void addMetricsCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
 {
     auto* cmd = app.add_subcommand("metrics", "linearity, steepness, transitivity and other hierarchy figures");
+    cmd->footer(codesHelp(core::CodeKind::Metric,
+                          {"animals", "encounters", "dyads", "known_dyads", "unknown_share", "landau_h", "h_prime",
+                           "h_prime_p", "dci", "steepness", "steepness_p", "ttri", "ttri_p", "elo_k_optimal",
+                           "elo_loglik", "seed", "randomisations"}));
     struct Options {
         std::string colony;
         WindowOptions window;

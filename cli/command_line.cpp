@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "cli/command_line.h"
 
+#include "cli/code_help.h"
 #include "cli/commands.h"
 #include "cli/finite_number.h"
 #include "cli/option_defaults.h"
@@ -43,6 +44,7 @@ int run(int argc, const char* const* argv, std::ostream& out, std::ostream& err)
     addRestoreCommand(app, ctx, action);
     addMergeCommand(app, ctx, action);
     addHistoryCommand(app, ctx, action);
+    addCodesCommand(app, ctx, action);
     describeDefaults(app);
     requireFiniteNumbers(app);
     try {

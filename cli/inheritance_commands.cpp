@@ -2,6 +2,7 @@
 // inherit and scenario: matrilineal rank prediction against observed ranks, and what-if changes.
 #include "cli/analysis_options.h"
 #include "cli/colony_loading.h"
+#include "cli/code_help.h"
 #include "cli/commands.h"
 
 #include "core/pedigree/discordance.h"
@@ -196,7 +197,8 @@ void addInheritCommand(CLI::App& app, CommandContext& ctx, CommandAction& action
         "Matrilines are named after their matriarch (the end of the mother links); within a line each mother\n"
         "comes directly before her daughters, youngest first by default; lines are ordered by their best\n"
         "observed rank. Females with an unknown birth date count as mature and are placed as the eldest of\n"
-        "their sisters; both are reported on standard error with conformity and Kendall's tau-b.");
+        "their sisters; both are reported on standard error with conformity and Kendall's tau-b.\n" +
+        codesHelp(core::CodeKind::Category, codesOf(core::CodeKind::Category)));
     auto o = std::make_shared<InheritOptions>();
     cmd->add_option("COLONY_FILE", o->colony, "the colony file")->required();
     cmd->add_option("--at", o->at, "the date of the prediction (default: the date of the last encounter)");

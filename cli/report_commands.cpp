@@ -2,6 +2,7 @@
 // stability and report: the stability watch as CSV, and the printable hierarchy report as PDF.
 #include "cli/analysis_options.h"
 #include "cli/colony_loading.h"
+#include "cli/code_help.h"
 #include "cli/commands.h"
 
 #include "core/store/colony_store.h"
@@ -44,9 +45,20 @@ StoredStability storedStability(const std::string& path)
     return {readStabilityThresholds(store), behaviourSeverities(store)};
 }
 
-void checkGroup(const LoadedColony& loaded, const std::string& group)
+/// The group asked for, or the colony's only group when none is given.
+std::string chosenGroup(const LoadedColony& loaded, const std::string& group)
 {
+    const std::vector<std::string>& groups = loaded.where.groups();
+    if (group.empty()) {
+        if (groups.size() == 1) return groups.front();
+        std::string names;
+        for (const std::string& g : groups) names += (names.empty() ? "" : ", ") + g;
+        throw BadInputError(groups.empty() ? std::string("--group: the colony has no group")
+                                           : "--group: the colony has " + std::to_string(groups.size()) +
+                                                 " groups (" + names + "); choose one");
+    }
     if (loaded.where.group(group) < 0) throw BadInputError("--group: no group '" + group + "' in the colony");
+    return group;
 }
 
 struct StabilityCommandOptions {
@@ -62,13 +74,13 @@ void runStability(CommandContext& ctx, const StabilityCommandOptions& o)
 {
     // Elo runs over the group's whole record; --from and --to only choose the periods shown.
     const LoadedColony loaded = loadColony(o.colony, EncounterScope{o.group, {}, {}});
-    checkGroup(loaded, o.group);
+    const std::string group = chosenGroup(loaded, o.group);
     const StoredStability stored = storedStability(o.colony);
     const AnalysisSettings settings = analysisSettingsOf(loaded, o.analysis, o.draws);
     reportAnalysisSettings(ctx, "stability", settings, &o.analysis, o.draws);
     StabilityOptions so;
     so.elo = settings.elo;
-    so.group = o.group;
+    so.group = group;
     so.length = o.every == "week" ? PeriodLength::Week : PeriodLength::Month;
     so.from = optionDate(o.from, "--from");
     so.to = optionDate(o.to, "--to");
@@ -110,10 +122,10 @@ void runReport(CommandContext& ctx, const ReportOptions& o)
 {
 #ifdef HIERLOOM_HAVE_REPORT
     const LoadedColony loaded = loadColony(o.colony, EncounterScope{o.group, {}, {}});
-    checkGroup(loaded, o.group);
+    const std::string group = chosenGroup(loaded, o.group);
     const StoredStability stored = storedStability(o.colony);
     report::HierarchyReportOptions ro;
-    ro.group = o.group;
+    ro.group = group;
     ro.at = optionDate(o.at, "--at");
     ro.colonyName = std::filesystem::path(o.colony).filename().string();
     ro.thresholds = stored.thresholds;
@@ -153,10 +165,12 @@ void addStabilityCommand(CLI::App& app, CommandContext& ctx, CommandAction& acti
         "The stability watch of one group per week or month: counter-dominance (decided encounters won by the\n"
         "lower-rated animal, Elo just before each encounter), the busiest pair of matrilines among them, mean rank\n"
         "change per animal, severe encounters per animal-day; alerts (thresholds from the colony file's settings)\n"
-        "are described on standard error with their evidence.");
+        "are described on standard error with their evidence.\n" +
+        codesHelp(CodeKind::Metric, {"counter_share", "rank_change_per_animal", "severe_per_animal_day"}) +
+        codesHelp(CodeKind::Signal, codesOf(CodeKind::Signal)));
     auto o = std::make_shared<StabilityCommandOptions>();
     cmd->add_option("COLONY_FILE", o->colony, "the colony file")->required();
-    cmd->add_option("--group", o->group, "the social group")->required();
+    cmd->add_option("--group", o->group, "the social group (default: the colony's group when it has only one)");
     cmd->add_option("--every", o->every, "week or month (default)")->check(CLI::IsMember({"week", "month"}));
     cmd->add_option("--from", o->from, "first day shown (default: the group's first encounter)");
     cmd->add_option("--to", o->to, "last day shown (default: its last encounter)");
@@ -174,7 +188,7 @@ void addReportCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
         "predicted order, discordances, recent rank changes, stability figures and plots, data window and methods.");
     auto o = std::make_shared<ReportOptions>();
     cmd->add_option("COLONY_FILE", o->colony, "the colony file")->required();
-    cmd->add_option("--group", o->group, "the social group")->required();
+    cmd->add_option("--group", o->group, "the social group (default: the colony's group when it has only one)");
     cmd->add_option("--at", o->at, "the date of the report (default: the group's last encounter)");
     cmd->add_option("--out", o->out, "the PDF file to write")->required();
     addDrawsOption(*cmd, o->draws);

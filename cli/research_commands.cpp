@@ -4,6 +4,7 @@
 // table functions the desktop program shows.
 #include "cli/analysis_options.h"
 #include "cli/colony_loading.h"
+#include "cli/code_help.h"
 #include "cli/commands.h"
 
 #include "core/store/colony_store.h"
@@ -114,6 +115,17 @@ void reportSettings(CommandContext& ctx, const char* command, const SpeciesSetti
             << (s.maturityOverridden ? "" : " (species default)") << "\n";
 }
 
+/// Says from which day births are counted and what is not a birth.
+void reportBirthCounting(CommandContext& ctx, const char* command, const LoadedColony& loaded,
+                         const MaternalRankOptions& m)
+{
+    const BirthCounting c = countNonBirths(loaded.colony, loaded.where, m);
+    if (!c.recordStart) return;
+    ctx.err << command << ": births counted from the record's first encounter, " << formatDate(*c.recordStart)
+            << "; not counted as births: " << c.founders << " founders, " << c.bornBefore
+            << " animals born before then\n";
+}
+
 /// Clear messages for the cases in which figures are left empty.
 void reportSexRatio(CommandContext& ctx, const std::vector<MaternalRankRow>& births, const SexRatioAnalysis& a)
 {
@@ -124,7 +136,9 @@ void reportSexRatio(CommandContext& ctx, const std::vector<MaternalRankRow>& bir
     if (a.birthsLeftOut > 0) {
         std::map<std::string, int> reasons;
         for (const MaternalRankRow& b : births)
-            if (b.exclusion != BirthExclusion::None) ++reasons[std::string(describe(b.exclusion))];
+            if (b.exclusion != BirthExclusion::None)
+                ++reasons[b.conceivedBeforeRecord ? std::string("conceived before the record began")
+                                                  : std::string(describe(b.exclusion))];
         ctx.err << "sex-ratio: " << a.birthsLeftOut << " of " << births.size() << " births left out";
         for (const auto& [why, n] : reasons) ctx.err << "; " << n << ": " << why;
         ctx.err << " (--births FILE lists each birth and its reason)\n";
@@ -148,10 +162,11 @@ void runSexRatio(CommandContext& ctx, const BirthOptions& o, const std::string& 
     const SpeciesSettings species = speciesFor(o);
     const LoadedColony loaded = loadColony(o.colony);
     const AnalysisSettings settings = birthSettings(ctx, "sex-ratio", o, loaded, species);
-    const std::vector<MaternalRankRow> births =
-        computeMaternalRanks(loaded.colony, loaded.where, maternalOptions(o, loaded, species, settings));
+    const MaternalRankOptions m = maternalOptions(o, loaded, species, settings);
+    const std::vector<MaternalRankRow> births = computeMaternalRanks(loaded.colony, loaded.where, m);
     const SexRatioAnalysis a = analyseSexRatio(births);
     reportSettings(ctx, "sex-ratio", species);
+    reportBirthCounting(ctx, "sex-ratio", loaded, m);
     reportSexRatio(ctx, births, a);
     // The side files first, so a failure leaves standard output untouched.
     auto side = [&](const std::string& path, const ExportTable& t, const char* option) {
@@ -173,9 +188,10 @@ void runMaternalRanks(CommandContext& ctx, const BirthOptions& o)
     const SpeciesSettings species = speciesFor(o);
     const LoadedColony loaded = loadColony(o.colony);
     const AnalysisSettings settings = birthSettings(ctx, "maternal-ranks", o, loaded, species);
-    const std::vector<MaternalRankRow> births =
-        computeMaternalRanks(loaded.colony, loaded.where, maternalOptions(o, loaded, species, settings));
+    const MaternalRankOptions m = maternalOptions(o, loaded, species, settings);
+    const std::vector<MaternalRankRow> births = computeMaternalRanks(loaded.colony, loaded.where, m);
     reportSettings(ctx, "maternal-ranks", species);
+    reportBirthCounting(ctx, "maternal-ranks", loaded, m);
     if (births.empty()) ctx.err << "maternal-ranks: no births in this window\n";
     emit(ctx, tableCsv(maternalRankTable(births), false));
 }
@@ -238,7 +254,9 @@ void addSexRatioCommand(CLI::App& app, CommandContext& ctx, CommandAction& actio
 {
     auto* cmd = app.add_subcommand("sex-ratio", "maternal rank at conception against offspring sex");
     cmd->footer("Trivers & Willard (1973): logistic regression of male offspring on the mother's relative Elo rank\n"
-                "at conception, Fisher's exact test on high against low mothers, sons per rank third.");
+                "at conception, Fisher's exact test on high against low mothers, sons per rank third.\n"
+                "Births are counted from the record's first encounter; founders are not births.\n" +
+                codesHelp(CodeKind::Metric, sexRatioCodes()) + codesHelp(CodeKind::Reason, reasonCodes()));
     auto o = std::make_shared<BirthOptions>();
     auto births = std::make_shared<std::string>();
     auto thirds = std::make_shared<std::string>();
@@ -255,6 +273,8 @@ void addSexRatioCommand(CLI::App& app, CommandContext& ctx, CommandAction& actio
 void addMaternalRanksCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
 {
     auto* cmd = app.add_subcommand("maternal-ranks", "every birth with the mother's rank at conception and at birth");
+    cmd->footer("Births are counted from the record's first encounter; founders are not births.\n" +
+                codesHelp(CodeKind::Reason, reasonCodes()));
     auto o = std::make_shared<BirthOptions>();
     addBirthOptions(*cmd, *o);
     cmd->add_option("--out", ctx.outFile, "write the CSV to this file instead of standard output");

@@ -1,6 +1,8 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "report/hierarchy_report.h"
 
+#include "core/base/display_names.h"
+
 #include "core/pedigree/discordance.h"
 #include "core/pedigree/foresight.h"
 #include "core/pedigree/matriline.h"
@@ -106,7 +108,8 @@ void discordances(ReportLayout& doc, const Matrilines& lines, const InheritanceP
     t.widths = {1, 1.3, 1.2};
     const size_t shown = std::min<size_t>(s.dyads.size(), 24);
     for (size_t i = 0; i < shown; ++i)
-        t.rows.push_back({qs(s.dyads[i].above), qs(s.dyads[i].below), qs(toString(s.dyads[i].category))});
+        t.rows.push_back({qs(s.dyads[i].above), qs(s.dyads[i].below),
+                          qs(displayName(CodeKind::Category, toString(s.dyads[i].category)))});
     doc.table(t);
     if (shown < s.dyads.size())
         doc.paragraph(QObject::tr("... and %1 more discordant pairs (hierloom-cli inherit --dyads lists them all).")
@@ -245,7 +248,7 @@ void stability(ReportLayout& doc, const Colony& colony, const ResidenceIndex& wh
     for (const StabilityAlert& a : s.alerts) alerted[a.period] = true;
     ReportTable t;
     t.header = {QObject::tr("Month"), QObject::tr("Decided"), QObject::tr("Counter-dom."), QObject::tr("Busiest line pair"),
-                QObject::tr("Rank change"), QObject::tr("Severe"), QObject::tr("x median"), QObject::tr("Alert")};
+                QObject::tr("Rank change"), QObject::tr("Severe"), QObject::tr("Severe rate / median"), QObject::tr("Alert")};
     t.widths = {1, 0.8, 1, 2, 0.9, 0.7, 0.8, 0.7};
     const size_t first = s.periods.size() > 12 ? s.periods.size() - 12 : 0;
     for (size_t i = first; i < s.periods.size(); ++i) {
@@ -259,7 +262,8 @@ void stability(ReportLayout& doc, const Colony& colony, const ResidenceIndex& wh
                                               .arg(qs(p.topLinePair->winnerLine), qs(p.topLinePair->loserLine))
                                               .arg(p.topLinePair->count)
                                         : QString(),
-                          p.rankChangePerAnimal ? QString::number(*p.rankChangePerAnimal, 'f', 2) : QString(),
+                          p.rankChangePerAnimal && p.encounters > 0 ? QString::number(*p.rankChangePerAnimal, 'f', 2)
+                                                                    : QString(),
                           QString::number(p.severe), ratio, alerted[i] ? QObject::tr("yes") : QString()});
         t.highlighted.push_back(alerted[i]);
     }
@@ -288,7 +292,8 @@ void stability(ReportLayout& doc, const Colony& colony, const ResidenceIndex& wh
         ratio.push_back(p.severePerAnimalDay && s.medianSevereRate && *s.medianSevereRate > 0
                             ? std::optional<double>(*p.severePerAnimalDay / *s.medianSevereRate)
                             : std::nullopt);
-        change.push_back(p.rankChangePerAnimal);
+        // A month without encounters is a gap in every plot, never a zero.
+        change.push_back(p.encounters > 0 ? p.rankChangePerAnimal : std::nullopt);
         const CivilDate c = civilFromDay(p.period.start);
         labels << (c.month == 1 ? QString::number(c.year) : QString());
     }

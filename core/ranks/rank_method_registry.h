@@ -22,6 +22,10 @@ struct RankMethodInfo {
     bool takesStartRule = false;
 };
 
+/// The default order of the win matrix, in the `matrix` command and the
+/// desktop's Matrix view alike.
+constexpr RankMethod kDefaultMatrixOrder = RankMethod::Isi;
+
 /// Every rank method, in the order offered (the default first).
 const std::vector<RankMethodInfo>& rankMethods();
 

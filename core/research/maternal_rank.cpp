@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "core/research/maternal_rank.h"
 
+#include "core/base/display_names.h"
 #include "core/ranks/encounter_selection.h"
 #include "core/ranks/ordinal_ranks.h"
 
@@ -25,16 +26,10 @@ const char* toString(BirthExclusion reason)
 
 const char* describe(BirthExclusion reason)
 {
-    switch (reason) {
-    case BirthExclusion::None: return "used";
-    case BirthExclusion::UnknownMother: return "the mother is not recorded";
-    case BirthExclusion::UnknownSex: return "the offspring's sex is unknown";
-    case BirthExclusion::MotherNotResident: return "the mother was not resident (in the group) at conception";
-    case BirthExclusion::MotherNotMature: return "the mother was younger than the maturity age at conception";
-    case BirthExclusion::MotherNotRated: return "the mother had no Elo rating at conception";
-    case BirthExclusion::FewerThanTwoRanked: return "fewer than two females were ranked at conception";
-    }
-    return "";
+    if (reason == BirthExclusion::None) return "used";
+    for (const CodeName& c : codeNames())
+        if (c.kind == CodeKind::Reason && std::string_view(c.code) == toString(reason)) return c.name;
+    return toString(reason);
 }
 
 namespace {
@@ -45,23 +40,71 @@ struct DayRanking {
     int m = 0;
 };
 
+std::optional<Day> firstEncounterDay(const Colony& colony)
+{
+    std::optional<Day> first;
+    for (const Encounter& e : colony.encounters)
+        if (!first || e.date < *first) first = e.date;
+    return first;
+}
+
+/// In the window and (with a group) the group: the offspring, else its mother, there on the birth day.
+bool inBirthSelection(const Animal& a, const ResidenceIndex& where, const MaternalRankOptions& o, int group)
+{
+    if ((o.from && *a.birth < *o.from) || (o.to && *a.birth > *o.to)) return false;
+    if (o.group.empty()) return true;
+    int g = -1;
+    if (const int k = where.animal(a.id); k >= 0) g = where.groupOn(k, *a.birth);
+    if (g < 0 && !a.mother.empty())
+        if (const int k = where.animal(a.mother); k >= 0) g = where.groupOn(k, *a.birth);
+    return group >= 0 && g == group;
+}
+
+/// What happened when the mother was not resident (in the group) on `day`.
+std::string notResidentDetail(const std::string& mother, const ResidenceIndex& where, Day day, int group,
+                              std::optional<Day> recordStart)
+{
+    if (recordStart && day < *recordStart)
+        return "conceived on " + formatDate(day) + ", before the record began on " + formatDate(*recordStart);
+    const int k = where.animal(mother);
+    if (k < 0 || where.stints(k).empty()) return "the mother " + mother + " has no stay in the colony's record";
+    const auto& stints = where.stints(k);
+    if (day < stints.front().from)
+        return "the mother " + mother + " arrived on " + formatDate(stints.front().from) + ", after conception";
+    if (day > stints.back().to)
+        return "the mother " + mother + " had left on " + formatDate(stints.back().to) + ", before conception";
+    const int on = where.groupOn(k, day);
+    if (on >= 0 && group >= 0 && on != group)
+        return "the mother " + mother + " was in group " + where.groups()[static_cast<size_t>(on)] + " at conception";
+    return "the mother " + mother + " was away from the colony at conception";
+}
+
 } // namespace
+
+BirthCounting countNonBirths(const Colony& colony, const ResidenceIndex& where, const MaternalRankOptions& o)
+{
+    BirthCounting c;
+    c.recordStart = firstEncounterDay(colony);
+    const int group = o.group.empty() ? -1 : where.group(o.group);
+    for (const Animal& a : colony.animals) {
+        if (!a.birth || !inBirthSelection(a, where, o, group)) continue;
+        if (a.entryType == EntryType::Founder) ++c.founders;
+        else if (c.recordStart && *a.birth < *c.recordStart) ++c.bornBefore;
+    }
+    return c;
+}
 
 std::vector<MaternalRankRow> computeMaternalRanks(const Colony& colony, const ResidenceIndex& where,
                                                   const MaternalRankOptions& o)
 {
     const int group = o.group.empty() ? -1 : where.group(o.group);
     std::vector<MaternalRankRow> rows;
+    const std::optional<Day> recordStart = firstEncounterDay(colony);
     for (const Animal& a : colony.animals) {
         if (!a.birth) continue; // without a birth date there is no birth to place in time
-        if ((o.from && *a.birth < *o.from) || (o.to && *a.birth > *o.to)) continue;
-        if (!o.group.empty()) {
-            int g = -1;
-            if (const int k = where.animal(a.id); k >= 0) g = where.groupOn(k, *a.birth);
-            if (g < 0 && !a.mother.empty())
-                if (const int k = where.animal(a.mother); k >= 0) g = where.groupOn(k, *a.birth);
-            if (group < 0 || g != group) continue;
-        }
+        // Founders and animals born before the record began are not births of the record.
+        if (a.entryType == EntryType::Founder || (recordStart && *a.birth < *recordStart)) continue;
+        if (!inBirthSelection(a, where, o, group)) continue;
         MaternalRankRow r;
         r.offspring = a.id;
         r.mother = a.mother;
@@ -147,6 +190,10 @@ std::vector<MaternalRankRow> computeMaternalRanks(const Colony& colony, const Re
         rankAt(r.mother, r.atConception);
         rankAt(r.mother, r.atBirth);
         r.exclusion = r.sex == Sex::Unknown ? BirthExclusion::UnknownSex : r.atConception.problem;
+        if (r.exclusion == BirthExclusion::MotherNotResident) {
+            r.detail = notResidentDetail(r.mother, where, r.atConception.day, group, recordStart);
+            r.conceivedBeforeRecord = recordStart && r.atConception.day < *recordStart;
+        }
     }
     return rows;
 }

@@ -25,7 +25,8 @@ enum class BirthExclusion {
 
 /// Stable code of a reason, as printed in the per-birth table ("" for None).
 const char* toString(BirthExclusion reason);
-/// A sentence explaining a reason, for messages.
+/// A sentence explaining a reason, for messages: its display name
+/// (core/base/display_names.h).
 const char* describe(BirthExclusion reason);
 
 /// Which births and how mothers are ranked.
@@ -56,6 +57,20 @@ struct MaternalRankRow {
     MaternalRankAt atConception; ///< day = birth - gestation
     MaternalRankAt atBirth;
     BirthExclusion exclusion = BirthExclusion::None; ///< None: the birth enters the sex-ratio figures
+    /// For people: what happened, when the reason alone does not say it (for
+    /// mother_not_resident: she arrived after conception, had left, was in
+    /// another group or away); empty otherwise.
+    std::string detail;
+    /// Conceived before the record's first encounter (left out as mother_not_resident).
+    bool conceivedBeforeRecord = false;
+};
+
+/// What is not a birth of the analysis: founders, and animals born before
+/// the record's first encounter (there was no record of their mothers then).
+struct BirthCounting {
+    std::optional<Day> recordStart; ///< the record's first encounter; births are counted from this day
+    int founders = 0;               ///< founders with a birth date, not counted as births
+    int bornBefore = 0;             ///< other animals born before recordStart, not counted
 };
 
 /// Maternal rank at conception and at birth for every birth of the window
@@ -63,10 +78,15 @@ struct MaternalRankRow {
 /// ratio"): r is the mother's ordinal Elo rank among the m ranked females
 /// (resident that day, in the group if one is given, at least maturityYears
 /// old or of unknown birth date, with an Elo rating from the whole record up
-/// to that day). A birth is an animal with a recorded birth date; with a
-/// group, only births whose offspring (else mother) was in it on the birth day.
+/// to that day). A birth is an animal with a recorded birth date on or after
+/// the record's first encounter that is not a founder; with a group, only
+/// births whose offspring (else mother) was in it on the birth day.
 /// Rows in birth-date order, then offspring id. Elo is run once for all days.
 std::vector<MaternalRankRow> computeMaternalRanks(const Colony& colony, const ResidenceIndex& where,
                                                   const MaternalRankOptions& options);
+
+/// The record's start and the animals of the window (and group) that
+/// computeMaternalRanks does not count as births.
+BirthCounting countNonBirths(const Colony& colony, const ResidenceIndex& where, const MaternalRankOptions& options);
 
 } // namespace hierloom::core

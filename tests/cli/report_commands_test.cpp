@@ -55,3 +55,31 @@ TEST(ReportCommand, WritesAPdfAndRejectsAnUnknownGroup)
     EXPECT_EQ(runCli({"report", colony, "--group", "Nowhere", "--out", pdf}).status, 2);
     EXPECT_EQ(runCli({"report", colony, "--group", "North Corral", "--at", "2031-02-30", "--out", pdf}).status, 2);
 }
+
+// A colony with one group needs no --group; with two, leaving it out is an error naming them.
+TEST(ReportCommand, TheOnlyGroupIsTheDefault)
+{
+    CliTempDir dir;
+    const std::string colony = dir.file("demo.hierloom");
+    ASSERT_EQ(runCli({"demo", colony}).status, 0); // the demo has one group, North Corral
+    const auto withGroup = runCli({"stability", colony, "--group", "North Corral"});
+    const auto without = runCli({"stability", colony});
+    ASSERT_EQ(without.status, 0) << without.err;
+    EXPECT_EQ(without.out, withGroup.out);
+#ifdef HIERLOOM_HAVE_REPORT
+    const std::string pdf = dir.file("report.pdf");
+    const auto r = runCli({"report", colony, "--out", pdf});
+    EXPECT_EQ(r.status, 0) << r.err;
+    EXPECT_TRUE(std::filesystem::exists(pdf));
+#endif
+    // A second group (a new animal living in South Pen): --group is needed again.
+    const std::string animals = dir.file("animals.csv");
+    std::ofstream(animals) << "id,sex,birth_date,entry_date,entry_type\nZZ1,F,2020-01-01,2024-01-01,introduced\n";
+    const std::string residences = dir.file("residences.csv");
+    std::ofstream(residences) << "animal,group,from\nZZ1,South Pen,2024-01-01\n";
+    const auto imported = runCli({"import", colony, "--animals", animals, "--residences", residences});
+    ASSERT_EQ(imported.status, 0) << imported.err;
+    const auto two = runCli({"stability", colony});
+    EXPECT_EQ(two.status, 2);
+    EXPECT_NE(two.err.find("2 groups (North Corral, South Pen)"), std::string::npos) << two.err;
+}

@@ -112,9 +112,12 @@ TEST(CliResearch, MaternalRanksTable)
     const CliResult r = runCli({"maternal-ranks", colony, "--maturity-years", "4"});
     ASSERT_EQ(r.status, 0) << r.err;
     const auto rows = lines(r.out);
-    ASSERT_EQ(rows.size(), 5U); // header + A, B, C (mothers unknown) + B1
+    // header + B1: A, B and C were born in 2000, before the record's first encounter
+    // (2020-01-01), so they are not births of the record (docs/methods.md, "Births").
+    ASSERT_EQ(rows.size(), 2U);
     EXPECT_EQ(rows[0].substr(0, 48), "offspring,mother,sex,birth_date,conception_date,");
-    EXPECT_EQ(rows[4], "B1,B,M,2020-06-23,2020-01-10,2,3,0.5,2,3,0.5,1,");
+    EXPECT_EQ(rows[1], "B1,B,M,2020-06-23,2020-01-10,2,3,0.5,2,3,0.5,1,");
+    EXPECT_NE(r.err.find("not counted as births: 0 founders, 3 animals born before then"), std::string::npos) << r.err;
 }
 
 TEST(CliResearch, ExportTablesWritesEveryTable)
@@ -134,4 +137,35 @@ TEST(CliResearch, ExportTablesWritesEveryTable)
     const std::string sexRatio = CliTempDir::read(out + "/sex_ratio.csv").substr(3);
     EXPECT_EQ(sexRatio, runCli({"sex-ratio", colony}).out);
     EXPECT_EQ(CliTempDir::read(out + "/metrics_by_period.csv").substr(3, 24), "period_start,period_end,");
+}
+
+// The births are counted from the record's first encounter, and the command says so.
+TEST(CliResearch, SexRatioSaysFromWhenBirthsAreCounted)
+{
+    CliTempDir dir;
+    const std::string colony = demoColony(dir);
+    const CliResult r = runCli({"sex-ratio", colony});
+    ASSERT_EQ(r.status, 0) << r.err;
+    // The demo's first encounter is on 2019-01-02 (tools/make_demo_colony); its 29 founders are not births.
+    EXPECT_NE(r.err.find("births counted from the record's first encounter, 2019-01-02; not counted as births: 29 "
+                         "founders"),
+              std::string::npos)
+        << r.err;
+}
+
+// Codes keep their form on the command line; help and `codes` give their names.
+TEST(CliResearch, CodesAndTheirNames)
+{
+    const CliResult codes = runCli({"codes"});
+    ASSERT_EQ(codes.status, 0) << codes.err;
+    EXPECT_EQ(codes.out.rfind("kind,code,name\n", 0), 0U);
+    EXPECT_NE(codes.out.find("metric,lr_chisq,likelihood-ratio chi-square (1 df)\n"), std::string::npos);
+    EXPECT_NE(codes.out.find("category,cross_matriline,across matrilines\n"), std::string::npos);
+    const CliResult help = runCli({"sex-ratio", "--help"});
+    EXPECT_NE(help.out.find("lr_chisq"), std::string::npos);
+    EXPECT_NE(help.out.find("likelihood-ratio chi-square (1 df)"), std::string::npos);
+    EXPECT_NE(help.out.find("mother_not_resident"), std::string::npos);
+    const CliResult inherit = runCli({"inherit", "--help"});
+    EXPECT_NE(inherit.out.find("cross_matriline"), std::string::npos);
+    EXPECT_NE(inherit.out.find("across matrilines"), std::string::npos);
 }

@@ -129,6 +129,7 @@ TEST(AnalysisSettingsDialog, KeystrokesChangeTheMatrixView)
 {
     OpenWindow w;
     ui::MatrixView* matrix = w.window.analysisViews().matrix;
+    matrix->setMethod(core::RankMethod::Elo); // it opens in I&SI order, as `matrix`; Elo shows the k
     ASSERT_TRUE(w.window.showView(QStringLiteral("matrix")));
     matrix->runner()->wait();
     const core::Colony& colony = w.window.document()->colony();

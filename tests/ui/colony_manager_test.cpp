@@ -81,6 +81,10 @@ TEST(StabilityView, DemoRevoltMonthsAlertWithEvidenceAndCaution)
     window.managerViews().badge->waitForCheck(); // the check runs on a worker thread
     EXPECT_TRUE(window.managerViews().badge->alertedGroups().isEmpty());
     EXPECT_TRUE(hasCaution(view));
+    // "Severe rate, times the median" is explained under the plot.
+    const auto* key = view->findChild<QLabel*>(QStringLiteral("stabilityKey"));
+    ASSERT_NE(key, nullptr);
+    EXPECT_TRUE(key->text().contains(QStringLiteral("divided by the median")));
     EXPECT_TRUE(window.showView(QStringLiteral("stability")));
 }
 
@@ -160,6 +164,17 @@ TEST(PlannerView, SplitByMatrilinesSaveAndReopen)
     }
     const auto composition = planner->findChildren<QLabel*>(QStringLiteral("composition"));
     EXPECT_EQ(composition.size(), 2);
+    // The tables say they list adult females only, name the animals as the Prediction view
+    // does ("Name (ID)"), and show the window behind the observed wins (180 days, scenario.h).
+    EXPECT_EQ(planner->findChildren<QLabel*>(QStringLiteral("adultFemalesOnly")).size(), 2);
+    const QTableWidget* moves = planner->movesTable();
+    ASSERT_GT(moves->rowCount(), 0);
+    const core::Colony& colony = window.document()->colony();
+    const std::string& first = r.moves.front().animal;
+    const std::string& name = colony.animals[static_cast<size_t>(colony.animalIndex(first))].name;
+    EXPECT_EQ(moves->item(0, 0)->text().toStdString(), name + " (" + first + ")");
+    const QString header = planner->reversalsTable()->horizontalHeaderItem(3)->text();
+    EXPECT_TRUE(header.contains(QStringLiteral("180 days"))) << header.toStdString();
 
     const std::string text = core::formatScenarioText(c->scenario());
     ASSERT_TRUE(planner->saveScenario(QStringLiteral("split C and D")));

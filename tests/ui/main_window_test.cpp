@@ -9,11 +9,22 @@
 #include "ui/records/animal_table_model.h"
 #include "ui/records/animal_view.h"
 #include "ui/document/colony_document.h"
+#include "ui/document/colony_edit_facade.h"
 #include "ui/records/encounter_table_model.h"
 #include "ui/records/encounter_view.h"
 #include "ui/shell/import_dialog.h"
+#include "ui/analysis/analysis_views.h"
+#include "ui/analysis/hierarchy_plots_view.h"
+#include "ui/widgets/plot_palette.h"
 
+#include <qcustomplot.h>
+
+#include <QAction>
+#include <QApplication>
 #include <QDate>
+#include <QLineEdit>
+#include <QStatusBar>
+#include <QTest>
 
 #include <gtest/gtest.h>
 
@@ -173,6 +184,9 @@ TEST(MainWindow, AnimalColumnsShowAgeMatriarchGroupAndStatus)
     ASSERT_GE(d1, 0);
     ASSERT_GE(x1, 0);
     EXPECT_EQ(cell(model, d2, C::Founder), "F1");
+    // A male without a recorded mother heads no matriline: no matriarch, not himself.
+    EXPECT_EQ(cell(model, rowOf(model, "M1"), C::Founder), "");
+    EXPECT_EQ(cell(model, rowOf(model, "F1"), C::Founder), "F1");
     EXPECT_EQ(cell(model, d2, C::Mother), "D1");
     EXPECT_EQ(cell(model, d1, C::Age), "6");      // born 2015-04-03, on 2022-01-01
     EXPECT_EQ(cell(model, d1, C::Group), "main"); // no residences.csv: one group 'main'
@@ -260,4 +274,90 @@ TEST(MainWindow, DemoColonyShowsAllItsRecords)
     EXPECT_EQ(window.animalView()->visibleRowCount(), static_cast<int>(demo.animals.size()));
     EXPECT_EQ(window.encounterView()->visibleRowCount(), static_cast<int>(demo.encounters.size()));
     EXPECT_GT(demo.encounters.size(), 1000u);
+}
+
+// The search box over encounters and notes, typed into as a person would.
+TEST(MainWindow, SearchBoxFindsEncountersByTextAndNote)
+{
+    TempDir dir;
+    const std::string path = makeColony(dir);
+    {
+        // One encounter with a note (counted by hand: the fifth of the file).
+        core::ColonyStore store = core::ColonyStore::open(path);
+        core::Encounter e;
+        e.date = core::dayFromCivil(2022, 3, 1);
+        e.winner = "F1";
+        e.loser = "M1";
+        e.behaviour = "threat";
+        e.group = "main";
+        e.note = "Limping after the Storm";
+        store.append({}, {}, {e});
+    }
+    TestWindow window;
+    ASSERT_TRUE(window.openColony(QString::fromStdString(path)));
+    window.show();
+    ASSERT_TRUE(window.showView(QStringLiteral("encounters")));
+    ui::EncounterView* view = window.encounterView();
+    view->searchBox()->setFocus();
+    QApplication::setActiveWindow(&window);
+    ASSERT_EQ(QApplication::focusWidget(), view->searchBox());
+    EXPECT_EQ(view->visibleRowCount(), 6);
+    QTest::keyClicks(QApplication::focusWidget(), QStringLiteral("storm")); // in the note, other case
+    EXPECT_EQ(view->visibleRowCount(), 1);
+    QTest::keyClick(QApplication::focusWidget(), Qt::Key_A, Qt::ControlModifier);
+    QTest::keyClicks(QApplication::focusWidget(), QStringLiteral("d2")); // D1-D2 and F2-D2
+    EXPECT_EQ(view->visibleRowCount(), 2);
+    QTest::keyClick(QApplication::focusWidget(), Qt::Key_A, Qt::ControlModifier);
+    QTest::keyClicks(QApplication::focusWidget(), QStringLiteral("THREAT")); // F1-D1 and the new one
+    EXPECT_EQ(view->visibleRowCount(), 2);
+    QTest::keyClick(QApplication::focusWidget(), Qt::Key_A, Qt::ControlModifier);
+    QTest::keyClick(QApplication::focusWidget(), Qt::Key_Delete);
+    EXPECT_EQ(view->visibleRowCount(), 6);
+}
+
+// Undo and Redo, by their keys, say in the status bar what they took back or
+// did again; the Edit menu names the edit after "Undo".
+TEST(MainWindow, UndoAndRedoNameTheEditInTheStatusBar)
+{
+    TempDir dir;
+    TestWindow window;
+    ASSERT_TRUE(window.openColony(QString::fromStdString(makeColony(dir))));
+    window.show();
+    QApplication::setActiveWindow(&window);
+    core::Animal a;
+    a.id = "N1";
+    a.sex = core::Sex::Female;
+    a.entry = core::dayFromCivil(2022, 1, 1);
+    a.entryType = core::EntryType::Founder;
+    ASSERT_TRUE(window.editFacade()->addAnimal(a, "main").empty());
+    EXPECT_TRUE(window.statusBar()->currentMessage().isEmpty() ||
+                !window.statusBar()->currentMessage().startsWith(QStringLiteral("Undone")));
+    QWidget* target = QApplication::focusWidget() ? QApplication::focusWidget() : &window;
+    QTest::keyClick(target, Qt::Key_Z, Qt::ControlModifier);
+    EXPECT_EQ(window.statusBar()->currentMessage(), QStringLiteral("Undone: Add animal N1."));
+    target = QApplication::focusWidget() ? QApplication::focusWidget() : &window;
+    QTest::keyClick(target, Qt::Key_Z, Qt::ControlModifier | Qt::ShiftModifier);
+    EXPECT_EQ(window.statusBar()->currentMessage(), QStringLiteral("Redone: Add animal N1."));
+    // The menu's wording: "Undo" and the edit's name, never "Undo Take back".
+    for (QAction* action : window.findChildren<QAction*>())
+        EXPECT_FALSE(action->text().contains(QStringLiteral("Take back"))) << action->text().toStdString();
+}
+
+// View > Plot Background: plots on screen follow the choice.
+TEST(MainWindow, PlotBackgroundMenuTurnsPlotsDark)
+{
+    TempDir dir;
+    TestWindow window;
+    ASSERT_TRUE(window.openColony(QString::fromStdString(makeColony(dir))));
+    auto* dark = window.findChild<QAction*>(QStringLiteral("plot-palette-dark"));
+    auto* light = window.findChild<QAction*>(QStringLiteral("plot-palette-light"));
+    ASSERT_NE(dark, nullptr);
+    ASSERT_NE(light, nullptr);
+    QCustomPlot* plot = window.analysisViews().hierarchy->plot();
+    dark->trigger();
+    plot->replot(QCustomPlot::rpImmediateRefresh);
+    EXPECT_EQ(plot->axisRect(0)->axis(QCPAxis::atLeft)->tickLabelColor(), ui::plotColours(ui::PlotPalette::Dark).text);
+    light->trigger();
+    plot->replot(QCustomPlot::rpImmediateRefresh);
+    EXPECT_EQ(plot->axisRect(0)->axis(QCPAxis::atLeft)->tickLabelColor(), QColor(Qt::black));
 }

@@ -15,7 +15,10 @@
 #include "ui/analysis/rank_timeline_view.h"
 #include "ui/document/qt_convert.h"
 
+#include <QApplication>
 #include <QComboBox>
+#include <QFontMetricsF>
+#include <QStyledItemDelegate>
 #include <QFile>
 #include <QImage>
 #include <QRegularExpression>
@@ -168,33 +171,6 @@ TEST(HierarchyPlotsView, OneGroupOrAll)
     }
 }
 
-TEST(PlotExport, PublicationSizedPngAndPdf)
-{
-    DemoDocument demo;
-    ui::HierarchyPlotsView view(demo.document());
-    finish(view.runner());
-    TempDir dir;
-    const QString png = QString::fromStdString(dir.file("h.png")), pdf = QString::fromStdString(dir.file("h.pdf"));
-    ASSERT_TRUE(ui::exportPng(view.plot(), png));
-    const QImage image(png);
-    // 180 mm at 300 dpi = 2126 px; laid out at 96 dpi (680 px) and scaled by 300/96.
-    EXPECT_NEAR(image.width(), 2126, 2);
-    EXPECT_NEAR(image.height(), 1417, 2); // 120 mm
-    EXPECT_NEAR(image.dotsPerMeterX(), 300 / 0.0254, 2);
-    ASSERT_TRUE(ui::exportPdf(view.plot(), pdf));
-    QFile file(pdf);
-    ASSERT_TRUE(file.open(QIODevice::ReadOnly));
-    const QByteArray bytes = file.readAll();
-    EXPECT_TRUE(bytes.startsWith("%PDF"));
-    // The page is 180 x 120 mm = 510.2 x 340.2 points.
-    const QRegularExpression box(QStringLiteral("/MediaBox \\[0 0 ([0-9.]+) ([0-9.]+)\\]"));
-    const auto match = box.match(QString::fromLatin1(bytes));
-    ASSERT_TRUE(match.hasMatch());
-    EXPECT_NEAR(match.captured(1).toDouble(), 510.2, 1);
-    EXPECT_NEAR(match.captured(2).toDouble(), 340.2, 1);
-    EXPECT_TRUE(view.plot()->legend->visible());
-}
-
 TEST(MainWindowViews, PlotTabsOpenByName)
 {
     DemoDocument demo;
@@ -207,4 +183,49 @@ TEST(MainWindowViews, PlotTabsOpenByName)
     finish(v.matrix->runner());
     EXPECT_GT(v.timeline->visibleLineCount(), 20);
     EXPECT_GT(v.matrix->order().size(), 20);
+}
+
+// 92 animals in 500 pixels: names thinned to one text line apart, more names
+// when zoomed in, all of them back with Fit; the full name in the hover; the
+// order list reads "I&SI" and opens on the command line's default order.
+TEST(MatrixView, ReadableWithNinetyAnimals)
+{
+    DemoDocument demo;
+    ui::MatrixView view(demo.document());
+    view.resize(700, 500);
+    view.show();
+    view.setWindow(core::dayFromCivil(2019, 1, 1), core::dayFromCivil(2025, 12, 31));
+    finish(view.runner());
+    QApplication::processEvents();
+    view.plot()->replot(QCustomPlot::rpImmediateRefresh);
+    view.plot()->replot(QCustomPlot::rpImmediateRefresh);
+    const int n = static_cast<int>(view.order().size());
+    ASSERT_GE(n, 90);
+    const int shown = static_cast<int>(view.rowLabels().size());
+    EXPECT_LT(shown, n);
+    EXPECT_GT(shown, 3);
+    // Shown names are at least a text line apart on screen.
+    QCPAxis* y = view.plot()->yAxis;
+    const double perRow = std::abs(y->coordToPixel(1) - y->coordToPixel(0));
+    const int step = (n + shown - 1) / shown;
+    EXPECT_GE(step * perRow, QFontMetricsF(y->tickLabelFont()).height());
+    view.zoomBy(0.25);
+    view.plot()->replot(QCustomPlot::rpImmediateRefresh);
+    view.plot()->replot(QCustomPlot::rpImmediateRefresh);
+    EXPECT_GT(view.rowLabels().size(), shown);
+    view.fitAll();
+    view.plot()->replot(QCustomPlot::rpImmediateRefresh);
+    view.plot()->replot(QCustomPlot::rpImmediateRefresh);
+    EXPECT_EQ(view.rowLabels().size(), shown);
+    // The hover names the animal in full, with its id.
+    const QString first = view.order().front();
+    EXPECT_TRUE(view.describeAnimal(0).contains(first));
+    EXPECT_TRUE(view.describeCell(1, 0).contains(first));
+    // "I&SI" drawn as plain text (no doubled ampersand), and the default order is the command line's.
+    QComboBox* box = view.methodBox();
+    EXPECT_EQ(box->currentData().toString(), QStringLiteral("isi"));
+    EXPECT_EQ(box->currentText(), QStringLiteral("I&SI"));
+    auto* delegate = qobject_cast<QStyledItemDelegate*>(box->itemDelegate());
+    ASSERT_NE(delegate, nullptr);
+    EXPECT_EQ(delegate->displayText(box->currentText(), QLocale()), QStringLiteral("I&SI"));
 }

@@ -4,6 +4,7 @@
 // the files are the core's figures).
 #include "ui/analysis/sex_ratio_view.h"
 
+#include "core/base/display_names.h"
 #include "core/store/colony_store.h"
 #include "core/research/export_tables.h"
 #include "core/research/species_profile.h"
@@ -19,6 +20,7 @@
 #include <gtest/gtest.h>
 #include <qcustomplot.h>
 
+#include <cmath>
 #include <fstream>
 #include <sstream>
 
@@ -55,12 +57,21 @@ TEST(SexRatioView, FiguresAreTheCoreFigures)
     const auto births = coreBirths(demo.document(), rhesus->gestationDays, rhesus->maturityYears);
     const core::SexRatioAnalysis a = core::analyseSexRatio(births);
     const auto rows = core::sexRatioRows(a);
-    // Identity (one code path): every shown cell is the core's row, empty where undefined.
+    // Identity (one code path): every shown row is the core's row, under its display name, the
+    // exported value in the tooltip and at most four significant digits in the cell.
     ASSERT_EQ(view.figureTable()->rowCount(), static_cast<int>(rows.size()));
     for (size_t i = 0; i < rows.size(); ++i) {
-        EXPECT_EQ(ui::toStdString(view.figureTable()->item(static_cast<int>(i), 0)->text()), rows[i].first);
-        EXPECT_EQ(ui::toStdString(view.figureTable()->item(static_cast<int>(i), 1)->text()), rows[i].second);
+        const QTableWidgetItem* name = view.figureTable()->item(static_cast<int>(i), 0);
+        const QTableWidgetItem* value = view.figureTable()->item(static_cast<int>(i), 1);
+        EXPECT_EQ(ui::toStdString(name->toolTip()), rows[i].first);
+        EXPECT_EQ(ui::toStdString(name->text()), core::displayName(core::CodeKind::Metric, rows[i].first));
+        EXPECT_EQ(ui::toStdString(value->toolTip()), rows[i].second);
+        if (!rows[i].second.empty())
+            EXPECT_NEAR(value->text().toDouble(), std::stod(rows[i].second), 1e-3 * std::abs(std::stod(rows[i].second)));
+        EXPECT_LE(value->text().size(), 9) << ui::toStdString(value->text()); // no 16-digit values on screen
     }
+    // The likelihood-ratio row reads as words, not as lr_chisq.
+    EXPECT_EQ(view.figureTable()->item(11, 0)->text(), QStringLiteral("likelihood-ratio chi-square (1 df)"));
     EXPECT_GT(a.birthsUsed, 0); // the demo has ranked mothers, so the figures are not all empty
     EXPECT_EQ(rows[0].second, std::to_string(a.birthsUsed));
 
@@ -78,8 +89,14 @@ TEST(SexRatioView, FiguresAreTheCoreFigures)
     ASSERT_EQ(view.maternalTable()->rowCount(), static_cast<int>(t.rows.size()));
     for (size_t r = 0; r < t.rows.size(); r += 7)
         for (size_t c = 0; c < t.header.size(); ++c)
-            EXPECT_EQ(ui::toStdString(view.maternalTable()->item(static_cast<int>(r), static_cast<int>(c))->text()),
+            EXPECT_EQ(ui::toStdString(view.maternalTable()->item(static_cast<int>(r), static_cast<int>(c))->toolTip()),
                       t.rows[r][c]);
+    // Its headers are display names; the export's codes are their tooltips.
+    for (size_t c = 0; c < t.header.size(); ++c) {
+        const QTableWidgetItem* head = view.maternalTable()->horizontalHeaderItem(static_cast<int>(c));
+        EXPECT_EQ(ui::toStdString(head->toolTip()), t.header[c]);
+        EXPECT_EQ(ui::toStdString(head->text()), core::displayName(core::CodeKind::Column, t.header[c]));
+    }
 
     // The plot: one point per third with births, at the core's proportion, bars to the Wilson bounds.
     QCPGraph* g = view.plot()->graph(0);

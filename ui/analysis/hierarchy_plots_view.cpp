@@ -6,6 +6,7 @@
 #include "ui/widgets/help_button.h"
 #include "ui/document/visible_refresh.h"
 #include "ui/document/compute_runner.h"
+#include "ui/widgets/figure_caption.h"
 #include "ui/widgets/plot_export.h"
 #include "ui/widgets/progress_strip.h"
 #include "ui/document/qt_convert.h"
@@ -49,7 +50,26 @@ HierarchyPlotsView::HierarchyPlotsView(ColonyDocument* document, QWidget* parent
         controls->addWidget(new HelpButton(QString::fromLatin1(key), this));
     controls->addWidget(progress_, 1);
     controls->addStretch();
-    controls->addWidget(makeExportButton(plot_, QStringLiteral("hierarchy-by-month"), this));
+    PlotFigure figure;
+    figure.plot = plot_;
+    figure.baseName = QStringLiteral("hierarchy-by-month");
+    figure.title = tr("The hierarchy month by month");
+    figure.singleHeightMm = 170;
+    figure.doubleHeightMm = 170;
+    figure.caption = [this] {
+        const core::AnalysisSettings settings = documentAnalysisSettings(document_);
+        std::optional<core::Day> from, to;
+        if (!series_.months.empty()) {
+            from = series_.months.front().period.start;
+            to = series_.months.back().period.end;
+        }
+        return caption::join({caption::group(group_->currentData().toString()), caption::window(from, to),
+                              tr("calendar months; months without encounters left empty"),
+                              tr("conformity of %1 ranks with youngest ascendancy, females from %2 years")
+                                  .arg(caption::elo(settings.elo))
+                                  .arg(settings.maturityYears)});
+    };
+    controls->addWidget(makeExportButton(figure, this));
     auto* layout = new QVBoxLayout(this);
     layout->addLayout(controls);
     layout->addWidget(plot_, 1);
@@ -190,10 +210,13 @@ void HierarchyPlotsView::adopt(core::HierarchySeries series)
     auto orGap = [](const std::optional<double>& v) { return v ? *v : qQNaN(); }; // NaN: QCustomPlot's gap
     for (const core::HierarchyMonth& m : series_.months) {
         keys << (m.period.start + m.period.end) / 2.0 * secondsPerDay;
-        values[HPrime] << orGap(m.hPrime);
-        values[Steepness] << orGap(m.steepness);
-        values[TTri] << orGap(m.tTri);
-        values[Conformity] << orGap(m.conformity);
+        // A month without encounters is a gap in every figure (the conformity
+        // would otherwise repeat the last month's ranks).
+        const bool empty = m.encounters == 0;
+        values[HPrime] << (empty ? qQNaN() : orGap(m.hPrime));
+        values[Steepness] << (empty ? qQNaN() : orGap(m.steepness));
+        values[TTri] << (empty ? qQNaN() : orGap(m.tTri));
+        values[Conformity] << (empty ? qQNaN() : orGap(m.conformity));
         values[Encounters] << static_cast<double>(m.encounters);
     }
     for (int p = 0; p < PanelCount; ++p) {

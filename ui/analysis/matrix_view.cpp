@@ -10,6 +10,7 @@
 #include "ui/widgets/help_button.h"
 #include "ui/document/visible_refresh.h"
 #include "ui/document/compute_runner.h"
+#include "ui/widgets/figure_caption.h"
 #include "ui/widgets/plot_export.h"
 #include "ui/widgets/progress_strip.h"
 #include "ui/document/qt_convert.h"
@@ -19,6 +20,9 @@
 #include <QDateEdit>
 #include <QHBoxLayout>
 #include <QLabel>
+#include <QFontMetricsF>
+#include <QStyledItemDelegate>
+#include <QToolButton>
 #include <QToolTip>
 #include <QVBoxLayout>
 
@@ -38,6 +42,30 @@ QString countText(double v)
 {
     return std::floor(v) == v ? QString::number(static_cast<long long>(v)) : QString::number(v, 'f', 1);
 }
+
+/// A name cut to a label's length; the hover shows it whole.
+QString labelText(const std::string& name)
+{
+    const QString full = toQString(name);
+    return full.size() > 14 ? full.left(13) + QChar(0x2026) : full;
+}
+
+/// Every `step`-th of the n labels (0, step, 2 step...).
+QMap<double, QString> thinned(const QStringList& labels, int step)
+{
+    QMap<double, QString> ticks;
+    for (int i = 0; i < labels.size(); i += step) ticks.insert(i, labels[i]);
+    return ticks;
+}
+
+/// The smallest step that keeps labels one text line (plus a little) apart.
+int labelStep(QCPAxis* axis, const QFont& font)
+{
+    const double perUnit = std::abs(axis->coordToPixel(1) - axis->coordToPixel(0));
+    const double line = QFontMetricsF(font).height() * 1.05;
+    if (perUnit <= 0) return 1;
+    return std::max(1, static_cast<int>(std::ceil(line / perUnit)));
+}
 } // namespace
 
 MatrixView::MatrixView(ColonyDocument* document, QWidget* parent)
@@ -55,7 +83,12 @@ MatrixView::MatrixView(ColonyDocument* document, QWidget* parent)
     for (const core::RankMethodInfo& m : core::rankMethods())
         methodBox_->addItem(QCoreApplication::translate("hierloom::core::RankMethod", m.displayName),
                             QString::fromLatin1(m.code));
-    methodBox_->addItem(tr("Animal id"), QStringLiteral("id"));
+    methodBox_->addItem(QCoreApplication::translate("hierloom::core::DisplayName", "animal id"), QStringLiteral("id"));
+    // Plain item text: the default popup of some styles doubles "&" (it showed "I&&SI").
+    methodBox_->setItemDelegate(new QStyledItemDelegate(methodBox_));
+    methodBox_->setCurrentIndex(methodBox_->findData(QString::fromLatin1(core::rankMethodInfo(*method_).code)));
+    methodBox_->setToolTip(tr("Order of rows and columns; the command line's `matrix` uses the same default (%1)")
+                               .arg(QString::fromLatin1(core::rankMethodInfo(core::kDefaultMatrixOrder).code)));
     groupBox_->addItem(tr("All groups"), QString());
     for (QDateEdit* e : {fromEdit_, toEdit_}) {
         e->setCalendarPopup(true);
@@ -78,7 +111,43 @@ MatrixView::MatrixView(ColonyDocument* document, QWidget* parent)
     controls->addWidget(groupBox_);
     controls->addWidget(progress_, 1);
     controls->addStretch();
-    controls->addWidget(makeExportButton(plot_, QStringLiteral("win-matrix"), this));
+    auto* fit = new QToolButton(this);
+    fit->setObjectName(QStringLiteral("matrixFit"));
+    fit->setText(tr("Fit"));
+    fit->setToolTip(tr("Show the whole matrix (the mouse wheel zooms, dragging moves)"));
+    connect(fit, &QToolButton::clicked, this, &MatrixView::fitAll);
+    auto* zoomIn = new QToolButton(this);
+    zoomIn->setObjectName(QStringLiteral("matrixZoomIn"));
+    zoomIn->setText(QStringLiteral("+"));
+    zoomIn->setToolTip(tr("Zoom in"));
+    connect(zoomIn, &QToolButton::clicked, this, [this] { zoomBy(0.5); });
+    auto* zoomOut = new QToolButton(this);
+    zoomOut->setObjectName(QStringLiteral("matrixZoomOut"));
+    zoomOut->setText(QStringLiteral("\u2212"));
+    zoomOut->setToolTip(tr("Zoom out"));
+    connect(zoomOut, &QToolButton::clicked, this, [this] { zoomBy(2.0); });
+    controls->addWidget(zoomIn);
+    controls->addWidget(zoomOut);
+    controls->addWidget(fit);
+    PlotFigure figure;
+    figure.plot = plot_;
+    figure.baseName = QStringLiteral("win-matrix");
+    figure.title = tr("Win matrix (rows: winners, columns: losers)");
+    figure.singleHeightMm = 100;
+    figure.doubleHeightMm = 175;
+    figure.caption = [this] {
+        const QString order = method_ ? caption::method(*method_, documentAnalysisSettings(document_).elo)
+                                      : QCoreApplication::translate("hierloom::core::DisplayName", "animal id");
+        return caption::join({caption::group(group_), caption::window(toDay(fromEdit_->date()), toDay(toEdit_->date())),
+                              tr("ordered by %1").arg(order), tr("%1 animals").arg(matrix_.n),
+                              tr("crosses: wins against the order"),
+                              std::max(rowStep_, columnStep_) > 1
+                                  ? tr("one name (and total) in %1 shown where rows are narrow")
+                                        .arg(std::max(rowStep_, columnStep_))
+                                  : QString()});
+    };
+    figure.preparePrint = [this] { relabel(); };
+    controls->addWidget(makeExportButton(figure, this));
     auto* layout = new QVBoxLayout(this);
     layout->addLayout(controls);
     layout->addWidget(plot_, 1);
@@ -86,11 +155,19 @@ MatrixView::MatrixView(ColonyDocument* document, QWidget* parent)
 
     plot_->yAxis->setRangeReversed(true);
     plot_->xAxis2->setVisible(true);
-    plot_->xAxis->setTickLabels(false);
     plot_->xAxis2->setTickLabelRotation(-90);
     plot_->xAxis2->setLabel(tr("Loser"));
     plot_->yAxis->setLabel(tr("Winner"));
-    for (QCPAxis* a : {plot_->xAxis, plot_->xAxis2, plot_->yAxis}) {
+    // Totals as the labels of the other two sides, laid out (and thinned) like the names.
+    plot_->yAxis2->setVisible(true);
+    plot_->yAxis2->setRangeReversed(true);
+    plot_->yAxis2->setLabel(tr("Won (row total)"));
+    plot_->xAxis->setTickLabels(true);
+    plot_->xAxis->setTickLabelRotation(-90);
+    plot_->xAxis->setLabel(tr("Lost (column total)"));
+    connect(plot_->yAxis, qOverload<const QCPRange&>(&QCPAxis::rangeChanged), plot_->yAxis2,
+            qOverload<const QCPRange&>(&QCPAxis::setRange));
+    for (QCPAxis* a : {plot_->xAxis, plot_->xAxis2, plot_->yAxis, plot_->yAxis2}) {
         a->grid()->setVisible(false);
         a->setSubTicks(false);
     }
@@ -112,6 +189,14 @@ MatrixView::MatrixView(ColonyDocument* document, QWidget* parent)
     connect(toEdit_, &QDateEdit::editingFinished, this, [this] { setWindow(from_, toDay(toEdit_->date())); });
     connect(progress_, &ProgressStrip::retry, this, &MatrixView::recompute);
     connect(plot_, &QCustomPlot::mouseMove, this, &MatrixView::hover);
+    // Labels follow zoom and size: thinned before each replot, and once more
+    // when the layout that replot made changes the room between rows.
+    connect(plot_, &QCustomPlot::beforeReplot, this, &MatrixView::relabel);
+    connect(plot_, &QCustomPlot::afterReplot, this, [this] {
+        const int rows = rowStep_, columns = columnStep_;
+        relabel();
+        if (rows != rowStep_ || columns != columnStep_) plot_->replot(QCustomPlot::rpQueuedReplot);
+    });
     // Recomputed only while on screen; a hidden tab catches up when shown.
     auto* refresh = new VisibleRefresh(this, [this] { recompute(); });
     connect(document_, &ColonyDocument::changed, refresh, &VisibleRefresh::request);
@@ -305,15 +390,18 @@ void MatrixView::rebuildPlot()
     }
     // Totals: wins at the end of each row, losses under each column.
     QFont small = font();
-    small.setPointSizeF(small.pointSizeF() * (n > 40 ? 0.6 : 0.8));
+    small.setPointSizeF(small.pointSizeF() * (n > 40 ? 0.7 : 0.8));
     auto text = [&](double x, double y, const QString& s, Qt::Alignment align) {
         auto* t = new QCPItemText(plot_);
         t->position->setCoords(x, y);
         t->setPositionAlignment(align);
         t->setText(s);
         t->setFont(small);
-        t->setClipToAxisRect(false);
+        t->setClipToAxisRect(true);
+        return t;
     };
+    rowTotals_.clear();
+    columnTotals_.clear();
     double all = 0;
     for (int i = 0; i < n; ++i) {
         double won = 0, lost = 0;
@@ -322,36 +410,25 @@ void MatrixView::rebuildPlot()
             lost += matrix_.s(j, i);
         }
         all += won;
-        text(n - 0.2, i, countText(won), Qt::AlignLeft | Qt::AlignVCenter);
-        // Column totals turned upright so wide numbers of neighbouring columns do not collide.
-        auto* t = new QCPItemText(plot_);
-        t->position->setCoords(i, n - 0.2);
-        t->setPositionAlignment(Qt::AlignRight | Qt::AlignVCenter);
-        t->setRotation(-90);
-        t->setText(countText(lost));
-        t->setFont(small);
-        t->setClipToAxisRect(false);
+        rowTotals_ << countText(won);
+        columnTotals_ << countText(lost);
     }
-    text(n + 0.3, -1, tr("Won"), Qt::AlignHCenter | Qt::AlignBottom);
-    text(-0.6, n + 1, tr("Lost"), Qt::AlignRight | Qt::AlignVCenter);
-    if (n <= 30)
+    if (n <= 40) // larger matrices: the counts are in the hover text
         for (int i = 0; i < n; ++i)
             for (int j = 0; j < n; ++j)
-                if (matrix_.s(i, j) > 0) {
-                    text(j, i, countText(matrix_.s(i, j)), Qt::AlignCenter);
-                }
+                if (matrix_.s(i, j) > 0) cellCounts_ << text(j, i, countText(matrix_.s(i, j)), Qt::AlignCenter);
 
-    auto ticker = QSharedPointer<QCPAxisTickerText>::create();
-    for (int i = 0; i < n; ++i) ticker->addTick(i, toQString(names_[static_cast<size_t>(i)]));
+    // Names on separate tickers per axis (rows and columns are thinned apart);
+    // the headers of the totals are ticks of their own, so no axis line crosses them.
     QFont tickFont = font();
-    tickFont.setPointSizeF(tickFont.pointSizeF() * (n > 60 ? 0.6 : (n > 30 ? 0.7 : 0.85)));
-    for (QCPAxis* a : {plot_->xAxis, plot_->xAxis2, plot_->yAxis}) {
-        a->setTicker(ticker);
+    tickFont.setPointSizeF(tickFont.pointSizeF() * 0.85);
+    for (QCPAxis* a : {plot_->xAxis, plot_->xAxis2, plot_->yAxis, plot_->yAxis2}) {
+        a->setTicker(QSharedPointer<QCPAxisTickerText>::create());
         a->setTickLabelFont(tickFont);
     }
-    plot_->xAxis->setRange(-1.5, n + 2);
-    plot_->xAxis2->setRange(-1.5, n + 2);
-    plot_->yAxis->setRange(-1.5, n + 3.5);
+    plot_->xAxis->setRange(-1.5, n - 0.5);
+    plot_->xAxis2->setRange(-1.5, n - 0.5);
+    plot_->yAxis->setRange(-1.5, n - 0.5);
     connect(plot_->xAxis, qOverload<const QCPRange&>(&QCPAxis::rangeChanged), plot_->xAxis2,
             qOverload<const QCPRange&>(&QCPAxis::setRange), Qt::UniqueConnection);
     plot_->legend->setVisible(true);
@@ -374,13 +451,84 @@ QStringList MatrixView::order() const
     return out;
 }
 
+void MatrixView::relabel()
+{
+    const int n = matrix_.n;
+    if (n == 0) return;
+    QStringList labels;
+    for (const std::string& name : names_) labels << labelText(name);
+    rowStep_ = labelStep(plot_->yAxis, plot_->yAxis->tickLabelFont());
+    columnStep_ = labelStep(plot_->xAxis2, plot_->xAxis2->tickLabelFont());
+    auto set = [](QCPAxis* axis, const QMap<double, QString>& ticks) {
+        if (auto t = axis->ticker().dynamicCast<QCPAxisTickerText>()) t->setTicks(ticks);
+    };
+    set(plot_->yAxis, thinned(labels, rowStep_));
+    set(plot_->xAxis2, thinned(labels, columnStep_));
+    // Totals where their row or column is labelled; counts only in cells wide enough for them.
+    set(plot_->yAxis2, thinned(rowTotals_, rowStep_));
+    set(plot_->xAxis, thinned(columnTotals_, columnStep_));
+    const double cellWidth = std::abs(plot_->xAxis->coordToPixel(1) - plot_->xAxis->coordToPixel(0));
+    const double cellHeight = std::abs(plot_->yAxis->coordToPixel(1) - plot_->yAxis->coordToPixel(0));
+    // Crosses no larger than the cells (a figure's cells can be a few pixels).
+    if (marks_) {
+        QCPScatterStyle style = marks_->scatterStyle();
+        style.setSize(std::clamp(std::min(cellWidth, cellHeight) * 0.7, 1.5, 9.0));
+        QPen pen = style.pen();
+        pen.setWidthF(std::clamp(std::min(cellWidth, cellHeight) * 0.15, 0.4, 1.3));
+        style.setPen(pen);
+        marks_->setScatterStyle(style);
+    }
+    for (QCPItemText* t : cellCounts_) {
+        const QFontMetricsF m(t->font());
+        t->setVisible(m.horizontalAdvance(t->text()) + 2 <= cellWidth && m.height() <= cellHeight);
+    }
+}
+
+QStringList MatrixView::rowLabels() const
+{
+    QStringList out;
+    if (auto t = plot_->yAxis->ticker().dynamicCast<QCPAxisTickerText>())
+        for (const QString& label : t->ticks()) out << label;
+    return out;
+}
+
+QStringList MatrixView::columnLabels() const
+{
+    QStringList out;
+    if (auto t = plot_->xAxis2->ticker().dynamicCast<QCPAxisTickerText>())
+        for (const QString& label : t->ticks()) out << label;
+    return out;
+}
+
+void MatrixView::fitAll()
+{
+    const int n = matrix_.n;
+    plot_->xAxis->setRange(-1.5, n - 0.5);
+    plot_->yAxis->setRange(-1.5, n - 0.5);
+    plot_->replot(QCustomPlot::rpQueuedReplot);
+}
+
+void MatrixView::zoomBy(double factor)
+{
+    plot_->xAxis->scaleRange(factor, plot_->xAxis->range().center());
+    plot_->yAxis->scaleRange(factor, plot_->yAxis->range().center());
+    plot_->replot(QCustomPlot::rpQueuedReplot);
+}
+
+QString MatrixView::describeAnimal(int index) const
+{
+    if (index < 0 || index >= matrix_.n) return {};
+    const QString id = toQString(ids_[static_cast<size_t>(index)]), name = toQString(names_[static_cast<size_t>(index)]);
+    return name == id ? id : tr("%1 (%2)").arg(name, id);
+}
+
 int MatrixView::markedCount() const { return marks_ ? marks_->data()->size() : 0; }
 
 QString MatrixView::describeCell(int row, int column) const
 {
     const int n = matrix_.n;
     if (row < 0 || column < 0 || row >= n || column >= n || row == column) return {};
-    const QString a = toQString(names_[static_cast<size_t>(row)]), b = toQString(names_[static_cast<size_t>(column)]);
+    const QString a = describeAnimal(row), b = describeAnimal(column);
     QString s = tr("%1 beat %2: %3\n%2 beat %1: %4")
                     .arg(a, b, countText(matrix_.s(row, column)), countText(matrix_.s(column, row)));
     if (row > column && matrix_.s(row, column) > 0) s += tr("\n(wins against the order)");
@@ -391,7 +539,12 @@ void MatrixView::hover(QMouseEvent* event)
 {
     const int column = static_cast<int>(std::lround(plot_->xAxis->pixelToCoord(event->pos().x())));
     const int row = static_cast<int>(std::lround(plot_->yAxis->pixelToCoord(event->pos().y())));
-    const QString text = describeCell(row, column);
+    // Over a label (left of or above the cells): the animal's full name.
+    const QRect cells = plot_->axisRect()->rect();
+    QString text;
+    if (event->pos().x() < cells.left() && event->pos().y() >= cells.top()) text = describeAnimal(row);
+    else if (event->pos().y() < cells.top() && event->pos().x() >= cells.left()) text = describeAnimal(column);
+    else text = describeCell(row, column);
     if (text.isEmpty()) QToolTip::hideText();
     else QToolTip::showText(event->globalPosition().toPoint(), text, plot_);
 }

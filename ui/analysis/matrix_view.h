@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
 #include "core/base/civil_date.h"
+#include "core/ranks/rank_method_registry.h"
 #include "core/ranks/rank_table.h"
 #include "core/ranks/win_matrix.h"
 #include "ui/widgets/matriline_palette.h"
@@ -14,6 +15,7 @@
 
 class QCPColorMap;
 class QCPGraph;
+class QCPItemText;
 class QComboBox;
 class QCustomPlot;
 class QDateEdit;
@@ -57,8 +59,22 @@ public:
     int markedCount() const;
     /// Matriline boundaries drawn (between consecutive rows).
     int boundaryCount() const { return boundaries_; }
-    /// The hover text of a cell.
+    /// The hover text of a cell: both animals' full names and ids, both counts.
     QString describeCell(int row, int column) const;
+    /// The hover text of a row or column label: the animal's full name and id.
+    QString describeAnimal(int index) const;
+    /// Names shown on the left (row) axis after thinning: every k-th animal
+    /// when the rows are too close for every name. The right axis shows the
+    /// same rows' totals won, the bottom axis the columns' totals lost.
+    QStringList rowLabels() const;
+    /// The same for the top (column) axis.
+    QStringList columnLabels() const;
+    /// The method box (its items are drawn as plain text: "I&SI").
+    QComboBox* methodBox() const { return methodBox_; }
+    /// Shows the whole matrix (after zooming in).
+    void fitAll();
+    /// Zooms around the matrix's centre (factor < 1 zooms in).
+    void zoomBy(double factor);
 
 public slots:
     void recompute();
@@ -75,6 +91,8 @@ private:
     void adopt(Result result);
     void rebuildPlot();
     void hover(QMouseEvent* event);
+    /// Labels and totals as many as the rows' and columns' pixel sizes allow.
+    void relabel();
 
     ColonyDocument* document_;
     ComputeRunner* runner_;
@@ -86,7 +104,7 @@ private:
     QDateEdit* toEdit_;
     QLabel* summary_;
 
-    std::optional<core::RankMethod> method_ = core::RankMethod::Elo; ///< empty: by animal id
+    std::optional<core::RankMethod> method_ = core::kDefaultMatrixOrder; ///< empty: by animal id
     std::optional<core::Day> from_, to_;
     QString group_;
     std::vector<std::string> ids_, names_, matriarchs_;
@@ -94,6 +112,9 @@ private:
     MatrilinePalette palette_;
     QCPGraph* marks_ = nullptr;
     int boundaries_ = 0;
+    QStringList rowTotals_, columnTotals_; ///< wins per row, losses per column, as shown
+    QList<QCPItemText*> cellCounts_;
+    int rowStep_ = 1, columnStep_ = 1; ///< every k-th label shown
 };
 
 } // namespace hierloom::ui

@@ -137,10 +137,26 @@ PedigreeView::PedigreeView(ColonyDocument* document, AnimalSelection* selection,
         addAction(a);
     };
     // (Ctrl+1..9 and Ctrl+0 belong to the window: they switch views; a second Ctrl+0 here would make both ambiguous.)
-    addZoomAction(tr("Zoom to Fit Width"), QKeySequence(), [this] { zoomToFitWidth(); });
-    addZoomAction(tr("Actual Size"), QKeySequence(Qt::CTRL | Qt::ALT | Qt::Key_0), [this] { setZoom(1.0); });
-    addZoomAction(tr("Zoom In"), QKeySequence::ZoomIn, [this] { setZoom(zoom_ * 1.25); });
-    addZoomAction(tr("Zoom Out"), QKeySequence::ZoomOut, [this] { setZoom(zoom_ / 1.25); });
+    addZoomAction(tr("Zoom to Fit"), QKeySequence(), [this] {
+        zoomChosen_ = false;
+        zoomToFit();
+    });
+    addZoomAction(tr("Zoom to Fit Width"), QKeySequence(), [this] {
+        zoomChosen_ = true;
+        zoomToFitWidth();
+    });
+    addZoomAction(tr("Actual Size"), QKeySequence(Qt::CTRL | Qt::ALT | Qt::Key_0), [this] {
+        zoomChosen_ = true;
+        setZoom(1.0);
+    });
+    addZoomAction(tr("Zoom In"), QKeySequence::ZoomIn, [this] {
+        zoomChosen_ = true;
+        setZoom(zoom_ * 1.25);
+    });
+    addZoomAction(tr("Zoom Out"), QKeySequence::ZoomOut, [this] {
+        zoomChosen_ = true;
+        setZoom(zoom_ / 1.25);
+    });
     rebuild();
 }
 
@@ -158,9 +174,22 @@ void PedigreeView::zoomToFitWidth()
     setZoom(std::min(1.0, (viewport()->width() - 2) / natural_.width()));
 }
 
+void PedigreeView::zoomToFit()
+{
+    if (natural_.width() <= 0 || natural_.height() <= 0) return;
+    setZoom(std::min({1.0, (viewport()->width() - 2) / natural_.width(), (viewport()->height() - 2) / natural_.height()}));
+}
+
+void PedigreeView::resizeEvent(QResizeEvent* event)
+{
+    QScrollArea::resizeEvent(event);
+    if (!zoomChosen_) zoomToFit();
+}
+
 void PedigreeView::wheelEvent(QWheelEvent* event)
 {
     if (event->modifiers() & Qt::ControlModifier) {
+        zoomChosen_ = true;
         setZoom(zoom_ * std::pow(1.15, event->angleDelta().y() / 120.0));
         event->accept();
         return;
@@ -253,7 +282,8 @@ void PedigreeView::rebuild()
         top = y0 + deepest * level + radius + 30;
     }
     natural_ = QSizeF(std::max(widest + margin, 200.0), top + margin);
-    setZoom(zoom_);
+    if (zoomChosen_) setZoom(zoom_);
+    else zoomToFit(); // at first the whole pedigree, trees and names, is in view
     updatePresence();
 }
 

@@ -58,9 +58,13 @@ public:
     void setZoom(double zoom);
     /// Shrinks the drawing so its whole width fits the view (never enlarges it).
     void zoomToFitWidth();
+    /// Shrinks the drawing so all of it fits the view (never enlarges it). The
+    /// view does this by itself until the person zooms.
+    void zoomToFit();
 
 protected:
     void wheelEvent(QWheelEvent* event) override;
+    void resizeEvent(QResizeEvent* event) override;
 
 private:
     class Canvas;
@@ -76,6 +80,7 @@ private:
     std::vector<std::pair<QString, QPointF>> titles_; ///< line headings
     QSizeF natural_;   ///< the drawing's size at zoom 1
     double zoom_ = 1.0;
+    bool zoomChosen_ = false; ///< the person zoomed: no more fitting by itself
     friend class Canvas;
 };
 

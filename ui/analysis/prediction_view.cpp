@@ -7,6 +7,8 @@
 #include "ui/widgets/help_button.h"
 #include "ui/document/visible_refresh.h"
 #include "ui/document/compute_runner.h"
+#include "core/base/display_names.h"
+#include "ui/widgets/figure_caption.h"
 #include "ui/widgets/plot_export.h"
 #include "ui/widgets/progress_strip.h"
 #include "ui/document/qt_convert.h"
@@ -17,6 +19,7 @@
 #include <QHeaderView>
 #include <QLabel>
 #include <QSplitter>
+#include <QCoreApplication>
 #include <QTableWidget>
 #include <QVBoxLayout>
 
@@ -25,18 +28,16 @@
 
 #include <qcustomplot.h>
 
+#include <algorithm>
+
 namespace hierloom::ui {
 
 namespace {
 QString categoryText(core::DiscordanceCategory c)
 {
-    switch (c) {
-    case core::DiscordanceCategory::DaughterOverMother: return PredictionView::tr("daughter over mother");
-    case core::DiscordanceCategory::SiblingOrder: return PredictionView::tr("sibling order");
-    case core::DiscordanceCategory::WithinMatriline: return PredictionView::tr("within matriline");
-    case core::DiscordanceCategory::CrossMatriline: return PredictionView::tr("across matrilines");
-    }
-    return {};
+    // One vocabulary with the report and the command line's help (core/base/display_names.h).
+    return QCoreApplication::translate("hierloom::core::DisplayName",
+                                       core::displayName(core::CodeKind::Category, core::toString(c)).c_str());
 }
 } // namespace
 
@@ -68,7 +69,22 @@ PredictionView::PredictionView(ColonyDocument* document, AnimalSelection* select
         controls->addWidget(new HelpButton(QString::fromLatin1(key), this));
     controls->addWidget(progress_, 1);
     controls->addStretch();
-    controls->addWidget(makeExportButton(plot_, QStringLiteral("predicted-vs-observed"), this));
+    PlotFigure figure;
+    figure.plot = plot_;
+    figure.baseName = QStringLiteral("predicted-vs-observed");
+    figure.title = tr("Predicted and observed order of the females");
+    // One printed line (about 3.6 mm) per ranked female, plus title, axis and caption.
+    figure.height = [this](bool doubleColumn) {
+        return std::max(doubleColumn ? 110.0 : 90.0, 45.0 + 3.6 * static_cast<double>(prediction_.females.size()));
+    };
+    figure.caption = [this] {
+        const core::AnalysisSettings settings = documentAnalysisSettings(document_);
+        return caption::join({tr("on %1").arg(formatDay(prediction_.at)),
+                              tr("rule: %1").arg(ruleBox_->currentText().toLower()),
+                              tr("observed: %1").arg(caption::elo(settings.elo)),
+                              tr("females from %1 years").arg(settings.maturityYears)});
+    };
+    controls->addWidget(makeExportButton(figure, this));
 
     dyads_->setHorizontalHeaderLabels({tr("Observed above"), tr("Observed below"), tr("Category")});
     dyads_->horizontalHeader()->setStretchLastSection(true);

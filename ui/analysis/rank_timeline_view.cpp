@@ -8,6 +8,7 @@
 #include "ui/document/visible_refresh.h"
 #include "ui/document/compute_runner.h"
 #include "ui/analysis/pedigree_view.h"
+#include "ui/widgets/figure_caption.h"
 #include "ui/widgets/plot_export.h"
 #include "ui/widgets/progress_strip.h"
 #include "ui/document/qt_convert.h"
@@ -91,7 +92,22 @@ RankTimelineView::RankTimelineView(ColonyDocument* document, AnimalSelection* se
     controls->addWidget(marksBox_);
     controls->addWidget(progress_, 1);
     controls->addStretch();
-    controls->addWidget(makeExportButton(plot_, QStringLiteral("rank-timeline"), this));
+    PlotFigure figure;
+    figure.plot = plot_;
+    figure.baseName = QStringLiteral("rank-timeline");
+    figure.title = tr("Ranks over time");
+    figure.singleHeightMm = 100;
+    figure.doubleHeightMm = 130;
+    figure.caption = [this] {
+        std::optional<core::Day> from, to;
+        if (!timeline_.checkpoints.empty()) {
+            from = timeline_.checkpoints.front();
+            to = timeline_.checkpoints.back();
+        }
+        return caption::join({caption::group(group_), caption::window(from, to), stepBox_->currentText().toLower(),
+                              caption::elo(documentAnalysisSettings(document_).elo)});
+    };
+    controls->addWidget(makeExportButton(figure, this));
 
     auto* split = new QSplitter(Qt::Horizontal, this);
     split->addWidget(plot_);
@@ -131,10 +147,14 @@ RankTimelineView::RankTimelineView(ColonyDocument* document, AnimalSelection* se
     side->addElement(0, 0, plot_->legend);
     side->addElement(1, 0, new QCPLayoutElement(plot_));
     side->setRowStretchFactor(0, 0.001);
+    side->setMargins(QMargins(2, 0, 4, 2)); // the legend's frame stays inside the plot's edge
     plot_->legend->setVisible(true);
     QFont legendFont = font();
     legendFont.setPointSizeF(legendFont.pointSizeF() * 0.85);
     plot_->legend->setFont(legendFont);
+    // A long legend (many matrilines) takes a second column rather than being cut at the bottom.
+    connect(plot_, &QCustomPlot::beforeReplot, this,
+            [this] { fitLegendToHeight(plot_->legend, plot_->axisRect()->outerRect().height()); });
     plot_->setMouseTracking(true);
     plot_->addLayer(QStringLiteral("selected"), plot_->layer(QStringLiteral("main")), QCustomPlot::limAbove);
     plot_->setMinimumWidth(400);

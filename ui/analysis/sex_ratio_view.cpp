@@ -7,6 +7,8 @@
 #include "ui/document/colony_edit_facade.h"
 #include "ui/document/document_settings.h"
 #include "ui/widgets/help_button.h"
+#include "core/base/display_names.h"
+#include "ui/widgets/figure_caption.h"
 #include "ui/widgets/plot_export.h"
 #include "ui/document/qt_convert.h"
 #include "ui/document/document_queries.h"
@@ -24,6 +26,8 @@
 #include <QTreeWidget>
 #include <QVBoxLayout>
 
+#include <QCoreApplication>
+
 #include <qcustomplot.h>
 
 namespace hierloom::ui {
@@ -32,18 +36,38 @@ namespace {
 
 const QColor kPoint(0x00, 0x72, 0xB2);
 
-/// A read-only table of text cells (the very strings the exports write).
+QString nameOf(core::CodeKind kind, const std::string& code)
+{
+    return QCoreApplication::translate("hierloom::core::DisplayName", core::displayName(kind, code).c_str());
+}
+
+/// A number as people read it: up to four significant digits (the exports keep every digit).
+QString readable(const std::string& cell)
+{
+    bool ok = false;
+    const double v = QString::fromStdString(cell).toDouble(&ok);
+    if (!ok || cell.find_first_of(".eE") == std::string::npos) return toQString(cell);
+    return QString::number(v, 'g', 4);
+}
+
+/// A read-only table of the cells the exports write, headers by their display
+/// names, numbers rounded for reading (the tooltip has the exported value).
 void fillTable(QTableWidget* table, const core::ExportTable& t)
 {
     table->clear();
     table->setColumnCount(static_cast<int>(t.header.size()));
     table->setRowCount(static_cast<int>(t.rows.size()));
-    QStringList header;
-    for (const std::string& h : t.header) header << toQString(h);
-    table->setHorizontalHeaderLabels(header);
+    for (size_t c = 0; c < t.header.size(); ++c) {
+        auto* head = new QTableWidgetItem(nameOf(core::CodeKind::Column, t.header[c]));
+        head->setToolTip(toQString(t.header[c]));
+        table->setHorizontalHeaderItem(static_cast<int>(c), head);
+    }
     for (size_t r = 0; r < t.rows.size(); ++r)
         for (size_t c = 0; c < t.rows[r].size(); ++c) {
-            auto* item = new QTableWidgetItem(toQString(t.rows[r][c]));
+            const std::string& cell = t.rows[r][c];
+            const bool reason = t.header[c] == "left_out_reason" && !cell.empty();
+            auto* item = new QTableWidgetItem(reason ? nameOf(core::CodeKind::Reason, cell) : readable(cell));
+            item->setToolTip(toQString(cell));
             item->setFlags(Qt::ItemIsSelectable | Qt::ItemIsEnabled);
             table->setItem(static_cast<int>(r), static_cast<int>(c), item);
         }
@@ -150,7 +174,7 @@ SexRatioView::SexRatioView(ColonyEditFacade* facade, QWidget* parent)
     auto* top = new QSplitter(Qt::Horizontal, this);
     top->addWidget(box(captioned(tr("Figures"), QStringLiteral("sex_ratio_logistic"), nullptr, this), figures_));
     top->addWidget(box(captioned(tr("Proportion of sons by maternal rank third"), QStringLiteral("sex_ratio"),
-                                 makeExportButton(plot_, QStringLiteral("sex-ratio-by-rank-third"), this), this),
+                                 makeExportButton(figure(), this), this),
                        plot_));
     top->setStretchFactor(0, 2);
     top->setStretchFactor(1, 3);
@@ -211,6 +235,34 @@ SexRatioView::SexRatioView(ColonyEditFacade* facade, QWidget* parent)
     connect(document_, &ColonyDocument::changed, refresh, &VisibleRefresh::request);
     loadSettings();
     recompute();
+}
+
+PlotFigure SexRatioView::figure()
+{
+    PlotFigure f;
+    f.plot = plot_;
+    f.baseName = QStringLiteral("sex-ratio-by-rank-third");
+    f.title = tr("Proportion of sons by the mother's rank third at conception");
+    f.singleHeightMm = 75;
+    f.doubleHeightMm = 100;
+    f.caption = [this] {
+        const core::BirthCounting counting = core::countNonBirths(
+            document_->colony(), document_->residences(),
+            documentMaternalOptions(toStdString(group_->currentData().toString()), gestation_->value(),
+                                    maturity_->value(), documentAnalysisSettings(document_).elo));
+        return caption::join(
+            {caption::group(group_->currentData().toString()),
+             tr("births from %1 (founders excluded): %2 used")
+                 .arg(counting.recordStart ? formatDay(*counting.recordStart) : tr("the record's start"))
+                 .arg(analysis_.birthsUsed),
+             tr("%1, gestation %2 days, females ranked from %3 years")
+                 .arg(species_->currentText())
+                 .arg(gestation_->value())
+                 .arg(maturity_->value()),
+             tr("mother's relative %1 rank at conception").arg(caption::elo(documentAnalysisSettings(document_).elo)),
+             tr("bars: Wilson 95 % intervals")});
+    };
+    return f;
 }
 
 void SexRatioView::loadSettings()
@@ -291,11 +343,14 @@ void SexRatioView::recompute()
     figures_->setRowCount(static_cast<int>(rows.size()));
     figures_->setHorizontalHeaderLabels({tr("Figure"), tr("Value")});
     for (size_t i = 0; i < rows.size(); ++i) {
-        for (int c = 0; c < 2; ++c) {
-            auto* item = new QTableWidgetItem(toQString(c == 0 ? rows[i].first : rows[i].second));
-            item->setFlags(Qt::ItemIsSelectable | Qt::ItemIsEnabled);
-            figures_->setItem(static_cast<int>(i), c, item);
-        }
+        // The figure's name and a rounded value; the tooltips hold the code and the exported value.
+        auto* name = new QTableWidgetItem(nameOf(core::CodeKind::Metric, rows[i].first));
+        name->setToolTip(toQString(rows[i].first));
+        auto* value = new QTableWidgetItem(readable(rows[i].second));
+        value->setToolTip(toQString(rows[i].second));
+        for (QTableWidgetItem* item : {name, value}) item->setFlags(Qt::ItemIsSelectable | Qt::ItemIsEnabled);
+        figures_->setItem(static_cast<int>(i), 0, name);
+        figures_->setItem(static_cast<int>(i), 1, value);
     }
     figures_->resizeColumnToContents(0);
 
@@ -306,7 +361,8 @@ void SexRatioView::recompute()
         item->setText(0, toQString(b.offspring));
         item->setText(1, toQString(b.mother));
         item->setText(2, formatDay(b.birth));
-        item->setText(3, tr(core::describe(b.exclusion)));
+        item->setText(3, b.detail.empty() ? nameOf(core::CodeKind::Reason, core::toString(b.exclusion))
+                                          : toQString(b.detail));
         item->setToolTip(3, toQString(core::toString(b.exclusion)));
     }
     for (int c = 0; c < 3; ++c) leftOut_->resizeColumnToContents(c);
@@ -318,6 +374,16 @@ void SexRatioView::recompute()
     if (!document_->isOpen()) notes << tr("No colony is open.");
     else if (births_.empty()) notes << tr("No births with a recorded birth date: every figure is empty.");
     else {
+        const core::BirthCounting counting = core::countNonBirths(
+            document_->colony(), document_->residences(),
+            documentMaternalOptions(toStdString(group_->currentData().toString()), gestation_->value(),
+                                    maturity_->value(), documentAnalysisSettings(document_).elo));
+        if (counting.recordStart)
+            notes << tr("Births are counted from the record's first encounter, %1; %2 founders and %3 animals born "
+                        "before then are not births.")
+                         .arg(formatDay(*counting.recordStart))
+                         .arg(counting.founders)
+                         .arg(counting.bornBefore);
         notes << tr("%1 births used, %2 left out.").arg(analysis_.birthsUsed).arg(analysis_.birthsLeftOut);
         if (analysis_.birthsUsed == 0) notes << tr("No birth could be used: every figure is empty.");
         else if (!analysis_.fit.slope)
@@ -338,18 +404,19 @@ void SexRatioView::showPlot()
     half->point1->setCoords(0, 0.5);
     half->point2->setCoords(1, 0.5);
     half->setPen(QPen(Qt::gray, 1, Qt::DashLine));
+    // The counts under each third's name, where no point or interval can cover them.
+    const QString names[] = {tr("Low\n(rel. rank < 1/3)"), tr("Middle\n(1/3 to < 2/3)"), tr("High\n(2/3 and above)")};
+    auto ticker = QSharedPointer<QCPAxisTickerText>::create();
     for (int k = 0; k < 3; ++k) {
         const core::RankThird& t = analysis_.thirds[static_cast<size_t>(k)];
-        auto* count = new QCPItemText(plot_);
-        count->position->setCoords(k + 1, 0.97);
-        count->setPositionAlignment(Qt::AlignHCenter | Qt::AlignTop);
-        count->setText(tr("%1 sons / %2 births").arg(t.sons).arg(t.births));
+        ticker->addTick(k + 1, tr("%1\n%2 sons\nof %3 births").arg(names[k]).arg(t.sons).arg(t.births));
         if (!t.proportion) continue; // no births in this third: nothing to draw
         x << k + 1;
         y << *t.proportion;
         minus << *t.proportion - t.low.value_or(*t.proportion);
         plus << t.high.value_or(*t.proportion) - *t.proportion;
     }
+    plot_->xAxis->setTicker(ticker);
     plot_->graph(0)->setData(x, y, true);
     if (auto* bars = qobject_cast<QCPErrorBars*>(plot_->plottable(1))) bars->setData(minus, plus);
     plot_->replot();

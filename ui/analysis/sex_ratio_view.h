@@ -1,5 +1,6 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
+#include "ui/widgets/plot_export.h"
 #include "core/research/maternal_rank.h"
 #include "core/research/sex_ratio_analysis.h"
 #include "core/research/species_profile.h"
@@ -54,6 +55,7 @@ public:
 
 private:
     void loadSettings();
+    PlotFigure figure();
     void refreshGroups();
     void speciesChosen();
     void recompute();

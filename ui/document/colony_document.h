@@ -111,6 +111,9 @@ signals:
     /// Another program wrote to the file and it was read again (catchUpWithFile);
     /// `message` names the file, what changed in numbers, and that the history was emptied.
     void changedOutside(const QString& message);
+    /// An edit was undone (`undone` true) or redone; `text` is the edit's name
+    /// ("Enter NC004 over NC012"), for the status bar.
+    void historyStepped(bool undone, const QString& text);
 
 private:
     // The writers: the facade and the undo commands reach the store and the

@@ -7,9 +7,18 @@ namespace hierloom::ui {
 
 ColonyCommand::ColonyCommand(ColonyDocument* document, const QString& text) : QUndoCommand(text), document_(document) {}
 
-void ColonyCommand::redo() { run(true); }
+void ColonyCommand::redo()
+{
+    run(true);
+    // The first redo() is the edit; later ones are the person's Redo.
+    if (std::exchange(done_, true)) emit document_->historyStepped(false, text());
+}
 
-void ColonyCommand::undo() { run(false); }
+void ColonyCommand::undo()
+{
+    run(false);
+    emit document_->historyStepped(true, text());
+}
 
 void ColonyCommand::run(bool forward)
 {

@@ -44,6 +44,7 @@ private:
 
     ColonyDocument* document_;
     core::FieldProblems* firstFailure_ = nullptr;
+    bool done_ = false; ///< the first redo() (the edit itself) has run
 };
 
 /// Removes and inserts encounters (an entry, an edit, a delete, a whole session).

@@ -171,7 +171,7 @@ void EncounterEntryPanel::undoWholeSession()
         focusEntry();
         return;
     }
-    const auto problems = facade_->deleteEncounters(all, tr("Take back the session of %1 (%2)").arg(formatDay(day_), what));
+    const auto problems = facade_->deleteEncounters(all, tr("Delete the session of %1 (%2)").arg(formatDay(day_), what));
     if (!problems.empty()) showProblems(problems);
     focusEntry();
 }

@@ -38,6 +38,24 @@ namespace hierloom::ui {
 
 namespace {
 
+/// "Name (ID)", or the id of an animal without a name (as the Prediction view shows them).
+QString animalText(const core::Colony& colony, const std::string& id)
+{
+    const int k = colony.animalIndex(id);
+    const std::string& name = k >= 0 ? colony.animals[static_cast<size_t>(k)].name : std::string();
+    return name.empty() || name == id ? toQString(id) : QStringLiteral("%1 (%2)").arg(toQString(name), toQString(id));
+}
+
+/// The matriline of an animal for people: its matriarch's name, or nothing
+/// for a male without a recorded mother (he heads no line).
+QString lineText(const core::Colony& colony, const std::string& animal, const std::string& matriarch)
+{
+    const int k = colony.animalIndex(animal);
+    if (matriarch.empty() || (matriarch == animal && k >= 0 && colony.animals[static_cast<size_t>(k)].sex == core::Sex::Male))
+        return {};
+    return animalText(colony, matriarch);
+}
+
 QTableWidget* makeTable(const QStringList& header, QWidget* parent)
 {
     auto* t = new QTableWidget(0, static_cast<int>(header.size()), parent);
@@ -294,16 +312,30 @@ void PlannerView::rerun()
                                                                      ? QColor(0xfd, 0xe2, 0xdc)
                                                                      : QColor(0xe2, 0xf0, 0xdc);
         setRow(moves_, row++,
-               {toQString(m.animal), toQString(m.matriarch), rankIn(m.groupBefore, m.rankBefore),
+               {animalText(document_->colony(), m.animal), lineText(document_->colony(), m.animal, m.matriarch),
+                rankIn(m.groupBefore, m.rankBefore),
                 rankIn(m.groupAfter, m.rankAfter), toQString(m.status)},
                tint);
     }
     row = 0;
     for (const core::ScenarioReversal& v : result_->reversals)
         setRow(reversals_, row++,
-               {toQString(v.group), toQString(v.predictedAbove), toQString(v.predictedBelow),
+               {toQString(v.group), animalText(document_->colony(), v.predictedAbove),
+                animalText(document_->colony(), v.predictedBelow),
                 QString::number(v.winsPredictedAbove), QString::number(v.winsPredictedBelow),
                 v.againstPredictionBefore ? tr("yes") : tr("no")});
+    // Observed wins count the decided encounters of a window before the scenario's date: say which.
+    const QString window = tr("%1 days to %2").arg(s.recentDays).arg(formatDay(result_->at));
+    reversals_->setHorizontalHeaderLabels({tr("Group"), tr("Predicted above"), tr("Predicted below"),
+                                           tr("Observed wins above\n(%1)").arg(window),
+                                           tr("Observed wins below\n(%1)").arg(window), tr("Already predicted so before")});
+    reversals_->setToolTip(tr("Adult females only. Observed wins: decided encounters between the two in the %1 up to "
+                              "the scenario's date.")
+                               .arg(tr("%1 days").arg(s.recentDays)));
+    moves_->setToolTip(tr("Adult females only (at least %1 years old on %2): the rule predicts their order.")
+                           .arg(s.maturityYears)
+                           .arg(formatDay(result_->at)));
+    tabs_->setTabText(1, tr("Predicted Moves (adult females)"));
     moves_->resizeColumnsToContents();
     reversals_->resizeColumnsToContents();
     tabs_->setTabText(2, tr("Relationships to Reverse (%1)").arg(result_->reversals.size()));
@@ -366,12 +398,24 @@ void PlannerView::fillOrders(const core::Scenario& s)
             // Tint the females the changes move, so they stand out from the unchanged.
             const bool differs = !move.isEmpty() && !move.startsWith(QStringLiteral("unchanged"));
             setRow(table, static_cast<int>(i),
-                   {QString::number(i + 1), toQString(o.animal) + (o.observedRank ? QString() : tr(" (new)")),
-                    toQString(o.matriarch), toQString(p.animal), toQString(p.matriarch), move},
+                   {QString::number(i + 1),
+                    animalText(colony, o.animal) + (o.observedRank ? QString() : tr(" (new)")),
+                    lineText(colony, o.animal, o.matriarch), animalText(colony, p.animal),
+                    lineText(colony, p.animal, p.matriarch), move},
                    differs ? QColor(0xff, 0xf4, 0xd6) : QColor());
         }
         table->resizeColumnsToContents();
+        // As wide as its columns, so that after a split the scroll area scrolls rather than cutting "Move".
+        table->setMinimumWidth(table->horizontalHeader()->length() + table->verticalHeader()->width() +
+                               2 * table->frameWidth() + 24);
         table->setMinimumHeight(260);
+        auto* only = new QLabel(tr("Adult females only (at least %1 years old on %2); observed order by Elo.")
+                                    .arg(s.maturityYears)
+                                    .arg(formatDay(result_->at)),
+                                box);
+        only->setObjectName(QStringLiteral("adultFemalesOnly"));
+        only->setWordWrap(true);
+        bl->addWidget(only);
         bl->addWidget(table, 1);
         row->addWidget(box, 1);
     }

@@ -7,7 +7,9 @@
 #include "ui/document/colony_document.h"
 #include "ui/document/colony_edit_facade.h"
 #include "ui/document/document_settings.h"
+#include "ui/widgets/figure_caption.h"
 #include "ui/widgets/help_button.h"
+#include "ui/widgets/plot_export.h"
 #include "ui/document/visible_refresh.h"
 #include "ui/document/qt_convert.h"
 #include "ui/planning/stability_thresholds_dialog.h"
@@ -92,6 +94,25 @@ StabilityView::StabilityView(ColonyEditFacade* facade, QWidget* parent)
         controls->addWidget(new HelpButton(QString::fromLatin1(key), this));
     controls->addStretch();
     controls->addWidget(thresholdsButton_);
+    PlotFigure figure;
+    figure.plot = plot_;
+    figure.baseName = QStringLiteral("stability");
+    figure.title = tr("Stability watch");
+    figure.singleHeightMm = 100;
+    figure.doubleHeightMm = 120;
+    figure.caption = [this] {
+        std::optional<core::Day> from, to;
+        if (!series_.periods.empty()) {
+            from = series_.periods.front().period.start;
+            to = series_.periods.back().period.end;
+        }
+        const core::StabilityOptions o = documentStabilityOptions(document_, {}, core::PeriodLength::Month);
+        return caption::join({caption::group(group_->currentText()), caption::window(from, to),
+                              length_->currentText().toLower(), caption::elo(o.elo),
+                              tr("severe: behaviour severity %1 or more; dashed: alert thresholds")
+                                  .arg(o.thresholds.severeAtLeast)});
+    };
+    controls->addWidget(makeExportButton(figure, this));
     banner_->setObjectName(QStringLiteral("stabilityBanner"));
     banner_->setWordWrap(true);
     banner_->setStyleSheet(QStringLiteral("QLabel { background: #fde2dc; color: #7a0000; border: 1px solid #cc0000;"
@@ -118,7 +139,15 @@ StabilityView::StabilityView(ColonyEditFacade* facade, QWidget* parent)
     auto* layout = new QVBoxLayout(this);
     layout->addLayout(controls);
     layout->addWidget(banner_);
+    auto* key = new QLabel(tr("Severe rate, times the median: severe encounters per animal-day in the period divided by "
+                              "the median of that rate over the group's periods of the same length (1 = a usual "
+                              "period). Dashed lines: alert thresholds; red dots: periods that raised an alert; "
+                              "periods without encounters are left empty."),
+                           this);
+    key->setObjectName(QStringLiteral("stabilityKey"));
+    key->setWordWrap(true);
     layout->addWidget(split, 1);
+    layout->addWidget(key);
     layout->addWidget(makeCautionLabel(this));
 
     // Three stacked panels sharing the date axis.
@@ -127,7 +156,8 @@ StabilityView::StabilityView(ColonyEditFacade* facade, QWidget* parent)
     auto ticker = QSharedPointer<QCPAxisTickerDateTime>::create();
     ticker->setDateTimeSpec(Qt::UTC);
     ticker->setDateTimeFormat(QStringLiteral("MMM\nyyyy"));
-    const QString labels[] = {tr("Counter-dom.\nshare"), tr("Severe\nx median"), tr("Rank change\nper animal")};
+    const QString labels[] = {tr("Counter-\ndominance\nshare"), tr("Severe rate,\ntimes the\nmedian"),
+                              tr("Mean rank\nchange per\nanimal")};
     for (int p = 0; p < 3; ++p) {
         auto* rect = new QCPAxisRect(plot_);
         plot_->plotLayout()->addElement(p, 0, rect);
@@ -229,6 +259,8 @@ void StabilityView::recompute()
                                                       : std::nullopt)
                                                : sp.rankChangePerAnimal;
             const double x = midpoint(sp.period);
+            // A period without encounters is a gap, never a zero.
+            if (sp.encounters == 0) v.reset();
             line->addData(x, v ? *v : qQNaN());
             if (v) top = std::max(top, *v);
             if (v && alerted.count({i, static_cast<int>(signal)})) marks->addData(x, *v);

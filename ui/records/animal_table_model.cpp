@@ -40,7 +40,9 @@ void AnimalTableModel::rebuild()
     for (const core::Animal& a : colony.animals) {
         Row row;
         const int node = lines.index(a.id);
-        if (node >= 0) row.founder = toQString(lines.id(lines.matriarch(node)));
+        // A male with no recorded mother heads no matriline: no matriarch, rather than himself.
+        if (node >= 0 && !(a.sex == core::Sex::Male && lines.matriarch(node) == node))
+            row.founder = toQString(lines.id(lines.matriarch(node)));
         const bool gone = a.exit && *a.exit <= today;
         row.present = !gone;
         if (a.birth) row.age = core::ageInYears(*a.birth, gone ? *a.exit : today);

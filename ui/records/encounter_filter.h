@@ -13,6 +13,21 @@ struct EncounterFilter {
     std::optional<core::Day> to;   ///< last day shown (inclusive)
     std::string animal;            ///< shown when this id won or lost
     std::optional<std::string> observer;
+    /// Free text, lower case: shown when any of ids, behaviour, group,
+    /// observer or note contains it (ignoring the case of ASCII letters).
+    std::string text;
+
+    static bool contains(const std::string& field, const std::string& lowerNeedle)
+    {
+        const auto lower = [](unsigned char c) { return static_cast<char>(c >= 'A' && c <= 'Z' ? c + 32 : c); };
+        if (lowerNeedle.size() > field.size()) return false;
+        for (size_t i = 0; i + lowerNeedle.size() <= field.size(); ++i) {
+            size_t k = 0;
+            while (k < lowerNeedle.size() && lower(static_cast<unsigned char>(field[i + k])) == lowerNeedle[k]) ++k;
+            if (k == lowerNeedle.size()) return true;
+        }
+        return false;
+    }
 
     bool accepts(const core::Encounter& e) const
     {
@@ -20,6 +35,12 @@ struct EncounterFilter {
         if (to && e.date > *to) return false;
         if (!animal.empty() && e.winner != animal && e.loser != animal) return false;
         if (observer && e.observer != *observer) return false;
+        if (!text.empty()) {
+            bool found = false;
+            for (const std::string* field : {&e.winner, &e.loser, &e.behaviour, &e.group, &e.observer, &e.note})
+                found = found || contains(*field, text);
+            if (!found) return false;
+        }
         return true;
     }
     bool operator==(const EncounterFilter&) const = default;

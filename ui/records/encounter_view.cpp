@@ -12,6 +12,7 @@
 #include <QHBoxLayout>
 #include <QHeaderView>
 #include <QLabel>
+#include <QLineEdit>
 #include <QLocale>
 #include <QSignalBlocker>
 #include <QTableView>
@@ -54,6 +55,12 @@ EncounterView::EncounterView(ColonyDocument* document, QWidget* parent)
     auto* observerLabel = new QLabel(tr("O&bserver:"), this);
     observerLabel->setBuddy(observer_);
 
+    search_ = new QLineEdit(this);
+    search_->setObjectName(QStringLiteral("encounterSearch"));
+    search_->setPlaceholderText(tr("Search encounters and notes"));
+    search_->setToolTip(tr("Shows the encounters whose animal ids, behaviour, group, observer or note contain this text "
+                           "(upper or lower case alike)"));
+    search_->setClearButtonEnabled(true);
     auto* filters = new QHBoxLayout;
     filters->addWidget(fromCheck_);
     filters->addWidget(from_);
@@ -65,7 +72,8 @@ EncounterView::EncounterView(ColonyDocument* document, QWidget* parent)
     filters->addSpacing(12);
     filters->addWidget(observerLabel);
     filters->addWidget(observer_);
-    filters->addStretch(1);
+    filters->addSpacing(12);
+    filters->addWidget(search_, 1);
     filters->addWidget(summary_);
 
     table_->setModel(model_);
@@ -89,6 +97,7 @@ EncounterView::EncounterView(ColonyDocument* document, QWidget* parent)
     for (QDateEdit* edit : {from_, to_}) connect(edit, &QDateEdit::dateChanged, this, &EncounterView::applyFilter);
     for (QComboBox* combo : {animal_, observer_})
         connect(combo, &QComboBox::currentIndexChanged, this, &EncounterView::applyFilter);
+    connect(search_, &QLineEdit::textChanged, this, &EncounterView::applyFilter);
     connect(model_, &QAbstractItemModel::modelReset, this, &EncounterView::updateSummary);
     // The model rebuilt itself on the same signal first (it connected earlier).
     connect(document_, &ColonyDocument::changed, this, &EncounterView::refillChoices);
@@ -160,6 +169,7 @@ void EncounterView::applyFilter()
     filter.animal = toStdString(animal_->currentData().toString());
     const QVariant observer = observer_->currentData();
     if (observer.isValid()) filter.observer = toStdString(observer.toString());
+    filter.text = toStdString(search_->text().trimmed().toLower());
     model_->setFilter(filter);
     updateSummary();
 }

@@ -6,6 +6,7 @@ class QCheckBox;
 class QComboBox;
 class QDateEdit;
 class QLabel;
+class QLineEdit;
 class QTableView;
 
 namespace hierloom::ui {
@@ -27,6 +28,8 @@ public:
     void setDateRange(const QDate& from, const QDate& to);
     void setAnimal(const QString& id);
     void setObserver(const QString& name);
+    /// The search box over ids, behaviour, group, observer and notes.
+    QLineEdit* searchBox() const { return search_; }
 
 private:
     void refillChoices();
@@ -41,6 +44,7 @@ private:
     QDateEdit* to_;
     QComboBox* animal_;
     QComboBox* observer_;
+    QLineEdit* search_;
     QLabel* summary_;
     QTableView* table_;
 };

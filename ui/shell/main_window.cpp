@@ -1,6 +1,8 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "ui/shell/main_window.h"
 
+#include "ui/widgets/plot_palette.h"
+
 #include "core/base/colony_file_error.h"
 #include "ui/records/animal_view.h"
 #include "ui/shell/backup_actions.h"
@@ -35,6 +37,7 @@
 #include <QTabWidget>
 #include <QScopeGuard>
 #include <QTimer>
+#include <QActionGroup>
 #include <QUndoStack>
 
 namespace hierloom::ui {
@@ -86,6 +89,10 @@ MainWindow::MainWindow(const QString& colonyPath, QWidget* parent)
     });
     connect(document_, &ColonyDocument::changedOutside, this,
             [this](const QString& message) { statusBar()->showMessage(message, 30000); });
+    // Undo and Redo (menu, keys or the entry panel) say what they did.
+    connect(document_, &ColonyDocument::historyStepped, this, [this](bool undone, const QString& text) {
+        statusBar()->showMessage(undone ? tr("Undone: %1.").arg(text) : tr("Redone: %1.").arg(text), 10000);
+    });
     connect(welcome_, &WelcomePanel::openRequested, this, [this] { openDialog(false); });
     connect(welcome_, &WelcomePanel::newRequested, this, &MainWindow::newColonyDialog);
     connect(welcome_, &WelcomePanel::demoRequested, this, &MainWindow::openDemoColony);
@@ -144,6 +151,19 @@ void MainWindow::buildMenus()
         show->setShortcut(viewShortcut(entry));
         show->setObjectName(QStringLiteral("view-") + QString::fromLatin1(entry.id));
         viewActions_ << show;
+    }
+    // Plots on a light or a dark background on screen; exported figures are always on white.
+    view->addSeparator();
+    QMenu* plots = view->addMenu(tr("&Plot Background"));
+    auto* palettes = new QActionGroup(plots);
+    const PlotPalette stored = storedPlotPalette();
+    for (const auto& [text, palette] : {std::pair{tr("&Light"), PlotPalette::Light}, std::pair{tr("&Dark"), PlotPalette::Dark}}) {
+        QAction* a = plots->addAction(text, this, [this, palette = palette] { setPlotPalette(this, palette); });
+        a->setCheckable(true);
+        a->setChecked(palette == stored);
+        a->setObjectName(palette == PlotPalette::Dark ? QStringLiteral("plot-palette-dark")
+                                                      : QStringLiteral("plot-palette-light"));
+        palettes->addAction(a);
     }
     QMenu* analysis = menuBar()->addMenu(tr("&Analysis"));
     settingsAction_ = analysis->addAction(tr("Analysis &Settings..."), this,

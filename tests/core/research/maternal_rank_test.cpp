@@ -137,10 +137,11 @@ TEST(MaternalRank, LeftOutBirthsCarryTheirReason)
 {
     const HandColony c;
     const auto rows = c.ranks(options());
-    // Every animal with a birth date is a birth: 8 offspring and the 6 adults,
-    // whose mothers are not recorded.
-    ASSERT_EQ(rows.size(), 14U);
-    EXPECT_EQ(rows.at("A").exclusion, BirthExclusion::UnknownMother);
+    // The 8 offspring are the births; the 6 adults were born (2000, 2017) before the
+    // record's first encounter (2019-12-01) and are not births (docs/methods.md, "Births").
+    ASSERT_EQ(rows.size(), 8U);
+    EXPECT_EQ(rows.count("A"), 0U);
+    EXPECT_EQ(countNonBirths(c.colony, c.where, options()).bornBefore, 6);
     // docs/methods.md: m < 2 is left out. On 2019-12-05 only A is a rated female.
     const MaternalRankRow& a1 = rows.at("A1");
     EXPECT_EQ(a1.exclusion, BirthExclusion::FewerThanTwoRanked);
@@ -157,8 +158,54 @@ TEST(MaternalRank, LeftOutBirthsCarryTheirReason)
     EXPECT_EQ(rows.at("U1").atConception.relativeRank, 1.0); // the rank itself is still reported
     EXPECT_EQ(rows.at("N1").exclusion, BirthExclusion::UnknownMother);
     EXPECT_FALSE(rows.at("N1").atConception.rankedFemales);
-    // F entered on 2020-03-01, after her offspring's conception.
+    // F entered on 2020-03-01, after her offspring's conception (2019-12-20), and the reason says so.
     EXPECT_EQ(rows.at("F1").exclusion, BirthExclusion::MotherNotResident);
+    EXPECT_EQ(rows.at("F1").detail, "the mother F arrived on 2020-03-01, after conception");
+    EXPECT_TRUE(rows.at("B1").detail.empty());
+}
+
+// Founders are never births, whatever their birth date; births conceived before
+// the record began say so rather than blaming the mother's residence.
+TEST(MaternalRank, FoundersAndAnimalsBornBeforeTheRecordAreNotBirths)
+{
+    Colony colony;
+    auto add = [&](const std::string& id, Sex sex, Day birth, const std::string& mother, EntryType type, Day from) {
+        Animal a;
+        a.id = id;
+        a.sex = sex;
+        a.birth = birth;
+        a.mother = mother;
+        a.entryType = type;
+        a.entry = from;
+        colony.animals.push_back(a);
+        colony.residences.push_back({id, "main", from, std::nullopt, {}});
+    };
+    // The record begins with the first encounter, 2019-01-05; residences begin then too.
+    const Day start = on(2019, 1, 5);
+    add("M", Sex::Female, on(2010, 5, 1), "", EntryType::Founder, start);
+    add("N", Sex::Female, on(2012, 5, 1), "", EntryType::Founder, start);
+    add("Y", Sex::Female, on(2019, 3, 1), "", EntryType::Founder, start); // a founder born after the start
+    add("P", Sex::Male, on(2018, 4, 1), "M", EntryType::Born, start);     // born before the record
+    add("Q", Sex::Female, on(2019, 3, 1), "M", EntryType::Born, on(2019, 3, 1)); // conceived 2018-09-17
+    Encounter e;
+    e.date = start;
+    e.winner = "M";
+    e.loser = "N";
+    e.group = "main";
+    e.seq = 1;
+    colony.encounters.push_back(e);
+    colony.reindex();
+    const ResidenceIndex where(colony.animals, colony.residences);
+    const std::vector<MaternalRankRow> rows = computeMaternalRanks(colony, where, options());
+    ASSERT_EQ(rows.size(), 1U); // Q alone: M, N, Y are founders, P was born before the record
+    EXPECT_EQ(rows[0].offspring, "Q");
+    EXPECT_EQ(rows[0].exclusion, BirthExclusion::MotherNotResident);
+    EXPECT_EQ(rows[0].detail, "conceived on 2018-09-17, before the record began on 2019-01-05");
+    EXPECT_TRUE(rows[0].conceivedBeforeRecord);
+    const BirthCounting c = countNonBirths(colony, where, options());
+    EXPECT_EQ(c.recordStart, start);
+    EXPECT_EQ(c.founders, 3);
+    EXPECT_EQ(c.bornBefore, 1);
 }
 
 TEST(MaternalRank, FromAndToSelectByBirthDate)
