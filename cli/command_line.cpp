@@ -40,6 +40,7 @@ int run(int argc, const char* const* argv, std::ostream& out, std::ostream& err)
     addRestoreCommand(app, ctx, action);
     addMergeCommand(app, ctx, action);
     addHistoryCommand(app, ctx, action);
+    addHealthCommand(app, ctx, action);
     describeDefaults(app);
     requireFiniteNumbers(app);
     try {

@@ -28,5 +28,6 @@ void addBackupCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
 void addRestoreCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 void addMergeCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 void addHistoryCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
+void addHealthCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 
 } // namespace hierloom::cli

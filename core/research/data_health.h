@@ -20,6 +20,11 @@ inline constexpr int kDefaultUnseenDays = 14;
 /// differ by at most this many minutes.
 inline constexpr int kDefaultMatchMinutes = 5;
 
+/// Shown with every list of animals not seen (CLI, view, report).
+inline constexpr const char* kUnseenCaution =
+    "An animal nobody has seen may be ill, injured or missing: check on it. What is done is decided by the "
+    "veterinary and animal-care staff under the institution's approved protocols and local regulations.";
+
 /// What data health looks at (docs/methods.md, "Data health").
 struct HealthOptions {
     std::optional<Day> from; ///< inclusive; default: all data
