@@ -75,7 +75,7 @@ TEST(ViewRegistry, ViewMenuHasEveryViewWithItsShortcut)
 {
     OpenWindow w;
     const std::vector<ui::ViewEntry>& views = ui::viewRegistry();
-    ASSERT_EQ(views.size(), 10U);
+    ASSERT_EQ(views.size(), 11U);
     const QList<QAction*>& actions = w.window.viewActions();
     ASSERT_EQ(actions.size(), static_cast<qsizetype>(views.size()));
     std::set<QString> shortcuts, ids;

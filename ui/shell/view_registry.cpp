@@ -7,6 +7,7 @@
 #include "ui/analysis/rank_timeline_view.h"
 #include "ui/analysis/sex_ratio_view.h"
 #include "ui/entry/encounter_entry_panel.h"
+#include "ui/planning/health_view.h"
 #include "ui/planning/planner_view.h"
 #include "ui/planning/stability_view.h"
 #include "ui/records/animal_view.h"
@@ -46,6 +47,8 @@ const std::vector<ViewEntry>& viewRegistry()
          [](const ViewContext& c) { return c.parts.manager.planner = new PlannerView(c.facade, c.window); }},
         {"stability", QT_TRANSLATE_NOOP("hierloom::ui::ViewRegistry", "&Stability"), Qt::Key_0,
          [](const ViewContext& c) { return c.parts.manager.stability = new StabilityView(c.facade, c.window); }},
+        {"health", QT_TRANSLATE_NOOP("hierloom::ui::ViewRegistry", "&Data Health"), Qt::Key_D,
+         [](const ViewContext& c) { return new HealthView(c.document, c.window); }},
     };
     return views;
 }

@@ -46,6 +46,7 @@ inline constexpr HelpTopic figureHelpTopics[] = {
     {"rank_changes", QT_TRANSLATE_NOOP("hierloom::ui::HelpTopic", "Rank changes")},
     {"severe_aggression", QT_TRANSLATE_NOOP("hierloom::ui::HelpTopic", "Severe aggression")},
     {"relatedness", QT_TRANSLATE_NOOP("hierloom::ui::HelpTopic", "Coefficient of relatedness")},
+    {"data_health", QT_TRANSLATE_NOOP("hierloom::ui::HelpTopic", "Data health")},
 };
 
 inline constexpr int figureHelpTopicCount = static_cast<int>(std::size(figureHelpTopics));
