@@ -154,6 +154,7 @@ ImportAssistantDialog::ImportAssistantDialog(ColonyEditFacade* facade, QWidget* 
     unknown_->setHorizontalHeaderLabels({tr("Name in the sheet"), tr("Rows"), tr("Animal id"), tr("Add as new animal"),
                                          tr("Sex of a new animal (F, M, U)")});
     unknown_->horizontalHeader()->setStretchLastSection(true);
+    unknown_->setEditTriggers(QAbstractItemView::AllEditTriggers);
     unknown_->verticalHeader()->hide();
     problems_->setObjectName(QStringLiteral("importProblems"));
     problems_->setReadOnly(true);
@@ -162,6 +163,7 @@ ImportAssistantDialog::ImportAssistantDialog(ColonyEditFacade* facade, QWidget* 
     auto* buttons = new QHBoxLayout;
     buttons->addStretch();
     auto* cancel = new QPushButton(tr("Close"), this);
+    browse_->setAutoDefault(false); // Enter in the path field reads the sheet, never opens the file chooser
     for (QPushButton* b : {check_, save_, import_, cancel}) {
         b->setAutoDefault(false);
         buttons->addWidget(b);
