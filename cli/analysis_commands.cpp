@@ -11,9 +11,11 @@
 #include "core/ranks/rank_method_registry.h"
 #include "core/ranks/rank_table.h"
 #include "core/ranks/win_matrix.h"
+#include "core/research/data_health.h"
 
 #include <CLI/CLI.hpp>
 
+#include <map>
 #include <ostream>
 #include <sstream>
 
@@ -35,6 +37,8 @@ struct RanksOptions {
     bool corrected = false;
     std::string every;
     unsigned threads = 0;
+    int minEncounters = kDefaultMinEncounters;
+    bool health = false;
 };
 
 void runRanks(CommandContext& ctx, const RanksOptions& o)
@@ -80,17 +84,32 @@ void runRanks(CommandContext& ctx, const RanksOptions& o)
         ctx.err << "elo: k = " << formatNumber(*table.kUsed) << (o.optimiseK ? " (optimised)" : "")
                 << ", start rule " << toString(r.startRule)
                 << ", ranked among animals resident on " << (table.rankedOn ? formatDate(*table.rankedOn) : "-") << "\n";
+    // Data health (docs/methods.md, "Data health"): the encounters behind each
+    // rank and a flag below the threshold, added after the original columns.
+    std::map<std::string, int> counts;
+    for (const auto& [id, n] : encounterCounts(loaded.colony, sel.from, sel.to, sel.group)) counts[id] = n;
     out << "animal,rank,score";
     if (o.randomise > 0) out << ",rating_low,rating_high,mean_rank";
     if (elo) out << ",start_rule";
+    if (o.health) out << ",encounters,few_encounters";
+    if (o.health && o.randomise > 0) out << ",interval_width";
     out << '\n';
+    int flagged = 0;
     for (const RankRow& row : table.rows) {
         out << csvField(row.animal) << ',' << row.rank << ',' << formatNumber(row.score);
         if (o.randomise > 0)
             out << ',' << formatNumber(row.low) << ',' << formatNumber(row.high) << ',' << formatNumber(row.meanRank);
         if (elo) out << ruleCell;
+        const int n = counts[row.animal];
+        flagged += n < o.minEncounters;
+        if (o.health) out << ',' << n << ',' << (n < o.minEncounters ? "yes" : "no");
+        if (o.health && o.randomise > 0)
+            out << ',' << (row.low && row.high ? formatNumber(*row.high - *row.low) : std::string());
         out << '\n';
     }
+    if (flagged > 0)
+        ctx.err << "ranks: " << flagged << " of " << table.rows.size() << " ranked animals have fewer than "
+                << o.minEncounters << " encounters in the window: their ranks are not stable (--health lists them)\n";
     emit(ctx, out.str());
 }
 
@@ -117,6 +136,11 @@ void addRanksCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
         ->check(CLI::IsMember({"day", "week", "month", "year"}));
     cmd->add_option("--out", ctx.outFile, "write the CSV to this file instead of standard output");
     cmd->add_option("--threads", o->threads, "threads for randomisations (default: every core)");
+    cmd->add_option("--min-encounters", o->minEncounters,
+                    "flag animals with fewer encounters than this in the window (few_encounters; default: 10)")
+        ->check(CLI::Range(0, 1000000));
+    cmd->add_flag("--health", o->health,
+                  "add the data-health columns encounters and few_encounters (and interval_width with --randomise)");
     cmd->callback([&ctx, &action, o] { action = [&ctx, o] { runRanks(ctx, *o); }; });
 }
 

@@ -45,6 +45,7 @@ int run(int argc, const char* const* argv, std::ostream& out, std::ostream& err)
     addMergeCommand(app, ctx, action);
     addHistoryCommand(app, ctx, action);
     addCodesCommand(app, ctx, action);
+    addHealthCommand(app, ctx, action);
     describeDefaults(app);
     requireFiniteNumbers(app);
     try {

@@ -31,5 +31,6 @@ void addRestoreCommand(CLI::App& app, CommandContext& ctx, CommandAction& action
 void addMergeCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 void addHistoryCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 void addOverviewCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
+void addHealthCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 
 } // namespace hierloom::cli

@@ -6,6 +6,9 @@
 #include "core/store/colony_csv_export.h"
 #include "core/store/colony_import.h"
 #include "core/store/colony_store.h"
+#include "core/base/csv_reader.h"
+#include "core/store/saved_mappings.h"
+#include "core/store/sheet_import.h"
 #include "core/demo/demo_colony_file.h"
 
 #include <CLI/CLI.hpp>
@@ -39,25 +42,85 @@ void addImportCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
     struct Options {
         std::string colony;
         ImportPaths paths;
+        std::string mapping;
+        std::string savedMapping;
+        std::string saveAs;
+        std::string dates;
     };
     auto o = std::make_shared<Options>();
     cmd->add_option("COLONY_FILE", o->colony, "the colony file to add to")->required();
     cmd->add_option("--animals", o->paths.animals, "animals.csv (id, sex, birth_date, mother, ...)");
     cmd->add_option("--residences", o->paths.residences,
                     "residences.csv (animal, group, from, to); without it new animals live in group 'main'");
-    cmd->add_option("--encounters", o->paths.encounters, "encounters.csv (date, time, winner, loser, ...)");
+    cmd->add_option("--encounters", o->paths.encounters,
+                    "encounters.csv (date, time, winner, loser, ...); with --mapping, the team's own sheet (CSV or TSV)");
+    cmd->add_option("--mapping", o->mapping,
+                    "an import mapping file (docs/file-formats.md) saying what the --encounters sheet's columns mean "
+                    "(default: none, the plain columns)");
+    cmd->add_option("--saved-mapping", o->savedMapping,
+                    "use the import mapping saved in the colony file under this name (default: none)");
+    cmd->add_option("--save-mapping", o->saveAs,
+                    "after a successful import, save the --mapping file in the colony file under this name "
+                    "(default: not saved)");
+    cmd->add_option("--dates", o->dates, "the sheet's date order, overriding the mapping's: iso, day-month-year or "
+                                         "month-day-year (default: the mapping's)")
+        ->check(CLI::IsMember({"iso", "day-month-year", "month-day-year"}));
     cmd->callback([&ctx, &action, o] {
         action = [&ctx, o] {
+            const bool mapped = !o->mapping.empty() || !o->savedMapping.empty();
             if (o->paths.animals.empty() && o->paths.residences.empty() && o->paths.encounters.empty())
                 throw BadInputError("import: name at least one of --animals, --residences, --encounters");
+            if (!o->mapping.empty() && !o->savedMapping.empty())
+                throw BadInputError("import: give --mapping or --saved-mapping, not both");
+            if (mapped && (o->paths.encounters.empty() || !o->paths.animals.empty() || !o->paths.residences.empty()))
+                throw BadInputError("import: a mapping reads one sheet, given as --encounters; import animals and "
+                                    "residences files in a separate import");
+            if (!mapped && (!o->dates.empty() || !o->saveAs.empty()))
+                throw BadInputError("import: --dates and --save-mapping need --mapping");
+            if (!o->saveAs.empty() && o->mapping.empty())
+                throw BadInputError("import: --save-mapping saves a --mapping file");
             ColonyStore store = ColonyStore::open(o->colony);
+            ImportMapping mapping;
+            std::string mappingText;
+            if (mapped) {
+                std::string name = o->mapping;
+                if (!o->mapping.empty()) {
+                    try {
+                        mappingText = readWholeFile(o->mapping);
+                    } catch (const std::exception&) {
+                        throw BadInputError(o->mapping + ": cannot be read (no such file, or no permission to read it)");
+                    }
+                } else {
+                    const auto text = savedMappingText(store, o->savedMapping);
+                    if (!text) {
+                        std::string names;
+                        for (const std::string& n : savedMappingNames(store)) names += (names.empty() ? "" : ", ") + n;
+                        throw BadInputError("import: " + o->colony + " holds no mapping named '" + o->savedMapping +
+                                            "' (saved: " + (names.empty() ? std::string("none") : names) + ")");
+                    }
+                    mappingText = *text;
+                    name = o->colony + " (mapping '" + o->savedMapping + "')";
+                }
+                MappingFile file = readMappingFile(name, mappingText);
+                if (!file.ok()) {
+                    ctx.err << file.problems.text();
+                    throw BadInputError("nothing was imported; " + o->colony + " is unchanged");
+                }
+                mapping = std::move(file.mapping);
+                if (!o->dates.empty()) mapping.dates = *parseDateOrder(o->dates);
+            }
             // The scheduled backup (backup_interval_hours) is taken before the file changes.
             if (backupIfDue(store, std::chrono::system_clock::now()))
                 ctx.err << "backed up " << o->colony << " into " << backupFolder(o->colony) << "\n";
-            const ImportResult result = importFiles(store, o->paths, today());
+            const ImportResult result =
+                mapped ? importSheet(store, mapping, o->paths.encounters, today()) : importFiles(store, o->paths, today());
             if (!result.ok()) {
                 ctx.err << result.problems.text();
                 throw BadInputError("nothing was imported; " + o->colony + " is unchanged");
+            }
+            if (!o->saveAs.empty()) {
+                store.setSetting(kMappingKeyPrefix + o->saveAs, mappingText);
+                ctx.err << "saved the mapping as '" << o->saveAs << "' in " << o->colony << "\n";
             }
             ctx.err << "imported " << result.animals << " animals, " << result.residences
                     << " residences, " << result.encounters << " encounters into " << o->colony << "\n";

@@ -9,6 +9,8 @@
 #include "core/planning/planning_caution.h"
 #include "core/ranks/rank_table.h"
 #include "core/base/residence_index.h"
+#include "core/research/data_health.h"
+#include "report/health_section.h"
 #include "report/report_layout.h"
 #include "report/report_text.h"
 
@@ -59,13 +61,19 @@ void observedAndPredicted(ReportLayout& doc, const Colony& colony, const Residen
     eloRanks(colony, where, o.group, at, o.elo, o.startRule, &rows);
     ReportTable observed;
     observed.header = {QObject::tr("#"), QObject::tr("Animal"), QObject::tr("Sex"), QObject::tr("Matriline"),
-                       QObject::tr("Elo")};
-    observed.widths = {0.6, 1.4, 0.6, 1.4, 1};
+                       QObject::tr("Elo"), QObject::tr("Enc.")};
+    observed.widths = {0.6, 1.4, 0.6, 1.4, 1, 0.7};
+    // Data health: the encounters behind each rank; too few are tinted (docs/methods.md, "Data health").
+    std::map<std::string, int> counts;
+    for (const auto& [id, n] : encounterCounts(colony, std::nullopt, at, o.group)) counts[id] = n;
     for (const RankRow& r : rows) {
         const int a = colony.animalIndex(r.animal);
+        const int n = counts[r.animal];
         observed.rows.push_back({QString::number(r.rank), qs(r.animal),
                                  a >= 0 ? qs(toString(colony.animals[static_cast<size_t>(a)].sex)) : QString(),
-                                 qs(lineOf(lines, r.animal)), r.score ? QString::number(*r.score, 'f', 0) : QString()});
+                                 qs(lineOf(lines, r.animal)), r.score ? QString::number(*r.score, 'f', 0) : QString(),
+                                 QString::number(n)});
+        observed.highlighted.push_back(n < kDefaultMinEncounters);
     }
     ReportTable predicted;
     predicted.header = {QObject::tr("#"), QObject::tr("Female"), QObject::tr("Matriline"), QObject::tr("Obs."),
@@ -82,10 +90,12 @@ void observedAndPredicted(ReportLayout& doc, const Colony& colony, const Residen
                               "first, with the matriline (named after its matriarch). Right: the order the matrilineal inheritance "
                               "rule predicts for the mature females (%2 ascendancy, maturity %3 years); Obs. = her "
                               "observed rank among them, Disc. = pairs whose observed order reverses the "
-                              "prediction (tinted).")
+                              "prediction (tinted). Enc. = encounters behind the rank; tinted on the left: fewer "
+                              "than %5, too few for a stable rank.")
                       .arg(qs(formatDate(at)), qs(toString(o.rule)))
                       .arg(o.maturityYears)
-                      .arg(qs(toString(o.startRule))),
+                      .arg(qs(toString(o.startRule)))
+                      .arg(kDefaultMinEncounters),
                   true);
     doc.sideBySide(observed, QObject::tr("Observed order (Elo)"), predicted, QObject::tr("Predicted order (inheritance)"));
 }
@@ -359,6 +369,14 @@ int paintHierarchyReport(QPagedPaintDevice& device, const Colony& colony, const 
     rankChanges(doc, colony, where, lines, o, at);
     foresight(doc, colony, where, o, at);
     stability(doc, colony, where, lines, o, at);
+    HealthOptions ho;
+    ho.from = es.firstDay;
+    ho.to = at;
+    ho.group = o.group;
+    ho.today = at;
+    ho.elo = o.elo;
+    ho.randomisations = 500;
+    paintHealthSection(doc, dataHealth(colony, where, ho), qs(o.group));
     doc.heading(QObject::tr("Methods and references"));
     for (const QString& m : methodsText(o.elo)) doc.paragraph(m, true);
     doc.finish();

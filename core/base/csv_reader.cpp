@@ -8,7 +8,7 @@
 
 namespace hierloom::core {
 
-CsvReader::CsvReader(std::string_view text) : text_(text)
+CsvReader::CsvReader(std::string_view text, char delimiter) : text_(text), delimiter_(delimiter)
 {
     if (text_.substr(0, 3) == "\xEF\xBB\xBF") pos_ = 3;
 }
@@ -55,13 +55,13 @@ bool CsvReader::next(std::vector<std::string_view>& fields)
                 break;
             }
             fields.emplace_back(buf);
-            if (pos_ < n && text_[pos_] != ',' && text_[pos_] != '\n' && text_[pos_] != '\r') {
+            if (pos_ < n && text_[pos_] != delimiter_ && text_[pos_] != '\n' && text_[pos_] != '\r') {
                 error_ = "unexpected text after a closing quote";
                 return false;
             }
         } else {
             size_t end = pos_;
-            while (end < n && text_[end] != ',' && text_[end] != '\n' && text_[end] != '\r') {
+            while (end < n && text_[end] != delimiter_ && text_[end] != '\n' && text_[end] != '\r') {
                 if (text_[end] == '"') {
                     error_ = "a quote inside an unquoted field (quote the whole field and double the quote)";
                     return false;
@@ -76,7 +76,7 @@ bool CsvReader::next(std::vector<std::string_view>& fields)
             pos_ = end;
         }
         if (pos_ >= n) return true;
-        if (text_[pos_] == ',') {
+        if (text_[pos_] == delimiter_) {
             ++pos_;
             continue;
         }

@@ -15,7 +15,9 @@ public:
     /// Longest field accepted; a longer one is an error, not a memory hog.
     static constexpr size_t maxFieldBytes = 1 << 16;
 
-    explicit CsvReader(std::string_view text);
+    /// `delimiter` separates fields: ',' for CSV, '\t' or ';' for other
+    /// spreadsheet exports (the import mapping's sheets).
+    explicit CsvReader(std::string_view text, char delimiter = ',');
 
     /// Reads the next record into `fields`; false at the end or on error.
     /// Blank lines (including trailing ones) are skipped.
@@ -27,6 +29,7 @@ public:
 
 private:
     std::string_view text_;
+    char delimiter_ = ',';
     size_t pos_ = 0;
     int lineNo_ = 1;
     int recordLine_ = 0;

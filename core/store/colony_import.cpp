@@ -389,6 +389,12 @@ ImportResult importFiles(ColonyStore& store, const ImportPaths& paths, Day today
     read(paths.residences, input.residences);
     read(paths.encounters, input.encounters);
     if (!result.ok()) return result;
+    return importInput(store, std::move(input), today);
+}
+
+ImportResult importInput(ColonyStore& store, ImportInput input, Day today)
+{
+    ImportResult result;
     std::optional<ImportSource> encounters = std::move(input.encounters);
     input.encounters.reset();
 
@@ -415,7 +421,7 @@ ImportResult importFiles(ColonyStore& store, const ImportPaths& paths, Day today
             EncounterAppender out(store, tx);
             checkAndAppendEncounters(residenceIndexOf(existingAnimals, existingResidences, plan), uids, *encounters,
                                      today, plan.problems, out, epoch);
-            if (plan.ok()) out.finish("import of " + paths.encounters);
+            if (plan.ok()) out.finish("import of " + encounters->name);
             result.encounters = static_cast<std::size_t>(out.count());
         } else {
             // Only to report every problem in one pass; nothing will be written.

@@ -84,4 +84,8 @@ struct ImportResult {
 /// written; a problem rolls everything back.
 ImportResult importFiles(ColonyStore& store, const ImportPaths& paths, Day today);
 
+/// importFiles for files already read (their names are used in messages and
+/// in the audit row): the same checks, the same single transaction.
+ImportResult importInput(ColonyStore& store, ImportInput input, Day today);
+
 } // namespace hierloom::core

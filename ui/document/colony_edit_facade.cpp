@@ -1,6 +1,9 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "ui/document/colony_edit_facade.h"
 
+#include "core/store/saved_mappings.h"
+#include "core/store/sheet_import.h"
+
 #include "core/store/analysis_settings_store.h"
 
 #include "core/research/species_profile.h"
@@ -264,6 +267,32 @@ core::ImportResult ColonyEditFacade::importFiles(const core::ImportPaths& paths,
         if (readBackError) *readBackError = toQString(error.what());
     }
     return result;
+}
+
+core::ImportResult ColonyEditFacade::importSheet(const core::ImportMapping& mapping, const QString& sheetPath,
+                                                 QString* readBackError)
+{
+    core::ImportResult result;
+    if (auto p = writable(); !p.empty()) {
+        result.problems.add("", 0, "", p.front().message);
+        return result;
+    }
+    result = core::importSheet(document_->writableStore(), mapping, toStdString(sheetPath), today());
+    if (!result.ok() || result.animals + result.residences + result.encounters == 0) return result;
+    document_->clearHistory(tr("an import added records outside the undo history"));
+    try {
+        document_->reload();
+    } catch (const core::ColonyFileError& error) {
+        if (readBackError) *readBackError = toQString(error.what());
+    }
+    return result;
+}
+
+core::FieldProblems ColonyEditFacade::saveMapping(const core::ImportMapping& mapping)
+{
+    if (mapping.name.empty()) return {{"name", tr("A saved mapping needs a name.").toStdString()}};
+    return setSettings({{core::kMappingKeyPrefix + mapping.name, core::writeMappingFile(mapping)}},
+                       tr("Save import mapping %1").arg(toQString(mapping.name)));
 }
 
 core::MergeReport ColonyEditFacade::checkMerge(const QString& otherPath)

@@ -5,6 +5,7 @@
 #include "core/planning/stability_watch.h"
 #include "core/store/colony_edits.h"
 #include "core/store/colony_import.h"
+#include "core/store/import_mapping.h"
 #include "core/store/colony_merge.h"
 #include "core/store/colony_store.h"
 #include "core/ranks/analysis_settings.h"
@@ -88,6 +89,12 @@ public:
     /// is cleared and the records re-read; a failure to read them back is put
     /// in `readBackError`.
     core::ImportResult importFiles(const core::ImportPaths& paths, QString* readBackError = nullptr);
+    /// Imports a team's spreadsheet through an import mapping (core/store/sheet_import.h),
+    /// all or nothing, like importFiles.
+    core::ImportResult importSheet(const core::ImportMapping& mapping, const QString& sheetPath,
+                                   QString* readBackError = nullptr);
+    /// Saves (or replaces) a named import mapping in the colony file (undoable).
+    core::FieldProblems saveMapping(const core::ImportMapping& mapping);
     /// Checks a merge of another colony file without writing (throws when a file cannot be read).
     core::MergeReport checkMerge(const QString& otherPath);
     /// Merges another colony file (all or nothing; report.written says

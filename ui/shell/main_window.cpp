@@ -13,6 +13,7 @@
 #include "ui/shell/demo_colony_copy.h"
 #include "ui/records/encounter_view.h"
 #include "ui/shell/help_menu.h"
+#include "ui/records/import_assistant_dialog.h"
 #include "ui/shell/import_dialog.h"
 #include "ui/records/record_history_dialog.h"
 #include "ui/analysis/analysis_settings_dialog.h"
@@ -130,6 +131,13 @@ void MainWindow::buildMenus()
     file->addSeparator();
     importAction_ = file->addAction(tr("&Import CSV..."), this, &MainWindow::importCsv);
     importAction_->setShortcut(QKeySequence(tr("Ctrl+I")));
+    // A team's own spreadsheet through an import mapping; enabled with the plain import.
+    QAction* importSheet = file->addAction(tr("Import &Spreadsheet..."), this, [this] {
+        ImportAssistantDialog dialog(facade_, this);
+        dialog.exec();
+    });
+    importSheet->setObjectName(QStringLiteral("importSpreadsheet"));
+    connect(importAction_, &QAction::enabledChanged, importSheet, &QAction::setEnabled);
     addReportActions(file, this, document_);
     addResearchExportAction(file, this, document_);
     file->addSeparator();

@@ -8,6 +8,7 @@
 #include "ui/analysis/sex_ratio_view.h"
 #include "ui/analysis/support_view.h"
 #include "ui/entry/encounter_entry_panel.h"
+#include "ui/planning/health_view.h"
 #include "ui/planning/planner_view.h"
 #include "ui/planning/stability_view.h"
 #include "ui/records/animal_view.h"
@@ -50,6 +51,8 @@ const std::vector<ViewEntry>& viewRegistry()
         // Ctrl+1 ... Ctrl+0 are taken: kin support takes Ctrl+K.
         {"support", QT_TRANSLATE_NOOP("hierloom::ui::ViewRegistry", "Supp&ort"), Qt::Key_K,
          [](const ViewContext& c) { return c.parts.analysis.support = new SupportView(c.document, c.window); }},
+        {"health", QT_TRANSLATE_NOOP("hierloom::ui::ViewRegistry", "&Data Health"), Qt::Key_D,
+         [](const ViewContext& c) { return new HealthView(c.document, c.window); }},
     };
     return views;
 }

@@ -47,7 +47,7 @@ struct ViewEntry {
 };
 
 /// Every view, in tab order: animals, encounters, timeline, prediction, matrix,
-/// hierarchy, sex-ratio, entry, planner, stability, support.
+/// hierarchy, sex-ratio, entry, planner, stability, support, health.
 const std::vector<ViewEntry>& viewRegistry();
 
 /// The translated title; without the mnemonic '&' for tab labels.

@@ -50,6 +50,7 @@ inline constexpr HelpTopic figureHelpTopics[] = {
     {"severe_aggression", QT_TRANSLATE_NOOP("hierloom::ui::HelpTopic", "Severe aggression")},
     {"relatedness", QT_TRANSLATE_NOOP("hierloom::ui::HelpTopic", "Coefficient of relatedness")},
     {"kin_support", QT_TRANSLATE_NOOP("hierloom::ui::HelpTopic", "Kin support and the nepotism index")},
+    {"data_health", QT_TRANSLATE_NOOP("hierloom::ui::HelpTopic", "Data health")},
 };
 
 inline constexpr int figureHelpTopicCount = static_cast<int>(std::size(figureHelpTopics));

@@ -1,0 +1,213 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#include "core/research/data_health.h"
+
+#include "core/ranks/encounter_selection.h"
+#include "core/ranks/randomised_elo.h"
+#include "core/stats/cohens_kappa.h"
+
+#include <algorithm>
+#include <cstdlib>
+#include <limits>
+#include <map>
+#include <set>
+
+namespace hierloom::core {
+
+namespace {
+
+bool inWindow(const Encounter& e, std::optional<Day> from, Day to, const std::string& group)
+{
+    return (!from || e.date >= *from) && e.date <= to && (group.empty() || e.group == group);
+}
+
+/// Direction of an encounter seen from its dyad (ids in byte order): 0 the
+/// first id won, 1 the second won, 2 a draw.
+int direction(const Encounter& e)
+{
+    if (e.outcome == Outcome::Draw) return 2;
+    return e.winner < e.loser ? 0 : 1;
+}
+
+std::pair<std::string, std::string> dyadOf(const Encounter& e)
+{
+    return e.winner < e.loser ? std::make_pair(e.winner, e.loser) : std::make_pair(e.loser, e.winner);
+}
+
+/// Matches two observers' encounters of one group and day: same dyad, times
+/// at most `tolerance` minutes apart (closest first, then entry order); an
+/// encounter without a time matches one of the same dyad without a time.
+void matchDay(const std::vector<const Encounter*>& a, const std::vector<const Encounter*>& b, int tolerance,
+              ObserverAgreement& out, std::vector<std::vector<int>>& table)
+{
+    std::vector<bool> used(b.size(), false);
+    int matched = 0;
+    for (const Encounter* x : a) {
+        int best = -1;
+        int bestGap = 0;
+        for (size_t j = 0; j < b.size(); ++j) {
+            if (used[j] || dyadOf(*b[j]) != dyadOf(*x)) continue;
+            if (x->time.has_value() != b[j]->time.has_value()) continue;
+            const int gap = x->time ? std::abs(*x->time - *b[j]->time) : 0;
+            if (gap > tolerance) continue;
+            if (best < 0 || gap < bestGap) {
+                best = static_cast<int>(j);
+                bestGap = gap;
+            }
+        }
+        if (best < 0) continue;
+        used[static_cast<size_t>(best)] = true;
+        ++matched;
+        const int da = direction(*x);
+        const int db = direction(*b[static_cast<size_t>(best)]);
+        ++table[static_cast<size_t>(da)][static_cast<size_t>(db)];
+        if (da == db) ++out.agreeing;
+    }
+    out.matched += matched;
+    out.onlyFirst += static_cast<int>(a.size()) - matched;
+    out.onlySecond += static_cast<int>(b.size()) - matched;
+}
+
+} // namespace
+
+std::vector<std::pair<std::string, int>> encounterCounts(const Colony& colony, std::optional<Day> from,
+                                                         std::optional<Day> to, const std::string& group)
+{
+    std::map<std::string, int> counts;
+    for (const Encounter& e : colony.encounters) {
+        if (!inWindow(e, from, to.value_or(ResidenceIndex::openEnd), group)) continue;
+        ++counts[e.winner];
+        ++counts[e.loser];
+    }
+    return {counts.begin(), counts.end()};
+}
+
+DataHealth dataHealth(const Colony& colony, const ResidenceIndex& where, const HealthOptions& o)
+{
+    DataHealth h;
+    h.reference = o.to.value_or(o.today);
+    h.minEncounters = o.minEncounters;
+    h.unseenDays = o.unseenDays;
+    const Day to = h.reference;
+    const int groupIndex = o.group.empty() ? -1 : where.group(o.group);
+
+    // Effort per animal, observer and month.
+    std::map<std::string, AnimalEffort> animals;
+    std::map<std::string, std::set<Day>> animalDays;
+    std::map<std::string, ObserverEffort> observers;
+    std::map<std::string, std::set<Day>> observerDays;
+    struct Month {
+        int encounters = 0;
+        std::set<Day> days;
+        std::set<std::string> animals;
+    };
+    std::map<std::pair<int, unsigned>, Month> months;
+    for (const Encounter& e : colony.encounters) {
+        if (!inWindow(e, o.from, to, o.group)) continue;
+        for (const std::string* id : {&e.winner, &e.loser}) {
+            ++animals[*id].encounters;
+            animalDays[*id].insert(e.date);
+        }
+        ++observers[e.observer].encounters;
+        observerDays[e.observer].insert(e.date);
+        const CivilDate c = civilFromDay(e.date);
+        Month& m = months[{c.year, c.month}];
+        ++m.encounters;
+        m.days.insert(e.date);
+        m.animals.insert(e.winner);
+        m.animals.insert(e.loser);
+    }
+    // Residents of the window without any encounter are listed too (with none).
+    const Day windowStart = o.from.value_or(std::numeric_limits<int>::min() / 2);
+    for (const Animal& a : colony.animals) {
+        const int i = where.animal(a.id);
+        if (!o.group.empty() && groupIndex < 0) break; // no such group: nobody resident in it
+        if (i >= 0 && where.residentDuring(i, windowStart, to, groupIndex)) animals[a.id];
+    }
+    // The last time each animal was seen, in any group, up to the reference day.
+    std::map<std::string, Day> lastSeen;
+    for (const Encounter& e : colony.encounters) {
+        if (e.date > to) continue;
+        for (const std::string* id : {&e.winner, &e.loser}) {
+            auto [it, added] = lastSeen.emplace(*id, e.date);
+            if (!added && e.date > it->second) it->second = e.date;
+        }
+    }
+
+    // Randomised-Elo interval widths over the window (docs/methods.md, "Randomised Elo").
+    std::map<std::string, double> widths;
+    if (o.randomisations > 0) {
+        SelectionOptions sel;
+        sel.from = o.from;
+        sel.to = to;
+        sel.group = o.group;
+        sel.draws = o.elo.draws;
+        const EncounterSelection s = selectEncounters(colony, where, sel);
+        const std::vector<RandomisedEloRow> rows =
+            randomisedElo(s.size(), s.bouts, o.elo, o.randomisations, o.seed, o.threads);
+        for (size_t i = 0; i < rows.size(); ++i)
+            if (rows[i].rated) widths[s.ids[i]] = rows[i].high - rows[i].low;
+    }
+    for (auto& [id, effort] : animals) {
+        effort.animal = id;
+        effort.daysSeen = static_cast<int>(animalDays[id].size());
+        if (auto it = lastSeen.find(id); it != lastSeen.end()) effort.lastSeen = it->second;
+        effort.fewEncounters = effort.encounters < o.minEncounters;
+        if (auto it = widths.find(id); it != widths.end()) effort.intervalWidth = it->second;
+        h.animals.push_back(effort);
+    }
+    for (auto& [name, effort] : observers) {
+        effort.observer = name;
+        effort.days = static_cast<int>(observerDays[name].size());
+        h.observers.push_back(effort);
+    }
+    for (const auto& [ym, m] : months)
+        h.months.push_back({ym.first, ym.second, m.encounters, static_cast<int>(m.days.size()),
+                            static_cast<int>(m.animals.size())});
+
+    // Residents on the reference day unseen for more than unseenDays days.
+    for (const Animal& a : colony.animals) {
+        const int i = where.animal(a.id);
+        if (i < 0 || !where.presentOn(i, to)) continue;
+        const int g = where.groupOn(i, to);
+        if (g < 0 || (groupIndex >= 0 && g != groupIndex) || (!o.group.empty() && groupIndex < 0)) continue;
+        UnseenAnimal u;
+        u.animal = a.id;
+        if (auto it = lastSeen.find(a.id); it != lastSeen.end()) u.lastSeen = it->second;
+        u.since = u.lastSeen ? *u.lastSeen : where.start(i);
+        u.days = to - u.since;
+        if (u.days > o.unseenDays) h.unseen.push_back(u);
+    }
+    std::stable_sort(h.unseen.begin(), h.unseen.end(),
+                     [](const UnseenAnimal& x, const UnseenAnimal& y) { return x.days > y.days; });
+
+    // Observer agreement: group-days both observers recorded.
+    std::map<std::pair<std::string, Day>, std::map<std::string, std::vector<const Encounter*>>> byDay;
+    for (const Encounter& e : colony.encounters)
+        if (inWindow(e, o.from, to, o.group) && !e.observer.empty()) byDay[{e.group, e.date}][e.observer].push_back(&e);
+    std::map<std::pair<std::string, std::string>, std::pair<ObserverAgreement, std::vector<std::vector<int>>>> pairs;
+    for (auto& [day, perObserver] : byDay) {
+        for (auto a = perObserver.begin(); a != perObserver.end(); ++a) {
+            for (auto b = std::next(a); b != perObserver.end(); ++b) {
+                auto& [agreement, table] = pairs[{a->first, b->first}];
+                if (table.empty()) table.assign(3, std::vector<int>(3, 0));
+                agreement.first = a->first;
+                agreement.second = b->first;
+                ++agreement.sharedDays;
+                for (auto* list : {&a->second, &b->second})
+                    std::stable_sort(list->begin(), list->end(), [](const Encounter* x, const Encounter* y) {
+                        return encounterBefore(*x, *y);
+                    });
+                matchDay(a->second, b->second, o.matchMinutes, agreement, table);
+            }
+        }
+    }
+    for (auto& [key, value] : pairs) {
+        ObserverAgreement& a = value.first;
+        if (a.matched > 0) a.share = static_cast<double>(a.agreeing) / a.matched;
+        a.kappa = cohensKappa(value.second).kappa;
+        h.agreement.push_back(a);
+    }
+    return h;
+}
+
+} // namespace hierloom::core

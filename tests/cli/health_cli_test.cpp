@@ -1,0 +1,98 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+// `health` and the data-health columns of `ranks`, on a hand-counted colony.
+#include "cli_test_support.h"
+
+#include <gtest/gtest.h>
+
+using namespace hierloom::test;
+
+namespace {
+
+/// P, Q, R in group g since 2024-01-01; S joined on 2024-03-01.
+std::string handColony(const CliTempDir& dir)
+{
+    const std::string colony = dir.file("h.hierloom");
+    EXPECT_EQ(runCli({"init", colony}).status, 0);
+    const std::string animals = dir.write("a.csv", "id,sex,entry_date,entry_type\nP,F,2024-01-01,founder\n"
+                                                   "Q,F,2024-01-01,founder\nR,F,2024-01-01,founder\n"
+                                                   "S,F,2024-03-01,introduced\n");
+    const std::string residences =
+        dir.write("r.csv", "animal,group,from\nP,g,2024-01-01\nQ,g,2024-01-01\nR,g,2024-01-01\nS,g,2024-03-01\n");
+    const std::string encounters = dir.write("e.csv", "date,time,winner,loser,observer\n"
+                                                      "2024-03-02,09:00,P,Q,ann\n"
+                                                      "2024-03-02,09:03,P,Q,bob\n"
+                                                      "2024-03-02,09:40,Q,R,ann\n"
+                                                      "2024-03-02,09:41,R,Q,bob\n"
+                                                      "2024-03-10,10:00,P,R,ann\n");
+    const CliResult r = runCli({"import", colony, "--animals", animals, "--residences", residences, "--encounters",
+                                encounters});
+    EXPECT_EQ(r.status, 0) << r.err;
+    return colony;
+}
+
+} // namespace
+
+TEST(CliHealth, TablesCountedByHand)
+{
+    CliTempDir dir;
+    const std::string colony = handColony(dir);
+    const std::vector<std::string> window{"--from", "2024-03-01", "--to", "2024-03-31", "--group", "g"};
+    auto run = [&](std::vector<std::string> extra) {
+        std::vector<std::string> words{"health", colony};
+        words.insert(words.end(), window.begin(), window.end());
+        words.insert(words.end(), extra.begin(), extra.end());
+        return runCli(words);
+    };
+    CliResult r = run({"--randomise", "0", "--min-encounters", "4"});
+    ASSERT_EQ(r.status, 0) << r.err;
+    EXPECT_EQ(lines(r.out), (std::vector<std::string>{"animal,encounters,days_seen,last_seen,few_encounters,interval_width",
+                                                      "P,3,2,2024-03-10,yes,", "Q,4,1,2024-03-02,no,",
+                                                      "R,3,2,2024-03-10,yes,", "S,0,0,,yes,"}));
+    r = run({"--table", "observers"});
+    EXPECT_EQ(lines(r.out), (std::vector<std::string>{"observer,encounters,days", "ann,3,2", "bob,2,1"}));
+    r = run({"--table", "months"});
+    EXPECT_EQ(lines(r.out), (std::vector<std::string>{"month,encounters,days,animals", "2024-03,5,2,3"}));
+    // On 2024-03-31: S never seen since 2024-03-01 (30 days), Q last on 2024-03-02 (29); P and R 21 days.
+    r = run({"--table", "unseen", "--unseen-days", "21"});
+    EXPECT_EQ(lines(r.out), (std::vector<std::string>{"animal,last_seen,since,days_unseen", "S,,2024-03-01,30",
+                                                      "Q,2024-03-02,2024-03-02,29"}));
+    EXPECT_NE(r.err.find("may be ill, injured or missing: check on it"), std::string::npos) << r.err;
+    EXPECT_NE(r.err.find("animal-care staff"), std::string::npos);
+    // ann and bob on 2024-03-02: P>Q both (agree), Q>R against R>Q (disagree):
+    // share 1/2; categories (0,0) and (0,1): p_o = 1/2, p_e = 1 * 1/2, kappa 0.
+    r = run({"--table", "agreement"});
+    EXPECT_EQ(lines(r.out), (std::vector<std::string>{"first_observer,second_observer,shared_days,matched,only_first,"
+                                                      "only_second,agreeing,agreement_share,kappa",
+                                                      "ann,bob,1,2,0,0,1,0.5,0"}));
+}
+
+TEST(CliHealth, RanksCarryTheFlagAndTheIntervalWidth)
+{
+    CliTempDir dir;
+    const std::string colony = handColony(dir);
+    CliResult r = runCli({"ranks", colony, "--min-encounters", "4", "--health"});
+    ASSERT_EQ(r.status, 0) << r.err;
+    auto rows = lines(r.out);
+    EXPECT_EQ(rows[0], "animal,rank,score,encounters,few_encounters");
+    for (size_t i = 1; i < rows.size(); ++i) {
+        const bool q = rows[i].rfind("Q,", 0) == 0;
+        EXPECT_NE(rows[i].find(q ? ",4,no" : ",3,yes"), std::string::npos) << rows[i];
+    }
+    EXPECT_NE(r.err.find("fewer than 4 encounters"), std::string::npos) << r.err;
+    // Without --health the columns stay as they were; the warning is still given.
+    r = runCli({"ranks", colony, "--min-encounters", "4"});
+    EXPECT_EQ(lines(r.out)[0], "animal,rank,score");
+    EXPECT_NE(r.err.find("fewer than 4 encounters"), std::string::npos) << r.err;
+    r = runCli({"ranks", colony, "--randomise", "50", "--health"});
+    ASSERT_EQ(r.status, 0) << r.err;
+    rows = lines(r.out);
+    EXPECT_EQ(rows[0], "animal,rank,score,rating_low,rating_high,mean_rank,encounters,few_encounters,interval_width");
+    // interval_width = rating_high - rating_low on every row.
+    for (size_t i = 1; i < rows.size(); ++i) {
+        std::vector<std::string> f;
+        std::stringstream s(rows[i]);
+        for (std::string x; std::getline(s, x, ',');) f.push_back(x);
+        ASSERT_EQ(f.size(), 9u);
+        EXPECT_NEAR(std::stod(f[8]), std::stod(f[4]) - std::stod(f[3]), 1e-9) << rows[i];
+    }
+}
