@@ -15,46 +15,6 @@
 <context>
     <name>QObject</name>
     <message>
-        <source>Export</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Save the plot as a 180 mm, 300 dpi figure, or copy it</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>PNG images (*.png)</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>PDF documents (*.pdf)</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Export Plot</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Export Failed</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>%1 could not be written.</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Save as &amp;PNG...</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Save as P&amp;DF...</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>&amp;Copy to Clipboard</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
         <source>&amp;Print Hierarchy Report...</source>
         <translation type="unfinished"></translation>
     </message>
@@ -72,6 +32,17 @@
     </message>
     <message>
         <source>Cannot Make the Report</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Hierloom %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::core::DisplayName</name>
+    <message>
+        <source>animal id</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -171,6 +142,18 @@
     </message>
     <message>
         <source>There is no group &apos;%1&apos; in the colony. Create a new group named &apos;%1&apos;?</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Supporters</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>winner&apos;s side: %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>loser&apos;s side: %1</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -317,6 +300,26 @@
     </message>
     <message>
         <source>The colony is open read-only, so they cannot be changed.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Start value for everyone</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Youngest ascendancy: just below her mother</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Eldest first: just below her last older sister</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Where a daughter whose mother is rated enters the Elo ranking: between the animal the rule puts just above her and the one rated below that animal (docs: Rule-informed Elo). Used by rank tables, rank changes and the report; the comparisons with the inheritance rule keep the plain start.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Daughters&apos; Elo sta&amp;rt:</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -749,6 +752,14 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <source>the colony was restored from a backup</source>
         <translation type="unfinished"></translation>
     </message>
+    <message>
+        <source>A saved mapping needs a name.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Save import mapping %1</source>
+        <translation type="unfinished"></translation>
+    </message>
 </context>
 <context>
     <name>hierloom::ui::DemoColony</name>
@@ -911,10 +922,6 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <translation type="unfinished"></translation>
     </message>
     <message>
-        <source>Take back the session of %1 (%2)</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
         <source>Session ended: %1, group %2, observer %3: %4, %5, %6.</source>
         <translation type="unfinished"></translation>
     </message>
@@ -1002,6 +1009,22 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <source>Take back the %1 entered in this session for %2, group %3? Earlier lines stay.</source>
         <translation type="unfinished"></translation>
     </message>
+    <message>
+        <source>ids or names, separated by spaces</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Winner&apos;s supporters</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Loser&apos;s supporters</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Delete the session of %1 (%2)</source>
+        <translation type="unfinished"></translation>
+    </message>
 </context>
 <context>
     <name>hierloom::ui::EncounterTableModel</name>
@@ -1049,6 +1072,14 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <source>Note</source>
         <translation type="unfinished"></translation>
     </message>
+    <message>
+        <source>Winner&apos;s supporters</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Loser&apos;s supporters</source>
+        <translation type="unfinished"></translation>
+    </message>
 </context>
 <context>
     <name>hierloom::ui::EncounterView</name>
@@ -1082,6 +1113,14 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
     <message>
         <source>%1 of %2 encounters</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Search encounters and notes</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Shows the encounters whose animal ids, behaviour, group, observer or note contain this text (upper or lower case alike)</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -1178,6 +1217,211 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     <message>
         <source>Take back this session&apos;s lines, after a question</source>
         <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>To the winner&apos;s supporters (ids separated by spaces)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>To the loser&apos;s supporters (ids separated by spaces)</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::FigureExportButton</name>
+    <message>
+        <source>Export</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Save the plot as a journal figure (one column, 85 mm, or two columns, 175 mm; PNG at 300 dpi, SVG or PDF) with a caption line naming group, window, method and parameters, or copy it</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>One-Column Figure (85 mm)...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Two-Column Figure (175 mm)...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Copy to Clipboard</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>PNG image, 300 dpi (*.png)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>SVG drawing (*.svg)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>PDF document (*.pdf)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Export Figure</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Export Failed</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 could not be written.</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::HealthView</name>
+    <message>
+        <source>Animal</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Encounters</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Days seen</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Last seen</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Too few for a rank</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Elo interval width</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Observer</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Days</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Month</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Animals</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Since</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Days unseen</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Shared days</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Matched</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Only first</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Only second</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Agreeing</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Agreement</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Cohen&apos;s kappa</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>first record</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>today</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Group:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>From:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>To:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Not seen for more than (days):</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Fewest encounters for a rank:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Match within (min):</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Not seen</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Observers</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Months</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Observer agreement</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>(every group)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>too few</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Fewer than %1 encounters in the window: this animal&apos;s rank is not stable.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>(none recorded)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message numerus="yes">
+        <source>%n resident animal(s) not seen for more than %1 days on %2. </source>
+        <translation type="unfinished">
+            <numerusform></numerusform>
+            <numerusform></numerusform>
+        </translation>
     </message>
 </context>
 <context>
@@ -1395,6 +1639,26 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <source>Coefficient of relatedness</source>
         <translation type="unfinished"></translation>
     </message>
+    <message>
+        <source>Rule-informed Elo</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Active and passive rank changes</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Foresight of the rule and Elo</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Kin support and the nepotism index</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Data health</source>
+        <translation type="unfinished"></translation>
+    </message>
 </context>
 <context>
     <name>hierloom::ui::HierarchyPlotsView</name>
@@ -1456,6 +1720,331 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
     <message>
         <source>all groups</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>The hierarchy month by month</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>calendar months; months without encounters left empty</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>conformity of %1 ranks with youngest ascendancy, females from %2 years</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::ImportAssistantDialog</name>
+    <message>
+        <source>&amp;Date:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>T&amp;ime:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Winner:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Loser:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Actor:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Recipient:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Outcome:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Behaviour:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Group column:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>O&amp;bserver:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Note:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Br&amp;owse...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Check</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Save Mapping</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Import</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Import a Spreadsheet</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>a CSV or TSV file saved from the spreadsheet</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>winner and loser columns</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>actor, recipient and an outcome code</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>ids</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>names</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>decided by the file&apos;s dates</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>year-month-day (2023-10-05)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>day/month/year (05/10/2023 = 5 October)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>month/day/year (10/05/2023 = 5 October)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>found from the header</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>comma</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>tab</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>semicolon</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>one group for the whole file (when no column holds it)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>codes, separated by commas</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>S&amp;heet:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Sa&amp;ved mapping:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Mapping name:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>La&amp;yout:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Animals &amp;named by:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Date &amp;order:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Separator:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>One group for the &amp;file:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Win codes (actor won):</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Loss codes (recipient won):</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Draw codes:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Columns</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>How the sheet is written</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Line</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Date</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Time</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Winner</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Loser</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Outcome</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Group</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Problem</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Name in the sheet</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Rows</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Animal id</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Add as new animal</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Sex of a new animal (F, M, U)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Close</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>The first rows as they will be imported:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Names that match no animal: give the id of the animal they are, or tick &quot;Add as new animal&quot; and give the new animal&apos;s id and sex:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>(a new mapping)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Spreadsheet to import</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>CSV or TSV (*.csv *.tsv *.txt);;All files (*)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 cannot be read (no such file, or no permission to read it).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>(not in the sheet)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Choose the sheet to import.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Choose the date order: %1 (line %2), and no date of the sheet reads only one way.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Dates read as %1: &apos;%2&apos; (line %3) reads no other way.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Dates read as %1 (every date reads the same either way).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>The dates fit none of the forms YYYY-MM-DD, DD/MM/YYYY, MM/DD/YYYY throughout.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Dates read as %1, as chosen.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>But &apos;%1&apos; (line %2) can only be %3.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Every row passes: %1 encounters and %2 new animals would be imported.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Nothing was imported; the colony is unchanged.
+</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Imported %1 encounters and %2 new animals.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>The mapping is not complete:
+</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Saved the mapping as &quot;%1&quot; in the colony file.</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -1751,6 +2340,30 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <source>Undo history cleared: %1.</source>
         <translation type="unfinished"></translation>
     </message>
+    <message>
+        <source>Undone: %1.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Redone: %1.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Import &amp;Spreadsheet...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Plot Background</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Light</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Dark</source>
+        <translation type="unfinished"></translation>
+    </message>
 </context>
 <context>
     <name>hierloom::ui::MatrixView</name>
@@ -1795,14 +2408,6 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <translation type="unfinished"></translation>
     </message>
     <message>
-        <source>Won</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Lost</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
         <source>%1 animals, %2 encounters counted; ordered by %3; %4 cells with wins against the order.</source>
         <translation type="unfinished"></translation>
     </message>
@@ -1817,11 +2422,59 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <translation type="unfinished"></translation>
     </message>
     <message>
-        <source>Animal id</source>
+        <source>animal id</source>
         <translation type="unfinished"></translation>
     </message>
     <message>
-        <source>animal id</source>
+        <source>Order of rows and columns; the command line&apos;s `matrix` uses the same default (%1)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Fit</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Show the whole matrix (the mouse wheel zooms, dragging moves)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Zoom in</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Zoom out</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Win matrix (rows: winners, columns: losers)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>ordered by %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 animals</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>crosses: wins against the order</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>one name (and total) in %1 shown where rows are narrow</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Won (row total)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Lost (column total)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 (%2)</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -1908,13 +2561,6 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <source>  + animal %1</source>
         <translation type="unfinished"></translation>
     </message>
-    <message numerus="yes">
-        <source>Edited differently in the two files (%n):</source>
-        <translation type="unfinished">
-            <numerusform></numerusform>
-            <numerusform></numerusform>
-        </translation>
-    </message>
     <message>
         <source>  taken from the other file: %1</source>
         <translation type="unfinished"></translation>
@@ -1925,6 +2571,49 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
     <message>
         <source>Choose the other colony file; nothing is written until you press Merge.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Edited only in the other file, would be taken (%1):</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Edited only in the other file, taken (%1):</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Deleted in the other file, would be deleted here (%1):</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Deleted in the other file, deleted here (%1):</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Deleted here, stay deleted (%1):</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Recognised by their content under another uid (%1):</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message numerus="yes">
+        <source>Changed differently in both files since they parted (%n):</source>
+        <translation type="unfinished">
+            <numerusform></numerusform>
+            <numerusform></numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>    %1: here &apos;%2&apos;, in the other file &apos;%3&apos;</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>, before &apos;%1&apos;</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>The colony was backed up first into %1</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -1956,6 +2645,10 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
     <message>
         <source>Zoom Out</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Zoom to Fit</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -2170,25 +2863,43 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <source>PDF (*.pdf)</source>
         <translation type="unfinished"></translation>
     </message>
+    <message>
+        <source>%1 days to %2</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Observed wins above
+(%1)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Observed wins below
+(%1)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Adult females only. Observed wins: decided encounters between the two in the %1 up to the scenario&apos;s date.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 days</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Adult females only (at least %1 years old on %2): the rule predicts their order.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Predicted Moves (adult females)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Adult females only (at least %1 years old on %2); observed order by Elo.</source>
+        <translation type="unfinished"></translation>
+    </message>
 </context>
 <context>
     <name>hierloom::ui::PredictionView</name>
-    <message>
-        <source>daughter over mother</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>sibling order</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>within matriline</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>across matrilines</source>
-        <translation type="unfinished"></translation>
-    </message>
     <message>
         <source>the prediction</source>
         <translation type="unfinished"></translation>
@@ -2263,6 +2974,118 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
     <message>
         <source>line of %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Predicted and observed order of the females</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>on %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>rule: %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>observed: %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>females from %1 years</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&lt;b&gt;How much does inheritance explain?&lt;/b&gt;</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>How much does inheritance explain: foresight of each model per year</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Whole record, every group; rule alone, plain Elo and rule-informed Elo (docs: Foresight)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Model</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Log-lik.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Per enc.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Brier</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Pred.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>The model</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Log-likelihood: the sum of ln p over the winners (higher is better)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Log-likelihood per encounter (a coin: -0.693)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Brier score: the mean of (1 - p) squared (lower is better; a coin: 0.25)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Share of winners given more than 1/2</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Winners predicted</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Year</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Elo</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Rule-informed Elo</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Rule alone</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1%</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 of %2 winners given more than 1/2</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>No decided encounters.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Every decided encounter of the record, each model&apos;s chance for its winner beforehand. The %1 rule could compare %2 of %3; the animal it places higher won %4 of them (its fitted win probability). A coin scores %5 per encounter and a Brier score of 0.25.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>none</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -2425,6 +3248,34 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
     <message>
         <source>Discordance: none</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Changes: plain</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Changes: active/passive</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Mark each change of rank between checkpoints: active (won or lost among the females ranked before and after), passive (females above her left or entered), or both</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Ranks over time</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Rank change: active</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Rank change: passive</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Rank change: both</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -2938,7 +3789,37 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <translation type="unfinished"></translation>
     </message>
     <message>
-        <source>%1 sons / %2 births</source>
+        <source>Proportion of sons by the mother&apos;s rank third at conception</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>births from %1 (founders excluded): %2 used</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>the record&apos;s start</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1, gestation %2 days, females ranked from %3 years</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>mother&apos;s relative %1 rank at conception</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>bars: Wilson 95 % intervals</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Births are counted from the record&apos;s first encounter, %1; %2 founders and %3 animals born before then are not births.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1
+%2 sons
+of %3 births</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -3055,21 +3936,6 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <translation type="unfinished"></translation>
     </message>
     <message>
-        <source>Counter-dom.
-share</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Severe
-x median</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Rank change
-per animal</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
         <source>Stability Thresholds (read-only colony: not saved)</source>
         <translation type="unfinished"></translation>
     </message>
@@ -3103,6 +3969,83 @@ per animal</source>
     </message>
     <message>
         <source>Counter-dominant dyads (winner below loser before the encounter; matrilines; dates):</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Stability watch</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>severe: behaviour severity %1 or more; dashed: alert thresholds</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Severe rate, times the median: severe encounters per animal-day in the period divided by the median of that rate over the group&apos;s periods of the same length (1 = a usual period). Dashed lines: alert thresholds; red dots: periods that raised an alert; periods without encounters are left empty.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Counter-
+dominance
+share</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Severe rate,
+times the
+median</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Mean rank
+change per
+animal</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::SupportView</name>
+    <message>
+        <source>&amp;Group:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Permutations:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Support matrix (row for column: given/opportunities)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Pairs</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Daughters&apos; rise</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Rank figures use the winner and the loser only; supporters enter these figures alone (docs/methods.md, &quot;Kin support&quot;).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>every group</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 encounters, no supporters recorded.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 encounters, %2 support acts. Rate of mothers for their offspring %3, of pairs with r &lt; 0.125 %4; nepotism index %5, permutation p %6 (%7 permutations, seed %8). Mothers&apos; acts for a daughter against a female the rule puts below her: %9 of %10.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>line</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>matriline of %1</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -3157,6 +4100,14 @@ per animal</source>
     </message>
     <message>
         <source>&amp;Stability</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Supp&amp;ort</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Data Health</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -3216,6 +4167,53 @@ per animal</source>
     </message>
     <message>
         <source>Open a recent colony (double-click it), or choose below.</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::caption</name>
+    <message>
+        <source>draws ignored</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>draws count half to each</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>all groups</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>group %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 to %2</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>start of record</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>end of record</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Elo rating (k %1, start %2, %3 curve, %4)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>normal</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>logistic</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 (%2)</source>
         <translation type="unfinished"></translation>
     </message>
 </context>

@@ -7,6 +7,7 @@
 #include "core/store/colony_store.h"
 #include "core/store/record_states.h"
 #include "core/store/sqlite_statement.h"
+#include "core/store/support_rows.h"
 #include "core/store/write_transaction.h"
 
 #include <sqlite3.h>
@@ -349,8 +350,37 @@ std::vector<Record> pick(const std::vector<Record>& all, const std::unordered_se
 namespace {
 
 /// What the merge will do with each table (animal, residence, encounter).
+/// The supporters of one encounter: both sides, as `joinSupporters` writes them.
+struct SupportLists {
+    std::string winner, loser;
+    bool operator==(const SupportLists&) const = default;
+};
+
+/// Every encounter's supporters in a file (none in a file older than version 3).
+std::unordered_map<std::string, SupportLists> supportListsOf(const ColonyStore& store)
+{
+    std::unordered_map<std::string, SupportLists> out;
+    SqliteStatement has(store.handle(),
+                        "SELECT 1 FROM sqlite_master WHERE type = 'table' AND name = 'encounter_support'");
+    if (!has.step()) return out;
+    SqliteStatement q(store.handle(), "SELECT encounter, animal, side FROM encounter_support ORDER BY rowid");
+    while (q.step()) {
+        SupportLists& l = out[q.text(0)];
+        std::string& list = q.text(2) == "winner" ? l.winner : l.loser;
+        list += (list.empty() ? "" : " ") + q.text(1);
+    }
+    return out;
+}
+
+/// An encounter whose supporters are taken from the other file.
+struct SupportTaken {
+    std::string uid;
+    SupportLists lists;
+};
+
 struct Decisions {
     std::array<TablePlan, 3> plans;
+    std::vector<SupportTaken> supporters;
     bool fresh() const
     {
         return std::any_of(plans.begin(), plans.end(), [](const TablePlan& p) { return !p.fresh.empty(); });
@@ -393,6 +423,37 @@ Decisions decide(const ColonyStore& target, const ColonyStore& other, MergePrefe
     };
     d.plans[0] = TableMerger(tables[0], ours[0], theirs[0], prefer, report, report.skippedAnimals, other.path())
                      .run(stillNamed);
+    // Supporters live in their own table, without a per-field history the
+    // common state could be read from: an encounter in both files whose
+    // supporters differ is a conflict, settled only by --prefer (DEVELOPERS.md).
+    const std::unordered_map<std::string, SupportLists> ourSupport = supportListsOf(target);
+    const std::unordered_map<std::string, SupportLists> theirSupport = supportListsOf(other);
+    std::vector<std::string> both;
+    for (const auto& [uid, v] : ours[2].current)
+        if (theirs[2].current.count(uid) && !goingEncounters.count(uid)) both.push_back(uid);
+    std::sort(both.begin(), both.end());
+    for (const std::string& uid : both) {
+        const auto o = ourSupport.find(uid);
+        const auto t = theirSupport.find(uid);
+        const SupportLists here = o == ourSupport.end() ? SupportLists{} : o->second;
+        const SupportLists there = t == theirSupport.end() ? SupportLists{} : t->second;
+        if (here == there || prefer == MergePreference::Ours) continue;
+        if (prefer == MergePreference::Theirs) {
+            d.supporters.push_back({uid, there});
+            report.updated.push_back({"encounter", uid, label(tables[2], ours[2].current.at(uid)), "supporters"});
+            continue;
+        }
+        MergeConflict c{"encounter", uid, label(tables[2], ours[2].current.at(uid)), {}, {}};
+        const std::pair<const char*, std::pair<std::string, std::string>> sides[] = {
+            {"winner_support", {here.winner, there.winner}}, {"loser_support", {here.loser, there.loser}}};
+        for (const auto& [field, values] : sides) {
+            if (values.first == values.second) continue;
+            c.what += std::string(c.what.empty() ? "" : "; ") + field + ": '" + values.first + "' here, '" +
+                      values.second + "' in the other file";
+            c.fields.push_back({field, values.first, values.second, std::nullopt});
+        }
+        report.conflicts.push_back(std::move(c));
+    }
     return d;
 }
 
@@ -456,6 +517,13 @@ MergeReport mergeColonies(ColonyStore& target, const ColonyStore& other, const M
     }
     target.append(plan.animals, plan.residences, plan.encounters, "merge from " + from);
     for (const Update& u : encounterPlan.updates) applyUpdate(db, tables[2], u);
+    for (const SupportTaken& taken : decided.supporters) {
+        Encounter e;
+        e.uid = taken.uid;
+        e.winnerSupport = splitSupporters(taken.lists.winner);
+        e.loserSupport = splitSupporters(taken.lists.loser);
+        replaceSupportRows(db, e);
+    }
     report.addedAnimals = std::move(plan.animals);
     report.addedResidences = std::move(plan.residences);
     report.addedEncounters = std::move(plan.encounters);

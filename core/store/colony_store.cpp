@@ -485,6 +485,7 @@ std::vector<Encounter> ColonyStore::loadEncounters(const EncounterScope& scope) 
     std::vector<Encounter> out;
     if (scope.everything()) out.reserve(static_cast<size_t>(encounterCount()) + 4096);
     while (q.step()) out.push_back(readEncounterRow(q, path_));
+    loadSupportRows(db_, out); // by seq, so a selection gets its own supporters
     return out;
 }
 

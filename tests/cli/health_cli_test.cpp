@@ -73,7 +73,7 @@ TEST(CliHealth, RanksCarryTheFlagAndTheIntervalWidth)
     CliResult r = runCli({"ranks", colony, "--min-encounters", "4", "--health"});
     ASSERT_EQ(r.status, 0) << r.err;
     auto rows = lines(r.out);
-    EXPECT_EQ(rows[0], "animal,rank,score,encounters,few_encounters");
+    EXPECT_EQ(rows[0], "animal,rank,score,start_rule,encounters,few_encounters");
     for (size_t i = 1; i < rows.size(); ++i) {
         const bool q = rows[i].rfind("Q,", 0) == 0;
         EXPECT_NE(rows[i].find(q ? ",4,no" : ",3,yes"), std::string::npos) << rows[i];
@@ -81,18 +81,18 @@ TEST(CliHealth, RanksCarryTheFlagAndTheIntervalWidth)
     EXPECT_NE(r.err.find("fewer than 4 encounters"), std::string::npos) << r.err;
     // Without --health the columns stay as they were; the warning is still given.
     r = runCli({"ranks", colony, "--min-encounters", "4"});
-    EXPECT_EQ(lines(r.out)[0], "animal,rank,score");
+    EXPECT_EQ(lines(r.out)[0], "animal,rank,score,start_rule");
     EXPECT_NE(r.err.find("fewer than 4 encounters"), std::string::npos) << r.err;
     r = runCli({"ranks", colony, "--randomise", "50", "--health"});
     ASSERT_EQ(r.status, 0) << r.err;
     rows = lines(r.out);
-    EXPECT_EQ(rows[0], "animal,rank,score,rating_low,rating_high,mean_rank,encounters,few_encounters,interval_width");
+    EXPECT_EQ(rows[0], "animal,rank,score,rating_low,rating_high,mean_rank,start_rule,encounters,few_encounters,interval_width");
     // interval_width = rating_high - rating_low on every row.
     for (size_t i = 1; i < rows.size(); ++i) {
         std::vector<std::string> f;
         std::stringstream s(rows[i]);
         for (std::string x; std::getline(s, x, ',');) f.push_back(x);
-        ASSERT_EQ(f.size(), 9u);
-        EXPECT_NEAR(std::stod(f[8]), std::stod(f[4]) - std::stod(f[3]), 1e-9) << rows[i];
+        ASSERT_EQ(f.size(), 10u); // start_rule sits before the health columns
+        EXPECT_NEAR(std::stod(f[9]), std::stod(f[4]) - std::stod(f[3]), 1e-9) << rows[i];
     }
 }

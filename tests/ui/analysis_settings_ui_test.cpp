@@ -77,7 +77,7 @@ TEST(ViewRegistry, ViewMenuHasEveryViewWithItsShortcut)
 {
     OpenWindow w;
     const std::vector<ui::ViewEntry>& views = ui::viewRegistry();
-    ASSERT_EQ(views.size(), 11U);
+    ASSERT_EQ(views.size(), 12U);
     const QList<QAction*>& actions = w.window.viewActions();
     ASSERT_EQ(actions.size(), static_cast<qsizetype>(views.size()));
     std::set<QString> shortcuts, ids;
@@ -95,6 +95,7 @@ TEST(ViewRegistry, ViewMenuHasEveryViewWithItsShortcut)
     EXPECT_EQ(actions[5]->shortcut(), QKeySequence(Qt::CTRL | Qt::Key_6));
     EXPECT_EQ(actions[9]->shortcut(), QKeySequence(Qt::CTRL | Qt::Key_0));
     EXPECT_EQ(actions[10]->shortcut(), QKeySequence(Qt::CTRL | Qt::Key_K)); // the eleventh, Support
+    EXPECT_EQ(actions[11]->shortcut(), QKeySequence(Qt::CTRL | Qt::Key_D)); // the twelfth, Data Health
     EXPECT_EQ(QString::fromLatin1(views[2].id), QStringLiteral("timeline"));
 
     // Pressing each shortcut on the window shows that view, from the last view backwards.

@@ -100,6 +100,8 @@ void checkKey(ui::EntryKey key, const QKeySequence& seq)
     case K::Loser: press(e, seq); EXPECT_TRUE(focusIs(panel->loserEdit())); break;
     case K::Behaviour: press(e, seq); EXPECT_TRUE(focusIs(panel->behaviourBox())); break;
     case K::Note: press(e, seq); EXPECT_TRUE(focusIs(panel->noteEdit())); break;
+    case K::WinnerSupport: press(e, seq); EXPECT_TRUE(focusIs(panel->winnerSupportEdit())); break;
+    case K::LoserSupport: press(e, seq); EXPECT_TRUE(focusIs(panel->loserSupportEdit())); break;
     case K::RefusedList: press(e, seq); EXPECT_TRUE(focusIs(panel->refusedList())); break;
     case K::Draw:
         press(e, seq);
@@ -130,7 +132,7 @@ TEST(EntryKeys, EveryListedKeyDoesWhatTheListSays)
             ++checked;
         }
     }
-    EXPECT_EQ(checked, 23); // 19 keys, four of them with a second sequence
+    EXPECT_EQ(checked, 25); // 21 keys, four of them with a second sequence
 }
 
 TEST(EntryKeys, TheLabelsAltLettersAreTheListed)

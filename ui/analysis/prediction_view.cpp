@@ -103,7 +103,14 @@ PredictionView::PredictionView(ColonyDocument* document, AnimalSelection* select
     foresightHeader->addWidget(foresightTitle);
     foresightHeader->addWidget(new HelpButton(QStringLiteral("foresight"), this));
     foresightHeader->addStretch();
-    foresightHeader->addWidget(makeExportButton(foresightPlot_, QStringLiteral("foresight"), this));
+    PlotFigure foresightFigure;
+    foresightFigure.plot = foresightPlot_;
+    foresightFigure.baseName = QStringLiteral("foresight");
+    foresightFigure.title = tr("How much does inheritance explain: foresight of each model per year");
+    foresightFigure.caption = [] {
+        return tr("Whole record, every group; rule alone, plain Elo and rule-informed Elo (docs: Foresight)");
+    };
+    foresightHeader->addWidget(makeExportButton(foresightFigure, this));
     sideLayout->addLayout(foresightHeader);
     foresightLabel_->setWordWrap(true);
     sideLayout->addWidget(foresightLabel_);
