@@ -43,6 +43,8 @@ QTreeWidget* makeList(const QStringList& headers, QWidget* parent)
 QString dateText(const std::optional<core::Day>& d) { return d ? toQString(core::formatDate(*d)) : QString(); }
 
 QString number(const std::optional<double>& v) { return toQString(core::formatNumber(v)); }
+/// Rating points as read on screen (the exact value is in the tooltip and the command line).
+QString points(const std::optional<double>& v) { return v ? QString::number(*v, 'f', 0) : QString(); }
 
 } // namespace
 
@@ -184,7 +186,8 @@ void HealthView::recompute()
         auto* item = new QTreeWidgetItem(animals_, {toQString(a.animal), QString::number(a.encounters),
                                                     QString::number(a.daysSeen), dateText(a.lastSeen),
                                                     a.fewEncounters ? tr("too few") : QString(),
-                                                    number(a.intervalWidth)});
+                                                    points(a.intervalWidth)});
+        if (a.intervalWidth) item->setToolTip(5, number(a.intervalWidth));
         if (a.fewEncounters)
             item->setToolTip(4, tr("Fewer than %1 encounters in the window: this animal's rank is not stable.")
                                     .arg(health_.minEncounters));
