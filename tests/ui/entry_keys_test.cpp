@@ -160,3 +160,23 @@ TEST(EntryKeys, TheShortcutSheetListsEveryEntryKey)
     EXPECT_TRUE(sheet.contains(QKeySequence(Qt::Key_F6).toString(QKeySequence::NativeText)));
     browser->close();
 }
+
+// Found typing under Xvfb: with the winner's completion list open, Alt+O
+// (or any Alt letter) was taken by the list and the next letter went into
+// the winner field. The keys go to the open list, as the window system
+// sends them there.
+TEST(EntryKeys, AnAltLetterTypedWhileTheCompletionListIsOpenMovesAtOnce)
+{
+    Entry e;
+    e.key(Qt::Key_Tab); // time -> winner
+    ASSERT_EQ(QApplication::focusWidget(), e.panel->winnerEdit());
+    e.type("F");
+    QWidget* popup = QApplication::activePopupWidget();
+    ASSERT_NE(popup, nullptr) << "typing F opens the completion list";
+    QTest::keyClick(popup, Qt::Key_O, Qt::AltModifier);
+    EXPECT_EQ(QApplication::activePopupWidget(), nullptr);
+    EXPECT_EQ(QApplication::focusWidget(), e.panel->noteEdit());
+    QTest::keyClicks(e.focus(), QStringLiteral("x"));
+    EXPECT_EQ(e.panel->winnerEdit()->text(), QStringLiteral("F"));
+    EXPECT_EQ(e.panel->noteEdit()->text(), QStringLiteral("x"));
+}

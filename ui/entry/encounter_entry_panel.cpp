@@ -242,6 +242,11 @@ EncounterEntryPanel::EncounterEntryPanel(ColonyEditFacade* facade, QWidget* pare
         w->installEventFilter(this);
     list_->installEventFilter(this);
     refused_->installEventFilter(this);
+    for (QLineEdit* edit : {winner_, loser_, winnerSupport_, loserSupport_}) {
+        QWidget* popup = edit->completer()->popup();
+        popup->installEventFilter(this); // after QCompleter's own filter, so it runs first
+        completionPopups_.insert(popup);
+    }
     date_->installEventFilter(this);
     addButton_->setAutoDefault(false);
     endButton_->setAutoDefault(false);

@@ -4,6 +4,7 @@
 #include "core/base/colony.h"
 #include "core/base/field_problem.h"
 
+#include <QSet>
 #include <QWidget>
 
 #include <cstdint>
@@ -92,6 +93,9 @@ protected:
     void showEvent(QShowEvent* event) override;
 
 private:
+    /// Focuses the field whose label, or clicks the button whose text, carries `pressed` (Alt+letter).
+    bool jumpToMnemonic(const QKeySequence& pressed);
+    QSet<QObject*> completionPopups_; ///< the completers' lists, watched for Alt letters
     void refreshChoices();
     void refreshResidents();
     void refreshList();

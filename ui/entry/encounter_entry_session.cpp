@@ -3,6 +3,12 @@
 // (the fields and the commit are in encounter_entry_panel.cpp).
 #include "ui/entry/encounter_entry_panel.h"
 
+#include <QAbstractButton>
+#include <QAbstractItemView>
+#include <QCompleter>
+#include <QLabel>
+#include <QLineEdit>
+
 #include "ui/document/colony_document.h"
 #include "ui/document/colony_edit_facade.h"
 #include "ui/document/qt_convert.h"
@@ -207,6 +213,15 @@ bool EncounterEntryPanel::eventFilter(QObject* watched, QEvent* event)
     // The keys come from the entry's one list (entry_keys.h), which the help lists too.
     if (event->type() != QEvent::KeyPress) return QWidget::eventFilter(watched, event);
     const auto* key = static_cast<QKeyEvent*>(event);
+    // An open completion list takes the keys of the window: an Alt letter
+    // typed there closes it and moves to its field at once, so the next
+    // letter lands in that field, not in the one just left.
+    if (completionPopups_.contains(watched) && (key->modifiers() & Qt::AltModifier) &&
+        !(key->modifiers() & Qt::ControlModifier)) {
+        static_cast<QWidget*>(watched)->hide();
+        if (jumpToMnemonic(QKeySequence(key->modifiers() | key->key()))) return true;
+        return QWidget::eventFilter(watched, event);
+    }
     if (watched == list_) {
         if (entryKeyMatches(EntryKey::DeleteRows, key)) {
             deleteSelectedRows();
@@ -245,6 +260,26 @@ bool EncounterEntryPanel::eventFilter(QObject* watched, QEvent* event)
         return true;
     }
     return QWidget::eventFilter(watched, event);
+}
+
+} // namespace hierloom::ui
+
+namespace hierloom::ui {
+
+bool EncounterEntryPanel::jumpToMnemonic(const QKeySequence& pressed)
+{
+    for (QLabel* label : findChildren<QLabel*>())
+        if (label->buddy() && label->isVisible() && QKeySequence::mnemonic(label->text()) == pressed) {
+            label->buddy()->setFocus(Qt::ShortcutFocusReason);
+            return true;
+        }
+    for (QAbstractButton* button : findChildren<QAbstractButton*>())
+        if (button->isVisible() && button->isEnabled() && QKeySequence::mnemonic(button->text()) == pressed) {
+            if (button->focusPolicy() != Qt::NoFocus) button->setFocus(Qt::ShortcutFocusReason);
+            button->animateClick();
+            return true;
+        }
+    return false;
 }
 
 } // namespace hierloom::ui
