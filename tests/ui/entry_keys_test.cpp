@@ -180,3 +180,23 @@ TEST(EntryKeys, AnAltLetterTypedWhileTheCompletionListIsOpenMovesAtOnce)
     EXPECT_EQ(e.panel->winnerEdit()->text(), QStringLiteral("F"));
     EXPECT_EQ(e.panel->noteEdit()->text(), QStringLiteral("x"));
 }
+
+// Found under Xvfb: after a line with a supporter was saved, the supporters'
+// completion list stayed open under the emptied field.
+TEST(EntryKeys, NoCompletionListHangsUnderTheEmptiedLineAfterASave)
+{
+    Entry e;
+    e.type("0905");
+    e.key(Qt::Key_Tab);
+    e.type("F1");
+    e.key(Qt::Key_Tab);
+    e.type("D1");
+    QTest::keyClick(e.focus(), Qt::Key_P, Qt::AltModifier);
+    ASSERT_EQ(QApplication::focusWidget(), e.panel->winnerSupportEdit());
+    e.type("F2");
+    ASSERT_NE(QApplication::activePopupWidget(), nullptr) << "typing F2 shows its completion";
+    QTest::keyClick(e.panel->winnerSupportEdit(), Qt::Key_Enter);
+    ASSERT_EQ(inFile(e.path).size(), 1u);
+    EXPECT_TRUE(e.panel->winnerSupportEdit()->text().isEmpty());
+    EXPECT_EQ(QApplication::activePopupWidget(), nullptr);
+}

@@ -622,6 +622,8 @@ bool EncounterEntryPanel::commitLine()
 void EncounterEntryPanel::clearLine()
 {
     for (QLineEdit* edit : {time_, winner_, loser_, note_, winnerSupport_, loserSupport_}) edit->clear();
+    // A completion list left open by the last field would hang under an empty field.
+    for (QObject* popup : completionPopups_) static_cast<QWidget*>(popup)->hide();
     draw_->setChecked(false);
     clearMessages();
 }
