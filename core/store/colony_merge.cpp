@@ -15,6 +15,8 @@
 #include <algorithm>
 #include <array>
 #include <map>
+#include <optional>
+#include <set>
 #include <sstream>
 #include <unordered_map>
 #include <unordered_set>
@@ -372,6 +374,54 @@ std::unordered_map<std::string, SupportLists> supportListsOf(const ColonyStore& 
     return out;
 }
 
+/// A supporter-list state as a set, so that two states compare whatever order
+/// the rows were written in: (side, animal) pairs.
+using SupportState = std::set<std::pair<std::string, std::string>>;
+
+SupportState stateOf(const SupportLists& l)
+{
+    SupportState out;
+    for (const std::string& a : splitSupporters(l.winner)) out.emplace("winner", a);
+    for (const std::string& a : splitSupporters(l.loser)) out.emplace("loser", a);
+    return out;
+}
+
+std::string sideOf(const SupportState& s, const char* side)
+{
+    std::string out;
+    for (const auto& [which, animal] : s)
+        if (which == side) out += (out.empty() ? "" : " ") + animal;
+    return out;
+}
+
+/// Every supporter-list state each encounter has had in a file, newest first:
+/// its current rows, then walked back through the encounter_support audit rows
+/// (an insert undone removes the row, a delete undone puts it back). Walking
+/// back from the present also gives the state a bulk import loaded without
+/// audit rows.
+std::unordered_map<std::string, std::vector<SupportState>>
+supportHistoryOf(const ColonyStore& store, const std::unordered_map<std::string, SupportLists>& current)
+{
+    std::unordered_map<std::string, std::vector<SupportState>> out;
+    for (const auto& [uid, lists] : current) out[uid].push_back(stateOf(lists));
+    SqliteStatement has(store.handle(), "SELECT 1 FROM sqlite_master WHERE type = 'table' AND name = 'audit'");
+    if (!has.step()) return out;
+    SqliteStatement q(store.handle(),
+                      "SELECT uid, action, json_extract(old_values, '$.side'), json_extract(old_values, '$.animal'), "
+                      "json_extract(new_values, '$.side'), json_extract(new_values, '$.animal') FROM audit "
+                      "WHERE tbl = 'encounter_support' ORDER BY id DESC");
+    while (q.step()) {
+        std::vector<SupportState>& states = out[q.text(0)];
+        if (states.empty()) states.emplace_back(); // no rows now
+        SupportState before = states.back();
+        const std::string action = q.text(1);
+        if (action == "insert" || action == "update") before.erase({q.text(4), q.text(5)});
+        if (action == "delete" || action == "update") before.emplace(q.text(2), q.text(3));
+        if (before != states.back()) states.push_back(std::move(before));
+    }
+    return out;
+}
+
 /// An encounter whose supporters are taken from the other file.
 struct SupportTaken {
     std::string uid;
@@ -423,36 +473,60 @@ Decisions decide(const ColonyStore& target, const ColonyStore& other, MergePrefe
     };
     d.plans[0] = TableMerger(tables[0], ours[0], theirs[0], prefer, report, report.skippedAnimals, other.path())
                      .run(stillNamed);
-    // Supporters live in their own table, without a per-field history the
-    // common state could be read from: an encounter in both files whose
-    // supporters differ is a conflict, settled only by --prefer (DEVELOPERS.md).
+    // Supporters live in their own table: each side's list is merged like a
+    // field, from the newest supporter state both files had (supportHistoryOf).
     const std::unordered_map<std::string, SupportLists> ourSupport = supportListsOf(target);
     const std::unordered_map<std::string, SupportLists> theirSupport = supportListsOf(other);
     std::vector<std::string> both;
     for (const auto& [uid, v] : ours[2].current)
         if (theirs[2].current.count(uid) && !goingEncounters.count(uid)) both.push_back(uid);
     std::sort(both.begin(), both.end());
+    const auto ourStates = supportHistoryOf(target, ourSupport);
+    const auto theirStates = supportHistoryOf(other, theirSupport);
     for (const std::string& uid : both) {
         const auto o = ourSupport.find(uid);
         const auto t = theirSupport.find(uid);
         const SupportLists here = o == ourSupport.end() ? SupportLists{} : o->second;
         const SupportLists there = t == theirSupport.end() ? SupportLists{} : t->second;
-        if (here == there || prefer == MergePreference::Ours) continue;
-        if (prefer == MergePreference::Theirs) {
-            d.supporters.push_back({uid, there});
-            report.updated.push_back({"encounter", uid, label(tables[2], ours[2].current.at(uid)), "supporters"});
-            continue;
-        }
+        const SupportState hereState = stateOf(here), thereState = stateOf(there);
+        if (hereState == thereState) continue;
+        // The common state: the newest state here that the other file also had.
+        std::optional<SupportState> base;
+        if (auto ours = ourStates.find(uid), theirs = theirStates.find(uid);
+            ours != ourStates.end() && theirs != theirStates.end())
+            for (const SupportState& state : ours->second)
+                if (std::find(theirs->second.begin(), theirs->second.end(), state) != theirs->second.end()) {
+                    base = state;
+                    break;
+                }
+        SupportLists merged = here;
+        bool taken = false;
         MergeConflict c{"encounter", uid, label(tables[2], ours[2].current.at(uid)), {}, {}};
-        const std::pair<const char*, std::pair<std::string, std::string>> sides[] = {
-            {"winner_support", {here.winner, there.winner}}, {"loser_support", {here.loser, there.loser}}};
-        for (const auto& [field, values] : sides) {
-            if (values.first == values.second) continue;
-            c.what += std::string(c.what.empty() ? "" : "; ") + field + ": '" + values.first + "' here, '" +
-                      values.second + "' in the other file";
-            c.fields.push_back({field, values.first, values.second, std::nullopt});
+        for (const char* side : {"winner", "loser"}) {
+            const std::string ourSide = sideOf(hereState, side), theirSide = sideOf(thereState, side);
+            if (ourSide == theirSide) continue;
+            std::string& mine = std::string(side) == "winner" ? merged.winner : merged.loser;
+            const std::string& otherList = std::string(side) == "winner" ? there.winner : there.loser;
+            const std::optional<std::string> baseSide =
+                base ? std::optional<std::string>(sideOf(*base, side)) : std::nullopt;
+            if (baseSide && *baseSide == theirSide) continue; // changed here only: ours stays
+            if ((baseSide && *baseSide == ourSide) || prefer == MergePreference::Theirs) {
+                mine = otherList; // changed in the other file only, or settled for theirs
+                taken = true;
+                continue;
+            }
+            if (prefer == MergePreference::Ours) continue;
+            const std::string field = std::string(side) + "_support";
+            c.what += (c.what.empty() ? "" : "; ") + field + ": '" + ourSide + "' here, '" + theirSide +
+                      "' in the other file";
+            c.fields.push_back({field, ourSide, theirSide, baseSide});
         }
-        report.conflicts.push_back(std::move(c));
+        if (!c.fields.empty()) {
+            report.conflicts.push_back(std::move(c));
+        } else if (taken) {
+            d.supporters.push_back({uid, merged});
+            report.updated.push_back({"encounter", uid, label(tables[2], ours[2].current.at(uid)), "supporters"});
+        }
     }
     return d;
 }

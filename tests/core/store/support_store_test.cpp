@@ -220,7 +220,9 @@ TEST(SupportStore, AnAnimalThatSupportedCannotLeaveBeforeThatDay)
     EXPECT_EQ(problemFor(c.problems, "exit_date"), "'C' has 1 encounter after 2011-06-01");
 }
 
-TEST(SupportStore, AMergeBringsNewSupportersAndAChangedListIsAConflict)
+// Merge semantics of supporters (docs/file-formats.md, "Merging"): each side's
+// list is merged like a field from the newest state both files had.
+TEST(SupportStore, AMergeBringsNewSupportersAndTakesAListChangedInTheOtherFileOnly)
 {
     TempDir dir;
     const std::string a = dir.file("a.hierloom"), b = dir.file("b.hierloom");
@@ -241,12 +243,8 @@ TEST(SupportStore, AMergeBringsNewSupportersAndAChangedListIsAConflict)
     const ColonyStore other = ColonyStore::open(b, ColonyStore::Mode::ReadOnly);
     MergeOptions o;
     o.today = kToday;
-    MergeReport r = mergeColonies(target, other, o);
-    ASSERT_EQ(r.conflicts.size(), 1U);
-    EXPECT_EQ(r.conflicts[0].what, "winner_support: 'C' here, '' in the other file; loser_support: '' here, 'C' in "
-                                   "the other file");
-    o.prefer = MergePreference::Theirs;
-    r = mergeColonies(target, other, o);
+    const MergeReport r = mergeColonies(target, other, o);
+    ASSERT_TRUE(r.conflicts.empty()) << r.conflicts[0].what;
     ASSERT_TRUE(r.written) << r.problems.text();
     const std::vector<Encounter> merged = target.loadEncounters();
     ASSERT_EQ(merged.size(), 2U);
@@ -254,6 +252,47 @@ TEST(SupportStore, AMergeBringsNewSupportersAndAChangedListIsAConflict)
     EXPECT_EQ(merged[0].loserSupport, Ids{"C"});
     EXPECT_EQ(merged[1].winnerSupport, Ids{"A"});
     EXPECT_EQ(merged[1].loserSupport, Ids{"E"});
+    // Merging again changes nothing: both files now hold the same lists.
+    EXPECT_FALSE(mergeColonies(target, other, o).written);
+}
+
+TEST(SupportStore, AListChangedInBothFilesIsAConflictAndAChangeHereOnlyStays)
+{
+    TempDir dir;
+    const std::string a = dir.file("a.hierloom"), b = dir.file("b.hierloom");
+    {
+        ColonyStore s = ColonyStore::create(a);
+        addFounders(s);
+        std::vector<Encounter> es{supported("2012-01-01", "A", "B", {"C"}, {}),
+                                  supported("2012-01-02", "A", "B", {"C"}, {})};
+        ASSERT_TRUE(insertEncounters(s, es, kToday).empty());
+    }
+    std::filesystem::copy_file(a, b);
+    {
+        ColonyStore s = ColonyStore::open(a); // here: both encounters get D on the winner's side
+        s.exec("INSERT INTO encounter_support(encounter, animal, side) SELECT uid, 'D', 'winner' FROM encounter");
+    }
+    {
+        ColonyStore s = ColonyStore::open(b); // there: only the first gets E
+        s.exec("INSERT INTO encounter_support(encounter, animal, side) SELECT uid, 'E', 'winner' FROM encounter "
+               "WHERE date = '2012-01-01'");
+    }
+    ColonyStore target = ColonyStore::open(a);
+    const ColonyStore other = ColonyStore::open(b, ColonyStore::Mode::ReadOnly);
+    MergeOptions o;
+    o.today = kToday;
+    MergeReport r = mergeColonies(target, other, o);
+    ASSERT_EQ(r.conflicts.size(), 1U); // the first; the second changed here only
+    EXPECT_EQ(r.conflicts[0].what, "winner_support: 'C D' here, 'C E' in the other file");
+    ASSERT_EQ(r.conflicts[0].fields.size(), 1U);
+    EXPECT_EQ(r.conflicts[0].fields[0].base, std::optional<std::string>("C"));
+    o.prefer = MergePreference::Theirs;
+    r = mergeColonies(target, other, o);
+    ASSERT_TRUE(r.written) << r.problems.text();
+    const std::vector<Encounter> merged = target.loadEncounters();
+    ASSERT_EQ(merged.size(), 2U);
+    EXPECT_EQ(merged[0].winnerSupport, (Ids{"C", "E"}));
+    EXPECT_EQ(merged[1].winnerSupport, (Ids{"C", "D"})); // changed here only: kept
 }
 
 TEST(SupportStore, ABulkImportKeepsSupportersAndRestoresTheAuditTrigger)
