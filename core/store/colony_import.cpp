@@ -299,8 +299,7 @@ ImportPlan planImport(const std::vector<Animal>& existingAnimals, const std::vec
 
 std::int64_t importEpoch(const ColonyStore& store)
 {
-    SqliteStatement has(store.handle(), "SELECT 1 FROM sqlite_master WHERE type = 'table' AND name = 'audit'");
-    if (!has.step()) return 0;
+    if (!hasTable(store.handle(), "audit")) return 0;
     SqliteStatement q(store.handle(), "SELECT coalesce(max(id), 0) FROM audit");
     return q.step() ? q.integer(0) : 0;
 }

@@ -362,9 +362,7 @@ struct SupportLists {
 std::unordered_map<std::string, SupportLists> supportListsOf(const ColonyStore& store)
 {
     std::unordered_map<std::string, SupportLists> out;
-    SqliteStatement has(store.handle(),
-                        "SELECT 1 FROM sqlite_master WHERE type = 'table' AND name = 'encounter_support'");
-    if (!has.step()) return out;
+    if (!hasTable(store.handle(), "encounter_support")) return out;
     SqliteStatement q(store.handle(), "SELECT encounter, animal, side FROM encounter_support ORDER BY rowid");
     while (q.step()) {
         SupportLists& l = out[q.text(0)];
@@ -404,8 +402,7 @@ supportHistoryOf(const ColonyStore& store, const std::unordered_map<std::string,
 {
     std::unordered_map<std::string, std::vector<SupportState>> out;
     for (const auto& [uid, lists] : current) out[uid].push_back(stateOf(lists));
-    SqliteStatement has(store.handle(), "SELECT 1 FROM sqlite_master WHERE type = 'table' AND name = 'audit'");
-    if (!has.step()) return out;
+    if (!hasTable(store.handle(), "audit")) return out;
     SqliteStatement q(store.handle(),
                       "SELECT uid, action, json_extract(old_values, '$.side'), json_extract(old_values, '$.animal'), "
                       "json_extract(new_values, '$.side'), json_extract(new_values, '$.animal') FROM audit "

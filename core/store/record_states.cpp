@@ -29,12 +29,6 @@ bool RecordStates::knew(const std::string& uid, const RecordValues& values) cons
 
 namespace {
 
-bool hasAuditTable(const ColonyStore& store)
-{
-    SqliteStatement q(store.handle(), "SELECT 1 FROM sqlite_master WHERE type = 'table' AND name = 'audit'");
-    return q.step();
-}
-
 RecordValues valuesAt(const SqliteStatement& q, size_t first, size_t count)
 {
     RecordValues v;
@@ -56,7 +50,7 @@ RecordStates readRecordStates(const ColonyStore& store, const RecordTable& table
         SqliteStatement q(store.handle(), sql.c_str());
         while (q.step()) out.current.emplace(q.text(0), valuesAt(q, 1, n));
     }
-    if (!hasAuditTable(store)) return out; // a version-1 file keeps no history
+    if (!hasTable(store.handle(), "audit")) return out; // a version-1 file keeps no history
     // json_extract gives a column's value with its SQL type, so a state read
     // here compares equal to the same state read from the table above.
     std::string sql = "SELECT uid, action, old_values IS NOT NULL, new_values IS NOT NULL";

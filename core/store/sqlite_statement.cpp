@@ -91,4 +91,11 @@ std::int64_t SqliteStatement::integer(int column) const { return sqlite3_column_
 
 bool SqliteStatement::isNull(int column) const { return sqlite3_column_type(stmt_, column) == SQLITE_NULL; }
 
+bool hasTable(sqlite3* db, const char* name)
+{
+    SqliteStatement q(db, "SELECT 1 FROM sqlite_master WHERE type = 'table' AND name = ?");
+    q.bind(1, std::string(name));
+    return q.step();
+}
+
 } // namespace hierloom::core

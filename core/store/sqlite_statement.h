@@ -46,4 +46,7 @@ private:
 /// Throws ColonyFileError for an SQLite result code that is not OK.
 void throwSqliteError(sqlite3* db, int rc, const std::string& context);
 
+/// True when the file holds a table of that name (older schema versions lack some).
+bool hasTable(sqlite3* db, const char* name);
+
 } // namespace hierloom::core
