@@ -221,7 +221,7 @@ void writeAnimalChange(ColonyStore& store, const std::optional<AnimalRecord>& fr
         if (from) {
             SqliteStatement del(db, "DELETE FROM residence WHERE uid = ?");
             for (const Residence& r : from->residences) {
-                del.bind(1, r.uid);
+                del.bindUid(1, r.uid);
                 del.run();
             }
         }
@@ -230,11 +230,11 @@ void writeAnimalChange(ColonyStore& store, const std::optional<AnimalRecord>& fr
                                    "mother = ?6, father = ?7, entry_date = ?8, entry_type = ?9, exit_date = ?10, "
                                    "exit_type = ?11 WHERE uid = ?12");
             bindAnimalColumns(up, to->animal);
-            up.bind(12, from->animal.uid);
+            up.bindUid(12, from->animal.uid);
             up.run();
         } else if (from) {
             SqliteStatement del(db, "DELETE FROM animal WHERE uid = ?");
-            del.bind(1, from->animal.uid);
+            del.bindUid(1, from->animal.uid);
             del.run();
         } else if (to) {
             SqliteStatement ins(db, kInsertAnimalSql);
@@ -265,7 +265,7 @@ void writeEncounterChange(ColonyStore& store, const std::vector<Encounter>& remo
             SqliteStatement del(db, "DELETE FROM encounter WHERE uid = ?");
             for (const Encounter& e : remove) {
                 deleteSupportRows(db, e.uid);
-                del.bind(1, e.uid);
+                del.bindUid(1, e.uid);
                 del.run();
             }
         }
@@ -327,7 +327,7 @@ std::vector<Encounter> encountersByUid(const ColonyStore& store, const std::vect
     SqliteStatement q(store.handle(), (std::string("SELECT ") + kEncounterColumnsSql + " FROM encounter WHERE uid = ?").c_str());
     std::vector<Encounter> out;
     for (const std::string& uid : uids) {
-        q.bind(1, uid);
+        q.bindUid(1, uid);
         if (q.step()) {
             out.push_back(readEncounterRow(q, store.path()));
             loadSupportRowsOf(store.handle(), out.back());

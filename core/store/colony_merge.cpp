@@ -312,14 +312,14 @@ void applyUpdate(sqlite3* db, const RecordTable& t, const Update& u)
     sql += " WHERE uid = ?" + std::to_string(u.columns.size() + 1);
     SqliteStatement q(db, sql.c_str());
     for (size_t k = 0; k < u.columns.size(); ++k) q.bindOptional(static_cast<int>(k + 1), u.values[u.columns[k]]);
-    q.bind(static_cast<int>(u.columns.size() + 1), u.uid);
+    q.bindUid(static_cast<int>(u.columns.size() + 1), u.uid);
     q.run();
 }
 
 void applyDelete(sqlite3* db, const RecordTable& t, const std::string& uid)
 {
     SqliteStatement q(db, (std::string("DELETE FROM ") + t.name + " WHERE uid = ?").c_str());
-    q.bind(1, uid);
+    q.bindUid(1, uid);
     q.run();
 }
 
@@ -365,7 +365,7 @@ std::unordered_map<std::string, SupportLists> supportListsOf(const ColonyStore& 
     if (!hasTable(store.handle(), "encounter_support")) return out;
     SqliteStatement q(store.handle(), "SELECT encounter, animal, side FROM encounter_support ORDER BY rowid");
     while (q.step()) {
-        SupportLists& l = out[q.text(0)];
+        SupportLists& l = out[q.uid(0)];
         std::string& list = q.text(2) == "winner" ? l.winner : l.loser;
         list += (list.empty() ? "" : " ") + q.text(1);
     }

@@ -1,6 +1,8 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "core/store/colony_schema.h"
 
+#include "core/store/uid_storage.h"
+
 #include <stdexcept>
 #include <string>
 #include <vector>
@@ -82,13 +84,21 @@ struct AuditedTable {
     const char* uidColumn = "uid"; // the audit row's uid: the record's own, or its encounter's
 };
 
+/// ROW.col, or its uid text for a column holding a uid (stored as 16 bytes
+/// from version 4; JSON cannot hold bytes and audit rows keep text uids).
+std::string valueOf(const AuditedTable& t, const char* row, const std::string& column)
+{
+    const std::string value = std::string(row) + "." + column;
+    return column == "uid" || column == t.uidColumn ? uidTextSql(value) : value;
+}
+
 /// json_object('col', ROW.col, ...) for the columns of one table.
 std::string jsonOf(const AuditedTable& t, const char* row)
 {
     std::string out = "json_object(";
     for (size_t i = 0; i < t.columns.size(); ++i) {
         if (i) out += ", ";
-        out += std::string("'") + t.columns[i] + "', " + row + "." + t.columns[i];
+        out += std::string("'") + t.columns[i] + "', " + valueOf(t, row, t.columns[i]);
     }
     return out + ")";
 }
@@ -156,13 +166,13 @@ std::string auditTriggerSql(const std::string& table, const std::string& action)
                              (action == "insert" ? "INSERT" : action == "update" ? "UPDATE" : "DELETE") + " ON " +
                              table + " WHEN NOT EXISTS (SELECT 1 FROM audit_pause) BEGIN\n";
     if (action == "insert")
-        return head + "  INSERT INTO audit(tbl, uid, action, new_values) VALUES ('" + table + "', new." + t.uidColumn + ", 'insert', " +
+        return head + "  INSERT INTO audit(tbl, uid, action, new_values) VALUES ('" + table + "', " + valueOf(t, "new", t.uidColumn) + ", 'insert', " +
                jsonOf(t, "new") + ");\nEND;\n";
     if (action == "update")
         return head + "  INSERT INTO audit(tbl, uid, action, old_values, new_values) VALUES ('" + table +
-               "', new." + t.uidColumn + ", 'update', " + jsonOf(t, "old") + ", " + jsonOf(t, "new") + ");\nEND;\n";
+               "', " + valueOf(t, "new", t.uidColumn) + ", 'update', " + jsonOf(t, "old") + ", " + jsonOf(t, "new") + ");\nEND;\n";
     if (action == "delete")
-        return head + "  INSERT INTO audit(tbl, uid, action, old_values) VALUES ('" + table + "', old." + t.uidColumn + ", 'delete', " +
+        return head + "  INSERT INTO audit(tbl, uid, action, old_values) VALUES ('" + table + "', " + valueOf(t, "old", t.uidColumn) + ", 'delete', " +
                jsonOf(t, "old") + ");\nEND;\n";
     throw std::invalid_argument("no audit trigger for " + action);
 }

@@ -8,7 +8,7 @@ namespace hierloom::core {
 constexpr int colonyApplicationId = 0x48524C4D;
 
 /// The schema version this build writes (`PRAGMA user_version`).
-constexpr int currentSchemaVersion = 3;
+constexpr int currentSchemaVersion = 4;
 
 /// SQL creating the version-1 schema.
 const char* schemaVersion1Sql();
@@ -23,6 +23,11 @@ const char* schemaVersion2Sql();
 /// animal and its side) and its audit triggers, which file each row under
 /// the encounter's uid. Self-contained: it needs nothing but version 2.
 const char* schemaVersion3Sql();
+
+/// Version 4 changes how uids are stored (16 bytes for a canonical uid,
+/// core/store/uid_storage.h), not the tables: its step is C++
+/// (core/store/uid_migration.h), and the audit triggers the functions below
+/// write turn a stored uid back into text.
 
 /// The audit trigger of one table ("animal", "residence", "encounter"
 /// from version 2, "encounter_support" from version 3) and action ("insert", "update", "delete"), exactly as the

@@ -9,6 +9,7 @@
 #include "core/store/record_binding.h"
 #include "core/store/sqlite_uri.h"
 #include "core/store/support_rows.h"
+#include "core/store/uid_migration.h"
 #include "core/store/write_transaction.h"
 #include "core/store/sqlite_statement.h"
 
@@ -349,12 +350,25 @@ void ColonyStore::migrate(int fromVersion)
             } else if (v == 2) {
                 // Version 3 adds the supporters of encounters (none in an older file).
                 exec(schemaVersion3Sql());
+            } else if (v == 3) {
+                // Version 4 stores uids as 16 bytes: a fifth of the file for many encounters.
+                storeUidsCompactly(*this);
             }
             exec(("PRAGMA user_version = " + std::to_string(v + 1)).c_str());
         }
         tx.commit();
     }
     exec("PRAGMA journal_mode = WAL");
+    // The shorter uids leave every page of the old tables partly empty; a
+    // rewrite gives the space back. VACUUM is all-or-nothing like any
+    // transaction: stopped half-way, the file stays as the commit above left it.
+    // Only space is at stake: a file another program holds open keeps it for now.
+    if (fromVersion <= 3) {
+        try {
+            exec("VACUUM");
+        } catch (const ColonyFileError&) {
+        }
+    }
 }
 
 void ColonyStore::ensureEncounterIndex()
@@ -422,7 +436,7 @@ std::vector<Animal> ColonyStore::loadAnimals() const
     std::vector<Animal> out;
     while (q.step()) {
         Animal a;
-        a.uid = q.text(0);
+        a.uid = q.uid(0);
         a.id = q.text(1);
         a.name = q.text(2);
         a.sex = parseSex(q.text(3)).value_or(Sex::Unknown);
@@ -444,7 +458,7 @@ std::vector<Residence> ColonyStore::loadResidences() const
     std::vector<Residence> out;
     while (q.step()) {
         Residence r;
-        r.uid = q.text(0);
+        r.uid = q.uid(0);
         r.animal = q.text(1);
         r.group = q.text(2);
         r.from = requiredDay(q.text(3), path_);
@@ -519,7 +533,7 @@ std::unordered_set<std::string> ColonyStore::encounterUids() const
 {
     SqliteStatement q(db_, "SELECT uid FROM encounter");
     std::unordered_set<std::string> out;
-    while (q.step()) out.insert(q.text(0));
+    while (q.step()) out.insert(q.uid(0));
     return out;
 }
 

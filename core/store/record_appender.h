@@ -40,6 +40,7 @@ public:
 private:
     ColonyStore& store_;
     bool bulk_;
+    bool indexAfter_ = false; ///< the group index was dropped for the load; finish() builds it
     SqliteStatement insert_;
     SupportWriter support_;
     std::int64_t nextSeq_ = 1;

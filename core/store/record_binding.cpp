@@ -13,7 +13,7 @@ std::optional<std::string> storedDate(const std::optional<Day>& d)
 
 void bindAnimalColumns(SqliteStatement& q, const Animal& a)
 {
-    q.bind(1, a.uid);
+    q.bindUid(1, a.uid);
     q.bind(2, a.id);
     q.bind(3, a.name);
     q.bind(4, toString(a.sex));
@@ -28,7 +28,7 @@ void bindAnimalColumns(SqliteStatement& q, const Animal& a)
 
 void bindResidenceColumns(SqliteStatement& q, const Residence& r)
 {
-    q.bind(1, r.uid);
+    q.bindUid(1, r.uid);
     q.bind(2, r.animal);
     q.bind(3, r.group);
     q.bind(4, formatDate(r.from));
@@ -38,7 +38,7 @@ void bindResidenceColumns(SqliteStatement& q, const Residence& r)
 void bindEncounterColumns(SqliteStatement& q, const Encounter& e, const std::string& dateText)
 {
     q.bind(1, e.seq);
-    q.bindStatic(2, e.uid);
+    q.bindUid(2, e.uid);
     q.bindStatic(3, dateText);
     if (e.time) q.bind(4, static_cast<std::int64_t>(*e.time));
     else q.bindNull(4);
@@ -55,7 +55,7 @@ Encounter readEncounterRow(const SqliteStatement& q, const std::string& path)
 {
     Encounter e;
     e.seq = q.integer(0);
-    e.uid = q.text(1);
+    e.uid = q.uid(1);
     const std::string date = q.text(2);
     const auto day = parseDate(date);
     if (!day)

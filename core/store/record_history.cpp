@@ -11,9 +11,10 @@ std::vector<AuditEntry> recordHistory(const ColonyStore& store, const std::strin
     SqliteStatement q(store.handle(),
                       "SELECT id, time, user, tbl, uid, action, coalesce(old_values, ''), coalesce(new_values, '') "
                       "FROM audit WHERE uid = ?1 OR (action = 'import' AND tbl = 'encounter' AND "
-                      "(SELECT seq FROM encounter WHERE uid = ?1) BETWEEN json_extract(new_values, '$.first_seq') "
+                      "(SELECT seq FROM encounter WHERE uid = ?2) BETWEEN json_extract(new_values, '$.first_seq') "
                       "AND json_extract(new_values, '$.last_seq')) ORDER BY id");
-    q.bind(1, uid);
+    q.bind(1, uid); // audit rows keep uids as text
+    q.bindUid(2, uid);
     std::vector<AuditEntry> out;
     while (q.step())
         out.push_back({q.integer(0), q.text(1), q.text(2), q.text(3), q.text(4), q.text(5), q.text(6), q.text(7)});
@@ -25,7 +26,7 @@ std::optional<std::string> animalUid(const ColonyStore& store, const std::string
     {
         SqliteStatement q(store.handle(), "SELECT uid FROM animal WHERE id = ?");
         q.bind(1, animalId);
-        if (q.step()) return q.text(0);
+        if (q.step()) return q.uid(0);
     }
     SqliteStatement q(store.handle(),
                       "SELECT uid FROM audit WHERE tbl = 'animal' AND (json_extract(new_values, '$.id') = ?1 OR "

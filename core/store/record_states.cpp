@@ -48,7 +48,7 @@ RecordStates readRecordStates(const ColonyStore& store, const RecordTable& table
         for (const char* c : table.columns) sql += std::string(", ") + c;
         sql += std::string(" FROM ") + table.name;
         SqliteStatement q(store.handle(), sql.c_str());
-        while (q.step()) out.current.emplace(q.text(0), valuesAt(q, 1, n));
+        while (q.step()) out.current.emplace(q.uid(0), valuesAt(q, 1, n));
     }
     if (!hasTable(store.handle(), "audit")) return out; // a version-1 file keeps no history
     // json_extract gives a column's value with its SQL type, so a state read

@@ -2,6 +2,7 @@
 #include "core/store/sqlite_statement.h"
 
 #include "core/base/colony_file_error.h"
+#include "core/store/uid_storage.h"
 
 #include <sqlite3.h>
 
@@ -56,6 +57,14 @@ void SqliteStatement::bind(int index, std::int64_t value) { sqlite3_bind_int64(s
 
 void SqliteStatement::bindNull(int index) { sqlite3_bind_null(stmt_, index); }
 
+void SqliteStatement::bindUid(int index, std::string_view uid)
+{
+    if (const auto bytes = compactUid(uid))
+        sqlite3_bind_blob(stmt_, index, bytes->data(), static_cast<int>(bytes->size()), SQLITE_TRANSIENT);
+    else
+        bind(index, uid);
+}
+
 bool SqliteStatement::step()
 {
     const int rc = sqlite3_step(stmt_);
@@ -79,6 +88,13 @@ std::string SqliteStatement::text(int column) const
     const auto* p = sqlite3_column_text(stmt_, column);
     return p ? std::string(reinterpret_cast<const char*>(p), static_cast<size_t>(sqlite3_column_bytes(stmt_, column)))
              : std::string();
+}
+
+std::string SqliteStatement::uid(int column) const
+{
+    if (sqlite3_column_type(stmt_, column) == SQLITE_BLOB && sqlite3_column_bytes(stmt_, column) == 16)
+        return uidText(static_cast<const unsigned char*>(sqlite3_column_blob(stmt_, column)));
+    return text(column);
 }
 
 std::optional<std::string> SqliteStatement::optionalText(int column) const

@@ -26,6 +26,9 @@ public:
     void bindNullableText(int index, std::string_view text); // empty -> NULL
     void bind(int index, std::int64_t value);
     void bindNull(int index);
+    /// Binds a record uid in its stored form (core/store/uid_storage.h):
+    /// 16 bytes for a canonical uid, the text otherwise.
+    void bindUid(int index, std::string_view uid);
 
     /// Steps once: true when a row is available.
     bool step();
@@ -36,6 +39,8 @@ public:
     std::string text(int column) const;
     std::optional<std::string> optionalText(int column) const;
     std::int64_t integer(int column) const;
+    /// A record uid column as text, whichever way it is stored.
+    std::string uid(int column) const;
     bool isNull(int column) const;
 
 private:

@@ -28,7 +28,7 @@ void SupportWriter::add(const Encounter& e)
 void SupportWriter::addSide(const Encounter& e, const std::vector<std::string>& ids, const char* side)
 {
     for (const std::string& id : ids) {
-        insert_.bind(1, e.uid);
+        insert_.bindUid(1, e.uid);
         insert_.bind(2, id);
         insert_.bind(3, side);
         insert_.run();
@@ -38,7 +38,7 @@ void SupportWriter::addSide(const Encounter& e, const std::vector<std::string>& 
 void deleteSupportRows(sqlite3* db, const std::string& encounterUid)
 {
     SqliteStatement del(db, "DELETE FROM encounter_support WHERE encounter = ?");
-    del.bind(1, encounterUid);
+    del.bindUid(1, encounterUid);
     del.run();
 }
 
@@ -68,7 +68,7 @@ void loadSupportRowsOf(sqlite3* db, Encounter& e)
     e.winnerSupport.clear();
     e.loserSupport.clear();
     SqliteStatement q(db, "SELECT animal, side FROM encounter_support WHERE encounter = ? ORDER BY rowid");
-    q.bind(1, e.uid);
+    q.bindUid(1, e.uid);
     while (q.step()) addRow(e, q.text(0), q.text(1));
 }
 

@@ -10,6 +10,7 @@
 // HIERLOOM_BENCH_KEEP=1 keeps the files in /tmp/hierloom-bench-import.
 #include "core/store/colony_import.h"
 #include "core/store/colony_store.h"
+#include "core/store/uid_storage.h"
 #include "tests/core/generated_import.h"
 
 #include <unistd.h>
@@ -113,8 +114,8 @@ int main(int argc, char** argv)
         const double audited = timeImport(
             dir, base,
             "CREATE TEMP TRIGGER bench_audit AFTER INSERT ON main.encounter BEGIN "
-            "INSERT INTO audit(tbl, uid, action, new_values) VALUES ('encounter', new.uid, 'insert', "
-            "json_object('seq', new.seq, 'uid', new.uid, 'date', new.date, 'time', new.time, 'winner', "
+            "INSERT INTO audit(tbl, uid, action, new_values) VALUES ('encounter', " + uidTextSql("new.uid") + ", 'insert', "
+            "json_object('seq', new.seq, 'uid', " + uidTextSql("new.uid") + ", 'date', new.date, 'time', new.time, 'winner', "
             "new.winner, 'loser', new.loser, 'outcome', new.outcome, 'behaviour', new.behaviour, 'grp', "
             "new.grp, 'observer', new.observer, 'note', new.note)); END");
         std::printf("same, one audit row per encounter: %.3f s, %.0f rows/s (x%.2f)\n", audited, rows / audited,

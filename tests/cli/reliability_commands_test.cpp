@@ -2,6 +2,7 @@
 #include "cli_test_support.h"
 #include "core/store/colony_backup.h"
 #include "core/store/colony_store.h"
+#include "core/store/uid_storage.h"
 
 #include <gtest/gtest.h>
 
@@ -142,7 +143,7 @@ TEST(CliMergeDemo, DeletionsTravelOneSidedEditsAreTakenAndABackupIsTaken)
     const std::string uid = DemoCopies::firstUid(d.a);
     {
         hierloom::core::ColonyStore s = hierloom::core::ColonyStore::open(d.a);
-        s.exec(("DELETE FROM encounter WHERE uid = '" + uid + "'").c_str());
+        s.exec(("DELETE FROM encounter WHERE uid = " + hierloom::core::uidSqlLiteral(uid)).c_str());
         s.exec("UPDATE animal SET name = 'edited on a' WHERE rowid = (SELECT min(rowid) FROM animal)");
     }
     // b into a, preferring b: the deletion stays, a's own edit stays.

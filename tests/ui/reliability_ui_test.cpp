@@ -6,6 +6,7 @@
 #include "core/store/colony_backup.h"
 #include "core/store/colony_import.h"
 #include "core/store/colony_store.h"
+#include "core/store/uid_storage.h"
 #include "tests/core/import_test_support.h"
 #include "ui/records/animal_table_model.h"
 #include "ui/records/animal_view.h"
@@ -235,7 +236,7 @@ TEST(ReliabilityUi, MergeDialogShowsConflictsFieldByFieldAndDeletions)
         core::ColonyStore other = core::ColonyStore::open(theirs);
         other.exec("UPDATE animal SET name = 'Tilly' WHERE id = 'D1'");
         goneUid = other.loadEncounters().at(0).uid;
-        other.exec(("DELETE FROM encounter WHERE uid = '" + goneUid + "'").c_str());
+        other.exec(("DELETE FROM encounter WHERE uid = " + core::uidSqlLiteral(goneUid)).c_str());
     }
     {
         core::ColonyStore here = core::ColonyStore::open(ours);

@@ -5,6 +5,7 @@
 #include "core/store/colony_edits.h"
 #include "core/store/colony_import.h"
 #include "core/store/colony_store.h"
+#include "core/store/uid_storage.h"
 #include "import_test_support.h"
 
 #include <gtest/gtest.h>
@@ -267,7 +268,7 @@ TEST(ColonyMerge, AnEmptyGroupFilledOnImportIsNotAConflict)
         // A real difference in the same record, preferring the other file: its note is
         // taken, the group filled here stays.
         ColonyStore b = ColonyStore::open(t.b);
-        b.exec(("UPDATE encounter SET note = 'seen twice' WHERE uid = '" + loose.uid + "'").c_str());
+        b.exec(("UPDATE encounter SET note = 'seen twice' WHERE uid = " + uidSqlLiteral(loose.uid)).c_str());
     }
     const ColonyStore b = ColonyStore::open(t.b, ColonyStore::Mode::ReadOnly);
     const MergeReport r = mergeColonies(a, b, prefer(MergePreference::Theirs));
@@ -448,7 +449,7 @@ TEST(MergeTombstones, DeletedAgainstEditedIsAConflict)
     }
     {
         ColonyStore b = ColonyStore::open(t.b);
-        b.exec(("UPDATE encounter SET note = 'bleeding ear' WHERE uid = '" + uid + "'").c_str());
+        b.exec(("UPDATE encounter SET note = 'bleeding ear' WHERE uid = " + uidSqlLiteral(uid)).c_str());
     }
     MergeReport r = mergeInto(t.a, t.b);
     ASSERT_EQ(r.conflicts.size(), 1U);

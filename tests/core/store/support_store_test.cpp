@@ -101,7 +101,7 @@ TEST(SupportStore, VersionOneAndTwoFilesMigrateToTheSupportTableKeepingTheirReco
         ASSERT_EQ(probeColonyFile(path), version);
         {
             ColonyStore store = ColonyStore::open(path);
-            EXPECT_EQ(store.schemaVersion(), 3);
+            EXPECT_EQ(store.schemaVersion(), currentSchemaVersion);
             Colony c = store.load();
             ASSERT_EQ(c.encounters.size(), 1U);
             EXPECT_TRUE(c.encounters[0].winnerSupport.empty());

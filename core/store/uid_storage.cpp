@@ -1,0 +1,92 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#include "core/store/uid_storage.h"
+
+#include <sqlite3.h>
+
+namespace hierloom::core {
+
+namespace {
+
+int hexValue(char c)
+{
+    if (c >= '0' && c <= '9') return c - '0';
+    if (c >= 'a' && c <= 'f') return c - 'a' + 10;
+    return -1; // upper case is not canonical: kept as text so it reads back as written
+}
+
+void compactUidFunction(sqlite3_context* ctx, int, sqlite3_value** argv)
+{
+    if (sqlite3_value_type(argv[0]) == SQLITE_TEXT) {
+        const auto* p = reinterpret_cast<const char*>(sqlite3_value_text(argv[0]));
+        const auto bytes = compactUid(std::string_view(p, static_cast<size_t>(sqlite3_value_bytes(argv[0]))));
+        if (bytes) {
+            sqlite3_result_blob(ctx, bytes->data(), static_cast<int>(bytes->size()), SQLITE_TRANSIENT);
+            return;
+        }
+    }
+    sqlite3_result_value(ctx, argv[0]);
+}
+
+} // namespace
+
+std::optional<UidBytes> compactUid(std::string_view u)
+{
+    if (u.size() != 36) return std::nullopt;
+    UidBytes out{};
+    size_t at = 0;
+    for (size_t i = 0; i < 36;) {
+        if (i == 8 || i == 13 || i == 18 || i == 23) {
+            if (u[i] != '-') return std::nullopt;
+            ++i;
+            continue;
+        }
+        const int hi = hexValue(u[i]);
+        const int lo = hexValue(u[i + 1]);
+        if (hi < 0 || lo < 0) return std::nullopt;
+        out[at++] = static_cast<unsigned char>(hi << 4 | lo);
+        i += 2;
+    }
+    return out;
+}
+
+std::string uidText(const unsigned char* b)
+{
+    static const char* hex = "0123456789abcdef";
+    std::string out;
+    out.reserve(36);
+    for (size_t i = 0; i < 16; ++i) {
+        if (i == 4 || i == 6 || i == 8 || i == 10) out += '-';
+        out += hex[b[i] >> 4];
+        out += hex[b[i] & 0x0f];
+    }
+    return out;
+}
+
+std::string uidSqlLiteral(std::string_view uid)
+{
+    if (const auto bytes = compactUid(uid)) {
+        std::string hex;
+        for (char c : uid)
+            if (c != '-') hex += c;
+        return "X'" + hex + "'";
+    }
+    std::string out = "'";
+    for (char c : uid) out += c == '\'' ? std::string("''") : std::string(1, c);
+    return out + "'";
+}
+
+std::string uidTextSql(const std::string& c)
+{
+    const std::string h = "hex(" + c + ")";
+    return "CASE WHEN typeof(" + c + ") = 'blob' AND length(" + c + ") = 16 THEN lower(substr(" + h + ", 1, 8) || '-' || substr(" +
+           h + ", 9, 4) || '-' || substr(" + h + ", 13, 4) || '-' || substr(" + h + ", 17, 4) || '-' || substr(" + h +
+           ", 21)) ELSE " + c + " END";
+}
+
+void registerCompactUidFunction(sqlite3* db)
+{
+    sqlite3_create_function(db, "hierloom_compact_uid", 1, SQLITE_UTF8 | SQLITE_DETERMINISTIC, nullptr,
+                            compactUidFunction, nullptr, nullptr);
+}
+
+} // namespace hierloom::core
