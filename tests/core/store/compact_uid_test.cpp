@@ -302,7 +302,7 @@ std::string contentOf(const std::string& path)
 TEST(CompactUid, AKilledMigrationLeavesTheOldFileOrTheWholeNewOne)
 {
     TempDir dir;
-    constexpr int n = 100000;
+    constexpr int n = 40000;
     const std::string reference = writeLargeVersion3File(dir, "reference.hierloom", n);
     const std::string oldTexts = scalarOfFile(reference, "SELECT count(*) FROM encounter WHERE typeof(uid) = 'text'");
     ASSERT_EQ(oldTexts, std::to_string(n + 2));
