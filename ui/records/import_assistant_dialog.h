@@ -6,6 +6,7 @@
 
 #include <array>
 
+class QCheckBox;
 class QComboBox;
 class QLabel;
 class QLineEdit;
@@ -42,6 +43,7 @@ public:
     QComboBox* namingField() const { return naming_; }
     QComboBox* savedField() const { return saved_; }
     QLineEdit* nameField() const { return name_; }
+    QCheckBox* saveWithImportField() const { return saveWith_; }
     QLineEdit* groupField() const { return group_; }
     QTableWidget* previewTable() const { return preview_; }
     QTableWidget* unknownTable() const { return unknown_; }
@@ -54,7 +56,8 @@ public:
     void refresh();
     /// Checks the whole sheet under the import's rules without writing; true when it would import.
     bool check();
-    /// Imports; true when the records were written (then the dialog accepts).
+    /// Imports (and, when ticked, saves the mapping in the same transaction);
+    /// true when the records were written (then the dialog accepts).
     bool runImport();
     /// Saves the mapping under its name in the colony file.
     bool saveMapping();
@@ -71,6 +74,7 @@ private:
     QPushButton* browse_;
     QComboBox* saved_;
     QLineEdit* name_;
+    QCheckBox* saveWith_; ///< save the mapping in the import's own transaction
     QComboBox* layout_;
     QComboBox* naming_;
     QComboBox* dates_;
