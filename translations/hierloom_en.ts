@@ -2079,6 +2079,10 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
 </source>
         <translation type="unfinished"></translation>
     </message>
+    <message>
+        <source>Rows read without a problem: %1. Check tests them against the import&apos;s rules without writing; Import writes them.</source>
+        <translation type="unfinished"></translation>
+    </message>
 </context>
 <context>
     <name>hierloom::ui::ImportDialog</name>

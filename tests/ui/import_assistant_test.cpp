@@ -261,6 +261,11 @@ TEST(ImportAssistant, MappingIsSavedWithTheImportOrNotAtAll)
         EXPECT_EQ(dialog.result(), QDialog::Accepted) << dialog.problemText()->toPlainText().toStdString();
         EXPECT_EQ(inFile(o.path).size(), 2u);
         EXPECT_EQ(savedNames(o.path), std::vector<std::string>{"plain"});
+        // The dialog stays open with the outcome; a second press cannot import the sheet twice.
+        EXPECT_TRUE(dialog.isVisible());
+        EXPECT_TRUE(dialog.problemText()->toPlainText().contains(QStringLiteral("Saved the mapping as \"plain\"")))
+            << dialog.problemText()->toPlainText().toStdString();
+        EXPECT_FALSE(dialog.importButton()->isEnabled());
     }
 }
 

@@ -87,7 +87,8 @@ ImportAssistantDialog::ImportAssistantDialog(ColonyEditFacade* facade, QWidget* 
       problems_(new QPlainTextEdit(this)),
       check_(new QPushButton(tr("Chec&k"), this)),
       save_(new QPushButton(tr("&Save Mapping"), this)),
-      import_(new QPushButton(tr("&Import"), this))
+      import_(new QPushButton(tr("&Import"), this)),
+      close_(new QPushButton(tr("Close"), this))
 {
     setWindowTitle(tr("Import a Spreadsheet"));
     setObjectName(QStringLiteral("importAssistant"));
@@ -117,7 +118,9 @@ ImportAssistantDialog::ImportAssistantDialog(ColonyEditFacade* facade, QWidget* 
     fileRow->addWidget(path_, 1);
     fileRow->addWidget(browse_);
     auto* top = new QFormLayout;
-    top->addRow(tr("S&heet:"), fileRow);
+    auto* sheetLabel = new QLabel(tr("S&heet:"), this); // a row of two widgets gets no buddy from the form
+    sheetLabel->setBuddy(path_);
+    top->addRow(sheetLabel, fileRow);
     top->addRow(tr("Sa&ved mapping:"), saved_);
     top->addRow(tr("&Mapping name:"), name_);
     top->addRow(QString(), saveWith_);
@@ -157,6 +160,7 @@ ImportAssistantDialog::ImportAssistantDialog(ColonyEditFacade* facade, QWidget* 
     unknown_->setHorizontalHeaderLabels({tr("Name in the sheet"), tr("Rows"), tr("Animal id"), tr("Add as new animal"),
                                          tr("Sex of a new animal (F, M, U)")});
     unknown_->horizontalHeader()->setStretchLastSection(true);
+    unknown_->horizontalHeader()->setSectionResizeMode(QHeaderView::ResizeToContents);
     unknown_->setEditTriggers(QAbstractItemView::AllEditTriggers);
     unknown_->verticalHeader()->hide();
     problems_->setObjectName(QStringLiteral("importProblems"));
@@ -165,7 +169,7 @@ ImportAssistantDialog::ImportAssistantDialog(ColonyEditFacade* facade, QWidget* 
 
     auto* buttons = new QHBoxLayout;
     buttons->addStretch();
-    auto* cancel = new QPushButton(tr("Close"), this);
+    auto* cancel = close_;
     browse_->setAutoDefault(false); // Enter in the path field reads the sheet, never opens the file chooser
     for (QPushButton* b : {check_, save_, import_, cancel}) {
         b->setAutoDefault(false);
@@ -220,7 +224,7 @@ ImportAssistantDialog::ImportAssistantDialog(ColonyEditFacade* facade, QWidget* 
     connect(check_, &QPushButton::clicked, this, &ImportAssistantDialog::check);
     connect(save_, &QPushButton::clicked, this, &ImportAssistantDialog::saveMapping);
     connect(import_, &QPushButton::clicked, this, &ImportAssistantDialog::runImport);
-    connect(cancel, &QPushButton::clicked, this, &QDialog::reject);
+    connect(cancel, &QPushButton::clicked, this, [this] { done(result()); }); // Accepted once something was imported
     saveWith_->setObjectName(QStringLiteral("saveWithImport"));
     saveWith_->setChecked(true);
     saveWith_->setToolTip(tr("Saved in the same write as the records: a refused import saves nothing."));
@@ -400,7 +404,12 @@ void ImportAssistantDialog::refresh()
                                    problems.join(QStringLiteral("; "))};
         for (int c = 0; c < cells.size(); ++c) preview_->setItem(r, c, new QTableWidgetItem(cells[c]));
     }
-    problems_->setPlainText(toQString(translation_.problems.text()));
+    problems_->setPlainText(
+        translation_.problems.empty()
+            ? tr("Rows read without a problem: %1. Check tests them against the import's rules without writing; "
+                 "Import writes them.")
+                  .arg(translation_.rows.size())
+            : toQString(translation_.problems.text()));
     import_->setEnabled(translation_.problems.empty() && !document_->isReadOnly());
     refreshUnknownNames();
 }
@@ -471,9 +480,15 @@ bool ImportAssistantDialog::runImport()
         return false;
     }
     QString done = tr("Imported %1 encounters and %2 new animals.").arg(r.encounters).arg(r.animals);
-    if (save) done += QLatin1Char(' ') + tr("Saved the mapping as \"%1\" in the colony file.").arg(toQString(m.name));
+    if (save) {
+        done += QLatin1Char(' ') + tr("Saved the mapping as \"%1\" in the colony file.").arg(toQString(m.name));
+        if (saved_->findText(toQString(m.name)) < 0) saved_->addItem(toQString(m.name));
+    }
     problems_->setPlainText(done + (readBack.isEmpty() ? QString() : QLatin1Char('\n') + readBack));
-    accept();
+    // The dialog stays open so the outcome can be read; the same sheet is not imported twice by a second press.
+    setResult(QDialog::Accepted);
+    import_->setEnabled(false);
+    close_->setFocus();
     return true;
 }
 

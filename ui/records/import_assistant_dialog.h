@@ -57,7 +57,8 @@ public:
     /// Checks the whole sheet under the import's rules without writing; true when it would import.
     bool check();
     /// Imports (and, when ticked, saves the mapping in the same transaction);
-    /// true when the records were written (then the dialog accepts).
+    /// true when the records were written (then the dialog's result is
+    /// Accepted; it stays open showing what was imported).
     bool runImport();
     /// Saves the mapping under its name in the colony file.
     bool saveMapping();
@@ -91,6 +92,7 @@ private:
     QPushButton* check_;
     QPushButton* save_;
     QPushButton* import_;
+    QPushButton* close_;
     core::SheetSource sheet_;
     core::SheetTranslation translation_;
     std::vector<core::NameChoice> names_; ///< the choices made in the unknown-names table, kept across refreshes
