@@ -21,6 +21,8 @@
 #include <QTableWidget>
 #include <QVBoxLayout>
 
+#include <algorithm>
+
 namespace hierloom::ui {
 
 namespace {
@@ -426,9 +428,17 @@ void ImportAssistantDialog::refreshUnknownNames()
         rows.push_back({u.name, {}, false, core::Sex::Unknown});
         counts.push_back(u.rows);
     }
+    // A name already chosen for is no longer unknown: its rows are counted in the sheet itself.
+    std::vector<size_t> nameColumns;
+    for (size_t c = 0; c < translation_.header.size(); ++c)
+        if (translation_.header[c] == translation_.firstHeader || translation_.header[c] == translation_.secondHeader)
+            nameColumns.push_back(c);
     for (size_t i = 0; i < names_.size(); ++i)
-        for (const core::UnknownName& u : translation_.unknownNames)
-            if (core::sameSheetText(names_[i].sheetName, u.name)) counts[i] = u.rows;
+        for (const core::SheetRow& row : translation_.rows)
+            if (std::any_of(nameColumns.begin(), nameColumns.end(), [&](size_t c) {
+                    return c < row.cells.size() && core::sameSheetText(row.cells[c], names_[i].sheetName);
+                }))
+                ++counts[i];
     unknown_->setRowCount(static_cast<int>(rows.size()));
     for (int r = 0; r < static_cast<int>(rows.size()); ++r) {
         const core::NameChoice& c = rows[static_cast<size_t>(r)];

@@ -51,6 +51,7 @@ public:
     QPlainTextEdit* problemText() const { return problems_; }
     QPushButton* importButton() const { return import_; }
     QPushButton* saveButton() const { return save_; }
+    QPushButton* checkButton() const { return check_; }
 
     /// Reads the sheet again and refreshes the preview (also run on every change of a field).
     void refresh();
