@@ -53,15 +53,16 @@ void addImportCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
     cmd->add_option("--residences", o->paths.residences,
                     "residences.csv (animal, group, from, to); without it new animals live in group 'main'");
     cmd->add_option("--encounters", o->paths.encounters,
-                    "encounters.csv (date, time, winner, loser, ...); with --mapping, the team's own sheet (CSV or TSV)");
+                    "encounters.csv (date, time, winner, loser, ...); with --mapping, the team's own sheet (CSV or TSV), "
+                    "whose names may be animals of --animals");
     cmd->add_option("--mapping", o->mapping,
                     "an import mapping file (docs/file-formats.md) saying what the --encounters sheet's columns mean "
                     "(default: none, the plain columns)");
     cmd->add_option("--saved-mapping", o->savedMapping,
                     "use the import mapping saved in the colony file under this name (default: none)");
     cmd->add_option("--save-mapping", o->saveAs,
-                    "after a successful import, save the --mapping file in the colony file under this name "
-                    "(default: not saved)");
+                    "save the --mapping file in the colony file under this name, in the import's own transaction "
+                    "(saved only when the import succeeds; default: not saved)");
     cmd->add_option("--dates", o->dates, "the sheet's date order, overriding the mapping's: iso, day-month-year or "
                                          "month-day-year (default: the mapping's)")
         ->check(CLI::IsMember({"iso", "day-month-year", "month-day-year"}));
@@ -72,9 +73,8 @@ void addImportCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
                 throw BadInputError("import: name at least one of --animals, --residences, --encounters");
             if (!o->mapping.empty() && !o->savedMapping.empty())
                 throw BadInputError("import: give --mapping or --saved-mapping, not both");
-            if (mapped && (o->paths.encounters.empty() || !o->paths.animals.empty() || !o->paths.residences.empty()))
-                throw BadInputError("import: a mapping reads one sheet, given as --encounters; import animals and "
-                                    "residences files in a separate import");
+            if (mapped && o->paths.encounters.empty())
+                throw BadInputError("import: a mapping reads one sheet, given as --encounters");
             if (!mapped && (!o->dates.empty() || !o->saveAs.empty()))
                 throw BadInputError("import: --dates and --save-mapping need --mapping");
             if (!o->saveAs.empty() && o->mapping.empty())
@@ -112,16 +112,31 @@ void addImportCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
             // The scheduled backup (backup_interval_hours) is taken before the file changes.
             if (backupIfDue(store, std::chrono::system_clock::now()))
                 ctx.err << "backed up " << o->colony << " into " << backupFolder(o->colony) << "\n";
-            const ImportResult result =
-                mapped ? importSheet(store, mapping, o->paths.encounters, today()) : importFiles(store, o->paths, today());
+            ImportResult result;
+            if (mapped) {
+                SheetImportRequest request;
+                request.mapping = mapping;
+                auto read = [&](const std::string& path, auto& slot) {
+                    if (path.empty()) return;
+                    try {
+                        slot = {path, readWholeFile(path)};
+                    } catch (const std::exception&) {
+                        result.problems.add(path, 0, "", "cannot be read (no such file, or no permission to read it)");
+                    }
+                };
+                read(o->paths.animals, request.files.animals);
+                read(o->paths.residences, request.files.residences);
+                read(o->paths.encounters, request.sheet);
+                if (!o->saveAs.empty()) request.save = MappingToSave{o->saveAs, mappingText};
+                if (result.ok()) result = importSheet(store, request, today());
+            } else {
+                result = importFiles(store, o->paths, today());
+            }
             if (!result.ok()) {
                 ctx.err << result.problems.text();
                 throw BadInputError("nothing was imported; " + o->colony + " is unchanged");
             }
-            if (!o->saveAs.empty()) {
-                store.setSetting(kMappingKeyPrefix + o->saveAs, mappingText);
-                ctx.err << "saved the mapping as '" << o->saveAs << "' in " << o->colony << "\n";
-            }
+            if (!o->saveAs.empty()) ctx.err << "saved the mapping as '" << o->saveAs << "' in " << o->colony << "\n";
             ctx.err << "imported " << result.animals << " animals, " << result.residences
                     << " residences, " << result.encounters << " encounters into " << o->colony << "\n";
         };

@@ -33,6 +33,20 @@ struct HealthCommandOptions {
 
 std::string yesNo(bool b) { return b ? "yes" : "no"; }
 
+/// What the day "not seen" is counted to is (docs/methods.md, "Data health").
+std::string referenceNote(const DataHealth& health, Day today)
+{
+    switch (health.referenceKind) {
+    case ReferenceDay::WindowEnd: return " (the window's last day)";
+    case ReferenceDay::Today: return " (today)";
+    case ReferenceDay::LastRecord: break;
+    }
+    const int behind = today - health.reference;
+    if (behind <= 0) return " (the file's last day of records, today)";
+    return " (the file's last day of records, " + std::to_string(behind) + (behind == 1 ? " day" : " days") +
+           " before today)";
+}
+
 void runHealth(CommandContext& ctx, const HealthCommandOptions& o)
 {
     const LoadedColony loaded = loadColony(o.colony);
@@ -76,8 +90,8 @@ void runHealth(CommandContext& ctx, const HealthCommandOptions& o)
             w.writeRow({u.animal, date(u.lastSeen), formatDate(u.since), std::to_string(u.days)});
         if (!health.unseen.empty())
             ctx.err << "health: " << health.unseen.size() << " resident animals not seen for more than "
-                    << health.unseenDays << " days on " << formatDate(health.reference) << ". " << kUnseenCaution
-                    << "\n";
+                    << health.unseenDays << " days on " << formatDate(health.reference) << referenceNote(health, h.today)
+                    << ". " << kUnseenCaution << "\n";
     } else {
         w.writeRow({"first_observer", "second_observer", "shared_days", "matched", "only_first", "only_second",
                     "agreeing", "agreement_share", "kappa"});

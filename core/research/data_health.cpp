@@ -67,6 +67,19 @@ void matchDay(const std::vector<const Encounter*>& a, const std::vector<const En
     out.onlySecond += static_cast<int>(b.size()) - matched;
 }
 
+/// The window's last day, else the file's last encounter day up to today
+/// (in any group: a group nobody recorded lately is unseen), else today.
+Day referenceDay(const Colony& colony, const HealthOptions& o, ReferenceDay& kind)
+{
+    kind = ReferenceDay::WindowEnd;
+    if (o.to) return *o.to;
+    std::optional<Day> last;
+    for (const Encounter& e : colony.encounters)
+        if (e.date <= o.today && (!last || e.date > *last)) last = e.date;
+    kind = last ? ReferenceDay::LastRecord : ReferenceDay::Today;
+    return last.value_or(o.today);
+}
+
 } // namespace
 
 std::vector<std::pair<std::string, int>> encounterCounts(const Colony& colony, std::optional<Day> from,
@@ -84,7 +97,7 @@ std::vector<std::pair<std::string, int>> encounterCounts(const Colony& colony, s
 DataHealth dataHealth(const Colony& colony, const ResidenceIndex& where, const HealthOptions& o)
 {
     DataHealth h;
-    h.reference = o.to.value_or(o.today);
+    h.reference = referenceDay(colony, o, h.referenceKind);
     h.minEncounters = o.minEncounters;
     h.unseenDays = o.unseenDays;
     const Day to = h.reference;

@@ -28,9 +28,9 @@ inline constexpr const char* kUnseenCaution =
 /// What data health looks at (docs/methods.md, "Data health").
 struct HealthOptions {
     std::optional<Day> from; ///< inclusive; default: all data
-    std::optional<Day> to;   ///< inclusive; default: all data up to `today`
+    std::optional<Day> to;   ///< inclusive; default: all data (see DataHealth::reference)
     std::string group;       ///< empty: every group
-    Day today = 0;           ///< the reference day when `to` is not given
+    Day today = 0;           ///< bounds the reference day of an open window
     int unseenDays = kDefaultUnseenDays;
     int minEncounters = kDefaultMinEncounters;
     int matchMinutes = kDefaultMatchMinutes;
@@ -84,8 +84,16 @@ struct ObserverAgreement {
     std::optional<double> kappa;  ///< Cohen's kappa over the direction categories
 };
 
+/// Which day "not seen" is counted to (docs/methods.md, "Data health").
+enum class ReferenceDay {
+    WindowEnd,  ///< the window's given last day
+    LastRecord, ///< open window: the file's last encounter day (any group, not after today)
+    Today,      ///< open window, and the file has no encounter up to today
+};
+
 struct DataHealth {
-    Day reference = 0; ///< the day "not seen" is counted to
+    Day reference = 0; ///< the day "not seen" is counted to, and the window's last day
+    ReferenceDay referenceKind = ReferenceDay::WindowEnd;
     int minEncounters = 0;
     int unseenDays = 0;
     std::vector<AnimalEffort> animals;       ///< id order

@@ -5,6 +5,9 @@
 #include "core/base/csv_reader.h"
 #include "core/base/csv_writer.h"
 #include "core/store/colony_store.h"
+#include "core/store/record_appender.h"
+#include "core/store/saved_mappings.h"
+#include "core/store/write_transaction.h"
 
 #include <algorithm>
 #include <map>
@@ -127,6 +130,12 @@ private:
     std::unordered_map<std::string, std::string> ids_;
     std::unordered_map<std::string, std::vector<std::string>> byName_;
 };
+
+/// True when the text has more than `n` lines (then its import is a bulk load).
+bool moreLinesThan(const std::string& text, std::size_t n)
+{
+    return static_cast<std::size_t>(std::count(text.begin(), text.end(), '\n')) + 1 > n;
+}
 
 std::string withoutSuffix(const std::string& generated, const char* suffix)
 {
@@ -439,25 +448,76 @@ ImportPlan planSheetImport(const ImportMapping& mapping, const SheetSource& shee
 
 ImportResult importSheet(ColonyStore& store, const ImportMapping& mapping, const std::string& sheetPath, Day today)
 {
-    ImportResult result;
-    SheetSource sheet{sheetPath, {}};
+    SheetImportRequest request;
+    request.mapping = mapping;
+    request.sheet.name = sheetPath;
     try {
-        sheet.text = readWholeFile(sheetPath);
+        request.sheet.text = readWholeFile(sheetPath);
     } catch (const std::exception&) {
+        ImportResult result;
         result.problems.add(sheetPath, 0, "", "cannot be read (no such file, or no permission to read it)");
         return result;
     }
-    const std::vector<Animal> animals = store.loadAnimals();
-    const SheetTranslation t = translateSheet(mapping, sheet, animals);
-    if (!t.problems.empty() || !t.input.encounters) {
-        // Only to report every problem in one pass; nothing is written.
-        ImportPlan plan;
-        if (t.input.encounters) plan = planImport(animals, store.loadResidences(), t.input, today);
-        result.problems = problemsInSheetTerms(t, plan.problems);
+    return importSheet(store, request, today);
+}
+
+ImportResult importSheet(ColonyStore& store, const SheetImportRequest& request, Day today)
+{
+    ImportResult result;
+    ImportInput files = request.files;
+    files.encounters.reset();
+
+    // Every check runs on the colony as read inside the write transaction.
+    const bool bulk = moreLinesThan(request.sheet.text, ColonyStore::kBulkEncounters);
+    WriteTransaction tx(store, bulk ? WriteTransaction::Size::CheckedBulk : WriteTransaction::Size::Small);
+    std::vector<Animal> animals = store.loadAnimals();
+    std::vector<Residence> residences = store.loadResidences();
+    const std::int64_t epoch = importEpoch(store);
+
+    // First the plain files; the sheet is read only when they pass (its names may be their animals).
+    ImportPlan first;
+    if (files.animals || files.residences) {
+        first = planImport(animals, residences, files, today);
+        if (!first.ok()) {
+            result.problems = std::move(first.problems);
+            return result;
+        }
+        animals.insert(animals.end(), first.animals.begin(), first.animals.end());
+        residences.insert(residences.end(), first.residences.begin(), first.residences.end());
+    }
+
+    // Then the sheet, against the colony and the files' records.
+    const SheetTranslation t = translateSheet(request.mapping, request.sheet, animals);
+    ImportPlan second;
+    if (t.input.encounters) second = planImport(animals, residences, t.input, today);
+    if (!t.problems.empty() || !t.input.encounters || !second.ok()) {
+        result.problems = problemsInSheetTerms(t, second.problems);
         return result;
     }
-    result = importInput(store, t.input, today);
-    if (!result.ok()) result.problems = problemsInSheetTerms(t, result.problems);
+
+    deriveUids(first, epoch);
+    deriveUids(second, epoch);
+    insertAnimals(store, first.animals);
+    insertAnimals(store, second.animals);
+    insertResidences(store, first.residences);
+    insertResidences(store, second.residences);
+    EncounterAppender out(store, tx);
+    for (Encounter& e : second.encounters) out.add(e);
+    out.finish("import of " + request.sheet.name);
+    if (request.save) {
+        try {
+            store.setSetting(kMappingKeyPrefix + request.save->name, request.save->text);
+        } catch (const std::exception& error) {
+            result.problems.add(store.path(), 0, "",
+                                "the mapping " + quotedValue(request.save->name) + " could not be saved (" +
+                                    error.what() + ")");
+            return result; // the transaction rolls back: nothing is imported either
+        }
+    }
+    tx.commit();
+    result.animals = first.animals.size() + second.animals.size();
+    result.residences = first.residences.size() + second.residences.size();
+    result.encounters = static_cast<std::size_t>(out.count());
     return result;
 }
 

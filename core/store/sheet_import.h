@@ -81,4 +81,28 @@ ImportPlan planSheetImport(const ImportMapping& mapping, const SheetSource& shee
 /// the plain import (all or nothing, one transaction).
 ImportResult importSheet(ColonyStore& store, const ImportMapping& mapping, const std::string& sheetPath, Day today);
 
+/// A named mapping to save in the colony file with an import (saved_mappings.h).
+struct MappingToSave {
+    std::string name;
+    std::string text; ///< the mapping file's text
+};
+
+/// Everything one import through a mapping reads and writes.
+struct SheetImportRequest {
+    ImportMapping mapping;
+    SheetSource sheet;
+    /// Plain animals and residences files imported first, in the same
+    /// transaction: the sheet may name their animals. Their encounters slot is unused.
+    ImportInput files;
+    /// Saved in the same transaction: a failed import saves nothing, a failed save imports nothing.
+    std::optional<MappingToSave> save;
+};
+
+/// One transaction, all or nothing: the animals and residences files, then
+/// the sheet's new animals and encounters (checked against the colony and the
+/// files' records as read inside the transaction), then the mapping to save.
+/// Problems of the files stop before the sheet is read; a failure to save the
+/// mapping is a problem naming the colony file. On any problem nothing is written.
+ImportResult importSheet(ColonyStore& store, const SheetImportRequest& request, Day today);
+
 } // namespace hierloom::core

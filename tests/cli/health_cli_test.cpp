@@ -58,6 +58,16 @@ TEST(CliHealth, TablesCountedByHand)
                                                       "Q,2024-03-02,2024-03-02,29"}));
     EXPECT_NE(r.err.find("may be ill, injured or missing: check on it"), std::string::npos) << r.err;
     EXPECT_NE(r.err.find("animal-care staff"), std::string::npos);
+    EXPECT_NE(r.err.find("on 2024-03-31 (the window's last day)"), std::string::npos) << r.err;
+
+    // Without --to the file's last record, 2024-03-10, is the reference day, not today:
+    // S since 2024-03-01 is 9 days unseen, Q since 2024-03-02 8; P and R were seen that day.
+    r = runCli({"health", colony, "--group", "g", "--table", "unseen", "--unseen-days", "7"});
+    EXPECT_EQ(lines(r.out), (std::vector<std::string>{"animal,last_seen,since,days_unseen", "S,,2024-03-01,9",
+                                                      "Q,2024-03-02,2024-03-02,8"}));
+    EXPECT_NE(r.err.find("on 2024-03-10 (the file's last day of records, "), std::string::npos) << r.err;
+    r = runCli({"health", colony, "--group", "g", "--table", "unseen"});
+    EXPECT_EQ(lines(r.out), (std::vector<std::string>{"animal,last_seen,since,days_unseen"}));
     // ann and bob on 2024-03-02: P>Q both (agree), Q>R against R>Q (disagree):
     // share 1/2; categories (0,0) and (0,1): p_o = 1/2, p_e = 1 * 1/2, kappa 0.
     r = run({"--table", "agreement"});

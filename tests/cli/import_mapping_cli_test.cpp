@@ -3,6 +3,7 @@
 // messages in the sheet's terms; the mapping saved in the colony and reused.
 #include "cli_test_support.h"
 #include "core/store/colony_store.h"
+#include "core/store/saved_mappings.h"
 
 #include <gtest/gtest.h>
 
@@ -94,14 +95,121 @@ TEST(CliImportMapping, UsageAndMappingFileProblems)
     EXPECT_NE(r.err.find(broken + ":2: value: 'upside-down' must be winner-loser or actor-recipient"),
               std::string::npos)
         << r.err;
-    r = runCli({"import", colony, "--mapping", dir.write("m.csv", kMapping), "--animals", dir.file("a.csv"),
-                "--encounters", sheet});
+    r = runCli({"import", colony, "--mapping", dir.write("m.csv", kMapping), "--animals", dir.file("a.csv")});
     EXPECT_EQ(r.status, 2);
-    EXPECT_NE(r.err.find("a mapping reads one sheet"), std::string::npos);
+    EXPECT_NE(r.err.find("a mapping reads one sheet, given as --encounters"), std::string::npos) << r.err;
     r = runCli({"import", colony, "--mapping", dir.file("m.csv"), "--encounters", sheet});
     EXPECT_EQ(r.status, 2);
     EXPECT_NE(r.err.find(sheet + ":2: An: 'Nobody' is not the name of an animal of the colony"), std::string::npos)
         << r.err;
     r = runCli({"import", colony, "--encounters", sheet, "--dates", "iso"});
     EXPECT_EQ(r.status, 2);
+}
+
+namespace {
+
+/// Animals, their groups and a sheet naming them, for one combined import into an empty colony.
+struct Combined {
+    CliTempDir dir;
+    std::string colony = dir.file("new.hierloom");
+    std::string animals = dir.write("animals.csv", kAnimals);
+    std::string residences = dir.write("residences.csv", kResidences);
+    std::string mapping = dir.write("north.csv", kMapping);
+    std::string sheet = dir.write("sheet.csv", "Datum,Von,An,Res\n"
+                                               "25/05/2023,Amber,Basil,+\n"
+                                               "26/05/2023,Clove,Amber,-\n");
+    Combined() { EXPECT_EQ(runCli({"init", colony}).status, 0); }
+    CliResult run(std::vector<std::string> extra = {}) const
+    {
+        std::vector<std::string> words{"import", colony, "--animals", animals, "--residences", residences,
+                                       "--mapping", mapping, "--encounters", sheet};
+        words.insert(words.end(), extra.begin(), extra.end());
+        return runCli(words);
+    }
+    std::vector<std::string> savedNames() const
+    {
+        const hierloom::core::ColonyStore store =
+            hierloom::core::ColonyStore::open(colony, hierloom::core::ColonyStore::Mode::ReadOnly);
+        return hierloom::core::savedMappingNames(store);
+    }
+};
+
+} // namespace
+
+// Animals, residences and a sheet naming the new animals, in one command and one transaction.
+TEST(CliImportMapping, AnimalsResidencesAndSheetInOneImport)
+{
+    Combined c;
+    const CliResult r = c.run({"--save-mapping", "north"});
+    ASSERT_EQ(r.status, 0) << r.err;
+    EXPECT_NE(r.err.find("imported 3 animals, 3 residences, 2 encounters"), std::string::npos) << r.err;
+    const hierloom::core::ColonyStore store =
+        hierloom::core::ColonyStore::open(c.colony, hierloom::core::ColonyStore::Mode::ReadOnly);
+    EXPECT_EQ(store.loadAnimals().size(), 3u);
+    const auto encounters = store.loadEncounters();
+    ASSERT_EQ(encounters.size(), 2u);
+    EXPECT_EQ(encounters[0].winner, "AA"); // Amber '+' Basil: the actor won
+    EXPECT_EQ(encounters[0].loser, "BB");
+    EXPECT_EQ(encounters[1].winner, "AA"); // Clove '-' Amber: the recipient won
+    EXPECT_EQ(encounters[1].loser, "CC");
+    EXPECT_EQ(encounters[1].group, "north");
+    EXPECT_EQ(hierloom::core::savedMappingNames(store), std::vector<std::string>{"north"});
+}
+
+// A problem in any of the three files: nothing written, the mapping not saved,
+// the problem named FILE:LINE: column.
+TEST(CliImportMapping, AProblemInAnyFileOfACombinedImportChangesNothing)
+{
+    struct Case {
+        const char* file;
+        std::string text;
+        std::string expected; // after the file's path
+    };
+    const std::vector<Case> cases{
+        {"animals.csv",
+         "id,name,sex,birth_date,entry_date,entry_type\nAA,Amber,F,2012-01-01,2012-01-01,founder\n"
+         "BB,Basil,X,2012-01-01,2012-01-01,founder\nCC,Clove,F,2014-01-01,2014-01-01,founder\n",
+         ":3: sex: 'X' must be F, M or U"},
+        {"residences.csv", "animal,group,from\nAA,north,2012-01-01\nBB,north,2012-01-01\nCC,north,2014-13-01\n",
+         ":4: from: '2014-13-01' is not a real date in the form YYYY-MM-DD"},
+        {"sheet.csv", "Datum,Von,An,Res\n25/05/2023,Amber,Basil,+\n26/05/2023,Clove,Nobody,-\n",
+         ":3: An: 'Nobody' is not the name of an animal of the colony"},
+        // Clove is in the animals file but joined in 2014: an encounter of 2013 breaks the encounter rules.
+        {"sheet.csv", "Datum,Von,An,Res\n25/05/2023,Amber,Basil,+\n26/05/2013,Clove,Amber,-\n", ":3: Von: "},
+    };
+    for (const Case& k : cases) {
+        Combined c;
+        c.dir.write(k.file, k.text);
+        const std::string before = CliTempDir::read(c.colony);
+        const CliResult r = c.run({"--save-mapping", "north"});
+        EXPECT_EQ(r.status, 2) << k.file;
+        EXPECT_NE(r.err.find(c.dir.file(k.file) + k.expected), std::string::npos) << k.file << "\n" << r.err;
+        EXPECT_NE(r.err.find("nothing was imported"), std::string::npos) << r.err;
+        EXPECT_EQ(CliTempDir::read(c.colony), before) << k.file;
+        EXPECT_TRUE(c.savedNames().empty()) << k.file;
+    }
+}
+
+// The mapping is saved in the import's own transaction: when saving it fails
+// (here a trigger of the file refuses it), the records are not written either.
+TEST(CliImportMapping, AFailedSaveOfTheMappingImportsNothing)
+{
+    Combined c;
+    {
+        const hierloom::core::ColonyStore store = hierloom::core::ColonyStore::open(c.colony);
+        store.exec("CREATE TRIGGER refuse_mappings BEFORE INSERT ON setting "
+                   "WHEN substr(NEW.key, 1, 15) = 'import_mapping:' BEGIN SELECT RAISE(ABORT, 'refused'); END");
+    }
+    const std::string before = CliTempDir::read(c.colony);
+    CliResult r = c.run({"--save-mapping", "north"});
+    EXPECT_EQ(r.status, 2);
+    EXPECT_NE(r.err.find(c.colony + ": the mapping 'north' could not be saved"), std::string::npos) << r.err;
+    EXPECT_EQ(CliTempDir::read(c.colony), before);
+    const hierloom::core::ColonyStore store =
+        hierloom::core::ColonyStore::open(c.colony, hierloom::core::ColonyStore::Mode::ReadOnly);
+    EXPECT_TRUE(store.loadAnimals().empty());
+    EXPECT_TRUE(store.loadEncounters().empty());
+    // Without --save-mapping the same files import.
+    r = c.run();
+    EXPECT_EQ(r.status, 0) << r.err;
 }

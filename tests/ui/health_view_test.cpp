@@ -47,6 +47,36 @@ QString cell(QTreeWidget* list, int row, int column) { return list->topLevelItem
 
 } // namespace
 
+// Without a last day the window ends on the file's last record (2021-05-20), not today:
+// by hand, F2 last seen 2021-05-02 is 18 days unseen, D2 never (since 2017-06-04);
+// F1 and D1 were seen that day.
+TEST(HealthView, OpenWindowCountsToTheFilesLastRecord)
+{
+    Watched w;
+    ui::HealthView view(&w.document);
+    view.show();
+    QApplication::setActiveWindow(&view);
+    view.setGroup(QStringLiteral("A"));
+    auto* to = view.findChild<QLineEdit*>(QStringLiteral("healthTo"));
+    ASSERT_NE(to, nullptr);
+    to->setFocus();
+    QApplication::processEvents();
+    QTest::keyClicks(focusIn(&view), QStringLiteral("2021-05-31"));
+    QTest::keyClick(focusIn(&view), Qt::Key_Return);
+    QTest::keyClick(focusIn(&view), Qt::Key_A, Qt::ControlModifier);
+    QTest::keyClick(focusIn(&view), Qt::Key_Backspace); // the window's end emptied again
+    QTest::keyClick(focusIn(&view), Qt::Key_Return);
+    EXPECT_EQ(view.health().reference, *core::parseDate("2021-05-20"));
+    EXPECT_EQ(view.health().referenceKind, core::ReferenceDay::LastRecord);
+    QTreeWidget* unseen = view.unseenList();
+    ASSERT_EQ(unseen->topLevelItemCount(), 2);
+    EXPECT_EQ(cell(unseen, 1, 0), QStringLiteral("F2"));
+    EXPECT_EQ(cell(unseen, 1, 3), QStringLiteral("18"));
+    EXPECT_TRUE(view.unseenBanner()->text().contains(QStringLiteral("on 2021-05-20 (the file's last day of records, ")))
+        << view.unseenBanner()->text().toStdString();
+    EXPECT_TRUE(view.unseenBanner()->text().contains(QStringLiteral(" before today)")));
+}
+
 TEST(HealthView, EffortUnseenFlagsAndAgreementForATypedWindow)
 {
     Watched w;
@@ -83,6 +113,8 @@ TEST(HealthView, EffortUnseenFlagsAndAgreementForATypedWindow)
     EXPECT_FALSE(view.unseenBanner()->isHidden());
     EXPECT_TRUE(view.unseenBanner()->text().contains(QStringLiteral("may be ill, injured or missing: check on it")));
     EXPECT_TRUE(view.unseenBanner()->text().contains(QStringLiteral("animal-care staff")));
+    EXPECT_TRUE(view.unseenBanner()->text().contains(QStringLiteral("on 2021-05-31 (the window's last day)")))
+        << view.unseenBanner()->text().toStdString();
 
     // Typing a longer threshold into its field leaves only D2.
     auto* days = view.findChild<QSpinBox*>(QStringLiteral("healthUnseenDays"));

@@ -8,10 +8,13 @@
 #include "core/store/saved_mappings.h"
 #include "ui/records/import_assistant_dialog.h"
 
+#include <QCheckBox>
 #include <QLabel>
 #include <QPlainTextEdit>
 #include <QPushButton>
 #include <QTableWidget>
+
+#include <map>
 
 using namespace hierloom;
 using namespace hierloom::test;
@@ -139,6 +142,7 @@ TEST(ImportAssistant, TypedMappingPreviewDateQuestionNewAnimalImportAndReuse)
     EXPECT_EQ(chosen.names[0].animalId, "N9");
     EXPECT_TRUE(chosen.names[0].addNew);
     EXPECT_EQ(chosen.names[0].sex, core::Sex::Female);
+    EXPECT_EQ(cell(dialog.unknownTable(), 0, 1), QStringLiteral("1")); // still counted once chosen for
     EXPECT_TRUE(dialog.importButton()->isEnabled()) << dialog.problemText()->toPlainText().toStdString();
 
     // Saved by name in the colony file, then imported, all through the facade.
@@ -180,11 +184,138 @@ TEST(ImportAssistant, RefusedImportWritesNothing)
     // The headers are spelled like the meanings, so they are offered at once.
     EXPECT_EQ(dialog.mapping().column(core::ColumnMeaning::Winner), "winner");
     EXPECT_TRUE(dialog.dateNote()->text().contains(QStringLiteral("YYYY-MM-DD")));
-    EXPECT_FALSE(dialog.check());
+    pressOn(dialog, dialog.checkButton(), Qt::Key_Space); // checks without writing
     EXPECT_TRUE(dialog.problemText()->toPlainText().contains(ui::toQString(sheet) + QStringLiteral(":3: ")))
         << dialog.problemText()->toPlainText().toStdString();
     pressOn(dialog, dialog.importButton(), Qt::Key_Space);
     EXPECT_NE(dialog.result(), QDialog::Accepted);
     EXPECT_TRUE(dialog.problemText()->toPlainText().startsWith(QStringLiteral("Nothing was imported")));
     EXPECT_EQ(fileBytes(o.path), before);
+}
+
+namespace {
+
+/// The mapping of a plain winner,loser sheet with ISO dates, named `name`.
+void fillPlainMapping(QDialog& dialog, ui::ImportAssistantDialog& d, const std::string& sheet, const QString& name)
+{
+    typeInto(dialog, d.pathField(), ui::toQString(sheet));
+    QTest::keyClick(focusIn(&dialog), Qt::Key_Return);
+    typeInto(dialog, d.nameField(), name);
+}
+
+std::vector<std::string> savedNames(const std::string& path)
+{
+    return core::savedMappingNames(core::ColonyStore::open(path, core::ColonyStore::Mode::ReadOnly));
+}
+
+} // namespace
+
+// "Save the mapping with the import": saved in the import's transaction, so a
+// refused import saves nothing and a refused save imports nothing.
+TEST(ImportAssistant, MappingIsSavedWithTheImportOrNotAtAll)
+{
+    Open o;
+    const std::string bad = o.dir.write("bad.csv", "date,winner,loser,group\n2021-05-04,F1,F2,A\n2021-05-05,F1,M1,A\n");
+    const std::string good = o.dir.write("good.csv", "date,winner,loser,group\n2021-05-04,F1,F2,A\n");
+    {
+        ui::ImportAssistantDialog dialog(&o.facade);
+        present(dialog);
+        EXPECT_FALSE(dialog.saveWithImportField()->isEnabled()); // no name yet
+        fillPlainMapping(dialog, dialog, bad, QStringLiteral("plain"));
+        EXPECT_TRUE(dialog.saveWithImportField()->isEnabled());
+        EXPECT_TRUE(dialog.saveWithImportField()->isChecked());
+        pressOn(dialog, dialog.importButton(), Qt::Key_Space);
+        EXPECT_NE(dialog.result(), QDialog::Accepted);
+        EXPECT_TRUE(dialog.problemText()->toPlainText().startsWith(
+            QStringLiteral("Nothing was imported and the mapping was not saved")))
+            << dialog.problemText()->toPlainText().toStdString();
+        EXPECT_TRUE(savedNames(o.path).empty());
+        EXPECT_TRUE(inFile(o.path).empty());
+    }
+    // A trigger of the file refuses saved mappings: the good sheet is not imported either.
+    core::ColonyStore::open(o.path).exec(
+        "CREATE TRIGGER refuse_mappings BEFORE INSERT ON setting WHEN substr(NEW.key, 1, 15) = 'import_mapping:' "
+        "BEGIN SELECT RAISE(ABORT, 'refused'); END");
+    {
+        ui::ImportAssistantDialog dialog(&o.facade);
+        present(dialog);
+        fillPlainMapping(dialog, dialog, good, QStringLiteral("plain"));
+        pressOn(dialog, dialog.importButton(), Qt::Key_Space);
+        EXPECT_NE(dialog.result(), QDialog::Accepted);
+        EXPECT_TRUE(dialog.problemText()->toPlainText().contains(QStringLiteral("the mapping 'plain' could not be saved")))
+            << dialog.problemText()->toPlainText().toStdString();
+        EXPECT_TRUE(inFile(o.path).empty());
+        // Unticked (Space on the focused box), the same sheet imports and nothing is saved.
+        pressOn(dialog, dialog.saveWithImportField(), Qt::Key_Space);
+        EXPECT_FALSE(dialog.saveWithImportField()->isChecked());
+        pressOn(dialog, dialog.importButton(), Qt::Key_Space);
+        EXPECT_EQ(dialog.result(), QDialog::Accepted) << dialog.problemText()->toPlainText().toStdString();
+        EXPECT_EQ(inFile(o.path).size(), 1u);
+        EXPECT_TRUE(savedNames(o.path).empty());
+    }
+    core::ColonyStore::open(o.path).exec("DROP TRIGGER refuse_mappings");
+    {
+        ui::ImportAssistantDialog dialog(&o.facade);
+        present(dialog);
+        fillPlainMapping(dialog, dialog, good, QStringLiteral("plain"));
+        pressOn(dialog, dialog.importButton(), Qt::Key_Space);
+        EXPECT_EQ(dialog.result(), QDialog::Accepted) << dialog.problemText()->toPlainText().toStdString();
+        EXPECT_EQ(inFile(o.path).size(), 2u);
+        EXPECT_EQ(savedNames(o.path), std::vector<std::string>{"plain"});
+        // The dialog stays open with the outcome; a second press cannot import the sheet twice.
+        EXPECT_TRUE(dialog.isVisible());
+        EXPECT_TRUE(dialog.problemText()->toPlainText().contains(QStringLiteral("Saved the mapping as \"plain\"")))
+            << dialog.problemText()->toPlainText().toStdString();
+        EXPECT_FALSE(dialog.importButton()->isEnabled());
+    }
+}
+
+// Tab walks the form in reading order (the column boxes before the tables and
+// buttons; the read-only preview is one stop), and every Alt letter is used once.
+TEST(ImportAssistant, TabOrderFollowsTheFormAndAltLettersAreUnique)
+{
+    Open o;
+    ui::ImportAssistantDialog dialog(&o.facade);
+    present(dialog);
+    dialog.pathField()->setFocus();
+    QApplication::processEvents();
+    auto tab = [&] {
+        QTest::keyClick(focusIn(&dialog), Qt::Key_Tab);
+        return QApplication::focusWidget();
+    };
+    // Browse, saved mapping, name (the save box is off without a name), layout,
+    // naming, date order, separator, group, win and draw codes (loss codes are
+    // off in a winner-loser sheet): 10 stops, then the date column.
+    QWidget* w = nullptr;
+    for (int i = 0; i < 10; ++i) {
+        w = tab();
+        for (QWidget* later : std::initializer_list<QWidget*>{dialog.previewTable(), dialog.unknownTable(),
+                                                              dialog.problemText(), dialog.importButton()})
+            EXPECT_NE(w, later) << "stop " << i;
+    }
+    EXPECT_NE(qobject_cast<QLineEdit*>(w), nullptr); // the draw codes
+    w = tab();
+    EXPECT_EQ(w, dialog.columnField(core::ColumnMeaning::Date)) << (w ? w->objectName().toStdString() : "");
+    for (int i = 0; i < 8; ++i) w = tab(); // time, winner, loser, outcome, ... note (actor and recipient are off)
+    EXPECT_EQ(w, dialog.columnField(core::ColumnMeaning::Note)) << (w ? w->objectName().toStdString() : "");
+    EXPECT_EQ(tab(), dialog.previewTable());
+    EXPECT_EQ(tab(), dialog.unknownTable());
+
+    // Alt+U: the outcome column, as its label says.
+    QTest::keyClick(focusIn(&dialog), Qt::Key_U, Qt::AltModifier);
+    EXPECT_EQ(QApplication::focusWidget(), dialog.columnField(core::ColumnMeaning::Outcome));
+
+    std::map<QChar, QString> letters;
+    auto note = [&](const QString& text) {
+        const int at = text.indexOf(QLatin1Char('&'));
+        if (at < 0 || at + 1 >= text.size()) return;
+        const QChar c = text.at(at + 1).toLower();
+        EXPECT_TRUE(letters.emplace(c, text).second)
+            << "Alt+" << QString(c).toStdString() << ": " << text.toStdString() << " and "
+            << letters[c].toStdString();
+    };
+    for (QLabel* l : dialog.findChildren<QLabel*>())
+        if (l->buddy()) note(l->text());
+    for (QAbstractButton* b : dialog.findChildren<QAbstractButton*>()) note(b->text());
+    EXPECT_GE(letters.size(), 20u);
 }

@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "ui/document/colony_edit_facade.h"
 
+#include "core/base/csv_reader.h"
 #include "core/store/saved_mappings.h"
 #include "core/store/sheet_import.h"
 
@@ -270,15 +271,31 @@ core::ImportResult ColonyEditFacade::importFiles(const core::ImportPaths& paths,
 }
 
 core::ImportResult ColonyEditFacade::importSheet(const core::ImportMapping& mapping, const QString& sheetPath,
-                                                 QString* readBackError)
+                                                 QString* readBackError, bool saveMapping)
 {
     core::ImportResult result;
     if (auto p = writable(); !p.empty()) {
         result.problems.add("", 0, "", p.front().message);
         return result;
     }
-    result = core::importSheet(document_->writableStore(), mapping, toStdString(sheetPath), today());
-    if (!result.ok() || result.animals + result.residences + result.encounters == 0) return result;
+    if (saveMapping && mapping.name.empty()) {
+        result.problems.add("", 0, "", tr("A saved mapping needs a name.").toStdString());
+        return result;
+    }
+    core::SheetImportRequest request;
+    request.mapping = mapping;
+    request.sheet.name = toStdString(sheetPath);
+    try {
+        request.sheet.text = core::readWholeFile(request.sheet.name);
+    } catch (const std::exception&) {
+        result.problems.add(request.sheet.name, 0, "", "cannot be read (no such file, or no permission to read it)");
+        return result;
+    }
+    if (saveMapping) request.save = core::MappingToSave{mapping.name, core::writeMappingFile(mapping)};
+    result = core::importSheet(document_->writableStore(), request, today());
+    if (!result.ok()) return result;
+    // The saved mapping, like the records, is outside the undo history.
+    if (result.animals + result.residences + result.encounters == 0 && !saveMapping) return result;
     document_->clearHistory(tr("an import added records outside the undo history"));
     try {
         document_->reload();

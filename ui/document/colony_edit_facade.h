@@ -90,9 +90,11 @@ public:
     /// in `readBackError`.
     core::ImportResult importFiles(const core::ImportPaths& paths, QString* readBackError = nullptr);
     /// Imports a team's spreadsheet through an import mapping (core/store/sheet_import.h),
-    /// all or nothing, like importFiles.
+    /// all or nothing, like importFiles. With `saveMapping` the mapping is saved
+    /// under its name in the same transaction: a failed import saves nothing,
+    /// a failed save imports nothing.
     core::ImportResult importSheet(const core::ImportMapping& mapping, const QString& sheetPath,
-                                   QString* readBackError = nullptr);
+                                   QString* readBackError = nullptr, bool saveMapping = false);
     /// Saves (or replaces) a named import mapping in the colony file (undoable).
     core::FieldProblems saveMapping(const core::ImportMapping& mapping);
     /// Checks a merge of another colony file without writing (throws when a file cannot be read).

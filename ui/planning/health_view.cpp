@@ -82,7 +82,7 @@ HealthView::HealthView(ColonyDocument* document, QWidget* parent)
     from_->setObjectName(QStringLiteral("healthFrom"));
     to_->setObjectName(QStringLiteral("healthTo"));
     from_->setPlaceholderText(tr("first record"));
-    to_->setPlaceholderText(tr("today"));
+    to_->setPlaceholderText(tr("last record"));
     unseenDays_->setRange(0, 100000);
     unseenDays_->setValue(core::kDefaultUnseenDays);
     unseenDays_->setObjectName(QStringLiteral("healthUnseenDays"));
@@ -209,10 +209,20 @@ void HealthView::recompute()
                                          QString::number(a.onlySecond), QString::number(a.agreeing), number(a.share),
                                          number(a.kappa)});
     if (!health_.unseen.empty()) {
+        QString day = toQString(core::formatDate(health_.reference));
+        const int behind = o.today - health_.reference;
+        switch (health_.referenceKind) {
+        case core::ReferenceDay::WindowEnd: day = tr("%1 (the window's last day)").arg(day); break;
+        case core::ReferenceDay::Today: day = tr("%1 (today)").arg(day); break;
+        case core::ReferenceDay::LastRecord:
+            day = behind > 0 ? tr("%1 (the file's last day of records, %n day(s) before today)", nullptr, behind).arg(day)
+                             : tr("%1 (the file's last day of records, today)").arg(day);
+            break;
+        }
         banner_->setText(tr("%n resident animal(s) not seen for more than %1 days on %2. ", nullptr,
                             static_cast<int>(health_.unseen.size()))
                              .arg(health_.unseenDays)
-                             .arg(toQString(core::formatDate(health_.reference))) +
+                             .arg(day) +
                          QCoreApplication::translate("hierloom::ui::Caution", core::kUnseenCaution));
         banner_->show();
     }

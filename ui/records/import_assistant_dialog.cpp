@@ -7,6 +7,7 @@
 #include "ui/document/colony_edit_facade.h"
 #include "ui/document/qt_convert.h"
 
+#include <QCheckBox>
 #include <QComboBox>
 #include <QFileDialog>
 #include <QFormLayout>
@@ -20,6 +21,8 @@
 #include <QTableWidget>
 #include <QVBoxLayout>
 
+#include <algorithm>
+
 namespace hierloom::ui {
 
 namespace {
@@ -30,16 +33,16 @@ QString meaningTitle(core::ColumnMeaning m)
 {
     switch (m) {
     case core::ColumnMeaning::Date: return ImportAssistantDialog::tr("&Date:");
-    case core::ColumnMeaning::Time: return ImportAssistantDialog::tr("T&ime:");
+    case core::ColumnMeaning::Time: return ImportAssistantDialog::tr("&Time:");
     case core::ColumnMeaning::Winner: return ImportAssistantDialog::tr("&Winner:");
     case core::ColumnMeaning::Loser: return ImportAssistantDialog::tr("&Loser:");
     case core::ColumnMeaning::Actor: return ImportAssistantDialog::tr("&Actor:");
     case core::ColumnMeaning::Recipient: return ImportAssistantDialog::tr("&Recipient:");
-    case core::ColumnMeaning::Outcome: return ImportAssistantDialog::tr("&Outcome:");
+    case core::ColumnMeaning::Outcome: return ImportAssistantDialog::tr("O&utcome:");
     case core::ColumnMeaning::Behaviour: return ImportAssistantDialog::tr("&Behaviour:");
     case core::ColumnMeaning::Group: return ImportAssistantDialog::tr("&Group column:");
-    case core::ColumnMeaning::Observer: return ImportAssistantDialog::tr("O&bserver:");
-    case core::ColumnMeaning::Note: return ImportAssistantDialog::tr("&Note:");
+    case core::ColumnMeaning::Observer: return ImportAssistantDialog::tr("Obs&erver:");
+    case core::ColumnMeaning::Note: return ImportAssistantDialog::tr("Note:");
     }
     return {};
 }
@@ -68,9 +71,10 @@ ImportAssistantDialog::ImportAssistantDialog(ColonyEditFacade* facade, QWidget* 
       facade_(facade),
       document_(facade->document()),
       path_(new QLineEdit(this)),
-      browse_(new QPushButton(tr("Br&owse..."), this)),
+      browse_(new QPushButton(tr("Browse..."), this)),
       saved_(new QComboBox(this)),
       name_(new QLineEdit(this)),
+      saveWith_(new QCheckBox(tr("Save the mapping under this name with the import"), this)),
       layout_(new QComboBox(this)),
       naming_(new QComboBox(this)),
       dates_(new QComboBox(this)),
@@ -83,9 +87,10 @@ ImportAssistantDialog::ImportAssistantDialog(ColonyEditFacade* facade, QWidget* 
       preview_(new QTableWidget(this)),
       unknown_(new QTableWidget(this)),
       problems_(new QPlainTextEdit(this)),
-      check_(new QPushButton(tr("&Check"), this)),
+      check_(new QPushButton(tr("Chec&k"), this)),
       save_(new QPushButton(tr("&Save Mapping"), this)),
-      import_(new QPushButton(tr("&Import"), this))
+      import_(new QPushButton(tr("&Import"), this)),
+      close_(new QPushButton(tr("Close"), this))
 {
     setWindowTitle(tr("Import a Spreadsheet"));
     setObjectName(QStringLiteral("importAssistant"));
@@ -115,17 +120,20 @@ ImportAssistantDialog::ImportAssistantDialog(ColonyEditFacade* facade, QWidget* 
     fileRow->addWidget(path_, 1);
     fileRow->addWidget(browse_);
     auto* top = new QFormLayout;
-    top->addRow(tr("S&heet:"), fileRow);
+    auto* sheetLabel = new QLabel(tr("S&heet:"), this); // a row of two widgets gets no buddy from the form
+    sheetLabel->setBuddy(path_);
+    top->addRow(sheetLabel, fileRow);
     top->addRow(tr("Sa&ved mapping:"), saved_);
     top->addRow(tr("&Mapping name:"), name_);
+    top->addRow(QString(), saveWith_);
 
     auto* how = new QFormLayout;
     how->addRow(tr("La&yout:"), layout_);
     how->addRow(tr("Animals &named by:"), naming_);
     how->addRow(tr("Date &order:"), dates_);
-    how->addRow(tr("Separator:"), delimiter_);
+    how->addRow(tr("Se&parator:"), delimiter_);
     how->addRow(tr("One group for the &file:"), group_);
-    how->addRow(tr("Win codes (actor won):"), winCodes_);
+    how->addRow(tr("Win &codes (actor won):"), winCodes_);
     how->addRow(tr("Loss codes (recipient won):"), lossCodes_);
     how->addRow(tr("Draw codes:"), drawCodes_);
     auto* columnsBox = new QGroupBox(tr("Columns"), this);
@@ -154,6 +162,7 @@ ImportAssistantDialog::ImportAssistantDialog(ColonyEditFacade* facade, QWidget* 
     unknown_->setHorizontalHeaderLabels({tr("Name in the sheet"), tr("Rows"), tr("Animal id"), tr("Add as new animal"),
                                          tr("Sex of a new animal (F, M, U)")});
     unknown_->horizontalHeader()->setStretchLastSection(true);
+    unknown_->horizontalHeader()->setSectionResizeMode(QHeaderView::ResizeToContents);
     unknown_->setEditTriggers(QAbstractItemView::AllEditTriggers);
     unknown_->verticalHeader()->hide();
     problems_->setObjectName(QStringLiteral("importProblems"));
@@ -162,7 +171,7 @@ ImportAssistantDialog::ImportAssistantDialog(ColonyEditFacade* facade, QWidget* 
 
     auto* buttons = new QHBoxLayout;
     buttons->addStretch();
-    auto* cancel = new QPushButton(tr("Close"), this);
+    auto* cancel = close_;
     browse_->setAutoDefault(false); // Enter in the path field reads the sheet, never opens the file chooser
     for (QPushButton* b : {check_, save_, import_, cancel}) {
         b->setAutoDefault(false);
@@ -217,7 +226,25 @@ ImportAssistantDialog::ImportAssistantDialog(ColonyEditFacade* facade, QWidget* 
     connect(check_, &QPushButton::clicked, this, &ImportAssistantDialog::check);
     connect(save_, &QPushButton::clicked, this, &ImportAssistantDialog::saveMapping);
     connect(import_, &QPushButton::clicked, this, &ImportAssistantDialog::runImport);
-    connect(cancel, &QPushButton::clicked, this, &QDialog::reject);
+    connect(cancel, &QPushButton::clicked, this, [this] { done(result()); }); // Accepted once something was imported
+    saveWith_->setObjectName(QStringLiteral("saveWithImport"));
+    saveWith_->setChecked(true);
+    saveWith_->setToolTip(tr("Saved in the same write as the records: a refused import saves nothing."));
+    connect(name_, &QLineEdit::textChanged, this,
+            [this](const QString& text) { saveWith_->setEnabled(!text.trimmed().isEmpty()); });
+    saveWith_->setEnabled(false);
+
+    // Tab follows the form as it reads: the sheet, how it is written, its
+    // columns, then the tables and the buttons (the column boxes are made
+    // last, so creation order would put them after the buttons). The preview
+    // is read-only: Tab leaves it instead of walking its cells.
+    preview_->setTabKeyNavigation(false);
+    std::vector<QWidget*> order{path_, browse_, saved_, name_, saveWith_, layout_, naming_, dates_, delimiter_,
+                                group_, winCodes_, lossCodes_, drawCodes_};
+    order.insert(order.end(), columns_.begin(), columns_.end());
+    for (QWidget* w : std::initializer_list<QWidget*>{preview_, unknown_, problems_, check_, save_, import_, cancel})
+        order.push_back(w);
+    for (size_t i = 1; i < order.size(); ++i) setTabOrder(order[i - 1], order[i]);
     refreshHeaders();
     refresh();
 }
@@ -379,7 +406,12 @@ void ImportAssistantDialog::refresh()
                                    problems.join(QStringLiteral("; "))};
         for (int c = 0; c < cells.size(); ++c) preview_->setItem(r, c, new QTableWidgetItem(cells[c]));
     }
-    problems_->setPlainText(toQString(translation_.problems.text()));
+    problems_->setPlainText(
+        translation_.problems.empty()
+            ? tr("Rows read without a problem: %1. Check tests them against the import's rules without writing; "
+                 "Import writes them.")
+                  .arg(translation_.rows.size())
+            : toQString(translation_.problems.text()));
     import_->setEnabled(translation_.problems.empty() && !document_->isReadOnly());
     refreshUnknownNames();
 }
@@ -396,9 +428,17 @@ void ImportAssistantDialog::refreshUnknownNames()
         rows.push_back({u.name, {}, false, core::Sex::Unknown});
         counts.push_back(u.rows);
     }
+    // A name already chosen for is no longer unknown: its rows are counted in the sheet itself.
+    std::vector<size_t> nameColumns;
+    for (size_t c = 0; c < translation_.header.size(); ++c)
+        if (translation_.header[c] == translation_.firstHeader || translation_.header[c] == translation_.secondHeader)
+            nameColumns.push_back(c);
     for (size_t i = 0; i < names_.size(); ++i)
-        for (const core::UnknownName& u : translation_.unknownNames)
-            if (core::sameSheetText(names_[i].sheetName, u.name)) counts[i] = u.rows;
+        for (const core::SheetRow& row : translation_.rows)
+            if (std::any_of(nameColumns.begin(), nameColumns.end(), [&](size_t c) {
+                    return c < row.cells.size() && core::sameSheetText(row.cells[c], names_[i].sheetName);
+                }))
+                ++counts[i];
     unknown_->setRowCount(static_cast<int>(rows.size()));
     for (int r = 0; r < static_cast<int>(rows.size()); ++r) {
         const core::NameChoice& c = rows[static_cast<size_t>(r)];
@@ -439,14 +479,26 @@ bool ImportAssistantDialog::check()
 bool ImportAssistantDialog::runImport()
 {
     QString readBack;
-    const core::ImportResult r = facade_->importSheet(mapping(), path_->text().trimmed(), &readBack);
+    const core::ImportMapping m = mapping();
+    const bool save = saveWith_->isEnabled() && saveWith_->isChecked();
+    const core::ImportResult r = facade_->importSheet(m, path_->text().trimmed(), &readBack, save);
     if (!r.ok()) {
-        problems_->setPlainText(tr("Nothing was imported; the colony is unchanged.\n") + toQString(r.problems.text()));
+        problems_->setPlainText((save ? tr("Nothing was imported and the mapping was not saved; the colony is "
+                                           "unchanged.\n")
+                                      : tr("Nothing was imported; the colony is unchanged.\n")) +
+                                toQString(r.problems.text()));
         return false;
     }
-    problems_->setPlainText(tr("Imported %1 encounters and %2 new animals.").arg(r.encounters).arg(r.animals) +
-                            (readBack.isEmpty() ? QString() : QLatin1Char('\n') + readBack));
-    accept();
+    QString done = tr("Imported %1 encounters and %2 new animals.").arg(r.encounters).arg(r.animals);
+    if (save) {
+        done += QLatin1Char(' ') + tr("Saved the mapping as \"%1\" in the colony file.").arg(toQString(m.name));
+        if (saved_->findText(toQString(m.name)) < 0) saved_->addItem(toQString(m.name));
+    }
+    problems_->setPlainText(done + (readBack.isEmpty() ? QString() : QLatin1Char('\n') + readBack));
+    // The dialog stays open so the outcome can be read; the same sheet is not imported twice by a second press.
+    setResult(QDialog::Accepted);
+    import_->setEnabled(false);
+    close_->setFocus();
     return true;
 }
 

@@ -6,6 +6,7 @@
 
 #include <array>
 
+class QCheckBox;
 class QComboBox;
 class QLabel;
 class QLineEdit;
@@ -42,6 +43,7 @@ public:
     QComboBox* namingField() const { return naming_; }
     QComboBox* savedField() const { return saved_; }
     QLineEdit* nameField() const { return name_; }
+    QCheckBox* saveWithImportField() const { return saveWith_; }
     QLineEdit* groupField() const { return group_; }
     QTableWidget* previewTable() const { return preview_; }
     QTableWidget* unknownTable() const { return unknown_; }
@@ -49,12 +51,15 @@ public:
     QPlainTextEdit* problemText() const { return problems_; }
     QPushButton* importButton() const { return import_; }
     QPushButton* saveButton() const { return save_; }
+    QPushButton* checkButton() const { return check_; }
 
     /// Reads the sheet again and refreshes the preview (also run on every change of a field).
     void refresh();
     /// Checks the whole sheet under the import's rules without writing; true when it would import.
     bool check();
-    /// Imports; true when the records were written (then the dialog accepts).
+    /// Imports (and, when ticked, saves the mapping in the same transaction);
+    /// true when the records were written (then the dialog's result is
+    /// Accepted; it stays open showing what was imported).
     bool runImport();
     /// Saves the mapping under its name in the colony file.
     bool saveMapping();
@@ -71,6 +76,7 @@ private:
     QPushButton* browse_;
     QComboBox* saved_;
     QLineEdit* name_;
+    QCheckBox* saveWith_; ///< save the mapping in the import's own transaction
     QComboBox* layout_;
     QComboBox* naming_;
     QComboBox* dates_;
@@ -87,6 +93,7 @@ private:
     QPushButton* check_;
     QPushButton* save_;
     QPushButton* import_;
+    QPushButton* close_;
     core::SheetSource sheet_;
     core::SheetTranslation translation_;
     std::vector<core::NameChoice> names_; ///< the choices made in the unknown-names table, kept across refreshes

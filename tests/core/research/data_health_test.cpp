@@ -138,6 +138,97 @@ TEST(DataHealth, ResidentsNotSeenForMoreThanNDays)
     EXPECT_EQ(dataHealth(c, where, o).unseen.size(), 5u);
 }
 
+TEST(DataHealth, WindowEndingInThePastCountsToItsEnd)
+{
+    const Colony c = handColony();
+    const ResidenceIndex where(c.animals, c.residences);
+    HealthOptions o = windowOf("2024-03-01", "2024-03-10");
+    o.today = d("2026-12-02");
+    const DataHealth h = dataHealth(c, where, o);
+    EXPECT_EQ(h.reference, d("2024-03-10"));
+    EXPECT_EQ(h.referenceKind, ReferenceDay::WindowEnd);
+    // On 2024-03-10 (counted by hand): D since 2024-01-01, 31 + 29 + 9 = 69 days;
+    // E joined 2024-03-01, 9 days; A and B last on 2024-03-05, 5; C on 2024-03-02, 8.
+    ASSERT_EQ(h.unseen.size(), 1u);
+    EXPECT_EQ(h.unseen[0].animal, "D");
+    EXPECT_EQ(h.unseen[0].days, 69);
+    o.unseenDays = 7; // C (8 days) and E (9) join, E first
+    const DataHealth seven = dataHealth(c, where, o);
+    ASSERT_EQ(seven.unseen.size(), 3u);
+    EXPECT_EQ(seven.unseen[1].animal, "E");
+    EXPECT_EQ(seven.unseen[1].days, 9);
+    EXPECT_EQ(seven.unseen[2].animal, "C");
+    EXPECT_EQ(seven.unseen[2].days, 8);
+}
+
+TEST(DataHealth, OpenWindowCountsToTheFilesLastRecordNotToToday)
+{
+    Colony c = handColony();
+    HealthOptions o;
+    o.group = "g";
+    o.randomisations = 0;
+    o.today = d("2026-12-02"); // long after the last record, 2024-04-02
+    {
+        const ResidenceIndex where(c.animals, c.residences);
+        const DataHealth h = dataHealth(c, where, o);
+        EXPECT_EQ(h.reference, d("2024-04-02"));
+        EXPECT_EQ(h.referenceKind, ReferenceDay::LastRecord);
+        // On 2024-04-02 (by hand): D since 2024-01-01, 31 + 29 + 31 + 1 = 92 days;
+        // E since 2024-03-01, 32; C last on 2024-03-20, 13; A and B on 2024-04-02, 0.
+        ASSERT_EQ(h.unseen.size(), 2u);
+        EXPECT_EQ(h.unseen[0].animal, "D");
+        EXPECT_EQ(h.unseen[0].days, 92);
+        EXPECT_EQ(h.unseen[1].animal, "E");
+        EXPECT_EQ(h.unseen[1].days, 32);
+        o.unseenDays = 12; // C (13 days) joins
+        EXPECT_EQ(dataHealth(c, where, o).unseen.size(), 3u);
+        o.unseenDays = 14;
+    }
+    // Records after "today" do not count: today 2024-03-25, the last record up to it is 2024-03-20.
+    {
+        HealthOptions early = o;
+        early.today = d("2024-03-25");
+        const ResidenceIndex where(c.animals, c.residences);
+        const DataHealth h = dataHealth(c, where, early);
+        EXPECT_EQ(h.reference, d("2024-03-20"));
+        // D 31 + 29 + 19 = 79 days, E 19, B last on 2024-03-05, 15; A and C 0.
+        ASSERT_EQ(h.unseen.size(), 3u);
+        EXPECT_EQ(h.unseen[0].days, 79);
+        EXPECT_EQ(h.unseen[1].animal, "E");
+        EXPECT_EQ(h.unseen[1].days, 19);
+        EXPECT_EQ(h.unseen[2].animal, "B");
+        EXPECT_EQ(h.unseen[2].days, 15);
+    }
+    // The last record of any group counts: G and F in group h seen on 2024-04-10
+    // make it the reference day of group g too (nobody recorded g since 2024-04-02).
+    Animal g;
+    g.id = "G";
+    g.entry = d("2024-01-01");
+    c.animals.push_back(g);
+    c.residences.push_back({"G", "h", d("2024-01-01"), std::nullopt, {}});
+    c.encounters.push_back(enc("2024-04-10", "08:00", "F", "G", "X", Outcome::Decided, "h"));
+    c.encounters.back().seq = static_cast<std::int64_t>(c.encounters.size());
+    c.reindex();
+    {
+        const ResidenceIndex where(c.animals, c.residences);
+        const DataHealth h = dataHealth(c, where, o);
+        EXPECT_EQ(h.reference, d("2024-04-10"));
+        // D 92 + 8 = 100, E 40, C 21 days; A and B 8.
+        ASSERT_EQ(h.unseen.size(), 3u);
+        EXPECT_EQ(h.unseen[0].days, 100);
+        EXPECT_EQ(h.unseen[1].days, 40);
+        EXPECT_EQ(h.unseen[2].animal, "C");
+        EXPECT_EQ(h.unseen[2].days, 21);
+    }
+    // Without any record the reference day is today.
+    c.encounters.clear();
+    c.reindex();
+    const ResidenceIndex where(c.animals, c.residences);
+    const DataHealth none = dataHealth(c, where, o);
+    EXPECT_EQ(none.reference, d("2026-12-02"));
+    EXPECT_EQ(none.referenceKind, ReferenceDay::Today);
+}
+
 TEST(DataHealth, ObserverAgreementByDyadAndTime)
 {
     const Colony c = handColony();

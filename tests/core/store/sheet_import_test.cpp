@@ -5,6 +5,7 @@
 #include "core/store/sheet_import.h"
 
 #include "core/store/colony_store.h"
+#include "core/store/saved_mappings.h"
 #include "import_test_support.h"
 
 #include <gtest/gtest.h>
@@ -365,4 +366,54 @@ TEST(SheetImport, ImportSheetIsAllOrNothing)
     const std::vector<Encounter> all = store.loadEncounters();
     ASSERT_EQ(all.size(), 2u);
     EXPECT_EQ(all[1].loser, "N02");
+}
+
+// Above ColonyStore::kBulkEncounters rows the combined import is a checked bulk
+// load: an animals file, a sheet naming its animal, and the mapping saved, in one
+// transaction; one bad last row and nothing of it is written.
+TEST(SheetImport, BulkSheetWithAnimalsFileAndSavedMappingIsOneTransaction)
+{
+    TempDir dir;
+    const std::string colony = dir.file("c.hierloom");
+    {
+        ColonyStore store = ColonyStore::create(colony);
+        ASSERT_TRUE(importFiles(store,
+                                {dir.write("a.csv", hierloom::test::kBaseAnimals),
+                                 dir.write("r.csv", hierloom::test::kBaseResidences), ""},
+                                kToday)
+                        .ok());
+    }
+    SheetImportRequest request;
+    request.mapping = actorRecipient();
+    request.files.animals = ImportSource{"new.csv", "id,name,sex,entry_date,entry_type\nNW,Newcomer,F,2021-01-01,introduced\n"};
+    request.files.residences = ImportSource{"stay.csv", "animal,group,from\nNW,east,2021-01-01\n"};
+    request.save = MappingToSave{"east sheet", writeMappingFile(request.mapping)};
+    const std::size_t rows = ColonyStore::kBulkEncounters + 1;
+    std::string text = "Date,Actor,Recipient,Result,Troop\n";
+    for (std::size_t i = 0; i < rows; ++i)
+        text += std::string("2021-10-05,") + (i % 2 ? "Newcomer,Matriarch" : "Daughter,Newcomer") + ",W,east\n";
+    request.sheet = {"big.csv", text + "2021-10-06,Newcomer,Nobody,W,east\n"};
+    const std::string before = fileBytes(colony);
+    {
+        ColonyStore store = ColonyStore::open(colony);
+        const ImportResult r = importSheet(store, request, kToday);
+        ASSERT_FALSE(r.ok());
+        EXPECT_EQ(r.problems.list()[0].text(),
+                  "big.csv:" + std::to_string(rows + 2) +
+                      ": Recipient: 'Nobody' is not the name of an animal of the colony; map it to an animal or add "
+                      "it as a new animal");
+    }
+    EXPECT_EQ(fileBytes(colony), before);
+    request.sheet.text = text;
+    ColonyStore store = ColonyStore::open(colony);
+    const ImportResult r = importSheet(store, request, kToday);
+    ASSERT_TRUE(r.ok()) << r.problems.text();
+    EXPECT_EQ(r.animals, 1u);
+    EXPECT_EQ(r.residences, 1u);
+    EXPECT_EQ(r.encounters, rows);
+    const std::vector<Encounter> all = store.loadEncounters();
+    ASSERT_EQ(all.size(), rows);
+    EXPECT_EQ(all[0].winner, "D1");
+    EXPECT_EQ(all[1].winner, "NW");
+    EXPECT_EQ(savedMappingText(store, "east sheet"), request.save->text);
 }
