@@ -261,7 +261,11 @@ int probeColonyFile(const std::string& path)
     return version;
 }
 
-ColonyStore ColonyStore::open(const std::string& path, Mode mode)
+ColonyStore ColonyStore::open(const std::string& path, Mode mode) { return openAs(path, mode, false); }
+
+ColonyStore ColonyStore::openVerified(const std::string& path) { return openAs(path, Mode::ReadOnly, true); }
+
+ColonyStore ColonyStore::openAs(const std::string& path, Mode mode, bool verify)
 {
     const int version = probeColonyFile(path);
     if (version > currentSchemaVersion)
@@ -284,7 +288,8 @@ ColonyStore ColonyStore::open(const std::string& path, Mode mode)
     }
     ColonyStore store(db, path);
     configureConnection(db, path);
-    if (mode == Mode::ReadOnly) requireIntact(db, path);
+    if (verify) requireIntactFully(db, path);
+    else if (mode == Mode::ReadOnly) requireIntactOnce(db, path, CheckPurpose::Reading);
     if (version < currentSchemaVersion) {
         if (mode == Mode::ReadOnly)
             throw ColonyFileError(Kind::NewerVersion, path + ": uses an older file version (" + std::to_string(version) +
@@ -402,7 +407,7 @@ void ColonyStore::checkBeforeWrite()
     SqliteStatement q(db_, "PRAGMA data_version");
     const std::int64_t version = q.step() ? q.integer(0) : -1;
     if (intactAtVersion_ && *intactAtVersion_ == version) return;
-    requireIntact(db_, path_);
+    requireIntactOnce(db_, path_, CheckPurpose::Writing);
     ensureFileIdentity(*this);
     intactAtVersion_ = version;
 }
