@@ -496,7 +496,19 @@ std::vector<Encounter> ColonyStore::loadEncounters(const EncounterScope& scope) 
 
 std::optional<Day> ColonyStore::lastEncounterDay() const
 {
-    SqliteStatement q(db_, "SELECT max(date) FROM encounter");
+    // max(date) alone walks the whole encounter_by_group index (a fifth of a
+    // second at 3,000,000 encounters); the latest date of each group is one
+    // seek at the end of its range, and the groups are found by seeking past
+    // each one (a few dozen seeks). A file without the index (made before it,
+    // opened read-only) is scanned once instead.
+    SqliteStatement has(db_, "SELECT 1 FROM sqlite_schema WHERE type = 'index' AND name = ?");
+    has.bind(1, std::string_view(kEncounterIndexName));
+    SqliteStatement q(db_, has.step() ? "WITH RECURSIVE g(grp) AS (SELECT min(grp) FROM encounter UNION ALL "
+                                        "SELECT (SELECT min(grp) FROM encounter WHERE grp > g.grp) FROM g "
+                                        "WHERE g.grp IS NOT NULL) "
+                                        "SELECT max((SELECT max(date) FROM encounter e WHERE e.grp = g.grp)) FROM g "
+                                        "WHERE grp IS NOT NULL"
+                                      : "SELECT max(date) FROM encounter");
     if (!q.step() || q.isNull(0)) return std::nullopt;
     const std::optional<Day> d = parseDate(q.text(0));
     if (!d) throw ColonyFileError(Kind::Damaged, path_ + ": holds an impossible date '" + q.text(0) + "'");

@@ -8,6 +8,8 @@
 
 #include <gtest/gtest.h>
 
+#include <algorithm>
+#include <random>
 #include <string>
 #include <vector>
 
@@ -131,4 +133,49 @@ TEST(EncounterScope, GroupQueryUsesTheIndexAndOlderFilesGetItOnTheirFirstWrite)
     const ColonyStore store = ColonyStore::open(path);
     EXPECT_NE(plan(store).find("encounter_by_group"), std::string::npos);
     EXPECT_EQ(store.schemaVersion(), currentSchemaVersion);
+}
+
+// The latest date is found by seeking the end of each group's range of the
+// index; checked against the brute-force maximum over every row read back, on
+// random files (groups with and without rows, rows without a group), with and
+// without the index.
+TEST(EncounterScope, LastEncounterDayIsTheLatestDateOfAnyRow)
+{
+    std::mt19937_64 rng(2026);
+    const char* groups[] = {"", "A", "B", "Cc", "D"};
+    for (int round = 0; round < 12; ++round) {
+        TempDir dir;
+        const std::string path = dir.file("c.hierloom");
+        {
+            ColonyStore store = ColonyStore::create(path);
+            std::vector<Animal> animals;
+            for (const char* id : {"X1", "X2"}) {
+                Animal a;
+                a.id = id;
+                a.sex = Sex::Female;
+                a.entry = parseDate("2000-01-01");
+                a.entryType = EntryType::Founder;
+                animals.push_back(a);
+            }
+            std::vector<Encounter> rows;
+            const int n = static_cast<int>(rng() % 40); // none at all in some rounds
+            for (int i = 0; i < n; ++i) {
+                Encounter e;
+                e.date = *parseDate("2000-01-01") + static_cast<int>(rng() % 9000);
+                e.winner = "X1";
+                e.loser = "X2";
+                e.group = groups[rng() % (round % 2 ? 5 : 2)];
+                rows.push_back(e);
+            }
+            std::vector<Residence> residences = {{"X1", "A", *parseDate("2000-01-01"), std::nullopt, ""},
+                                                 {"X2", "A", *parseDate("2000-01-01"), std::nullopt, ""}};
+            store.append(animals, residences, rows);
+            if (round % 3 == 2) store.exec("DROP INDEX encounter_by_group"); // a file made before the index
+        }
+        const ColonyStore store = ColonyStore::open(path, ColonyStore::Mode::ReadOnly);
+        std::optional<Day> brute;
+        for (const Encounter& e : store.loadEncounters())
+            if (!brute || e.date > *brute) brute = e.date;
+        EXPECT_EQ(store.lastEncounterDay(), brute) << "round " << round;
+    }
 }
