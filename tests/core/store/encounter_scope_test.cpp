@@ -136,10 +136,11 @@ TEST(EncounterScope, GroupQueryUsesTheIndexAndOlderFilesGetItOnTheirFirstWrite)
 }
 
 // The latest date is found by seeking the end of each group's range of the
-// index; checked against the brute-force maximum over every row read back, on
-// random files (groups with and without rows, rows without a group), with and
-// without the index.
-TEST(EncounterScope, LastEncounterDayIsTheLatestDateOfAnyRow)
+// index, and a group's rows are read in index order and put in entry order;
+// both checked against brute force over every row read back, on random files
+// (rows in random date order, groups with and without rows, rows without a
+// group), with and without the index.
+TEST(EncounterScope, LastDayAndAGroupsRowsMatchBruteForceOnRandomFiles)
 {
     std::mt19937_64 rng(2026);
     const char* groups[] = {"", "A", "B", "Cc", "D"};
@@ -177,5 +178,14 @@ TEST(EncounterScope, LastEncounterDayIsTheLatestDateOfAnyRow)
         for (const Encounter& e : store.loadEncounters())
             if (!brute || e.date > *brute) brute = e.date;
         EXPECT_EQ(store.lastEncounterDay(), brute) << "round " << round;
+        // Rows entered out of date order still come back in entry order: for
+        // group A its own rows and the rows without a group (X1 lives in A),
+        // for B its own rows only.
+        for (const std::string group : {"A", "B"}) {
+            std::vector<std::int64_t> expected;
+            for (const Encounter& e : store.loadEncounters())
+                if (e.group == group || (group == "A" && e.group.empty())) expected.push_back(e.seq);
+            EXPECT_EQ(seqs(store.loadEncounters(EncounterScope{group, {}, {}})), expected) << "round " << round;
+        }
     }
 }
