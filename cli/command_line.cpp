@@ -41,6 +41,7 @@ int run(int argc, const char* const* argv, std::ostream& out, std::ostream& err)
     addReportCommand(app, ctx, action);
     addOverviewCommand(app, ctx, action);
     addBackupCommand(app, ctx, action);
+    addCheckCommand(app, ctx, action);
     addRestoreCommand(app, ctx, action);
     addMergeCommand(app, ctx, action);
     addHistoryCommand(app, ctx, action);

@@ -27,6 +27,7 @@ void addScenarioCommand(CLI::App& app, CommandContext& ctx, CommandAction& actio
 void addStabilityCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 void addReportCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 void addBackupCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
+void addCheckCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 void addRestoreCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 void addMergeCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);
 void addHistoryCommand(CLI::App& app, CommandContext& ctx, CommandAction& action);

@@ -50,8 +50,13 @@ public:
     /// this program may not write. ReadOnly opens the file read-only, and with
     /// SQLite's `immutable` flag when its folder is not writable (no -shm or
     /// -wal file is needed then). Both refuse a -wal file written for another
-    /// file (checkWalBelongs) and a file failing `PRAGMA quick_check`.
+    /// file (checkWalBelongs) and a file failing `PRAGMA quick_check`; ReadOnly
+    /// skips that check when the file is unchanged since it last passed
+    /// (requireIntactOnce, integrity_check.h).
     static ColonyStore open(const std::string& path, Mode mode = Mode::ReadWrite);
+    /// Opens read-only like open(), running SQLite's full `PRAGMA
+    /// integrity_check` whatever an earlier check found (requireIntactFully).
+    static ColonyStore openVerified(const std::string& path);
 
     ColonyStore(ColonyStore&& other) noexcept;
     ColonyStore& operator=(ColonyStore&& other) noexcept;
@@ -127,13 +132,16 @@ public:
 
     /// Called by WriteTransaction when it begins: runs `PRAGMA quick_check`
     /// unless it passed on this connection and no other connection has
-    /// committed since (`PRAGMA data_version`), and makes sure the file has its
+    /// committed since (`PRAGMA data_version`) or the file is unchanged since
+    /// it last passed (requireIntactOnce, which also forgets that pass, as the
+    /// file is about to change), and makes sure the file has its
     /// identity (file_identity.h). Throws ColonyFileError(Damaged) naming the
     /// newest good backup.
     void checkBeforeWrite();
 
 private:
     ColonyStore(sqlite3* db, std::string path) : db_(db), path_(std::move(path)) {}
+    static ColonyStore openAs(const std::string& path, Mode mode, bool verify);
     void migrate(int fromVersion);
     void ensureEncounterIndex();
     void startSession();

@@ -2,18 +2,30 @@
 #include "core/store/integrity_check.h"
 
 #include "core/base/colony_file_error.h"
+#include "core/store/check_cache.h"
 #include "core/store/colony_backup.h"
 
 #include <sqlite3.h>
 
+#include <chrono>
+
 namespace hierloom::core {
 
-std::string quickCheckProblem(sqlite3* db)
+namespace {
+
+std::int64_t nowNs()
+{
+    return std::chrono::duration_cast<std::chrono::nanoseconds>(std::chrono::system_clock::now().time_since_epoch())
+        .count();
+}
+
+/// The first problem `pragma` finds, or an empty string.
+std::string checkProblem(sqlite3* db, const char* pragma)
 {
     // One problem is enough to refuse; stopping there keeps a badly damaged
     // file from being walked to the end.
     sqlite3_stmt* q = nullptr;
-    int rc = sqlite3_prepare_v2(db, "PRAGMA quick_check(1)", -1, &q, nullptr);
+    int rc = sqlite3_prepare_v2(db, pragma, -1, &q, nullptr);
     std::string answer;
     if (rc == SQLITE_OK) {
         rc = sqlite3_step(q);
@@ -33,6 +45,36 @@ std::string quickCheckProblem(sqlite3* db)
     if (answer.size() > 120) answer = answer.substr(0, 117) + "...";
     return answer;
 }
+
+void refuseDamaged(const std::string& path, const std::string& problem)
+{
+    const std::string backup = newestGoodBackup(path);
+    throw ColonyFileError(ColonyFileError::Kind::Damaged,
+                          path + ": is damaged (" + problem + "); nothing was read or changed. " +
+                              (backup.empty() ? std::string("No good backup was found beside it.")
+                                              : "The newest good backup is " + backup +
+                                                    " (hierloom-cli restore " + path + " --from " + backup + ")"));
+}
+
+/// Runs `pragma` over the whole file; refuses a damaged file (forgetting it)
+/// and records a pass when the file held still during the check.
+void checkAndRecord(sqlite3* db, const std::string& path, const char* pragma, const CheckCache& cache)
+{
+    const auto before = colonyFileState(path);
+    const std::int64_t startedNs = nowNs();
+    const std::string problem = checkProblem(db, pragma);
+    if (!problem.empty()) {
+        cache.forget(path);
+        refuseDamaged(path, problem);
+    }
+    const auto after = colonyFileState(path);
+    if (before && after && *before == *after && settledBefore(*before, startedNs))
+        cache.record(path, *before, startedNs / 1'000'000'000);
+}
+
+} // namespace
+
+std::string quickCheckProblem(sqlite3* db) { return checkProblem(db, "PRAGMA quick_check(1)"); }
 
 std::string newestGoodBackup(const std::string& colonyPath)
 {
@@ -55,13 +97,31 @@ std::string newestGoodBackup(const std::string& colonyPath)
 void requireIntact(sqlite3* db, const std::string& path)
 {
     const std::string problem = quickCheckProblem(db);
-    if (problem.empty()) return;
-    const std::string backup = newestGoodBackup(path);
-    throw ColonyFileError(ColonyFileError::Kind::Damaged,
-                          path + ": is damaged (" + problem + "); nothing was read or changed. " +
-                              (backup.empty() ? std::string("No good backup was found beside it.")
-                                              : "The newest good backup is " + backup +
-                                                    " (hierloom-cli restore " + path + " --from " + backup + ")"));
+    if (!problem.empty()) refuseDamaged(path, problem);
+}
+
+void requireIntactOnce(sqlite3* db, const std::string& path, CheckPurpose purpose)
+{
+    const CheckCache cache = CheckCache::fromEnvironment();
+    const auto state = colonyFileState(path);
+    const bool trusted = state && cache.vouchesFor(path, *state, nowNs() / 1'000'000'000);
+    if (purpose == CheckPurpose::Writing) {
+        if (!trusted) {
+            const std::string problem = quickCheckProblem(db);
+            if (!problem.empty()) {
+                cache.forget(path);
+                refuseDamaged(path, problem);
+            }
+        }
+        cache.forget(path);
+        return;
+    }
+    if (!trusted) checkAndRecord(db, path, "PRAGMA quick_check(1)", cache);
+}
+
+void requireIntactFully(sqlite3* db, const std::string& path)
+{
+    checkAndRecord(db, path, "PRAGMA integrity_check(1)", CheckCache::fromEnvironment());
 }
 
 } // namespace hierloom::core

@@ -2,6 +2,7 @@
 #include "core/store/sqlite_statement.h"
 
 #include "core/base/colony_file_error.h"
+#include "core/store/check_cache.h"
 #include "core/store/uid_storage.h"
 
 #include <sqlite3.h>
@@ -19,6 +20,12 @@ void throwSqliteError(sqlite3* db, int rc, const std::string& context)
         message = context + ": the colony file is being written by another program; try again when it has finished";
     } else if (primary == SQLITE_CORRUPT || primary == SQLITE_NOTADB) {
         kind = K::Damaged;
+        if (const char* file = db ? sqlite3_db_filename(db, "main") : nullptr; file && *file) {
+            // A damaged page met while reading: whatever an earlier check
+            // found, the next open checks the whole file again.
+            CheckCache::fromEnvironment().forget(file);
+            message = std::string(file) + ": is damaged (" + sqlite3_errmsg(db) + ", met while " + context + ")";
+        }
     }
     throw ColonyFileError(kind, message);
 }

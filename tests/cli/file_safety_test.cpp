@@ -3,15 +3,18 @@
 // backups named by a wrong clock, through the command line.
 #include "cli_test_support.h"
 
+#include "core/store/check_cache.h"
 #include "core/store/colony_store.h"
 #include "core/store/sqlite_statement.h"
 
 #include <gtest/gtest.h>
 
+#include <chrono>
 #include <filesystem>
 #include <fstream>
 #include <regex>
 #include <set>
+#include <thread>
 
 using hierloom::test::CliResult;
 using hierloom::test::CliTempDir;
@@ -188,4 +191,33 @@ TEST(CliFileSafety, ALoopThroughTheFatherColumnIsReportedAsOne)
         fatherLoop = fatherLoop || l.find(": father:") != std::string::npos;
     }
     EXPECT_TRUE(fatherLoop) << r.err;
+}
+
+TEST(CliFileSafety, CheckReadsTheWholeFileWhateverAnEarlierCheckFound)
+{
+    using namespace hierloom::core;
+    CliTempDir dir;
+    const std::string colony = dir.file("d.hierloom");
+    ASSERT_EQ(runCli({"demo", colony}).status, 0);
+    auto now = [] { return std::chrono::system_clock::now().time_since_epoch(); };
+    while (!settledBefore(*colonyFileState(colony), std::chrono::nanoseconds(now()).count()))
+        std::this_thread::sleep_for(std::chrono::milliseconds(20));
+    const CliResult intact = runCli({"check", colony});
+    EXPECT_EQ(intact.status, 0) << intact.err;
+    EXPECT_EQ(intact.err, colony + ": intact (SQLite's integrity check of the whole file found no problem)\n");
+    EXPECT_EQ(intact.out, "");
+    const CheckCache cache = CheckCache::fromEnvironment();
+    const auto seconds = [&] { return std::chrono::duration_cast<std::chrono::seconds>(now()).count(); };
+    EXPECT_TRUE(cache.vouchesFor(colony, *colonyFileState(colony), seconds())); // a pass is remembered
+    // Damage the cache cannot see (as from a disk that decays: no time stamp moves).
+    breakAnIndex(colony);
+    cache.record(colony, *colonyFileState(colony), seconds());
+    EXPECT_EQ(runCli({"ranks", colony}).status, 0); // trusted as recorded
+    const CliResult damaged = runCli({"check", colony});
+    EXPECT_EQ(damaged.status, 2);
+    EXPECT_EQ(damaged.err.rfind("hierloom-cli: " + colony + ": is damaged (", 0), 0U) << damaged.err;
+    const CliResult after = runCli({"ranks", colony});
+    EXPECT_EQ(after.status, 2);
+    EXPECT_NE(after.err.find(colony + ": is damaged ("), std::string::npos) << after.err;
+    EXPECT_EQ(runCli({"check", dir.file("missing.hierloom")}).status, 2);
 }

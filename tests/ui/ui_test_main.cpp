@@ -25,6 +25,9 @@ int main(int argc, char* argv[])
     qputenv("HOME", QByteArray::fromStdString(home.string()));
     qputenv("XDG_CONFIG_HOME", QByteArray::fromStdString((home / ".config").string()));
     qputenv("XDG_DATA_HOME", QByteArray::fromStdString((home / ".local/share").string()));
+    // The checked-files cache (core/store/check_cache.h) too.
+    qputenv("HIERLOOM_CACHE_DIR", QByteArray::fromStdString((home / ".cache/hierloom").string()));
+    qunsetenv("HIERLOOM_CHECK_EVERY_OPEN");
     QStandardPaths::setTestModeEnabled(true);
     QApplication::setOrganizationName(QStringLiteral("HierloomTests"));
     QApplication::setApplicationName(QStringLiteral("HierloomUiTests"));

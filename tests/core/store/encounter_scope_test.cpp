@@ -8,6 +8,8 @@
 
 #include <gtest/gtest.h>
 
+#include <algorithm>
+#include <random>
 #include <string>
 #include <vector>
 
@@ -131,4 +133,59 @@ TEST(EncounterScope, GroupQueryUsesTheIndexAndOlderFilesGetItOnTheirFirstWrite)
     const ColonyStore store = ColonyStore::open(path);
     EXPECT_NE(plan(store).find("encounter_by_group"), std::string::npos);
     EXPECT_EQ(store.schemaVersion(), currentSchemaVersion);
+}
+
+// The latest date is found by seeking the end of each group's range of the
+// index, and a group's rows are read in index order and put in entry order;
+// both checked against brute force over every row read back, on random files
+// (rows in random date order, groups with and without rows, rows without a
+// group), with and without the index.
+TEST(EncounterScope, LastDayAndAGroupsRowsMatchBruteForceOnRandomFiles)
+{
+    std::mt19937_64 rng(2026);
+    const char* groups[] = {"", "A", "B", "Cc", "D"};
+    for (int round = 0; round < 12; ++round) {
+        TempDir dir;
+        const std::string path = dir.file("c.hierloom");
+        {
+            ColonyStore store = ColonyStore::create(path);
+            std::vector<Animal> animals;
+            for (const char* id : {"X1", "X2"}) {
+                Animal a;
+                a.id = id;
+                a.sex = Sex::Female;
+                a.entry = parseDate("2000-01-01");
+                a.entryType = EntryType::Founder;
+                animals.push_back(a);
+            }
+            std::vector<Encounter> rows;
+            const int n = static_cast<int>(rng() % 40); // none at all in some rounds
+            for (int i = 0; i < n; ++i) {
+                Encounter e;
+                e.date = *parseDate("2000-01-01") + static_cast<int>(rng() % 9000);
+                e.winner = "X1";
+                e.loser = "X2";
+                e.group = groups[rng() % (round % 2 ? 5 : 2)];
+                rows.push_back(e);
+            }
+            std::vector<Residence> residences = {{"X1", "A", *parseDate("2000-01-01"), std::nullopt, ""},
+                                                 {"X2", "A", *parseDate("2000-01-01"), std::nullopt, ""}};
+            store.append(animals, residences, rows);
+            if (round % 3 == 2) store.exec("DROP INDEX encounter_by_group"); // a file made before the index
+        }
+        const ColonyStore store = ColonyStore::open(path, ColonyStore::Mode::ReadOnly);
+        std::optional<Day> brute;
+        for (const Encounter& e : store.loadEncounters())
+            if (!brute || e.date > *brute) brute = e.date;
+        EXPECT_EQ(store.lastEncounterDay(), brute) << "round " << round;
+        // Rows entered out of date order still come back in entry order: for
+        // group A its own rows and the rows without a group (X1 lives in A),
+        // for B its own rows only.
+        for (const std::string group : {"A", "B"}) {
+            std::vector<std::int64_t> expected;
+            for (const Encounter& e : store.loadEncounters())
+                if (e.group == group || (group == "A" && e.group.empty())) expected.push_back(e.seq);
+            EXPECT_EQ(seqs(store.loadEncounters(EncounterScope{group, {}, {}})), expected) << "round " << round;
+        }
+    }
 }
