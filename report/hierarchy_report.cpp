@@ -64,16 +64,16 @@ void observedAndPredicted(ReportLayout& doc, const Colony& colony, const Residen
                        QObject::tr("Elo"), QObject::tr("Enc.")};
     observed.widths = {0.6, 1.4, 0.6, 1.4, 1, 0.7};
     // Data health: the encounters behind each rank; too few are tinted (docs/methods.md, "Data health").
-    std::map<std::string, int> counts;
-    for (const auto& [id, n] : encounterCounts(colony, std::nullopt, at, o.group)) counts[id] = n;
+    const std::map<std::string, RankFlag> flags = rankFlags(colony, std::nullopt, at, o.group, kDefaultMinEncounters);
     for (const RankRow& r : rows) {
         const int a = colony.animalIndex(r.animal);
-        const int n = counts[r.animal];
+        const auto flag = flags.find(r.animal);
+        const int n = flag != flags.end() ? flag->second.encounters : 0;
         observed.rows.push_back({QString::number(r.rank), qs(r.animal),
                                  a >= 0 ? qs(toString(colony.animals[static_cast<size_t>(a)].sex)) : QString(),
                                  qs(lineOf(lines, r.animal)), r.score ? QString::number(*r.score, 'f', 0) : QString(),
                                  QString::number(n)});
-        observed.highlighted.push_back(n < kDefaultMinEncounters);
+        observed.highlighted.push_back(tooFewEncounters(n, kDefaultMinEncounters));
     }
     ReportTable predicted;
     predicted.header = {QObject::tr("#"), QObject::tr("Female"), QObject::tr("Matriline"), QObject::tr("Obs."),

@@ -22,6 +22,7 @@ TEST(SupportView, TablesAreTheCoreTablesAndTheMatrixCarriesMatrilineStrips)
     DemoDocument demo;
     ui::SupportView view(demo.document());
     view.setPermutations(0);
+    hierloom::test::finish(view.runner()); // computed on a worker thread
     const core::SupportAnalysis& a = view.analysis();
     ASSERT_GT(a.acts, 0);
     // Identity with the core's table (what `support --table pairs` prints).
