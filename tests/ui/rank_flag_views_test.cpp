@@ -258,3 +258,29 @@ TEST(RankFlags, SupportViewShowsPendingThenTheFigures)
     EXPECT_EQ(view.pairTable()->rowCount(), pairs);
     EXPECT_EQ(view.analysis().test.iterations, 20);
 }
+
+TEST(RankFlags, SupportMatrixMarksTheFlaggedAnimal)
+{
+    Flagged f;
+    ui::SupportView view(&f.document);
+    view.show();
+    QApplication::setActiveWindow(&view);
+    finish(view.runner());
+    auto* group = view.findChild<QComboBox*>();
+    ASSERT_NE(group, nullptr);
+    chooseNext(&view, group); // "every group" -> "A"
+    ASSERT_EQ(group->currentData().toString(), QStringLiteral("A"));
+    finish(view.runner());
+    finish(view.flags()->runner());
+    // The matrix in rank order: D1 (2 encounters) marked, F1 (10) and F2 (12) not.
+    QStringList rows;
+    for (int i = 1; i < view.matrixTable()->rowCount(); ++i) rows << view.matrixTable()->verticalHeaderItem(i)->text();
+    EXPECT_TRUE(rows.contains(QStringLiteral("D1 ") + mark())) << rows.join(',').toStdString();
+    EXPECT_TRUE(rows.contains(QStringLiteral("F1")));
+    EXPECT_TRUE(rows.contains(QStringLiteral("F2")));
+    const int d1 = static_cast<int>(rows.indexOf(QStringLiteral("D1 ") + mark()));
+    ASSERT_GE(d1, 0);
+    EXPECT_EQ(view.matrixTable()->horizontalHeaderItem(d1 + 1)->text(), QStringLiteral("D1 ") + mark());
+    EXPECT_TRUE(view.matrixTable()->verticalHeaderItem(d1 + 1)->toolTip().contains(QStringLiteral("2 in the window")));
+    EXPECT_TRUE(view.findChild<QLabel*>(QStringLiteral("supportFlagLegend"))->text().contains(QStringLiteral("(flagged: 1)")));
+}

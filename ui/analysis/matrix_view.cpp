@@ -475,7 +475,12 @@ QStringList MatrixView::order() const
 void MatrixView::relabel()
 {
     const int n = matrix_.n;
-    if (n == 0) return;
+    if (n == 0) {
+        // An empty window: no names or totals left over from the last one.
+        for (QCPAxis* a : {plot_->xAxis, plot_->xAxis2, plot_->yAxis, plot_->yAxis2})
+            if (auto t = a->ticker().dynamicCast<QCPAxisTickerText>()) t->clear();
+        return;
+    }
     QStringList labels;
     for (size_t i = 0; i < names_.size(); ++i) labels << flags_->marked(labelText(names_[i]), ids_[i]);
     rowStep_ = labelStep(plot_->yAxis, plot_->yAxis->tickLabelFont());

@@ -1,6 +1,8 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "ui/analysis/support_view.h"
 
+#include "ui/analysis/rank_flag_watch.h"
+
 #include "core/base/number_format.h"
 #include "core/pedigree/matriline.h"
 #include "core/ranks/parallel_randomisation.h"
@@ -66,9 +68,11 @@ SupportView::SupportView(ColonyDocument* document, QWidget* parent)
       document_(document),
       runner_(new ComputeRunner(this)),
       progress_(new ProgressStrip(runner_, tr("the support figures"), this)),
+      flags_(new RankFlagWatch(document, this)),
       group_(new QComboBox(this)),
       permutations_(new QSpinBox(this)),
       summary_(new QLabel(this)),
+      flagLegend_(new QLabel(this)),
       pairs_(readOnlyTable(this)),
       matrix_(readOnlyTable(this)),
       daughters_(readOnlyTable(this)),
@@ -104,6 +108,10 @@ SupportView::SupportView(ColonyDocument* document, QWidget* parent)
                                     "alone (docs/methods.md, \"Kin support\")."),
                                  this));
     layout->addWidget(tabs, 1);
+    flagLegend_->setObjectName(QStringLiteral("supportFlagLegend"));
+    flagLegend_->setWordWrap(true);
+    layout->addWidget(flagLegend_);
+    connect(flags_, &RankFlagWatch::updated, this, &SupportView::markNames);
 
     refresh_ = new VisibleRefresh(this, [this] { recompute(); });
     connect(progress_, &ProgressStrip::retry, this, [this] { recompute(); });
@@ -165,6 +173,7 @@ void SupportView::recompute()
     analysis_ = {};
     if (!document_->isOpen()) {
         runner_->cancel();
+        flags_->clear();
         return;
     }
     core::SupportOptions o;
@@ -174,6 +183,7 @@ void SupportView::recompute()
     o.threads = core::defaultThreadCount(); // the result is the same with any count
     o.maturityYears = settings.maturityYears;
     o.elo = settings.elo;
+    flags_->request(std::nullopt, std::nullopt, o.group);
     // The permutation test takes a while: off the interface thread, on the document's snapshot.
     const ColonyDocument::Snapshot snapshot = document_->snapshot();
     runner_->start([this, snapshot, o](const std::atomic<bool>& cancel, const ComputeRunner::Progress&) {
@@ -244,9 +254,27 @@ void SupportView::showMatrix(const core::ExportTable& t, const MatrilinePalette&
         for (int j = 0; j < n; ++j)
             matrix_->setItem(i + 1, j + 1, new QTableWidgetItem(toQString(cells[static_cast<size_t>(j) + 2])));
     }
-    matrix_->resizeColumnsToContents();
+    markNames();
     matrix_->setColumnWidth(0, matrix_->fontMetrics().horizontalAdvance(QStringLiteral("MM")));
     matrix_->setRowHeight(0, matrix_->fontMetrics().height() / 2 + 2);
+}
+
+void SupportView::markNames()
+{
+    const int n = static_cast<int>(analysis_.order.size());
+    flagLegend_->setText(n > 0 ? flags_->legend() : QString());
+    if (matrix_->rowCount() != n + 1) return;
+    for (int i = 0; i < n; ++i) {
+        const std::string& id = analysis_.order[static_cast<size_t>(i)];
+        const QString name = flags_->marked(toQString(id), id);
+        for (QTableWidgetItem* header : {matrix_->horizontalHeaderItem(i + 1), matrix_->verticalHeaderItem(i + 1)}) {
+            if (!header) continue;
+            header->setText(name);
+            header->setToolTip(flags_->describe(id));
+        }
+    }
+    matrix_->resizeColumnsToContents();
+    matrix_->setColumnWidth(0, matrix_->fontMetrics().horizontalAdvance(QStringLiteral("MM")));
 }
 
 } // namespace hierloom::ui

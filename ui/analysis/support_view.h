@@ -16,6 +16,7 @@ class ColonyDocument;
 class ComputeRunner;
 class MatrilinePalette;
 class ProgressStrip;
+class RankFlagWatch;
 class VisibleRefresh;
 
 /// The Support tab (docs/methods.md "Kin support"): who joins whose fights.
@@ -42,6 +43,8 @@ public:
     QTableWidget* daughterTable() const { return daughters_; }
     ComputeRunner* runner() const { return runner_; }
     ProgressStrip* progressStrip() const { return progress_; }
+    /// The data-health flags of the group's whole record: the matrix's rank-ordered names carry the mark.
+    RankFlagWatch* flags() const { return flags_; }
 
 private:
     void refreshGroups();
@@ -49,13 +52,17 @@ private:
     struct Result;
     void adopt(const Result& result);
     void showMatrix(const core::ExportTable& table, const MatrilinePalette& palette);
+    /// The matrix's row and column names, flagged ones with the mark.
+    void markNames();
 
     ColonyDocument* document_;
     ComputeRunner* runner_;
     ProgressStrip* progress_;
+    RankFlagWatch* flags_;
     QComboBox* group_;
     QSpinBox* permutations_;
     QLabel* summary_;
+    QLabel* flagLegend_;
     QTableWidget* pairs_;
     QTableWidget* matrix_;
     QTableWidget* daughters_;
