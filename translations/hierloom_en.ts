@@ -1423,6 +1423,10 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
             <numerusform></numerusform>
         </translation>
     </message>
+    <message>
+        <source>the data health</source>
+        <translation type="unfinished"></translation>
+    </message>
 </context>
 <context>
     <name>hierloom::ui::HelpBrowser</name>
@@ -1732,6 +1736,42 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
     <message>
         <source>conformity of %1 ranks with youngest ascendancy, females from %2 years</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 (%2)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 %2</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>, width %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>from %1 to %2</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>up to %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>; and %1 more (hover)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Every animal with encounters %1 has at least %2.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 Too few encounters for a stable rank (under %2 %3); encounters and randomised-Elo interval width%4: %5.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source> (widths being computed)</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -2477,6 +2517,10 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <source>%1 (%2)</source>
         <translation type="unfinished"></translation>
     </message>
+    <message>
+        <source>%1 after a name: fewer than %2 encounters in the window (rank not stable)</source>
+        <translation type="unfinished"></translation>
+    </message>
 </context>
 <context>
     <name>hierloom::ui::MergeDialog</name>
@@ -3117,6 +3161,37 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
 </context>
 <context>
+    <name>hierloom::ui::RankFlagWatch</name>
+    <message>
+        <source>Elo interval width: being computed</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Elo interval width %1 points</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Elo interval width: not rated</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 Too few encounters for a stable rank: %2 in the window (threshold %3); %4</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Encounters in the window: %1 (threshold %2); %3</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 after a name: fewer than %2 encounters in the window, rank not stable (flagged: %3); hover a name for its encounters and randomised-Elo interval width%4.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source> (widths being computed)</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
     <name>hierloom::ui::RankTimelineView</name>
     <message>
         <source>Birth</source>
@@ -3276,6 +3351,26 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
     <message>
         <source>Rank change: both</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 Too few encounters for a stable rank (at the date)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>from %1 to %2</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>up to %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 On %2, %3 of %4 females shown have fewer than %5 encounters %6: ringed, their ranks are not stable; hover the point at that date for its encounters and randomised-Elo interval width%7.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source> (widths being computed)</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -4046,6 +4141,10 @@ animal</source>
     </message>
     <message>
         <source>matriline of %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>the support figures</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
