@@ -3354,10 +3354,6 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <translation type="unfinished"></translation>
     </message>
     <message>
-        <source>%1 Too few encounters for a stable rank (at the date)</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
         <source>from %1 to %2</source>
         <translation type="unfinished"></translation>
     </message>
@@ -3371,6 +3367,10 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
     <message>
         <source> (widths being computed)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 Too few encounters (at the date)</source>
         <translation type="unfinished"></translation>
     </message>
 </context>

@@ -144,6 +144,7 @@ TEST(RankFlags, TimelineRingsTheFlaggedFemaleAtTheChosenDate)
     const auto* cleo = view.lineOf(QStringLiteral("D1"));
     ASSERT_NE(cleo, nullptr);
     EXPECT_EQ(ringed, (cleo->data()->end() - 1)->value); // on her line at that date
+    EXPECT_TRUE(view.plot()->legend->hasItemWithPlottable(view.flagMarks()));
     EXPECT_TRUE(view.flagLegend()->text().contains(QStringLiteral("1 of 3 females shown have fewer than 10")))
         << view.flagLegend()->text().toStdString();
     EXPECT_TRUE(view.describe(QStringLiteral("D1"), last).contains(QStringLiteral("2 in the window (threshold 10)")));
@@ -154,6 +155,7 @@ TEST(RankFlags, TimelineRingsTheFlaggedFemaleAtTheChosenDate)
     finish(view.flags()->runner());
     ASSERT_LT(view.timeline().checkpoints.front(), *core::parseDate("2021-06-01"));
     EXPECT_EQ(view.flagMarks()->data()->size(), 0);
+    EXPECT_FALSE(view.plot()->legend->hasItemWithPlottable(view.flagMarks())); // the key only while a female is ringed
     EXPECT_TRUE(view.flagLegend()->text().contains(QStringLiteral("0 of 2 females shown")))
         << view.flagLegend()->text().toStdString();
 }

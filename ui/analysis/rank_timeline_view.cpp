@@ -361,7 +361,8 @@ void RankTimelineView::rebuildPlot()
     flagMarks_ = plot_->addGraph();
     flagMarks_->setLineStyle(QCPGraph::lsNone);
     flagMarks_->setScatterStyle(QCPScatterStyle(QCPScatterStyle::ssCircle, QPen(QColor(0xE6, 0x9F, 0x00), 2), QBrush(), 13));
-    flagMarks_->setName(tr("%1 Too few encounters for a stable rank (at the date)").arg(RankFlagWatch::mark()));
+    flagMarks_->setName(tr("%1 Too few encounters (at the date)").arg(RankFlagWatch::mark()));
+    flagMarks_->removeFromLegend(); // listed only while a female is ringed
     flagMarks_->setLayer(QStringLiteral("selected"));
 
     dayLine_ = new QCPItemStraightLine(plot_);
@@ -475,6 +476,8 @@ void RankTimelineView::fillFlagMarks()
         }
     }
     flagMarks_->setData(keys, values);
+    if (keys.isEmpty()) flagMarks_->removeFromLegend();
+    else flagMarks_->addToLegend();
     if (k < 0 || ranked == 0) {
         flagLegend_->clear();
         return;
