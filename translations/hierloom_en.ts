@@ -3599,6 +3599,14 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <source>Export &amp;Research Tables...</source>
         <translation type="unfinished"></translation>
     </message>
+    <message>
+        <source>Data health in the rank table (encounters, too few for a stable rank)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Ends ranks_by_period with encounters and few_encounters (fewer than %1 encounters behind the rank), as export-tables --health</source>
+        <translation type="unfinished"></translation>
+    </message>
 </context>
 <context>
     <name>hierloom::ui::ScenarioComposer</name>

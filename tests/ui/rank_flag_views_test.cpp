@@ -11,12 +11,14 @@
 #include "ui/analysis/prediction_view.h"
 #include "ui/analysis/rank_flag_watch.h"
 #include "ui/analysis/rank_timeline_view.h"
+#include "ui/analysis/research_export_dialog.h"
 #include "ui/analysis/support_view.h"
 #include "ui/document/animal_selection.h"
 #include "ui/document/compute_runner.h"
 #include "ui/planning/health_view.h"
 #include "ui/widgets/progress_strip.h"
 
+#include <QCheckBox>
 #include <QLabel>
 #include <QSlider>
 #include <QSpinBox>
@@ -285,4 +287,35 @@ TEST(RankFlags, SupportMatrixMarksTheFlaggedAnimal)
     EXPECT_EQ(view.matrixTable()->horizontalHeaderItem(d1 + 1)->text(), QStringLiteral("D1 ") + mark());
     EXPECT_TRUE(view.matrixTable()->verticalHeaderItem(d1 + 1)->toolTip().contains(QStringLiteral("2 in the window")));
     EXPECT_TRUE(view.findChild<QLabel*>(QStringLiteral("supportFlagLegend"))->text().contains(QStringLiteral("(flagged: 1)")));
+}
+
+TEST(RankFlags, ResearchExportEndsTheRankTableWithTheFlagWhenTicked)
+{
+    Flagged f;
+    TempDir out;
+    ui::ResearchExportDialog dialog(&f.document);
+    dialog.show();
+    dialog.setPeriod(QStringLiteral("month"));
+    dialog.setFolder(QString::fromStdString(out.file("tables")));
+    auto* health = dialog.findChild<QCheckBox*>(QStringLiteral("exportHealth"));
+    ASSERT_NE(health, nullptr);
+    EXPECT_FALSE(health->isChecked()); // off: the table keeps its columns
+    QTest::mouseClick(health, Qt::LeftButton, {}, QPoint(8, health->height() / 2));
+    ASSERT_TRUE(health->isChecked());
+    ASSERT_TRUE(dialog.exportTables()) << ui::toStdString(dialog.report());
+    std::ifstream in(out.file("tables/ranks_by_period.csv"));
+    std::vector<std::string> rows;
+    for (std::string line; std::getline(in, line);) rows.push_back(line);
+    ASSERT_FALSE(rows.empty());
+    EXPECT_EQ(rows[0].substr(rows[0].size() - 26), ",encounters,few_encounters");
+    // Elo runs on over the record: June (to 2 June) F1 10, F2 12, D1 2 (flagged); May F1 and F2 10 each.
+    auto row = [&](const std::string& start, const std::string& id) {
+        for (const std::string& r : rows)
+            if (r.rfind(start, 0) == 0 && r.find(',' + id + ',') != std::string::npos) return r;
+        return std::string();
+    };
+    EXPECT_EQ(row("2021-06-01", "D1").substr(row("2021-06-01", "D1").size() - 6), ",2,yes");
+    EXPECT_EQ(row("2021-06-01", "F2").substr(row("2021-06-01", "F2").size() - 6), ",12,no");
+    EXPECT_EQ(row("2021-05-", "F1").substr(row("2021-05-", "F1").size() - 6), ",10,no");
+    EXPECT_TRUE(row("2021-05-", "D1").empty()); // not yet ranked in May
 }
