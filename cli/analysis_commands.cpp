@@ -71,10 +71,31 @@ void runRanks(CommandContext& ctx, const RanksOptions& o)
     std::ostringstream out;
     if (!o.every.empty()) {
         if (r.at || o.randomise > 0) throw BadInputError("--every cannot be combined with --at or --randomise");
-        out << "period_start,period_end,animal,rank,score" << (elo ? ",start_rule" : "") << "\n";
-        for (const PeriodRankRow& p : computeRanksByPeriod(loaded.colony, loaded.where, sel, r, *parsePeriodLength(o.every)))
+        out << "period_start,period_end,animal,rank,score" << (elo ? ",start_rule" : "")
+            << (o.health ? ",encounters,few_encounters" : "") << "\n";
+        const std::vector<PeriodRankRow> rows =
+            computeRanksByPeriod(loaded.colony, loaded.where, sel, r, *parsePeriodLength(o.every));
+        // Data health per period (docs/methods.md, "Data health"): the encounters each row's
+        // score rests on: Elo runs on from the window's start, the other methods use the period alone.
+        std::vector<CalendarPeriod> periods;
+        for (const PeriodRankRow& p : rows)
+            if (periods.empty() || periods.back().start != p.period.start) periods.push_back(p.period);
+        const auto flags = periodRankFlags(loaded.colony, periods, sel.from, sel.group, o.minEncounters, elo);
+        size_t k = 0;
+        int flagged = 0;
+        for (const PeriodRankRow& p : rows) {
+            while (periods[k].start != p.period.start) ++k;
             out << formatDate(p.period.start) << ',' << formatDate(p.period.end) << ',' << csvField(p.row.animal) << ','
-                << p.row.rank << ',' << formatNumber(p.row.score) << (elo ? ruleCell : "") << '\n';
+                << p.row.rank << ',' << formatNumber(p.row.score) << (elo ? ruleCell : "");
+            const auto it = flags[k].find(p.row.animal);
+            const RankFlag flag = it != flags[k].end() ? it->second : RankFlag{0, tooFewEncounters(0, o.minEncounters), {}};
+            flagged += flag.fewEncounters;
+            if (o.health) out << ',' << flag.encounters << ',' << (flag.fewEncounters ? "yes" : "no");
+            out << '\n';
+        }
+        if (flagged > 0)
+            ctx.err << "ranks: " << flagged << " of " << rows.size() << " rows rank an animal with fewer than "
+                    << o.minEncounters << " encounters behind it: those ranks are not stable (--health lists them)\n";
         emit(ctx, out.str());
         return;
     }
@@ -86,8 +107,7 @@ void runRanks(CommandContext& ctx, const RanksOptions& o)
                 << ", ranked among animals resident on " << (table.rankedOn ? formatDate(*table.rankedOn) : "-") << "\n";
     // Data health (docs/methods.md, "Data health"): the encounters behind each
     // rank and a flag below the threshold, added after the original columns.
-    std::map<std::string, int> counts;
-    for (const auto& [id, n] : encounterCounts(loaded.colony, sel.from, sel.to, sel.group)) counts[id] = n;
+    const std::map<std::string, RankFlag> flags = rankFlags(loaded.colony, sel.from, sel.to, sel.group, o.minEncounters);
     out << "animal,rank,score";
     if (o.randomise > 0) out << ",rating_low,rating_high,mean_rank";
     if (elo) out << ",start_rule";
@@ -100,9 +120,11 @@ void runRanks(CommandContext& ctx, const RanksOptions& o)
         if (o.randomise > 0)
             out << ',' << formatNumber(row.low) << ',' << formatNumber(row.high) << ',' << formatNumber(row.meanRank);
         if (elo) out << ruleCell;
-        const int n = counts[row.animal];
-        flagged += n < o.minEncounters;
-        if (o.health) out << ',' << n << ',' << (n < o.minEncounters ? "yes" : "no");
+        const auto it = flags.find(row.animal);
+        const int n = it != flags.end() ? it->second.encounters : 0;
+        const bool few = tooFewEncounters(n, o.minEncounters);
+        flagged += few;
+        if (o.health) out << ',' << n << ',' << (few ? "yes" : "no");
         if (o.health && o.randomise > 0)
             out << ',' << (row.low && row.high ? formatNumber(*row.high - *row.low) : std::string());
         out << '\n';

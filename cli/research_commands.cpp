@@ -8,6 +8,7 @@
 #include "cli/commands.h"
 
 #include "core/store/colony_store.h"
+#include "core/research/data_health.h"
 #include "core/research/export_tables.h"
 #include "core/research/maternal_rank.h"
 #include "core/ranks/rank_method_registry.h"
@@ -206,6 +207,8 @@ struct ExportTablesOptions {
     std::uint64_t seed = 1;
     unsigned threads = 0;
     bool spreadsheet = false;
+    bool health = false;
+    int minEncounters = kDefaultMinEncounters;
 };
 
 CalendarPeriod parseWindow(const std::string& text)
@@ -237,6 +240,7 @@ void runExportTables(CommandContext& ctx, const ExportTablesOptions& o)
     r.threads = o.threads;
     r.gestationDays = species.gestationDays;
     r.maturityYears = species.maturityYears;
+    if (o.health) r.healthMinEncounters = o.minEncounters;
     reportSettings(ctx, "export-tables", species);
     const std::vector<ExportTable> tables = researchTables(loaded.colony, loaded.where, r);
     try {
@@ -305,6 +309,11 @@ void addExportTablesCommand(CLI::App& app, CommandContext& ctx, CommandAction& a
     cmd->add_option("--threads", o->threads, "threads for randomisations (default: every core)");
     cmd->add_flag("--spreadsheet", o->spreadsheet,
                   "start each file with a UTF-8 byte-order mark so spreadsheet programs read names correctly");
+    cmd->add_flag("--health", o->health,
+                  "end ranks_by_period with the data-health columns encounters and few_encounters");
+    cmd->add_option("--min-encounters", o->minEncounters,
+                    "with --health: flag animals with fewer encounters than this behind their rank (default: 10)")
+        ->check(CLI::Range(0, 1000000));
     cmd->callback([&ctx, &action, o] { action = [&ctx, o] { runExportTables(ctx, *o); }; });
 }
 

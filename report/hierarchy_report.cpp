@@ -55,25 +55,29 @@ std::map<std::string, int> eloRanks(const Colony& colony, const ResidenceIndex& 
 }
 
 void observedAndPredicted(ReportLayout& doc, const Colony& colony, const ResidenceIndex& where, const Matrilines& lines,
-                          const HierarchyReportOptions& o, Day at, const InheritancePrediction& p)
+                          const HierarchyReportOptions& o, Day at, const InheritancePrediction& p, const DataHealth& health)
 {
     std::vector<RankRow> rows;
     eloRanks(colony, where, o.group, at, o.elo, o.startRule, &rows);
     ReportTable observed;
     observed.header = {QObject::tr("#"), QObject::tr("Animal"), QObject::tr("Sex"), QObject::tr("Matriline"),
-                       QObject::tr("Elo"), QObject::tr("Enc.")};
-    observed.widths = {0.6, 1.4, 0.6, 1.4, 1, 0.7};
-    // Data health: the encounters behind each rank; too few are tinted (docs/methods.md, "Data health").
-    std::map<std::string, int> counts;
-    for (const auto& [id, n] : encounterCounts(colony, std::nullopt, at, o.group)) counts[id] = n;
+                       QObject::tr("Elo"), QObject::tr("Enc."), QObject::tr("Int.")};
+    observed.widths = {0.6, 1.4, 0.6, 1.4, 1, 0.7, 0.7};
+    // Data health: the encounters behind each rank, too few tinted, and the
+    // randomised-Elo interval width beside them (docs/methods.md, "Data health").
+    std::map<std::string, const AnimalEffort*> effort;
+    for (const AnimalEffort& e : health.animals) effort[e.animal] = &e;
     for (const RankRow& r : rows) {
         const int a = colony.animalIndex(r.animal);
-        const int n = counts[r.animal];
+        const auto flag = effort.find(r.animal);
+        const AnimalEffort* e = flag != effort.end() ? flag->second : nullptr;
+        const int n = e ? e->encounters : 0;
         observed.rows.push_back({QString::number(r.rank), qs(r.animal),
                                  a >= 0 ? qs(toString(colony.animals[static_cast<size_t>(a)].sex)) : QString(),
                                  qs(lineOf(lines, r.animal)), r.score ? QString::number(*r.score, 'f', 0) : QString(),
-                                 QString::number(n)});
-        observed.highlighted.push_back(n < kDefaultMinEncounters);
+                                 QString::number(n),
+                                 e && e->intervalWidth ? QString::number(*e->intervalWidth, 'f', 0) : QString()});
+        observed.highlighted.push_back(tooFewEncounters(n, health.minEncounters));
     }
     ReportTable predicted;
     predicted.header = {QObject::tr("#"), QObject::tr("Female"), QObject::tr("Matriline"), QObject::tr("Obs."),
@@ -91,11 +95,12 @@ void observedAndPredicted(ReportLayout& doc, const Colony& colony, const Residen
                               "rule predicts for the mature females (%2 ascendancy, maturity %3 years); Obs. = her "
                               "observed rank among them, Disc. = pairs whose observed order reverses the "
                               "prediction (tinted). Enc. = encounters behind the rank; tinted on the left: fewer "
-                              "than %5, too few for a stable rank.")
+                              "than %5, too few for a stable rank; Int. = width of its randomised-Elo interval "
+                              "(500 orders).")
                       .arg(qs(formatDate(at)), qs(toString(o.rule)))
                       .arg(o.maturityYears)
                       .arg(qs(toString(o.startRule)))
-                      .arg(kDefaultMinEncounters),
+                      .arg(health.minEncounters),
                   true);
     doc.sideBySide(observed, QObject::tr("Observed order (Elo)"), predicted, QObject::tr("Predicted order (inheritance)"));
 }
@@ -363,12 +368,6 @@ int paintHierarchyReport(QPagedPaintDevice& device, const Colony& colony, const 
                       .arg(decided)
                       .arg(static_cast<int>(es.bouts.size()) - decided)
                       .arg(es.size()));
-    observedAndPredicted(doc, colony, where, lines, o, at, p);
-    doc.caution(qs(kPlanningCaution));
-    discordances(doc, lines, p);
-    rankChanges(doc, colony, where, lines, o, at);
-    foresight(doc, colony, where, o, at);
-    stability(doc, colony, where, lines, o, at);
     HealthOptions ho;
     ho.from = es.firstDay;
     ho.to = at;
@@ -376,7 +375,14 @@ int paintHierarchyReport(QPagedPaintDevice& device, const Colony& colony, const 
     ho.today = at;
     ho.elo = o.elo;
     ho.randomisations = 500;
-    paintHealthSection(doc, dataHealth(colony, where, ho), qs(o.group));
+    const DataHealth health = dataHealth(colony, where, ho);
+    observedAndPredicted(doc, colony, where, lines, o, at, p, health);
+    doc.caution(qs(kPlanningCaution));
+    discordances(doc, lines, p);
+    rankChanges(doc, colony, where, lines, o, at);
+    foresight(doc, colony, where, o, at);
+    stability(doc, colony, where, lines, o, at);
+    paintHealthSection(doc, health, qs(o.group));
     doc.heading(QObject::tr("Methods and references"));
     for (const QString& m : methodsText(o.elo)) doc.paragraph(m, true);
     doc.finish();

@@ -1357,6 +1357,10 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <translation type="unfinished"></translation>
     </message>
     <message>
+        <source>today</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
         <source>Group:</source>
         <translation type="unfinished"></translation>
     </message>
@@ -1420,26 +1424,7 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         </translation>
     </message>
     <message>
-        <source>last record</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>%1 (the window&apos;s last day)</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>%1 (today)</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message numerus="yes">
-        <source>%1 (the file&apos;s last day of records, %n day(s) before today)</source>
-        <translation type="unfinished">
-            <numerusform></numerusform>
-            <numerusform></numerusform>
-        </translation>
-    </message>
-    <message>
-        <source>%1 (the file&apos;s last day of records, today)</source>
+        <source>the data health</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -1753,11 +1738,51 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <source>conformity of %1 ranks with youngest ascendancy, females from %2 years</source>
         <translation type="unfinished"></translation>
     </message>
+    <message>
+        <source>%1 (%2)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 %2</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>, width %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>from %1 to %2</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>up to %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>; and %1 more (hover)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Every animal with encounters %1 has at least %2.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 Too few encounters for a stable rank (under %2 %3); encounters and randomised-Elo interval width%4: %5.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source> (widths being computed)</source>
+        <translation type="unfinished"></translation>
+    </message>
 </context>
 <context>
     <name>hierloom::ui::ImportAssistantDialog</name>
     <message>
         <source>&amp;Date:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>T&amp;ime:</source>
         <translation type="unfinished"></translation>
     </message>
     <message>
@@ -1777,11 +1802,31 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <translation type="unfinished"></translation>
     </message>
     <message>
+        <source>&amp;Outcome:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
         <source>&amp;Behaviour:</source>
         <translation type="unfinished"></translation>
     </message>
     <message>
         <source>&amp;Group column:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>O&amp;bserver:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Note:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Br&amp;owse...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Check</source>
         <translation type="unfinished"></translation>
     </message>
     <message>
@@ -1881,7 +1926,15 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <translation type="unfinished"></translation>
     </message>
     <message>
+        <source>Separator:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
         <source>One group for the &amp;file:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Win codes (actor won):</source>
         <translation type="unfinished"></translation>
     </message>
     <message>
@@ -2032,55 +2085,6 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
     <message>
         <source>Saved the mapping as &quot;%1&quot; in the colony file.</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>&amp;Time:</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>O&amp;utcome:</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Obs&amp;erver:</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Note:</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Browse...</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Save the mapping under this name with the import</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Chec&amp;k</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Se&amp;parator:</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Win &amp;codes (actor won):</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Saved in the same write as the records: a refused import saves nothing.</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Nothing was imported and the mapping was not saved; the colony is unchanged.
-</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Rows read without a problem: %1. Check tests them against the import&apos;s rules without writing; Import writes them.</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -2511,6 +2515,10 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
     <message>
         <source>%1 (%2)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 after a name: fewer than %2 encounters in the window (rank not stable)</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -3153,6 +3161,37 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
 </context>
 <context>
+    <name>hierloom::ui::RankFlagWatch</name>
+    <message>
+        <source>Elo interval width: being computed</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Elo interval width %1 points</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Elo interval width: not rated</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 Too few encounters for a stable rank: %2 in the window (threshold %3); %4</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Encounters in the window: %1 (threshold %2); %3</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 after a name: fewer than %2 encounters in the window, rank not stable (flagged: %3); hover a name for its encounters and randomised-Elo interval width%4.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source> (widths being computed)</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
     <name>hierloom::ui::RankTimelineView</name>
     <message>
         <source>Birth</source>
@@ -3312,6 +3351,26 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
     <message>
         <source>Rank change: both</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>from %1 to %2</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>up to %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 On %2, %3 of %4 females shown have fewer than %5 encounters %6: ringed, their ranks are not stable; hover the point at that date for its encounters and randomised-Elo interval width%7.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source> (widths being computed)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 Too few encounters (at the date)</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -3538,6 +3597,14 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
     <message>
         <source>Export &amp;Research Tables...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Data health in the rank table (encounters, too few for a stable rank)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Ends ranks_by_period with encounters and few_encounters (fewer than %1 encounters behind the rank), as export-tables --health</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -4082,6 +4149,10 @@ animal</source>
     </message>
     <message>
         <source>matriline of %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>the support figures</source>
         <translation type="unfinished"></translation>
     </message>
 </context>

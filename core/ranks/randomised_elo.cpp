@@ -58,7 +58,8 @@ struct Outcome {
 } // namespace
 
 std::vector<RandomisedEloRow> randomisedElo(int n, const std::vector<Bout>& bouts, const EloSettings& settings,
-                                            int iterations, std::uint64_t seed, unsigned threads)
+                                            int iterations, std::uint64_t seed, unsigned threads,
+                                            const std::atomic<bool>* cancel)
 {
     detail::checkBoutIndices(n, bouts);
     if (iterations < 1) return {};
@@ -77,6 +78,7 @@ std::vector<RandomisedEloRow> randomisedElo(int n, const std::vector<Bout>& bout
 
     const std::vector<Outcome> outcomes = runRandomisations<Outcome>(
         iterations, seed, threads, [&](RandomEngine& engine, int) {
+            if (cancel && cancel->load(std::memory_order_relaxed)) return Outcome{};
             std::vector<Bout> order = counted;
             shuffleBouts(order, engine);
             Outcome out;
@@ -89,6 +91,7 @@ std::vector<RandomisedEloRow> randomisedElo(int n, const std::vector<Bout>& bout
             return out;
         });
 
+    if (cancel && cancel->load()) return {};
     // Sums run in iteration order, so they do not depend on the thread count.
     std::vector<RandomisedEloRow> rows(size);
     std::vector<double> values(static_cast<size_t>(iterations));

@@ -3,6 +3,7 @@
 #include "core/ranks/bout.h"
 #include "core/ranks/elo_rating.h"
 
+#include <atomic>
 #include <cstdint>
 #include <vector>
 
@@ -24,8 +25,10 @@ struct RandomisedEloRow {
 /// the same for any thread count); per animal the mean final rating, its
 /// 2.5 % and 97.5 % quantiles (Hyndman & Fan 1996 type 7: x[h] interpolated
 /// linearly at h = (N-1)p over the sorted values) and the mean ordinal rank
-/// (ordinalRanks among rated animals). Empty when iterations < 1.
+/// (ordinalRanks among rated animals). Empty when iterations < 1, or when
+/// `cancel` is set before the end (the remaining orders are skipped).
 std::vector<RandomisedEloRow> randomisedElo(int n, const std::vector<Bout>& bouts, const EloSettings& settings,
-                                            int iterations, std::uint64_t seed, unsigned threads);
+                                            int iterations, std::uint64_t seed, unsigned threads,
+                                            const std::atomic<bool>* cancel = nullptr);
 
 } // namespace hierloom::core

@@ -94,7 +94,64 @@ std::vector<std::pair<std::string, int>> encounterCounts(const Colony& colony, s
     return {counts.begin(), counts.end()};
 }
 
-DataHealth dataHealth(const Colony& colony, const ResidenceIndex& where, const HealthOptions& o)
+std::map<std::string, RankFlag> rankFlags(const Colony& colony, std::optional<Day> from, std::optional<Day> to,
+                                          const std::string& group, int minEncounters)
+{
+    std::map<std::string, RankFlag> flags;
+    for (const auto& [id, n] : encounterCounts(colony, from, to, group))
+        flags[id] = RankFlag{n, tooFewEncounters(n, minEncounters), std::nullopt};
+    return flags;
+}
+
+std::vector<std::map<std::string, RankFlag>> periodRankFlags(const Colony& colony,
+                                                             const std::vector<CalendarPeriod>& periods,
+                                                             std::optional<Day> from, const std::string& group,
+                                                             int minEncounters, bool cumulative)
+{
+    std::vector<std::map<std::string, RankFlag>> out(periods.size());
+    if (periods.empty()) return out;
+    const Day last = periods.back().end;
+    std::vector<const Encounter*> sorted;
+    for (const Encounter& e : colony.encounters)
+        if (inWindow(e, from, last, group)) sorted.push_back(&e);
+    std::stable_sort(sorted.begin(), sorted.end(),
+                     [](const Encounter* x, const Encounter* y) { return x->date < y->date; });
+    std::map<std::string, int> counts;
+    size_t next = 0;
+    for (size_t k = 0; k < periods.size(); ++k) {
+        const CalendarPeriod& p = periods[k];
+        if (!cumulative) {
+            counts.clear();
+            while (next < sorted.size() && sorted[next]->date < p.start) ++next;
+        }
+        for (; next < sorted.size() && sorted[next]->date <= p.end; ++next) {
+            ++counts[sorted[next]->winner];
+            ++counts[sorted[next]->loser];
+        }
+        for (const auto& [id, n] : counts) out[k][id] = RankFlag{n, tooFewEncounters(n, minEncounters), std::nullopt};
+    }
+    return out;
+}
+
+std::map<std::string, double> eloIntervalWidths(const Colony& colony, const ResidenceIndex& where,
+                                                const HealthOptions& o, const std::atomic<bool>* cancel)
+{
+    std::map<std::string, double> widths;
+    if (o.randomisations <= 0) return widths;
+    SelectionOptions sel;
+    sel.from = o.from;
+    sel.to = o.to.value_or(o.today);
+    sel.group = o.group;
+    sel.draws = o.elo.draws;
+    const EncounterSelection s = selectEncounters(colony, where, sel);
+    const std::vector<RandomisedEloRow> rows = randomisedElo(s.size(), s.bouts, o.elo, o.randomisations, o.seed, o.threads, cancel);
+    for (size_t i = 0; i < rows.size(); ++i)
+        if (rows[i].rated) widths[s.ids[i]] = rows[i].high - rows[i].low;
+    return widths;
+}
+
+DataHealth dataHealth(const Colony& colony, const ResidenceIndex& where, const HealthOptions& o,
+                      const std::atomic<bool>* cancel)
 {
     DataHealth h;
     h.reference = referenceDay(colony, o, h.referenceKind);
@@ -147,24 +204,14 @@ DataHealth dataHealth(const Colony& colony, const ResidenceIndex& where, const H
     }
 
     // Randomised-Elo interval widths over the window (docs/methods.md, "Randomised Elo").
-    std::map<std::string, double> widths;
-    if (o.randomisations > 0) {
-        SelectionOptions sel;
-        sel.from = o.from;
-        sel.to = to;
-        sel.group = o.group;
-        sel.draws = o.elo.draws;
-        const EncounterSelection s = selectEncounters(colony, where, sel);
-        const std::vector<RandomisedEloRow> rows =
-            randomisedElo(s.size(), s.bouts, o.elo, o.randomisations, o.seed, o.threads);
-        for (size_t i = 0; i < rows.size(); ++i)
-            if (rows[i].rated) widths[s.ids[i]] = rows[i].high - rows[i].low;
-    }
+    HealthOptions widthOptions = o;
+    widthOptions.to = to;
+    const std::map<std::string, double> widths = eloIntervalWidths(colony, where, widthOptions, cancel);
     for (auto& [id, effort] : animals) {
         effort.animal = id;
         effort.daysSeen = static_cast<int>(animalDays[id].size());
         if (auto it = lastSeen.find(id); it != lastSeen.end()) effort.lastSeen = it->second;
-        effort.fewEncounters = effort.encounters < o.minEncounters;
+        effort.fewEncounters = tooFewEncounters(effort.encounters, o.minEncounters);
         if (auto it = widths.find(id); it != widths.end()) effort.intervalWidth = it->second;
         h.animals.push_back(effort);
     }

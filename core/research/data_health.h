@@ -1,10 +1,13 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
+#include "core/base/calendar_period.h"
 #include "core/base/colony.h"
 #include "core/base/residence_index.h"
 #include "core/ranks/elo_rating.h"
 
+#include <atomic>
 #include <cstdint>
+#include <map>
 #include <optional>
 #include <string>
 #include <vector>
@@ -104,7 +107,46 @@ struct DataHealth {
 };
 
 /// Data health of a group and window (docs/methods.md, "Data health").
-DataHealth dataHealth(const Colony& colony, const ResidenceIndex& where, const HealthOptions& options);
+/// `cancel` (a view's worker): the interval widths stop early and are left empty.
+DataHealth dataHealth(const Colony& colony, const ResidenceIndex& where, const HealthOptions& options,
+                      const std::atomic<bool>* cancel = nullptr);
+
+/// The one rule of the flag (docs/methods.md, "Data health"): an animal with
+/// fewer than `minEncounters` encounters in the window has a rank resting on
+/// too few data. Every rank table and view asks this function.
+inline bool tooFewEncounters(int encounters, int minEncounters) { return encounters < minEncounters; }
+
+/// The flag beside one animal's rank.
+struct RankFlag {
+    int encounters = 0;                  ///< encounters in the window and group (encounterCounts)
+    bool fewEncounters = false;          ///< tooFewEncounters(encounters, threshold)
+    std::optional<double> intervalWidth; ///< randomised Elo, when computed and the animal is rated
+};
+
+/// The flags of every animal with an encounter in the window and group, in
+/// id order, without interval widths (cheap: one pass over the encounters).
+std::map<std::string, RankFlag> rankFlags(const Colony& colony, std::optional<Day> from, std::optional<Day> to,
+                                          const std::string& group, int minEncounters);
+
+/// The flags of a long rank table's periods (`ranks --every`), one map per
+/// period in the order given (periods in calendar order, as
+/// periodsCovering makes them). `cumulative` (Elo, which runs on over the
+/// window and is read at each period's last day): the encounters from `from`
+/// to the period's last day; otherwise (David's score, I&SI: each period
+/// alone) the period's own encounters. One pass over the encounters.
+std::vector<std::map<std::string, RankFlag>> periodRankFlags(const Colony& colony,
+                                                             const std::vector<CalendarPeriod>& periods,
+                                                             std::optional<Day> from, const std::string& group,
+                                                             int minEncounters, bool cumulative);
+
+/// Randomised-Elo interval widths (97.5 % minus 2.5 % quantile of the final
+/// rating) of every rated animal of the window `options.from`..`to` (to
+/// defaults to `today`) and group, with `options.randomisations` orders,
+/// `options.seed` and `options.elo` (draws policy included). Empty with no
+/// randomisations or when `cancel` was set (a view's worker gives up).
+std::map<std::string, double> eloIntervalWidths(const Colony& colony, const ResidenceIndex& where,
+                                                const HealthOptions& options,
+                                                const std::atomic<bool>* cancel = nullptr);
 
 /// Counted encounters per animal id in a window and group (both animals of
 /// an encounter count it; ignored draws are not counted when draws are ignored).

@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "core/research/export_tables.h"
 #include "core/research/support_tables.h"
+#include "core/research/data_health.h"
 #include "core/ranks/parallel_randomisation.h"
 
 #include "core/research/dynamics_tables.h"
@@ -17,6 +18,7 @@
 #include <charconv>
 #include <cmath>
 #include <filesystem>
+#include <map>
 #include <fstream>
 #include <sstream>
 #include <stdexcept>
@@ -223,6 +225,36 @@ std::vector<CalendarPeriod> selectionPeriods(const Colony& colony, const Residen
     return periodsCovering(*from, *to, every);
 }
 
+void appendHealthColumns(ExportTable& t, const Colony& colony, const SelectionOptions& selection, RankMethod method,
+                         const std::vector<CalendarPeriod>& periods, int minEncounters)
+{
+    const bool cumulative = rankMethodInfo(method).takesStartRule; // Elo runs on over the selection
+    // Regular periods follow each other: one pass; custom windows may overlap: one count each.
+    bool ordered = true;
+    for (size_t k = 1; k < periods.size(); ++k) ordered = ordered && periods[k - 1].end < periods[k].start;
+    std::vector<std::map<std::string, RankFlag>> flags;
+    if (ordered) {
+        flags = periodRankFlags(colony, periods, selection.from, selection.group, minEncounters, cumulative);
+    } else {
+        for (const CalendarPeriod& p : periods)
+            flags.push_back(rankFlags(colony, cumulative ? selection.from : std::optional<Day>(p.start), p.end,
+                                      selection.group, minEncounters));
+    }
+    std::map<std::pair<std::string, std::string>, size_t> index;
+    for (size_t k = 0; k < periods.size(); ++k) index.emplace(std::pair{formatDate(periods[k].start), formatDate(periods[k].end)}, k);
+    t.header.push_back("encounters");
+    t.header.push_back("few_encounters");
+    for (std::vector<std::string>& row : t.rows) {
+        int n = 0;
+        if (const auto k = index.find({row[0], row[1]}); k != index.end()) {
+            const auto& m = flags[k->second];
+            if (const auto it = m.find(row[2]); it != m.end()) n = it->second.encounters;
+        }
+        row.push_back(std::to_string(n));
+        row.push_back(tooFewEncounters(n, minEncounters) ? "yes" : "no");
+    }
+}
+
 std::vector<ExportTable> researchTables(const Colony& colony, const ResidenceIndex& where,
                                         const ResearchExportOptions& o)
 {
@@ -242,6 +274,8 @@ std::vector<ExportTable> researchTables(const Colony& colony, const ResidenceInd
         if (from && to && *from <= *to) periods.push_back({*from, *to});
         out.push_back(rankTableByWindows(colony, where, o.selection, o.ranks, periods));
     }
+    if (o.healthMinEncounters)
+        appendHealthColumns(out.back(), colony, o.selection, o.ranks.method, periods, *o.healthMinEncounters);
     out.push_back(winMatrixTable(colony, where, o.selection, o.ranks.method, o.ranks.elo));
     out.push_back(metricsByPeriodTable(colony, where, o.selection, periods, o.randomisations, o.seed, o.threads));
     MaternalRankOptions m;

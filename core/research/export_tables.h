@@ -89,7 +89,17 @@ struct ResearchExportOptions {
     int maturityYears = kDefaultMaturityYears;
     /// Sibling rule of the foresight table's rule and rule-informed Elo models.
     SiblingRule foresightRule = SiblingRule::Youngest;
+    /// With a threshold, ranks_by_period ends with `encounters,few_encounters`
+    /// (docs/methods.md, "Data health"); empty: the table keeps its columns.
+    std::optional<int> healthMinEncounters;
 };
+
+/// Appends `encounters,few_encounters` to a ranks_by_period table: the
+/// encounters each row's score rests on (Elo: from the selection's start to the
+/// period's last day; the other methods: the period alone), flagged below
+/// `minEncounters` (core/research/data_health.h).
+void appendHealthColumns(ExportTable& ranks, const Colony& colony, const SelectionOptions& selection,
+                         RankMethod method, const std::vector<CalendarPeriod>& periods, int minEncounters);
 
 /// Every research table: ranks by period, win matrix, metrics by period,
 /// maternal ranks, sex-ratio figures, rank thirds, discordance by month, rank

@@ -4,6 +4,8 @@
 
 #include <gtest/gtest.h>
 
+#include <algorithm>
+
 using namespace hierloom::test;
 
 namespace {
@@ -28,6 +30,33 @@ std::string handColony(const CliTempDir& dir)
                                 encounters});
     EXPECT_EQ(r.status, 0) << r.err;
     return colony;
+}
+
+/// The hand colony with April added: P beat R, R beat P. Counted by hand:
+/// March P 3, Q 4, R 3; April P 2, R 2, Q none.
+std::string twoMonthColony(const CliTempDir& dir)
+{
+    const std::string colony = handColony(dir);
+    const std::string april = dir.write("april.csv", "date,time,winner,loser,observer\n"
+                                                     "2024-04-05,09:00,P,R,ann\n"
+                                                     "2024-04-06,09:00,R,P,ann\n");
+    const CliResult r = runCli({"import", colony, "--encounters", april});
+    EXPECT_EQ(r.status, 0) << r.err;
+    return colony;
+}
+
+/// "period_start animal encounters few_encounters" of a long rank table whose last two columns are the flag, sorted.
+std::vector<std::string> flagCells(const std::vector<std::string>& rows, size_t animalColumn = 2)
+{
+    std::vector<std::string> out;
+    for (size_t i = 1; i < rows.size(); ++i) {
+        std::vector<std::string> f;
+        std::stringstream s(rows[i]);
+        for (std::string x; std::getline(s, x, ',');) f.push_back(x);
+        out.push_back(f[0] + ' ' + f[animalColumn] + ' ' + f[f.size() - 2] + ' ' + f.back());
+    }
+    std::sort(out.begin(), out.end());
+    return out;
 }
 
 } // namespace
@@ -105,4 +134,61 @@ TEST(CliHealth, RanksCarryTheFlagAndTheIntervalWidth)
         ASSERT_EQ(f.size(), 10u); // start_rule sits before the health columns
         EXPECT_NEAR(std::stod(f[9]), std::stod(f[4]) - std::stod(f[3]), 1e-9) << rows[i];
     }
+}
+
+TEST(CliHealth, RanksEveryPeriodCarryTheFlag)
+{
+    CliTempDir dir;
+    const std::string colony = twoMonthColony(dir);
+    const std::vector<std::string> window{"ranks", colony, "--every", "month", "--from", "2024-03-01",
+                                          "--to", "2024-04-30", "--min-encounters", "4"};
+    // Elo runs on over the window: April's rows rest on March's encounters too (P 3+2, Q 4, R 3+2).
+    std::vector<std::string> words = window;
+    words.push_back("--health");
+    CliResult r = runCli(words);
+    ASSERT_EQ(r.status, 0) << r.err;
+    auto rows = lines(r.out);
+    EXPECT_EQ(rows[0], "period_start,period_end,animal,rank,score,start_rule,encounters,few_encounters");
+    EXPECT_EQ(flagCells(rows), (std::vector<std::string>{"2024-03-01 P 3 yes", "2024-03-01 Q 4 no", "2024-03-01 R 3 yes",
+                                                          "2024-04-01 P 5 no", "2024-04-01 Q 4 no", "2024-04-01 R 5 no"}));
+    EXPECT_NE(r.err.find("2 of 6 rows rank an animal with fewer than 4 encounters"), std::string::npos) << r.err;
+    // David's score uses each month alone: April has P and R with 2 each.
+    words.insert(words.end(), {"--method", "ds"});
+    r = runCli(words);
+    ASSERT_EQ(r.status, 0) << r.err;
+    rows = lines(r.out);
+    EXPECT_EQ(rows[0], "period_start,period_end,animal,rank,score,encounters,few_encounters");
+    EXPECT_EQ(flagCells(rows), (std::vector<std::string>{"2024-03-01 P 3 yes", "2024-03-01 Q 4 no", "2024-03-01 R 3 yes",
+                                                          "2024-04-01 P 2 yes", "2024-04-01 R 2 yes"}));
+    // Without --health the table keeps its columns.
+    r = runCli(window);
+    ASSERT_EQ(r.status, 0) << r.err;
+    EXPECT_EQ(lines(r.out)[0], "period_start,period_end,animal,rank,score,start_rule");
+    EXPECT_EQ(lines(r.out).size(), 7u);
+}
+
+TEST(CliHealth, ExportedRankTableEndsWithTheFlagOnRequest)
+{
+    CliTempDir dir;
+    const std::string colony = twoMonthColony(dir);
+    const std::string header = "period_start,period_end,animal,rank,score,matriline,age_years,sex,group,start_rule";
+    // Monthly, Elo: the same cells as `ranks --every month --health` (counted by hand above).
+    CliResult r = runCli({"export-tables", colony, "--dir", dir.file("m"), "--every", "month", "--from", "2024-03-01",
+                          "--to", "2024-04-30", "--health", "--min-encounters", "4"});
+    ASSERT_EQ(r.status, 0) << r.err;
+    auto rows = lines(CliTempDir::read(dir.file("m/ranks_by_period.csv")));
+    EXPECT_EQ(rows[0], header + ",encounters,few_encounters");
+    EXPECT_EQ(flagCells(rows), (std::vector<std::string>{"2024-03-01 P 3 yes", "2024-03-01 Q 4 no", "2024-03-01 R 3 yes",
+                                                          "2024-04-01 P 5 no", "2024-04-01 Q 4 no", "2024-04-01 R 5 no"}));
+    // Overlapping custom windows, David's score (each window alone): March-April P 5, Q 4, R 5; April P 2, R 2.
+    r = runCli({"export-tables", colony, "--dir", dir.file("w"), "--method", "ds", "--window", "2024-03-01,2024-04-30",
+                "--window", "2024-04-01,2024-04-30", "--health", "--min-encounters", "4"});
+    ASSERT_EQ(r.status, 0) << r.err;
+    rows = lines(CliTempDir::read(dir.file("w/ranks_by_period.csv")));
+    EXPECT_EQ(flagCells(rows), (std::vector<std::string>{"2024-03-01 P 5 no", "2024-03-01 Q 4 no", "2024-03-01 R 5 no",
+                                                          "2024-04-01 P 2 yes", "2024-04-01 R 2 yes"}));
+    // Without --health the file keeps its columns.
+    r = runCli({"export-tables", colony, "--dir", dir.file("n"), "--every", "month"});
+    ASSERT_EQ(r.status, 0) << r.err;
+    EXPECT_EQ(lines(CliTempDir::read(dir.file("n/ranks_by_period.csv")))[0], header);
 }

@@ -4,6 +4,7 @@
 #include "tests/ui/entry_test_support.h"
 
 #include "report/health_section.h"
+#include "ui/document/compute_runner.h"
 #include "ui/planning/health_view.h"
 
 #include <QLabel>
@@ -90,6 +91,7 @@ TEST(HealthView, EffortUnseenFlagsAndAgreementForATypedWindow)
     QApplication::processEvents();
     QTest::keyClicks(focusIn(&view), QStringLiteral("2021-05-31"));
     QTest::keyClick(focusIn(&view), Qt::Key_Return);
+    view.runner()->wait(); // computed on a worker thread
     EXPECT_EQ(view.health().reference, *core::parseDate("2021-05-31"));
 
     // Counted by hand: F1 3 encounters on 2 days, F2 4 on 1, D1 3 on 2, D2 none; all below 10.
@@ -121,6 +123,7 @@ TEST(HealthView, EffortUnseenFlagsAndAgreementForATypedWindow)
     days->setFocus();
     days->selectAll();
     QTest::keyClicks(focusIn(&view), QStringLiteral("30"));
+    view.runner()->wait();
     EXPECT_EQ(view.unseenList()->topLevelItemCount(), 1);
 
     // Observers and agreement: AB 3 encounters on 2 days, CD 2 on 1; 2 matched, 1 agreeing,

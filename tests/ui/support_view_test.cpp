@@ -3,6 +3,8 @@
 // with the matrix in rank order and its matriline strips.
 #include "ui/analysis/support_view.h"
 
+#include "ui/analysis/rank_flag_watch.h"
+
 #include "core/pedigree/matriline.h"
 #include "core/research/support_tables.h"
 #include "plot_test_support.h"
@@ -22,6 +24,7 @@ TEST(SupportView, TablesAreTheCoreTablesAndTheMatrixCarriesMatrilineStrips)
     DemoDocument demo;
     ui::SupportView view(demo.document());
     view.setPermutations(0);
+    hierloom::test::finish(view.runner()); // computed on a worker thread
     const core::SupportAnalysis& a = view.analysis();
     ASSERT_GT(a.acts, 0);
     // Identity with the core's table (what `support --table pairs` prints).
@@ -34,7 +37,9 @@ TEST(SupportView, TablesAreTheCoreTablesAndTheMatrixCarriesMatrilineStrips)
     ASSERT_EQ(view.matrixTable()->rowCount(), n + 1);
     const ui::MatrilinePalette palette(core::Matrilines(demo.document()->colony()));
     for (int i = 0; i < n; ++i) {
-        EXPECT_EQ(view.matrixTable()->verticalHeaderItem(i + 1)->text(), ui::toQString(a.order[static_cast<size_t>(i)]));
+        // The rank-ordered names, a flagged one with the data-health mark (rank_flag_views_test.cpp).
+        const std::string& id = a.order[static_cast<size_t>(i)];
+        EXPECT_EQ(view.matrixTable()->verticalHeaderItem(i + 1)->text(), view.flags()->marked(ui::toQString(id), id));
         EXPECT_EQ(view.matrixTable()->item(i + 1, 0)->background().color(),
                   palette.colour(a.matriarchs[static_cast<size_t>(i)]));
         EXPECT_EQ(view.matrixTable()->item(0, i + 1)->background().color(),

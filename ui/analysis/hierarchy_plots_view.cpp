@@ -1,6 +1,8 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "ui/analysis/hierarchy_plots_view.h"
 
+#include "ui/analysis/rank_flag_watch.h"
+
 #include "ui/document/colony_document.h"
 #include "ui/document/document_settings.h"
 #include "ui/widgets/help_button.h"
@@ -11,6 +13,8 @@
 #include "ui/widgets/progress_strip.h"
 #include "ui/document/qt_convert.h"
 #include "ui/document/document_queries.h"
+
+#include "core/pedigree/inheritance_prediction.h"
 
 #include <QComboBox>
 #include <QHBoxLayout>
@@ -37,8 +41,12 @@ HierarchyPlotsView::HierarchyPlotsView(ColonyDocument* document, QWidget* parent
       runner_(new ComputeRunner(this)),
       progress_(new ProgressStrip(runner_, tr("the monthly hierarchy figures"), this)),
       plot_(new QCustomPlot(this)),
-      group_(new QComboBox(this))
+      group_(new QComboBox(this)),
+      flagLine_(new QLabel(this)),
+      flags_(new RankFlagWatch(document, this))
 {
+    flagLine_->setObjectName(QStringLiteral("hierarchyFlagLine"));
+    flagLine_->setWordWrap(true);
     auto* controls = new QHBoxLayout;
     controls->addWidget(new QLabel(tr("Month by month over the whole record of"), this));
     group_->setObjectName(QStringLiteral("hierarchyGroup"));
@@ -73,6 +81,7 @@ HierarchyPlotsView::HierarchyPlotsView(ColonyDocument* document, QWidget* parent
     auto* layout = new QVBoxLayout(this);
     layout->addLayout(controls);
     layout->addWidget(plot_, 1);
+    layout->addWidget(flagLine_);
 
     // Five stacked panels sharing the date axis; a legend row on top.
     plot_->plotLayout()->clear();
@@ -131,6 +140,7 @@ HierarchyPlotsView::HierarchyPlotsView(ColonyDocument* document, QWidget* parent
     plot_->setInteractions(QCP::iRangeDrag | QCP::iRangeZoom);
 
     connect(progress_, &ProgressStrip::retry, this, &HierarchyPlotsView::recompute);
+    connect(flags_, &RankFlagWatch::updated, this, &HierarchyPlotsView::showFlags);
     // Recomputed only while on screen; a hidden tab catches up when shown.
     auto* refresh = new VisibleRefresh(this, [this] { recompute(); });
     connect(document_, &ColonyDocument::changed, this, &HierarchyPlotsView::refillGroups);
@@ -174,6 +184,7 @@ void HierarchyPlotsView::recompute()
 {
     if (!document_->isOpen()) {
         runner_->cancel();
+        flags_->clear();
         adopt({});
         return;
     }
@@ -237,6 +248,51 @@ void HierarchyPlotsView::adopt(core::HierarchySeries series)
         if (!keys.isEmpty()) plottable->keyAxis()->setRange(keys.front() - 20 * secondsPerDay, keys.back() + 20 * secondsPerDay);
     }
     plot_->replot(QCustomPlot::rpQueuedReplot);
+    // The flags of the window the other views open with: the default window ending with the last month.
+    flagFrom_ = flagTo_ = std::nullopt;
+    if (series_.months.empty() || !document_->isOpen()) {
+        flags_->clear();
+        return;
+    }
+    flagTo_ = std::min(series_.months.back().period.end,
+                       core::lastEncounterDay(document_->colony()).value_or(series_.months.back().period.end));
+    flagFrom_ = core::defaultWindowStart(documentAnalysisSettings(document_), flagTo_);
+    flags_->request(flagFrom_, flagTo_, toStdString(group_->currentData().toString()));
+}
+
+void HierarchyPlotsView::showFlags()
+{
+    if (!flagTo_) {
+        flagLine_->clear();
+        flagLine_->setToolTip(QString());
+        return;
+    }
+    // The flagged animals of the window, each with its count and interval width.
+    QStringList named, tips;
+    for (const core::Animal& a : document_->colony().animals) {
+        if (!flags_->flagged(a.id) || flags_->encounters(a.id) == 0) continue;
+        const QString name = a.name.empty() ? toQString(a.id) : tr("%1 (%2)").arg(toQString(a.name), toQString(a.id));
+        const std::optional<double> width = flags_->intervalWidth(a.id);
+        named << tr("%1 %2").arg(name).arg(flags_->encounters(a.id)) +
+                     (width ? tr(", width %1").arg(*width, 0, 'f', 0) : QString());
+        tips << name + QStringLiteral(": ") + flags_->describe(a.id);
+    }
+    const QString window = flagFrom_ ? tr("from %1 to %2").arg(formatDay(*flagFrom_), formatDay(*flagTo_))
+                                     : tr("up to %1").arg(formatDay(*flagTo_));
+    constexpr int shown = 8;
+    QString list = QStringList(named.mid(0, shown)).join(QStringLiteral("; "));
+    if (named.size() > shown) list += tr("; and %1 more (hover)").arg(named.size() - shown);
+    flagLine_->setText(
+        named.isEmpty()
+            ? tr("Every animal with encounters %1 has at least %2.").arg(window).arg(flags_->threshold())
+            : tr("%1 Too few encounters for a stable rank (under %2 %3); encounters and randomised-Elo interval "
+                 "width%4: %5.")
+                  .arg(RankFlagWatch::mark())
+                  .arg(flags_->threshold())
+                  .arg(window)
+                  .arg(flags_->widthsReady() ? QString() : tr(" (widths being computed)"))
+                  .arg(list));
+    flagLine_->setToolTip(tips.join(QLatin1Char('\n')));
 }
 
 } // namespace hierloom::ui

@@ -9,12 +9,14 @@
 class QCPAbstractPlottable;
 class QComboBox;
 class QCustomPlot;
+class QLabel;
 
 namespace hierloom::ui {
 
 class ColonyDocument;
 class ComputeRunner;
 class ProgressStrip;
+class RankFlagWatch;
 
 /// The hierarchy month by month over the whole record, of every group or
 /// of one, five panels sharing one date axis: h', steepness, t_tri, conformity with the inheritance
@@ -38,6 +40,11 @@ public:
     /// Chooses the group ("" for all groups); unknown names are ignored.
     void setGroup(const QString& group);
     QComboBox* groupBox() const { return group_; }
+    /// The data-health flags (docs/methods.md, "Data health") of the analysis
+    /// settings' default window ending with the last month shown.
+    RankFlagWatch* flags() const { return flags_; }
+    /// The line under the panels naming each flagged animal.
+    QLabel* flagLine() const { return flagLine_; }
 
 public slots:
     void recompute();
@@ -45,12 +52,16 @@ public slots:
 private:
     void adopt(core::HierarchySeries series);
     void refillGroups();
+    void showFlags();
 
     ColonyDocument* document_;
     ComputeRunner* runner_;
     ProgressStrip* progress_;
     QCustomPlot* plot_;
     QComboBox* group_;
+    QLabel* flagLine_;
+    RankFlagWatch* flags_;
+    std::optional<core::Day> flagFrom_, flagTo_;
     core::HierarchySeries series_;
     std::array<QCPAbstractPlottable*, PanelCount> plottables_{};
 };

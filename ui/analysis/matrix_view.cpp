@@ -1,6 +1,8 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "ui/analysis/matrix_view.h"
 
+#include "ui/analysis/rank_flag_watch.h"
+
 #include "core/ranks/encounter_selection.h"
 #include "core/ranks/rank_method_registry.h"
 #include "core/pedigree/inheritance_prediction.h"
@@ -78,8 +80,12 @@ MatrixView::MatrixView(ColonyDocument* document, QWidget* parent)
       groupBox_(new QComboBox(this)),
       fromEdit_(new QDateEdit(this)),
       toEdit_(new QDateEdit(this)),
-      summary_(new QLabel(this))
+      summary_(new QLabel(this)),
+      flagLegend_(new QLabel(this)),
+      flags_(new RankFlagWatch(document, this))
 {
+    flagLegend_->setObjectName(QStringLiteral("matrixFlagLegend"));
+    flagLegend_->setWordWrap(true);
     for (const core::RankMethodInfo& m : core::rankMethods())
         methodBox_->addItem(QCoreApplication::translate("hierloom::core::RankMethod", m.displayName),
                             QString::fromLatin1(m.code));
@@ -90,6 +96,7 @@ MatrixView::MatrixView(ColonyDocument* document, QWidget* parent)
     methodBox_->setToolTip(tr("Order of rows and columns; the command line's `matrix` uses the same default (%1)")
                                .arg(QString::fromLatin1(core::rankMethodInfo(core::kDefaultMatrixOrder).code)));
     groupBox_->addItem(tr("All groups"), QString());
+    groupBox_->setObjectName(QStringLiteral("matrixGroup"));
     for (QDateEdit* e : {fromEdit_, toEdit_}) {
         e->setCalendarPopup(true);
         e->setDisplayFormat(QStringLiteral("yyyy-MM-dd"));
@@ -141,6 +148,11 @@ MatrixView::MatrixView(ColonyDocument* document, QWidget* parent)
         return caption::join({caption::group(group_), caption::window(toDay(fromEdit_->date()), toDay(toEdit_->date())),
                               tr("ordered by %1").arg(order), tr("%1 animals").arg(matrix_.n),
                               tr("crosses: wins against the order"),
+                              flags_->flaggedCount() > 0
+                                  ? tr("%1 after a name: fewer than %2 encounters in the window (rank not stable)")
+                                        .arg(RankFlagWatch::mark())
+                                        .arg(flags_->threshold())
+                                  : QString(),
                               std::max(rowStep_, columnStep_) > 1
                                   ? tr("one name (and total) in %1 shown where rows are narrow")
                                         .arg(std::max(rowStep_, columnStep_))
@@ -152,6 +164,7 @@ MatrixView::MatrixView(ColonyDocument* document, QWidget* parent)
     layout->addLayout(controls);
     layout->addWidget(plot_, 1);
     layout->addWidget(summary_);
+    layout->addWidget(flagLegend_);
 
     plot_->yAxis->setRangeReversed(true);
     plot_->xAxis2->setVisible(true);
@@ -188,6 +201,11 @@ MatrixView::MatrixView(ColonyDocument* document, QWidget* parent)
     connect(fromEdit_, &QDateEdit::editingFinished, this, [this] { setWindow(toDay(fromEdit_->date()), to_); });
     connect(toEdit_, &QDateEdit::editingFinished, this, [this] { setWindow(from_, toDay(toEdit_->date())); });
     connect(progress_, &ProgressStrip::retry, this, &MatrixView::recompute);
+    // The flag's counts come at once, the interval widths later: names and legend follow.
+    connect(flags_, &RankFlagWatch::updated, this, [this] {
+        flagLegend_->setText(matrix_.n > 0 ? flags_->legend() : QString());
+        plot_->replot(QCustomPlot::rpQueuedReplot);
+    });
     connect(plot_, &QCustomPlot::mouseMove, this, &MatrixView::hover);
     // Labels follow zoom and size: thinned before each replot, and once more
     // when the layout that replot made changes the room between rows.
@@ -245,6 +263,7 @@ void MatrixView::recompute()
 {
     if (!document_->isOpen()) {
         runner_->cancel();
+        flags_->clear();
         adopt({});
         return;
     }
@@ -257,6 +276,7 @@ void MatrixView::recompute()
     options.draws = settings.elo.draws;
     const core::EloSettings elo = settings.elo;
     const std::optional<core::RankMethod> method = method_;
+    flags_->request(options.from, options.to, options.group);
     const ColonyDocument::Snapshot snapshot = document_->snapshot();
     auto colony = snapshot.colony;
     auto where = snapshot.residences;
@@ -324,6 +344,7 @@ void MatrixView::rebuildPlot()
     const int n = matrix_.n;
     boundaries_ = 0;
     marks_ = nullptr;
+    flagLegend_->setText(n > 0 ? flags_->legend() : QString());
     if (n == 0) {
         summary_->setText(tr("No encounters in this window."));
         plot_->replot(QCustomPlot::rpQueuedReplot);
@@ -454,9 +475,14 @@ QStringList MatrixView::order() const
 void MatrixView::relabel()
 {
     const int n = matrix_.n;
-    if (n == 0) return;
+    if (n == 0) {
+        // An empty window: no names or totals left over from the last one.
+        for (QCPAxis* a : {plot_->xAxis, plot_->xAxis2, plot_->yAxis, plot_->yAxis2})
+            if (auto t = a->ticker().dynamicCast<QCPAxisTickerText>()) t->clear();
+        return;
+    }
     QStringList labels;
-    for (const std::string& name : names_) labels << labelText(name);
+    for (size_t i = 0; i < names_.size(); ++i) labels << flags_->marked(labelText(names_[i]), ids_[i]);
     rowStep_ = labelStep(plot_->yAxis, plot_->yAxis->tickLabelFont());
     columnStep_ = labelStep(plot_->xAxis2, plot_->xAxis2->tickLabelFont());
     auto set = [](QCPAxis* axis, const QMap<double, QString>& ticks) {
@@ -515,11 +541,17 @@ void MatrixView::zoomBy(double factor)
     plot_->replot(QCustomPlot::rpQueuedReplot);
 }
 
-QString MatrixView::describeAnimal(int index) const
+QString MatrixView::animalName(int index) const
 {
     if (index < 0 || index >= matrix_.n) return {};
     const QString id = toQString(ids_[static_cast<size_t>(index)]), name = toQString(names_[static_cast<size_t>(index)]);
     return name == id ? id : tr("%1 (%2)").arg(name, id);
+}
+
+QString MatrixView::describeAnimal(int index) const
+{
+    if (index < 0 || index >= matrix_.n) return {};
+    return animalName(index) + QLatin1Char('\n') + flags_->describe(ids_[static_cast<size_t>(index)]);
 }
 
 int MatrixView::markedCount() const { return marks_ ? marks_->data()->size() : 0; }
@@ -528,7 +560,7 @@ QString MatrixView::describeCell(int row, int column) const
 {
     const int n = matrix_.n;
     if (row < 0 || column < 0 || row >= n || column >= n || row == column) return {};
-    const QString a = describeAnimal(row), b = describeAnimal(column);
+    const QString a = animalName(row), b = animalName(column);
     QString s = tr("%1 beat %2: %3\n%2 beat %1: %4")
                     .arg(a, b, countText(matrix_.s(row, column)), countText(matrix_.s(column, row)));
     if (row > column && matrix_.s(row, column) > 0) s += tr("\n(wins against the order)");

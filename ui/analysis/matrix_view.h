@@ -27,6 +27,7 @@ namespace hierloom::ui {
 class ColonyDocument;
 class ComputeRunner;
 class ProgressStrip;
+class RankFlagWatch;
 
 /// The win matrix of a window (rows winners, columns losers) with the animals
 /// in the order of a rank method (core::orderByMethod, any method of the
@@ -61,8 +62,13 @@ public:
     int boundaryCount() const { return boundaries_; }
     /// The hover text of a cell: both animals' full names and ids, both counts.
     QString describeCell(int row, int column) const;
-    /// The hover text of a row or column label: the animal's full name and id.
+    /// The hover text of a row or column label: the animal's full name and id,
+    /// its encounters in the window and, when flagged, the data-health flag.
     QString describeAnimal(int index) const;
+    /// The data-health flags of the window's animals (docs/methods.md, "Data health").
+    RankFlagWatch* flags() const { return flags_; }
+    /// The legend line of the flag under the matrix.
+    QLabel* flagLegend() const { return flagLegend_; }
     /// Names shown on the left (row) axis after thinning: every k-th animal
     /// when the rows are too close for every name. The right axis shows the
     /// same rows' totals won, the bottom axis the columns' totals lost.
@@ -93,6 +99,8 @@ private:
     void hover(QMouseEvent* event);
     /// Labels and totals as many as the rows' and columns' pixel sizes allow.
     void relabel();
+    /// An animal's full name and id.
+    QString animalName(int index) const;
 
     ColonyDocument* document_;
     ComputeRunner* runner_;
@@ -103,6 +111,8 @@ private:
     QDateEdit* fromEdit_;
     QDateEdit* toEdit_;
     QLabel* summary_;
+    QLabel* flagLegend_;
+    RankFlagWatch* flags_;
 
     std::optional<core::RankMethod> method_ = core::kDefaultMatrixOrder; ///< empty: by animal id
     std::optional<core::Day> from_, to_;

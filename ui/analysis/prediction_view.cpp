@@ -1,6 +1,8 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "ui/analysis/prediction_view.h"
 
+#include "ui/analysis/rank_flag_watch.h"
+
 #include "ui/document/animal_selection.h"
 #include "ui/document/colony_document.h"
 #include "ui/document/document_settings.h"
@@ -52,6 +54,8 @@ PredictionView::PredictionView(ColonyDocument* document, AnimalSelection* select
       ruleBox_(new QComboBox(this)),
       dateEdit_(new QDateEdit(this)),
       summaryLabel_(new QLabel(this)),
+      flagLegend_(new QLabel(this)),
+      flags_(new RankFlagWatch(document, this)),
       foresightLabel_(new QLabel(this)),
       foresightTable_(new QTableWidget(0, 5, this)),
       foresightPlot_(new QCustomPlot(this))
@@ -95,6 +99,13 @@ PredictionView::PredictionView(ColonyDocument* document, AnimalSelection* select
     auto* sideLayout = new QVBoxLayout(side);
     sideLayout->setContentsMargins(0, 0, 0, 0);
     sideLayout->addWidget(summaryLabel_);
+    sideLayout->addWidget(flagLegend_);
+    flagLegend_->setObjectName(QStringLiteral("predictionFlagLegend"));
+    flagLegend_->setWordWrap(true);
+    connect(flags_, &RankFlagWatch::updated, this, [this] {
+        flagLegend_->setText(prediction_.females.empty() ? QString() : flags_->legend());
+        rebuildPlot();
+    });
     sideLayout->addWidget(dyads_, 1);
     summaryLabel_->setWordWrap(true);
     // How much the rule explains: each model's foresight of the record's encounters.
@@ -202,6 +213,7 @@ void PredictionView::recompute()
 {
     if (!document_->isOpen() || document_->colony().encounters.empty()) {
         runner_->cancel();
+        flags_->clear();
         adopt({}, {}, {}, {});
         adoptForesight({});
         return;
@@ -217,6 +229,7 @@ void PredictionView::recompute()
         const QSignalBlocker block(dateEdit_);
         dateEdit_->setDate(toQDate(*options.at));
     }
+    flags_->request(core::defaultWindowStart(settings, *options.at), *options.at, options.group);
     core::ForesightOptions foresightOptions;
     foresightOptions.rule = rule_;
     foresightOptions.maturityYears = settings.maturityYears;
@@ -295,6 +308,7 @@ void PredictionView::adopt(core::InheritancePrediction prediction, core::Discord
                 .arg(summary_.comparable)
                 .arg(summary_.conformity ? QString::number(*summary_.conformity, 'f', 3) : tr("undefined"))
                 .arg(summary_.tauB ? QString::number(*summary_.tauB, 'f', 3) : tr("undefined")));
+    flagLegend_->setText(prediction_.females.empty() ? QString() : flags_->legend());
     rebuildPlot();
 }
 
@@ -374,6 +388,7 @@ void PredictionView::rebuildPlot()
     plot_->clearGraphs();
     plot_->clearItems();
     connectors_.assign(prediction_.females.size(), nullptr);
+    observedLabels_.clear();
     const QString selected = selection_->animal();
     QFont labelFont = font();
     labelFont.setPointSizeF(labelFont.pointSizeF() * 0.8);
@@ -381,20 +396,22 @@ void PredictionView::rebuildPlot()
         const core::PredictedFemale& f = prediction_.females[i];
         const bool me = toQString(f.animal) == selected;
         const QColor colour = palette_.colour(f.matriarch);
-        auto label = [&](double x, double y, Qt::Alignment align) {
+        auto label = [&](double x, double y, Qt::Alignment align, const QString& name) {
             auto* text = new QCPItemText(plot_);
             text->position->setCoords(x, y);
             text->setPositionAlignment(align | Qt::AlignVCenter);
-            text->setText(toQString(names_[i]));
+            text->setText(name);
             QFont fnt = labelFont;
             fnt.setBold(me);
             text->setFont(fnt);
             text->setColor(f.observedRank ? colour.darker(130) : QColor(0x99, 0x99, 0x99));
             text->setClipToAxisRect(true);
         };
-        label(-0.04, f.predictedRank, Qt::AlignRight);
+        label(-0.04, f.predictedRank, Qt::AlignRight, toQString(names_[i]));
         if (!f.observedRank) continue;
-        label(1.04, *f.observedRank, Qt::AlignLeft);
+        // The observed order rests on the encounters: a flagged female's name carries the mark.
+        observedLabels_ << flags_->marked(toQString(names_[i]), f.animal);
+        label(1.04, *f.observedRank, Qt::AlignLeft, observedLabels_.back());
         QCPGraph* g = plot_->addGraph();
         g->setData({0.0, 1.0}, {static_cast<double>(f.predictedRank), static_cast<double>(*f.observedRank)}, true);
         QColor c = colour;
@@ -437,6 +454,8 @@ QCPGraph* PredictionView::connectorOf(const QString& id) const
     const int i = prediction_.find(toStdString(id));
     return i < 0 || static_cast<size_t>(i) >= connectors_.size() ? nullptr : connectors_[static_cast<size_t>(i)];
 }
+
+QStringList PredictionView::observedLabels() const { return observedLabels_; }
 
 int PredictionView::connectorCount() const
 {

@@ -24,6 +24,7 @@ class AnimalSelection;
 class ColonyDocument;
 class ComputeRunner;
 class ProgressStrip;
+class RankFlagWatch;
 
 /// Predicted against observed order at the selected date: the inheritance
 /// rule's order (core::predictInheritance) in the left column, the observed
@@ -56,6 +57,13 @@ public:
     int connectorCount() const;
     /// True when her connector is drawn in the discordant (bold) style.
     bool isEmphasised(const QString& id) const;
+    /// The data-health flags (docs/methods.md, "Data health") behind the
+    /// observed order: the default analysis window ending on the date.
+    RankFlagWatch* flags() const { return flags_; }
+    /// The observed-order labels as drawn (a flagged female's name ends with the mark).
+    QStringList observedLabels() const;
+    /// The legend line of the flag.
+    QLabel* flagLegend() const { return flagLegend_; }
 
 public slots:
     void recompute();
@@ -75,6 +83,8 @@ private:
     QComboBox* ruleBox_;
     QDateEdit* dateEdit_;
     QLabel* summaryLabel_;
+    QLabel* flagLegend_;
+    RankFlagWatch* flags_;
     QLabel* foresightLabel_;
     QTableWidget* foresightTable_;
     QCustomPlot* foresightPlot_;
@@ -87,6 +97,7 @@ private:
     std::vector<std::string> names_; ///< display name of each female of prediction_
     std::map<std::string, std::string> lineNames_; ///< matriarch id -> name
     std::vector<QCPGraph*> connectors_; ///< per female of prediction_, nullptr without an observed rank
+    QStringList observedLabels_;
 };
 
 } // namespace hierloom::ui

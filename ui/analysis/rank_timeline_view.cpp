@@ -1,6 +1,8 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "ui/analysis/rank_timeline_view.h"
 
+#include "ui/analysis/rank_flag_watch.h"
+
 #include "ui/document/animal_selection.h"
 #include "ui/document/colony_document.h"
 #include "ui/document/document_settings.h"
@@ -69,8 +71,13 @@ RankTimelineView::RankTimelineView(ColonyDocument* document, AnimalSelection* se
       marksBox_(new QComboBox(this)),
       changeBox_(new QComboBox(this)),
       slider_(new QSlider(Qt::Horizontal, this)),
-      dateLabel_(new QLabel(this))
+      dateLabel_(new QLabel(this)),
+      flagLegend_(new QLabel(this)),
+      flags_(new RankFlagWatch(document, this))
 {
+    slider_->setObjectName(QStringLiteral("timelineDate"));
+    flagLegend_->setObjectName(QStringLiteral("timelineFlagLegend"));
+    flagLegend_->setWordWrap(true);
     scaleBox_->addItems({tr("Rank"), tr("Elo rating")});
     stepBox_->addItems({tr("Monthly"), tr("Weekly")});
     ageBox_->addItems({tr("All ages"), tr("Young adults (under 8)"), tr("Prime (8 to 15)"), tr("Old (16 and over)")});
@@ -126,6 +133,7 @@ RankTimelineView::RankTimelineView(ColonyDocument* document, AnimalSelection* se
     auto* layout = new QVBoxLayout(this);
     layout->addLayout(controls);
     layout->addWidget(split, 1);
+    layout->addWidget(flagLegend_);
     layout->addLayout(dates);
 
     plot_->setInteractions(QCP::iRangeDrag | QCP::iRangeZoom);
@@ -172,6 +180,10 @@ RankTimelineView::RankTimelineView(ColonyDocument* document, AnimalSelection* se
             selection_->setDay(timeline_.checkpoints[static_cast<size_t>(k)]);
     });
     connect(progress_, &ProgressStrip::retry, this, &RankTimelineView::recompute);
+    connect(flags_, &RankFlagWatch::updated, this, [this] {
+        fillFlagMarks();
+        plot_->replot(QCustomPlot::rpQueuedReplot);
+    });
     connect(plot_, &QCustomPlot::mouseMove, this, &RankTimelineView::hover);
     connect(plot_, &QCustomPlot::mousePress, this, [this](QMouseEvent* e) { pressedAt_ = e->pos(); });
     connect(plot_, &QCustomPlot::mouseRelease, this, &RankTimelineView::click);
@@ -189,6 +201,7 @@ void RankTimelineView::recompute()
 {
     if (!document_->isOpen()) {
         runner_->cancel();
+        flags_->clear();
         adopt({}, {});
         return;
     }
@@ -344,6 +357,13 @@ void RankTimelineView::rebuildPlot()
     discordKey->setLineStyle(QCPGraph::lsNone);
     discordKey->setScatterStyle(discordanceStyle(QColor(0xBB, 0xBB, 0xBB)));
     discordKey->setName(tr("In a discordant dyad"));
+    // Okabe-Ito orange rings, larger than every other marker, around the flagged females at the date.
+    flagMarks_ = plot_->addGraph();
+    flagMarks_->setLineStyle(QCPGraph::lsNone);
+    flagMarks_->setScatterStyle(QCPScatterStyle(QCPScatterStyle::ssCircle, QPen(QColor(0xE6, 0x9F, 0x00), 2), QBrush(), 13));
+    flagMarks_->setName(tr("%1 Too few encounters (at the date)").arg(RankFlagWatch::mark()));
+    flagMarks_->removeFromLegend(); // listed only while a female is ringed
+    flagMarks_->setLayer(QStringLiteral("selected"));
 
     dayLine_ = new QCPItemStraightLine(plot_);
     dayLine_->setPen(QPen(QColor(0x55, 0x55, 0x55), 1, Qt::DashLine));
@@ -420,7 +440,60 @@ void RankTimelineView::applyFilters()
     }
     for (auto& [kind, graph] : events_) graph->setData(events[kind].first, events[kind].second);
     fillChangeMarks();
+    fillFlagMarks();
     plot_->replot(QCustomPlot::rpQueuedReplot);
+}
+
+void RankTimelineView::requestFlags()
+{
+    const std::optional<core::Day> day = selection_->day();
+    if (!document_->isOpen() || !day || timeline_.checkpoints.empty()) {
+        flags_->clear();
+        return;
+    }
+    const core::Day to = timeline_.checkpoints[static_cast<size_t>(nearestCheckpoint(keyOf(*day)))];
+    flags_->request(core::defaultWindowStart(documentAnalysisSettings(document_), to), to, toStdString(group_));
+}
+
+void RankTimelineView::fillFlagMarks()
+{
+    if (!flagMarks_) return;
+    const std::optional<core::Day> day = selection_->day();
+    const int k = day && !timeline_.checkpoints.empty() ? nearestCheckpoint(keyOf(*day)) : -1;
+    QVector<double> keys, values;
+    int ranked = 0;
+    if (k >= 0) {
+        for (const Line& line : lines_) {
+            const int p = line.pointAt[static_cast<size_t>(k)];
+            if (p < 0 || !line.graph->visible()) continue;
+            const core::RankTimelineFemale& f = timeline_.females[static_cast<size_t>(line.female)];
+            const std::optional<double> v = valueOf(f.points[static_cast<size_t>(p)]);
+            if (!v) continue;
+            ++ranked;
+            if (!flags_->flagged(f.animal)) continue;
+            keys << keyOf(f.points[static_cast<size_t>(p)].day);
+            values << *v;
+        }
+    }
+    flagMarks_->setData(keys, values);
+    if (keys.isEmpty()) flagMarks_->removeFromLegend();
+    else flagMarks_->addToLegend();
+    if (k < 0 || ranked == 0) {
+        flagLegend_->clear();
+        return;
+    }
+    const core::Day to = timeline_.checkpoints[static_cast<size_t>(k)];
+    const std::optional<core::Day> from = core::defaultWindowStart(documentAnalysisSettings(document_), to);
+    const QString window = from ? tr("from %1 to %2").arg(formatDay(*from), formatDay(to)) : tr("up to %1").arg(formatDay(to));
+    flagLegend_->setText(tr("%1 On %2, %3 of %4 females shown have fewer than %5 encounters %6: ringed, their ranks "
+                            "are not stable; hover the point at that date for its encounters and randomised-Elo "
+                            "interval width%7.")
+                             .arg(RankFlagWatch::mark(), formatDay(to))
+                             .arg(keys.size())
+                             .arg(ranked)
+                             .arg(flags_->threshold())
+                             .arg(window)
+                             .arg(flags_->widthsReady() ? QString() : tr(" (widths being computed)")));
 }
 
 void RankTimelineView::fillChangeMarks()
@@ -482,6 +555,7 @@ void RankTimelineView::showDay(core::Day day)
         slider_->setValue(k);
     }
     dateLabel_->setText(formatDay(day));
+    requestFlags();
     if (dayLine_) {
         dayLine_->point1->setCoords(keyOf(day), 0);
         dayLine_->point2->setCoords(keyOf(day), 1);
@@ -638,6 +712,9 @@ QString RankTimelineView::describe(const QString& id, core::Day day) const
     if (pt.elo) text << tr("Elo rating: %1").arg(*pt.elo, 0, 'f', 0);
     text << tr("Matriline: %1").arg(lineName);
     if (pt.discordant()) text << tr("Discordant dyads: %1").arg(pt.discordantDyads);
+    // The flag is for the window ending at the selected date.
+    const std::optional<core::Day> selected = selection_->day();
+    if (selected && nearestCheckpoint(keyOf(*selected)) == k) text << flags_->describe(f.animal);
     return text.join(QLatin1Char('\n'));
 }
 

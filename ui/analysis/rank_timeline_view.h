@@ -24,6 +24,7 @@ class ColonyDocument;
 class ComputeRunner;
 class PedigreeView;
 class ProgressStrip;
+class RankFlagWatch;
 
 /// The pedigree-and-rank timeline: every ranked female's observed rank (or
 /// Elo rating) over the record as a line in her matriline's colour, with her
@@ -81,6 +82,13 @@ public:
     QCPGraph* eventsOf(core::LifeEventKind kind) const;
     /// The hover text for a female at the checkpoint nearest `day`, empty if she has no point there.
     QString describe(const QString& id, core::Day day) const;
+    /// The data-health flags (docs/methods.md, "Data health") of the window
+    /// that ends on the selected date (the analysis settings' default window).
+    RankFlagWatch* flags() const { return flags_; }
+    /// Rings around the flagged females' points at the selected date (nullptr before a plot).
+    QCPGraph* flagMarks() const { return flagMarks_; }
+    /// The legend line of the flag under the plot.
+    QLabel* flagLegend() const { return flagLegend_; }
     /// Plot key of a day (seconds since 1970, as the date axis counts).
     static double keyOf(core::Day day) { return day * 86400.0; }
 
@@ -99,6 +107,10 @@ private:
     void applyFilters();
     void applySelection();
     void fillChangeMarks();
+    /// Asks for the flags of the window ending at the selected date.
+    void requestFlags();
+    /// Rings the flagged females at the selected checkpoint and writes the legend line.
+    void fillFlagMarks();
     void showDay(core::Day day);
     void hover(QMouseEvent* event);
     void click(QMouseEvent* event);
@@ -122,6 +134,9 @@ private:
     QComboBox* changeBox_;
     QSlider* slider_;
     QLabel* dateLabel_;
+    QLabel* flagLegend_;
+    RankFlagWatch* flags_;
+    QCPGraph* flagMarks_ = nullptr;
     QCPItemStraightLine* dayLine_ = nullptr;
     std::map<core::LifeEventKind, QCPGraph*> events_;
     std::map<ChangeKind, QCPGraph*> changes_;

@@ -1,6 +1,8 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "ui/analysis/research_export_dialog.h"
 
+#include "core/research/data_health.h"
+
 #include "core/base/civil_date.h"
 #include "core/ranks/rank_method_registry.h"
 #include "core/research/species_profile.h"
@@ -43,8 +45,13 @@ ResearchExportDialog::ResearchExportDialog(ColonyDocument* document, QWidget* pa
       randomisations_(new QSpinBox(this)),
       folder_(new QLineEdit(this)),
       spreadsheet_(new QCheckBox(tr("Spreadsheet-friendly (UTF-8 byte-order mark in each file)"), this)),
+      health_(new QCheckBox(tr("Data health in the rank table (encounters, too few for a stable rank)"), this)),
       report_(new QLabel(this))
 {
+    health_->setObjectName(QStringLiteral("exportHealth"));
+    health_->setToolTip(tr("Ends ranks_by_period with encounters and few_encounters (fewer than %1 encounters behind "
+                           "the rank), as export-tables --health")
+                            .arg(core::kDefaultMinEncounters));
     setWindowTitle(tr("Export Research Tables"));
     period_->addItem(tr("Whole window as one period"), QStringLiteral("whole"));
     period_->addItem(tr("Days"), QStringLiteral("day"));
@@ -82,6 +89,7 @@ ResearchExportDialog::ResearchExportDialog(ColonyDocument* document, QWidget* pa
     form->addRow(tr("Randomisations:"), randomisations_);
     form->addRow(tr("Folder:"), folderRow);
     form->addRow(QString(), spreadsheet_);
+    form->addRow(QString(), health_);
     auto* buttons = new QDialogButtonBox(QDialogButtonBox::Close, this);
     QPushButton* exportButton = buttons->addButton(tr("Export"), QDialogButtonBox::ActionRole);
     auto* helpRow = new QHBoxLayout;
@@ -168,6 +176,7 @@ std::optional<core::ResearchExportOptions> ResearchExportDialog::options(QString
         o.every = core::parsePeriodLength(toStdString(period));
     }
     o.randomisations = randomisations_->value();
+    if (health_->isChecked()) o.healthMinEncounters = core::kDefaultMinEncounters;
     core::SpeciesSettings species;
     species.gestationDays = core::findSpecies(species.species)->gestationDays;
     species.maturityYears = core::findSpecies(species.species)->maturityYears;

@@ -64,6 +64,7 @@ private:
     QSpinBox* randomisations_;
     QLineEdit* folder_;
     QCheckBox* spreadsheet_;
+    QCheckBox* health_;
     QLabel* report_;
     QStringList written_;
 };

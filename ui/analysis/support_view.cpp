@@ -1,15 +1,19 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "ui/analysis/support_view.h"
 
+#include "ui/analysis/rank_flag_watch.h"
+
 #include "core/base/number_format.h"
 #include "core/pedigree/matriline.h"
 #include "core/ranks/parallel_randomisation.h"
 #include "core/research/support_tables.h"
 #include "ui/document/colony_document.h"
+#include "ui/document/compute_runner.h"
 #include "ui/document/document_settings.h"
 #include "ui/document/qt_convert.h"
 #include "ui/document/visible_refresh.h"
 #include "ui/widgets/matriline_palette.h"
+#include "ui/widgets/progress_strip.h"
 
 #include <QComboBox>
 #include <QHBoxLayout>
@@ -52,12 +56,23 @@ QTableWidget* readOnlyTable(QWidget* parent)
 
 } // namespace
 
+/// What the worker hands back: the analysis, its tables and the matriline colours.
+struct SupportView::Result {
+    core::SupportAnalysis analysis;
+    core::ExportTable pairs, daughters, matrix;
+    MatrilinePalette palette;
+};
+
 SupportView::SupportView(ColonyDocument* document, QWidget* parent)
     : QWidget(parent),
       document_(document),
+      runner_(new ComputeRunner(this)),
+      progress_(new ProgressStrip(runner_, tr("the support figures"), this)),
+      flags_(new RankFlagWatch(document, this)),
       group_(new QComboBox(this)),
       permutations_(new QSpinBox(this)),
       summary_(new QLabel(this)),
+      flagLegend_(new QLabel(this)),
       pairs_(readOnlyTable(this)),
       matrix_(readOnlyTable(this)),
       daughters_(readOnlyTable(this)),
@@ -87,13 +102,19 @@ SupportView::SupportView(ColonyDocument* document, QWidget* parent)
 
     auto* layout = new QVBoxLayout(this);
     layout->addLayout(options);
+    layout->addWidget(progress_);
     layout->addWidget(summary_);
     layout->addWidget(new QLabel(tr("Rank figures use the winner and the loser only; supporters enter these figures "
                                     "alone (docs/methods.md, \"Kin support\")."),
                                  this));
     layout->addWidget(tabs, 1);
+    flagLegend_->setObjectName(QStringLiteral("supportFlagLegend"));
+    flagLegend_->setWordWrap(true);
+    layout->addWidget(flagLegend_);
+    connect(flags_, &RankFlagWatch::updated, this, &SupportView::markNames);
 
     refresh_ = new VisibleRefresh(this, [this] { recompute(); });
+    connect(progress_, &ProgressStrip::retry, this, [this] { recompute(); });
     connect(group_, &QComboBox::currentIndexChanged, this, [this] {
         if (!loading_) recompute();
     });
@@ -104,6 +125,13 @@ SupportView::SupportView(ColonyDocument* document, QWidget* parent)
     });
     refreshGroups();
     refresh_->request();
+}
+
+SupportView::~SupportView()
+{
+    // Closing the window takes the focus out of a field, whose editingFinished
+    // must not recompute a view whose members are already gone.
+    for (QWidget* child : findChildren<QWidget*>()) disconnect(child, nullptr, this, nullptr);
 }
 
 void SupportView::refreshGroups()
@@ -136,6 +164,18 @@ void SupportView::setPermutations(int n)
 
 void SupportView::recompute()
 {
+    for (QTableWidget* t : {pairs_, matrix_, daughters_}) {
+        t->clear();
+        t->setRowCount(0);
+        t->setColumnCount(0);
+    }
+    summary_->clear();
+    analysis_ = {};
+    if (!document_->isOpen()) {
+        runner_->cancel();
+        flags_->clear();
+        return;
+    }
     core::SupportOptions o;
     const core::AnalysisSettings settings = documentAnalysisSettings(document_);
     o.group = toStdString(group_->currentData().toString());
@@ -143,8 +183,24 @@ void SupportView::recompute()
     o.threads = core::defaultThreadCount(); // the result is the same with any count
     o.maturityYears = settings.maturityYears;
     o.elo = settings.elo;
-    analysis_ = core::analyseSupport(document_->colony(), document_->residences(), o);
+    flags_->request(std::nullopt, std::nullopt, o.group);
+    // The permutation test takes a while: off the interface thread, on the document's snapshot.
+    const ColonyDocument::Snapshot snapshot = document_->snapshot();
+    runner_->start([this, snapshot, o](const std::atomic<bool>& cancel, const ComputeRunner::Progress&) {
+        auto r = std::make_shared<Result>();
+        r->analysis = core::analyseSupport(*snapshot.colony, *snapshot.residences, o);
+        if (cancel) return ComputeRunner::Apply();
+        r->pairs = core::supportPairsTable(r->analysis);
+        r->daughters = core::supportDaughtersTable(r->analysis);
+        r->matrix = core::supportMatrixTable(r->analysis);
+        r->palette = MatrilinePalette(core::Matrilines(*snapshot.colony));
+        return ComputeRunner::Apply([this, r] { adopt(*r); });
+    });
+}
 
+void SupportView::adopt(const Result& r)
+{
+    analysis_ = r.analysis;
     const auto& mother = analysis_.classes[static_cast<size_t>(core::KinClass::Mother)];
     const auto& unrelated = analysis_.classes[static_cast<size_t>(core::KinClass::Unrelated)];
     // Three significant digits on screen; the tables below and the exports keep every digit.
@@ -163,18 +219,16 @@ void SupportView::recompute()
                   .arg(analysis_.test.seed)
                   .arg(analysis_.motherActsAgainstBelow)
                   .arg(analysis_.motherActsAgainstFemales));
-    fill(pairs_, core::supportPairsTable(analysis_));
-    fill(daughters_, core::supportDaughtersTable(analysis_));
-    showMatrix();
+    fill(pairs_, r.pairs);
+    fill(daughters_, r.daughters);
+    showMatrix(r.matrix, r.palette);
 }
 
-void SupportView::showMatrix()
+void SupportView::showMatrix(const core::ExportTable& t, const MatrilinePalette& palette)
 {
     // Rank order; a coloured strip of the row animal's matriline in column 0
     // and of the column animal's above the first row.
-    const core::ExportTable t = core::supportMatrixTable(analysis_);
     const int n = static_cast<int>(analysis_.order.size());
-    const MatrilinePalette palette(core::Matrilines(document_->colony()));
     matrix_->clear();
     matrix_->setRowCount(n + 1);
     matrix_->setColumnCount(n + 1);
@@ -200,9 +254,27 @@ void SupportView::showMatrix()
         for (int j = 0; j < n; ++j)
             matrix_->setItem(i + 1, j + 1, new QTableWidgetItem(toQString(cells[static_cast<size_t>(j) + 2])));
     }
-    matrix_->resizeColumnsToContents();
+    markNames();
     matrix_->setColumnWidth(0, matrix_->fontMetrics().horizontalAdvance(QStringLiteral("MM")));
     matrix_->setRowHeight(0, matrix_->fontMetrics().height() / 2 + 2);
+}
+
+void SupportView::markNames()
+{
+    const int n = static_cast<int>(analysis_.order.size());
+    flagLegend_->setText(n > 0 ? flags_->legend() : QString());
+    if (matrix_->rowCount() != n + 1) return;
+    for (int i = 0; i < n; ++i) {
+        const std::string& id = analysis_.order[static_cast<size_t>(i)];
+        const QString name = flags_->marked(toQString(id), id);
+        for (QTableWidgetItem* header : {matrix_->horizontalHeaderItem(i + 1), matrix_->verticalHeaderItem(i + 1)}) {
+            if (!header) continue;
+            header->setText(name);
+            header->setToolTip(flags_->describe(id));
+        }
+    }
+    matrix_->resizeColumnsToContents();
+    matrix_->setColumnWidth(0, matrix_->fontMetrics().horizontalAdvance(QStringLiteral("MM")));
 }
 
 } // namespace hierloom::ui

@@ -3,11 +3,13 @@
 
 #include "core/base/number_format.h"
 #include "ui/document/colony_document.h"
+#include "ui/document/compute_runner.h"
 #include "ui/document/document_queries.h"
 #include "ui/document/document_settings.h"
 #include "ui/document/qt_convert.h"
 #include "ui/document/visible_refresh.h"
 #include "ui/widgets/help_button.h"
+#include "ui/widgets/progress_strip.h"
 #include "ui/widgets/typed_date.h"
 
 #include <QComboBox>
@@ -48,16 +50,11 @@ QString points(const std::optional<double>& v) { return v ? QString::number(*v, 
 
 } // namespace
 
-core::DataHealth documentHealth(const ColonyDocument* document, const core::HealthOptions& options)
-{
-    core::HealthOptions o = options;
-    o.elo = documentAnalysisSettings(document).elo;
-    return core::dataHealth(document->colony(), document->residences(), o);
-}
-
 HealthView::HealthView(ColonyDocument* document, QWidget* parent)
     : QWidget(parent),
       document_(document),
+      runner_(new ComputeRunner(this)),
+      progress_(new ProgressStrip(runner_, tr("the data health"), this)),
       group_(new QComboBox(this)),
       from_(new QLineEdit(this)),
       to_(new QLineEdit(this)),
@@ -127,9 +124,11 @@ HealthView::HealthView(ColonyDocument* document, QWidget* parent)
     auto* layout = new QVBoxLayout(this);
     layout->addLayout(controls);
     layout->addWidget(problem_);
+    layout->addWidget(progress_);
     layout->addWidget(banner_);
     layout->addWidget(tabs_, 1);
 
+    connect(progress_, &ProgressStrip::retry, this, &HealthView::recompute);
     connect(group_, &QComboBox::currentTextChanged, this, &HealthView::recompute);
     for (QLineEdit* e : {from_, to_}) connect(e, &QLineEdit::editingFinished, this, &HealthView::recompute);
     for (QSpinBox* s : {unseenDays_, minEncounters_, matchMinutes_})
@@ -141,6 +140,13 @@ HealthView::HealthView(ColonyDocument* document, QWidget* parent)
     connect(document_, &ColonyDocument::changed, refresh, &VisibleRefresh::request);
     refreshGroups();
     recompute();
+}
+
+HealthView::~HealthView()
+{
+    // Closing the window takes the focus out of a field, whose editingFinished
+    // must not recompute a view whose members are already gone.
+    for (QWidget* child : findChildren<QWidget*>()) disconnect(child, nullptr, this, nullptr);
 }
 
 void HealthView::setGroup(const QString& group) { group_->setCurrentText(group); }
@@ -162,7 +168,10 @@ void HealthView::recompute()
     health_ = {};
     banner_->hide();
     problem_->hide();
-    if (!document_->isOpen()) return;
+    if (!document_->isOpen()) {
+        runner_->cancel();
+        return;
+    }
     core::HealthOptions o;
     o.group = toStdString(group_->currentData().toString());
     o.today = core::today();
@@ -171,17 +180,29 @@ void HealthView::recompute()
     o.matchMinutes = matchMinutes_->value();
     o.randomisations = kViewRandomisations;
     o.threads = 1;
+    o.elo = documentAnalysisSettings(document_).elo;
     for (auto [field, slot] : {std::pair{from_, &o.from}, std::pair{to_, &o.to}}) {
         if (field->text().trimmed().isEmpty()) continue;
         *slot = parseTypedDate(field->text());
         if (!*slot) {
+            runner_->cancel();
             problem_->setText(typedDateProblem(field->text()));
             problem_->show();
             return;
         }
     }
-    health_ = documentHealth(document_, o);
+    // The randomised-Elo widths take a while on a long record: off the interface thread.
+    const ColonyDocument::Snapshot snapshot = document_->snapshot();
+    runner_->start([this, snapshot, o](const std::atomic<bool>& cancel, const ComputeRunner::Progress&) {
+        auto health = std::make_shared<core::DataHealth>(
+            core::dataHealth(*snapshot.colony, *snapshot.residences, o, &cancel));
+        return ComputeRunner::Apply([this, health] { adopt(std::move(*health)); });
+    });
+}
 
+void HealthView::adopt(core::DataHealth health)
+{
+    health_ = std::move(health);
     for (const core::AnimalEffort& a : health_.animals) {
         auto* item = new QTreeWidgetItem(animals_, {toQString(a.animal), QString::number(a.encounters),
                                                     QString::number(a.daysSeen), dateText(a.lastSeen),

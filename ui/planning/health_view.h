@@ -14,18 +14,20 @@ class QTreeWidget;
 namespace hierloom::ui {
 
 class ColonyDocument;
-
-/// The data health of the open document for a group and window (core/research/data_health.h).
-core::DataHealth documentHealth(const ColonyDocument* document, const core::HealthOptions& options);
+class ComputeRunner;
+class ProgressStrip;
 
 /// The Health tab: observation effort per animal, observer and month; the
 /// residents nobody has seen for N days, with the caution to check on them;
 /// animals with too few encounters for a stable rank, with the
-/// randomised-Elo interval width; observer agreement. Reads only.
+/// randomised-Elo interval width; observer agreement. Reads only. Computed
+/// on a worker thread (ui/document/compute_runner.h) from the document's
+/// snapshot; the lists are empty and a progress strip shows until it ends.
 class HealthView : public QWidget {
     Q_OBJECT
 public:
     explicit HealthView(ColonyDocument* document, QWidget* parent = nullptr);
+    ~HealthView() override;
 
     const core::DataHealth& health() const { return health_; }
     void setGroup(const QString& group);
@@ -35,13 +37,19 @@ public:
     QTreeWidget* unseenList() const { return unseen_; }
     QTreeWidget* agreementList() const { return agreement_; }
     QLabel* unseenBanner() const { return banner_; }
+    ComputeRunner* runner() const { return runner_; }
+    /// The strip shown while the figures are being computed.
+    ProgressStrip* progressStrip() const { return progress_; }
     /// Recomputes with the fields as they are (also run on every change of a field).
     void recompute();
 
 private:
     void refreshGroups();
+    void adopt(core::DataHealth health);
 
     ColonyDocument* document_;
+    ComputeRunner* runner_;
+    ProgressStrip* progress_;
     QComboBox* group_;
     QLineEdit* from_;
     QLineEdit* to_;

@@ -283,3 +283,46 @@ TEST(DataHealth, IntervalWidthIsTheRandomisedEloSpread)
         EXPECT_GT(*a.intervalWidth, 0);
     }
 }
+
+// Counted by hand from the list above: March A 7, B 5, C 6; April (2024-04-02) A 1, B 1.
+TEST(DataHealth, PeriodFlagsCountEachPeriodOrRunOn)
+{
+    const Colony c = handColony();
+    const std::vector<CalendarPeriod> periods{{d("2024-03-01"), d("2024-03-31")}, {d("2024-04-01"), d("2024-04-30")}};
+    auto cells = [](const std::map<std::string, RankFlag>& m) {
+        std::vector<std::string> out;
+        for (const auto& [id, f] : m) out.push_back(id + ' ' + std::to_string(f.encounters) + (f.fewEncounters ? " few" : ""));
+        return out;
+    };
+    // Each period alone (David's score, I&SI).
+    const auto alone = periodRankFlags(c, periods, d("2024-03-01"), "g", 6, false);
+    ASSERT_EQ(alone.size(), 2u);
+    EXPECT_EQ(cells(alone[0]), (std::vector<std::string>{"A 7", "B 5 few", "C 6"}));
+    EXPECT_EQ(cells(alone[1]), (std::vector<std::string>{"A 1 few", "B 1 few"}));
+    // Running on from the window's start (Elo): April adds to March.
+    const auto runOn = periodRankFlags(c, periods, d("2024-03-01"), "g", 6, true);
+    EXPECT_EQ(cells(runOn[0]), cells(alone[0]));
+    EXPECT_EQ(cells(runOn[1]), (std::vector<std::string>{"A 8", "B 6", "C 6"}));
+    // Identity: one period is the same as rankFlags over it, and the flags agree with dataHealth.
+    EXPECT_EQ(cells(rankFlags(c, d("2024-03-01"), d("2024-03-31"), "g", 6)), cells(alone[0]));
+    const ResidenceIndex where(c.animals, c.residences);
+    for (const AnimalEffort& a : dataHealth(c, where, windowOf("2024-03-01", "2024-03-31")).animals)
+        EXPECT_EQ(a.fewEncounters, tooFewEncounters(a.encounters, 6)) << a.animal;
+    EXPECT_TRUE(tooFewEncounters(9, 10));
+    EXPECT_FALSE(tooFewEncounters(10, 10));
+}
+
+TEST(DataHealth, IntervalWidthsStopWhenCancelled)
+{
+    const Colony c = handColony();
+    const ResidenceIndex where(c.animals, c.residences);
+    HealthOptions o = windowOf("2024-03-01", "2024-03-31");
+    o.randomisations = 200;
+    const std::map<std::string, double> widths = eloIntervalWidths(c, where, o);
+    const DataHealth h = dataHealth(c, where, o);
+    ASSERT_EQ(widths.size(), 3u); // A, B, C have bouts in March
+    for (const AnimalEffort& a : h.animals)
+        if (a.intervalWidth) EXPECT_DOUBLE_EQ(*a.intervalWidth, widths.at(a.animal)) << a.animal;
+    const std::atomic<bool> cancel{true};
+    EXPECT_TRUE(eloIntervalWidths(c, where, o, &cancel).empty());
+}

@@ -1,0 +1,114 @@
+// SPDX-License-Identifier: GPL-3.0-or-later
+#include "ui/analysis/rank_flag_watch.h"
+
+#include "ui/document/colony_document.h"
+#include "ui/document/compute_runner.h"
+#include "ui/document/document_settings.h"
+
+#include "core/pedigree/inheritance_prediction.h"
+
+#include <memory>
+
+namespace hierloom::ui {
+
+RankFlagWatch::RankFlagWatch(ColonyDocument* document, QObject* parent)
+    : QObject(parent), document_(document), runner_(new ComputeRunner(this))
+{
+}
+
+void RankFlagWatch::clear()
+{
+    runner_->cancel();
+    flags_.clear();
+    widthsReady_ = false;
+    emit updated();
+}
+
+void RankFlagWatch::request(std::optional<core::Day> from, std::optional<core::Day> to, const std::string& group)
+{
+    if (!document_->isOpen()) {
+        clear();
+        return;
+    }
+    // The counts at once: the mark is on screen with the view's own figures.
+    flags_ = core::rankFlags(document_->colony(), from, to, group, threshold_);
+    widthsReady_ = false;
+    emit updated();
+    core::HealthOptions o;
+    o.from = from;
+    o.to = to;
+    o.today = to ? *to : core::lastEncounterDay(document_->colony()).value_or(core::today());
+    o.group = group;
+    o.minEncounters = threshold_;
+    o.elo = documentAnalysisSettings(document_).elo;
+    o.randomisations = kRandomisations;
+    o.threads = 1;
+    const ColonyDocument::Snapshot snapshot = document_->snapshot();
+    runner_->start([this, snapshot, o](const std::atomic<bool>& cancel, const ComputeRunner::Progress&) {
+        auto widths = std::make_shared<std::map<std::string, double>>(
+            core::eloIntervalWidths(*snapshot.colony, *snapshot.residences, o, &cancel));
+        return ComputeRunner::Apply([this, widths] {
+            for (auto& [id, flag] : flags_) {
+                const auto it = widths->find(id);
+                flag.intervalWidth = it != widths->end() ? std::optional<double>(it->second) : std::nullopt;
+            }
+            widthsReady_ = true;
+            emit updated();
+        });
+    });
+}
+
+bool RankFlagWatch::flagged(const std::string& id) const { return core::tooFewEncounters(encounters(id), threshold_); }
+
+int RankFlagWatch::encounters(const std::string& id) const
+{
+    const auto it = flags_.find(id);
+    return it != flags_.end() ? it->second.encounters : 0;
+}
+
+std::optional<double> RankFlagWatch::intervalWidth(const std::string& id) const
+{
+    const auto it = flags_.find(id);
+    return it != flags_.end() ? it->second.intervalWidth : std::nullopt;
+}
+
+int RankFlagWatch::flaggedCount() const
+{
+    int n = 0;
+    for (const auto& [id, flag] : flags_) n += flag.fewEncounters;
+    return n;
+}
+
+QString RankFlagWatch::mark() { return QStringLiteral("\u26A0"); }
+
+QString RankFlagWatch::marked(const QString& name, const std::string& id) const
+{
+    return flagged(id) ? name + QLatin1Char(' ') + mark() : name;
+}
+
+QString RankFlagWatch::describe(const std::string& id) const
+{
+    QString width;
+    if (!widthsReady_) width = tr("Elo interval width: being computed");
+    else if (const std::optional<double> w = intervalWidth(id)) width = tr("Elo interval width %1 points").arg(*w, 0, 'f', 0);
+    else width = tr("Elo interval width: not rated");
+    const int n = encounters(id);
+    return flagged(id) ? tr("%1 Too few encounters for a stable rank: %2 in the window (threshold %3); %4")
+                             .arg(mark())
+                             .arg(n)
+                             .arg(threshold_)
+                             .arg(width)
+                       : tr("Encounters in the window: %1 (threshold %2); %3").arg(n).arg(threshold_).arg(width);
+}
+
+QString RankFlagWatch::legend() const
+{
+    return tr("%1 after a name: fewer than %2 encounters in the window, rank not stable (flagged: %3); hover a "
+              "name for its encounters and randomised-Elo interval width%4.")
+        .arg(mark())
+        .arg(threshold_)
+        .arg(flaggedCount())
+        .arg(widthsReady_ ? QString() : tr(" (widths being computed)"));
+}
+
+} // namespace hierloom::ui
