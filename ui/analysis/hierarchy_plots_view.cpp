@@ -177,6 +177,7 @@ void HierarchyPlotsView::recompute()
         adopt({});
         return;
     }
+    document_->holdGroup(group_->currentData().toString()); // a large file still loading reads this group now
     const ColonyDocument::Snapshot snapshot = document_->snapshot();
     auto colony = snapshot.colony;
     auto where = snapshot.residences;

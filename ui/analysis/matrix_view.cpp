@@ -248,6 +248,7 @@ void MatrixView::recompute()
         adopt({});
         return;
     }
+    document_->holdGroup(group_); // a large file still loading reads this group now
     core::SelectionOptions options;
     const core::AnalysisSettings settings = documentAnalysisSettings(document_);
     options.from = from_;

@@ -192,6 +192,7 @@ void RankTimelineView::recompute()
         adopt({}, {});
         return;
     }
+    document_->holdGroup(group_); // a large file still loading reads this group now
     core::RankTimelineOptions options;
     const core::AnalysisSettings settings = documentAnalysisSettings(document_);
     options.inheritance.elo = settings.elo;

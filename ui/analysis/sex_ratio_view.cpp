@@ -330,6 +330,7 @@ bool SexRatioView::saveSpeciesSetting()
 
 void SexRatioView::recompute()
 {
+    document_->holdGroup(group_->currentData().toString()); // a large file still loading reads this group now
     births_ = core::computeMaternalRanks(
         document_->colony(), document_->residences(),
         documentMaternalOptions(toStdString(group_->currentData().toString()), gestation_->value(), maturity_->value(),

@@ -136,6 +136,7 @@ void SupportView::setPermutations(int n)
 
 void SupportView::recompute()
 {
+    document_->holdGroup(group_->currentData().toString()); // a large file still loading reads this group now
     core::SupportOptions o;
     const core::AnalysisSettings settings = documentAnalysisSettings(document_);
     o.group = toStdString(group_->currentData().toString());

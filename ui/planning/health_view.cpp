@@ -163,6 +163,7 @@ void HealthView::recompute()
     banner_->hide();
     problem_->hide();
     if (!document_->isOpen()) return;
+    document_->holdGroup(group_->currentData().toString()); // a large file still loading reads this group now
     core::HealthOptions o;
     o.group = toStdString(group_->currentData().toString());
     o.today = core::today();

@@ -70,6 +70,7 @@ void runReportDialog(QWidget* parent, ColonyDocument* document, ReportTarget tar
     ReportDialog dialog(document, parent);
     if (dialog.exec() != QDialog::Accepted) return;
     const report::HierarchyReportOptions o = dialog.options();
+    document->finishLoading(); // a large file still loading: the report needs every encounter
     try {
         if (target == ReportTarget::Pdf) {
             QString path = QFileDialog::getSaveFileName(parent, QObject::tr("Save Hierarchy Report"),

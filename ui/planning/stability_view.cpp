@@ -221,6 +221,7 @@ void StabilityView::recompute()
     thresholdsButton_->setToolTip(document_->isReadOnly() ? tr("The colony is open read-only: thresholds cannot be saved")
                                                           : QString());
     const auto length = static_cast<core::PeriodLength>(length_->currentData().toInt());
+    document_->holdGroup(group_->currentText()); // a large file still loading reads this group now
     series_ = document_->isOpen() && !group_->currentText().isEmpty()
                   ? documentStability(document_, toStdString(group_->currentText()), length)
                   : core::StabilitySeries{};
