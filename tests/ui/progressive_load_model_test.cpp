@@ -10,6 +10,9 @@
 // its cached rows of that group equal what a fresh connection reads for that
 // group's scope, and once the load is complete the whole cache equals the file.
 // The reference is the file itself, read by a new connection, never the cache.
+// A second run does the same for a centre too large to be read whole by
+// itself: one group kept at a time (the other dropped), every group read only
+// when asked (readEverything).
 #include "ui/document/colony_document.h"
 #include "ui/document/colony_edit_facade.h"
 #include "ui/document/qt_convert.h"
@@ -58,7 +61,7 @@ std::vector<std::string> rowsOf(const std::vector<core::Encounter>& rows, const 
 
 class ProgressiveRun {
 public:
-    explicit ProgressiveRun(unsigned seed) : random_(seed)
+    ProgressiveRun(unsigned seed, bool capped) : random_(seed), capped_(capped)
     {
         facade_.setToday(today_);
         // Some history before the desktop opens the file: both groups.
@@ -69,6 +72,10 @@ public:
             EXPECT_TRUE(p.empty()) << p.front().message;
         }
         document_.setProgressiveFrom(1);
+        if (capped_) {
+            document_.setReadEverythingUpTo(0);
+            document_.setHeldGroupLimit(1);
+        }
         document_.open(ui::toQString(path_));
     }
 
@@ -82,13 +89,16 @@ public:
         else if (pick < 74) document_.redo();
         else if (pick < 84) outsideWrite();
         else if (pick < 94) QCoreApplication::processEvents(); // the background load may arrive
-        else document_.finishLoading();
+        else {
+            document_.readEverything(); // nothing when already complete or loading
+            document_.finishLoading();
+        }
         check();
     }
 
     int partialChecks() const { return partialChecks_; }
     int completeChecks() const { return completeChecks_; }
-    int enteredWhileLoading() const { return enteredWhileLoading_; }
+    int enteredBeforeComplete() const { return enteredBeforeComplete_; }
 
 private:
     int uniform(int lo, int hi) { return std::uniform_int_distribution<int>(lo, hi)(random_); }
@@ -125,7 +135,7 @@ private:
 
     void enter()
     {
-        if (!document_.isComplete()) ++enteredWhileLoading_;
+        if (!document_.isComplete()) ++enteredBeforeComplete_;
         core::Encounter e = randomEncounter();
         const core::FieldProblems p = facade_.addEncounter(e);
         ASSERT_TRUE(p.empty()) << p.front().message;
@@ -165,6 +175,9 @@ private:
             return;
         }
         ++partialChecks_;
+        if (capped_ && !document_.isLoading())
+            EXPECT_LE(document_.heldGroups().size(), 1u) << "the least recently asked-for group is dropped";
+        if (capped_ && !document_.isLoading()) EXPECT_FALSE(document_.holdsGroup("A") && document_.holdsGroup("B"));
         for (const std::string g : {"A", "B"}) {
             if (!document_.holdsGroup(g)) continue;
             ASSERT_EQ(rowsOf(cache, g), rowsOf(fresh.loadEncounters(groupScope(g)), g)) << "group " << g;
@@ -172,6 +185,7 @@ private:
     }
 
     std::mt19937 random_;
+    bool capped_;
     TempDir dir_;
     std::string path_ = test::makeFacadeColony(dir_);
     core::Day today_ = core::dayFromCivil(2026, 1, 15);
@@ -179,16 +193,17 @@ private:
     ui::ColonyEditFacade facade_{&document_};
     int partialChecks_ = 0;
     int completeChecks_ = 0;
-    int enteredWhileLoading_ = 0;
+    int enteredBeforeComplete_ = 0;
 };
 
 } // namespace
 
 TEST(ProgressiveLoadModel, HeldGroupsAlwaysEqualAFreshReadOfTheFile)
 {
-    for (unsigned seed : {1u, 2u, 3u, 4u, 5u}) {
-        SCOPED_TRACE("seed " + std::to_string(seed));
-        ProgressiveRun run(seed);
+    for (unsigned seed : {1u, 2u, 3u, 4u, 5u, 6u, 7u, 8u}) {
+        const bool capped = seed > 4;
+        SCOPED_TRACE("seed " + std::to_string(seed) + (capped ? ", one group kept at a time" : ""));
+        ProgressiveRun run(seed, capped);
         for (int i = 0; i < 120; ++i) {
             SCOPED_TRACE("step " + std::to_string(i));
             run.step();
@@ -197,7 +212,7 @@ TEST(ProgressiveLoadModel, HeldGroupsAlwaysEqualAFreshReadOfTheFile)
         // The run reached both states and wrote while a load was still running.
         EXPECT_GT(run.partialChecks(), 5);
         EXPECT_GT(run.completeChecks(), 5);
-        EXPECT_GT(run.enteredWhileLoading(), 2);
+        EXPECT_GT(run.enteredBeforeComplete(), 2);
     }
 }
 
@@ -248,4 +263,41 @@ TEST(ProgressiveLoad, OpensWithOneGroupThenReadsEveryEncounterInTheBackground)
     QCoreApplication::processEvents();
     EXPECT_EQ(finished.count(), 1);
     EXPECT_TRUE(document.colony().encounters.empty());
+}
+
+TEST(ProgressiveLoad, ACentreTooLargeToReadWholeKeepsTheGroupsInUseUntilAskedForEveryGroup)
+{
+    TempDir dir;
+    const std::string path = test::makeFacadeColony(dir);
+    {
+        core::ColonyStore other = core::ColonyStore::open(path);
+        std::vector<core::Encounter> rows;
+        for (int i = 0; i < 30; ++i) {
+            core::Encounter e;
+            e.date = core::dayFromCivil(2019, 1, 1) + i;
+            e.winner = i % 3 ? "F1" : "M1";
+            e.loser = i % 3 ? "F2" : "G1";
+            rows.push_back(e);
+        }
+        ASSERT_TRUE(core::insertEncounters(other, rows, core::dayFromCivil(2026, 1, 15)).empty());
+    }
+    ui::ColonyDocument document;
+    document.setProgressiveFrom(10);
+    document.setReadEverythingUpTo(29); // the file's 30 are too many
+    document.setHeldGroupLimit(1);
+    document.open(ui::toQString(path));
+    EXPECT_FALSE(document.isComplete());
+    EXPECT_FALSE(document.isLoading()) << "nothing more is read by itself";
+    EXPECT_EQ(document.colony().encounters.size(), 20u); // group A
+    document.showGroup(QStringLiteral("B"));
+    EXPECT_EQ(document.heldGroups(), std::vector<std::string>{"B"});
+    EXPECT_EQ(document.colony().encounters.size(), 10u) << "A was dropped for B";
+    QSignalSpy progress(&document, &ui::ColonyDocument::loadProgress);
+    document.readEverything();
+    EXPECT_TRUE(document.isLoading());
+    document.finishLoading();
+    EXPECT_TRUE(document.isComplete());
+    EXPECT_EQ(document.colony().encounters.size(), 30u);
+    ASSERT_GE(progress.count(), 2);
+    EXPECT_EQ(progress.front().at(0).toInt(), 0); // the bar appears before the first group is read
 }

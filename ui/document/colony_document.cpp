@@ -47,7 +47,8 @@ void ColonyDocument::create(const QString& path)
 ColonyDocument::Read ColonyDocument::readFile(const core::ColonyStore& store, std::vector<std::string> groups) const
 {
     Read read;
-    if (store.encounterCount() < progressiveFrom_) {
+    read.encounters = store.encounterCount();
+    if (read.encounters < progressiveFrom_) {
         read.colony = store.load();
         return read;
     }
@@ -106,7 +107,28 @@ void ColonyDocument::take(Read read)
     snapshot_ = {};
     complete_ = read.complete;
     heldGroups_ = std::move(read.groups);
-    if (!complete_) startBackgroundLoad();
+    keptFromSeq_ = colony_->encounters.empty() ? 0 : colony_->encounters.back().seq;
+    if (!complete_ && read.encounters <= readEverythingUpTo_) startBackgroundLoad();
+}
+
+void ColonyDocument::readEverything()
+{
+    if (!store_ || complete_ || loader_) return;
+    startBackgroundLoad();
+    emit loadProgress(0, static_cast<int>(residences_.groups().size()));
+}
+
+void ColonyDocument::dropOldGroups()
+{
+    if (loader_ || heldGroups_.size() <= heldGroupLimit_) return;
+    const std::vector<std::string> dropped(heldGroups_.begin(),
+                                           heldGroups_.end() - static_cast<std::ptrdiff_t>(heldGroupLimit_));
+    heldGroups_.erase(heldGroups_.begin(), heldGroups_.end() - static_cast<std::ptrdiff_t>(heldGroupLimit_));
+    // Rows without a group stay (they may be in a held group's scope too), and so do new ones.
+    std::erase_if(editColony().encounters, [&](const core::Encounter& e) {
+        return e.seq <= keptFromSeq_ && !e.group.empty() &&
+               std::find(dropped.begin(), dropped.end(), e.group) != dropped.end();
+    });
 }
 
 void ColonyDocument::startBackgroundLoad()
@@ -187,7 +209,11 @@ bool ColonyDocument::holdsGroup(const std::string& group) const
 void ColonyDocument::holdGroup(const QString& group)
 {
     const std::string g = toStdString(group);
-    if (!store_ || g.empty() || holdsGroup(g)) return;
+    if (!store_ || g.empty() || complete_) return;
+    if (auto at = std::find(heldGroups_.begin(), heldGroups_.end(), g); at != heldGroups_.end()) {
+        std::rotate(at, at + 1, heldGroups_.end()); // now the most recently asked for
+        return;
+    }
     std::vector<core::Encounter> part = store_->loadEncounters(groupScope(g));
     std::vector<core::Encounter>& cache = editColony().encounters;
     std::vector<core::Encounter> merged;
@@ -201,6 +227,7 @@ void ColonyDocument::holdGroup(const QString& group)
                  merged.end());
     cache = std::move(merged);
     heldGroups_.push_back(g);
+    dropOldGroups();
     emitChange({ChangeKind::EncountersChanged, 0});
 }
 

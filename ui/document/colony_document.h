@@ -7,6 +7,7 @@
 #include <QObject>
 #include <QString>
 
+#include <algorithm>
 #include <cstdint>
 #include <memory>
 #include <optional>
@@ -29,7 +30,10 @@ class ColonyCommand;
 /// at once, then every encounter on a thread of its own (loadProgress,
 /// loadFinished). Until then the cache holds the encounters of the groups
 /// asked for (holdGroup) and of this window's own edits, and isComplete() is
-/// false; views that need every group wait for loadFinished. Only the edit facade and its undo commands
+/// false; views that need every group wait for loadFinished. Above
+/// readEverythingUpTo() encounters (a centre whose records would not fit the
+/// memory aim) nothing more is read by itself: the cache keeps the groups in
+/// use (the last heldGroupLimit() asked for) until readEverything() is called. Only the edit facade and its undo commands
 /// (colony_edit_facade.h, edit_commands.h) may write to the file: they alone
 /// see the writable store. Errors are thrown as core::ColonyFileError.
 class ColonyDocument : public QObject {
@@ -78,6 +82,20 @@ public:
     /// Files with at least this many encounters open in steps (default 300,000).
     void setProgressiveFrom(std::int64_t encounters) { progressiveFrom_ = encounters; }
     std::int64_t progressiveFrom() const { return progressiveFrom_; }
+    /// Files with at most this many encounters are read whole in the background
+    /// after the first group (default 1,000,000, about 330 MiB of records);
+    /// larger ones keep only the groups in use until readEverything().
+    void setReadEverythingUpTo(std::int64_t encounters) { readEverythingUpTo_ = encounters; }
+    std::int64_t readEverythingUpTo() const { return readEverythingUpTo_; }
+    /// How many groups a cache that is not complete keeps (default 4); the
+    /// least recently asked for is dropped first, never this window's new rows.
+    void setHeldGroupLimit(std::size_t groups) { heldGroupLimit_ = std::max<std::size_t>(groups, 1); }
+    std::size_t heldGroupLimit() const { return heldGroupLimit_; }
+    /// Starts reading every encounter in the background (progress as on
+    /// opening); nothing when complete or already loading.
+    void readEverything();
+    /// The groups a cache that is not complete holds, least recently asked for first.
+    const std::vector<std::string>& heldGroups() const { return heldGroups_; }
 
     /// True when another program (any other connection: the command line, a
     /// second window) has written to the file since this document last read
@@ -178,12 +196,15 @@ private:
         core::Colony colony;
         bool complete = true;
         std::vector<std::string> groups;
+        std::int64_t encounters = 0; // in the file
     };
     Read readFile(const core::ColonyStore& store, std::vector<std::string> groups) const;
     void adopt(core::ColonyStore store, const QString& path, bool readOnly);
     /// Takes a read as the cache; starts the background load when it is partial.
     void take(Read read);
     void startBackgroundLoad();
+    /// Drops the least recently asked-for groups beyond heldGroupLimit() (not while loading).
+    void dropOldGroups();
     void stopBackgroundLoad();
     void backgroundLoaded(std::shared_ptr<std::vector<core::Encounter>> all);
     /// The cache for changing: copied first when a snapshot still shares it.
@@ -201,6 +222,9 @@ private:
     std::int64_t knownVersion_ = 0; // the store's dataVersion() when the file was last read
     // Opening in steps (a large file): see the class comment.
     std::int64_t progressiveFrom_ = 300000;
+    std::int64_t readEverythingUpTo_ = 1000000;
+    std::size_t heldGroupLimit_ = 4;
+    std::int64_t keptFromSeq_ = 0; // rows after this (new since the read) are never dropped from the cache
     bool complete_ = true;
     std::vector<std::string> heldGroups_;
     std::unique_ptr<BackgroundEncounterLoad> loader_;
