@@ -200,6 +200,9 @@ void PredictionView::setRule(core::SiblingRule rule)
 
 void PredictionView::recompute()
 {
+    // Every group's record: a large file not read whole is read now, in the
+    // background; the view computes again when it is complete.
+    document_->readEverything();
     if (!document_->isOpen() || document_->colony().encounters.empty()) {
         runner_->cancel();
         adopt({}, {}, {}, {});

@@ -70,7 +70,9 @@ void runReportDialog(QWidget* parent, ColonyDocument* document, ReportTarget tar
     ReportDialog dialog(document, parent);
     if (dialog.exec() != QDialog::Accepted) return;
     const report::HierarchyReportOptions o = dialog.options();
-    document->finishLoading(); // a large file still loading: the report needs every encounter
+    // A large file not read whole: the report needs every encounter (progress in the status bar).
+    document->readEverything();
+    document->finishLoading();
     try {
         if (target == ReportTarget::Pdf) {
             QString path = QFileDialog::getSaveFileName(parent, QObject::tr("Save Hierarchy Report"),
