@@ -79,6 +79,7 @@ TEST(LargeColonyWindow, OpensWithTheFirstGroupShowsProgressAndFollowsShowGroup)
     EXPECT_TRUE(progress->isVisible()) << "the rest is still being read";
     EXPECT_FALSE(window.document()->isComplete());
     // The timeline on screen shows group A (the first by name), not "All groups" of a partial cache.
+    window.analysisViews().timeline->runner()->wait();
     EXPECT_EQ(groupShownBy(window.analysisViews().timeline), QStringLiteral("A"));
 
     window.document()->finishLoading();
@@ -93,6 +94,7 @@ TEST(LargeColonyWindow, OpensWithTheFirstGroupShowsProgressAndFollowsShowGroup)
     // The group a centre overview would go to: the timeline on screen turns at once,
     // the matrix on its hidden tab when it is shown.
     window.document()->showGroup(QStringLiteral("B"));
+    window.analysisViews().timeline->runner()->wait();
     EXPECT_EQ(groupShownBy(window.analysisViews().timeline), QStringLiteral("B"));
     EXPECT_NE(groupShownBy(window.analysisViews().matrix), QStringLiteral("B")) << "a hidden view waits until shown";
     window.showView(QStringLiteral("matrix"));

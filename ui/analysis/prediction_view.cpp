@@ -189,6 +189,12 @@ PredictionView::PredictionView(ColonyDocument* document, AnimalSelection* select
 
 PredictionView::~PredictionView() = default;
 
+void PredictionView::showEvent(QShowEvent* event)
+{
+    document_->readEverything();
+    QWidget::showEvent(event);
+}
+
 void PredictionView::setRule(core::SiblingRule rule)
 {
     if (rule == rule_) return;
@@ -200,9 +206,6 @@ void PredictionView::setRule(core::SiblingRule rule)
 
 void PredictionView::recompute()
 {
-    // Every group's record: a large file not read whole is read now, in the
-    // background; the view computes again when it is complete.
-    document_->readEverything();
     if (!document_->isOpen() || document_->colony().encounters.empty()) {
         runner_->cancel();
         adopt({}, {}, {}, {});
