@@ -208,8 +208,8 @@ int main(int argc, char* argv[])
         if (panel->sessionList()->rowCount() == rowsBefore) {
             std::printf("line %d not saved:", i);
             for (QLabel* label : panel->findChildren<QLabel*>())
-                if (label->isVisible() && label->text().contains(QStringLiteral("Not saved")))
-                    std::printf(" %s", ui::toStdString(label->text()).c_str());
+                if (label->isVisible() && !label->text().isEmpty())
+                    std::printf(" [%s]", ui::toStdString(label->text()).c_str());
             std::printf("\n");
             continue;
         }

@@ -248,7 +248,9 @@ void MatrixView::recompute()
         adopt({});
         return;
     }
-    document_->holdGroup(group_); // a large file still loading reads this group now
+    // A large file read group by group: reading this group announces a change,
+    // which has recomputed this view (or marked it stale) already.
+    if (document_->holdGroup(group_)) return;
     core::SelectionOptions options;
     const core::AnalysisSettings settings = documentAnalysisSettings(document_);
     options.from = from_;

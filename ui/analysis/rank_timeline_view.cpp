@@ -192,7 +192,9 @@ void RankTimelineView::recompute()
         adopt({}, {});
         return;
     }
-    document_->holdGroup(group_); // a large file still loading reads this group now
+    // A large file read group by group: reading this group announces a change,
+    // which has recomputed this view (or marked it stale) already.
+    if (document_->holdGroup(group_)) return;
     core::RankTimelineOptions options;
     const core::AnalysisSettings settings = documentAnalysisSettings(document_);
     options.inheritance.elo = settings.elo;

@@ -206,13 +206,13 @@ bool ColonyDocument::holdsGroup(const std::string& group) const
     return complete_ || std::find(heldGroups_.begin(), heldGroups_.end(), group) != heldGroups_.end();
 }
 
-void ColonyDocument::holdGroup(const QString& group)
+bool ColonyDocument::holdGroup(const QString& group)
 {
     const std::string g = toStdString(group);
-    if (!store_ || g.empty() || complete_) return;
+    if (!store_ || g.empty() || complete_) return false;
     if (auto at = std::find(heldGroups_.begin(), heldGroups_.end(), g); at != heldGroups_.end()) {
         std::rotate(at, at + 1, heldGroups_.end()); // now the most recently asked for
-        return;
+        return false;
     }
     std::vector<core::Encounter> part = store_->loadEncounters(groupScope(g));
     std::vector<core::Encounter>& cache = editColony().encounters;
@@ -229,12 +229,15 @@ void ColonyDocument::holdGroup(const QString& group)
     heldGroups_.push_back(g);
     dropOldGroups();
     emitChange({ChangeKind::EncountersChanged, 0});
+    return true;
 }
 
 void ColonyDocument::showGroup(const QString& group)
 {
-    holdGroup(group);
+    // The views turn first and read the group as they do (one computation,
+    // not one for the old group and one for the new); then whatever no view read.
     emit groupShown(group);
+    holdGroup(group);
 }
 
 std::int64_t ColonyDocument::encountersInFile() const

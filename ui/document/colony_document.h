@@ -69,8 +69,10 @@ public:
     bool holdsGroup(const std::string& group) const;
     /// Makes sure the cache holds the encounters of `group` (read through the
     /// encounter_by_group index when the file is still loading; an
-    /// EncountersChanged follows). Views call it when they turn to a group.
-    void holdGroup(const QString& group);
+    /// EncountersChanged follows). Views call it when they turn to a group;
+    /// true when it read the group and announced the change (which has
+    /// recomputed a view on screen, or marked a hidden one stale, already).
+    bool holdGroup(const QString& group);
     /// Shows `group` in every view that has a group choice: holdGroup(group),
     /// then groupShown(group). The one "go to this group" of the desktop
     /// (the centre overview, the first group of a large file).

@@ -163,7 +163,9 @@ void HealthView::recompute()
     banner_->hide();
     problem_->hide();
     if (!document_->isOpen()) return;
-    document_->holdGroup(group_->currentData().toString()); // a large file still loading reads this group now
+    // A large file read group by group: reading this group announces a change,
+    // which has recomputed this view (or marked it stale) already.
+    if (document_->holdGroup(group_->currentData().toString())) return;
     core::HealthOptions o;
     o.group = toStdString(group_->currentData().toString());
     o.today = core::today();
