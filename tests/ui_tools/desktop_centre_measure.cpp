@@ -189,6 +189,7 @@ int main(int argc, char* argv[])
     }
     panel->dateEdit()->setText(QDate::currentDate().toString(Qt::ISODate));
     panel->groupBox()->setCurrentText(ui::toQString(group));
+    panel->observerBox()->setCurrentText(QStringLiteral("bench"));
     panel->setDuplicateQuestion([](const QString&) { return true; });
     panel->setUndoSessionQuestion([](const QString&) { return true; });
     QApplication::processEvents();
