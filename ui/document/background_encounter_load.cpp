@@ -41,6 +41,10 @@ void BackgroundEncounterLoad::run(std::string path, std::vector<std::string> gro
     try {
         core::ColonyStore store = core::ColonyStore::open(path, core::ColonyStore::Mode::ReadOnly);
         core::stopQueriesWhen(store, cancelled_);
+        if (expected < 0) {
+            done(nullptr, {}); // the check alone
+            return;
+        }
         auto all = std::make_shared<std::vector<core::Encounter>>();
         all->reserve(static_cast<size_t>(std::max<std::int64_t>(expected, 0)) + 4096);
         const int total = static_cast<int>(groups.size());

@@ -27,7 +27,8 @@ public:
     using Done = std::function<void(Encounters encounters, const std::string& error)>;
 
     /// `groups`: the file's groups; `expected`: its encounter count when the load
-    /// began. Encounters no group scope reaches (rows without a group whose winner
+    /// began; a negative `expected` only opens the file (the read-only open runs
+    /// `PRAGMA quick_check`) and calls `done` with no encounters and no error. Encounters no group scope reaches (rows without a group whose winner
     /// never lived in one) are caught by comparing the count: the file is then
     /// read whole once more.
     BackgroundEncounterLoad(std::string path, std::vector<std::string> groups, std::int64_t expected,

@@ -109,6 +109,29 @@ void ColonyDocument::take(Read read)
     heldGroups_ = std::move(read.groups);
     keptFromSeq_ = colony_->encounters.empty() ? 0 : colony_->encounters.back().seq;
     if (!complete_ && read.encounters <= readEverythingUpTo_) startBackgroundLoad();
+    else if (!complete_) startBackgroundCheck();
+}
+
+void ColonyDocument::startBackgroundCheck()
+{
+    const std::uint64_t generation = ++checkGeneration_;
+    const std::int64_t version = store_->dataVersion();
+    auto done = [this, generation, version](BackgroundEncounterLoad::Encounters, const std::string& error) {
+        QMetaObject::invokeMethod(
+            this,
+            [this, generation, version, error] {
+                if (generation != checkGeneration_) return;
+                checker_.reset(); // its thread has ended
+                if (!error.empty()) {
+                    emit loadFailed(QString::fromUtf8(error.c_str()));
+                    return;
+                }
+                if (store_) store_->trustIntegrityCheckedAt(version);
+            },
+            Qt::QueuedConnection);
+    };
+    checker_ = std::make_unique<BackgroundEncounterLoad>(store_->path(), std::vector<std::string>{}, -1,
+                                                         [](int, int) {}, std::move(done));
 }
 
 void ColonyDocument::readEverything()
@@ -172,6 +195,8 @@ void ColonyDocument::startBackgroundLoad()
 void ColonyDocument::stopBackgroundLoad()
 {
     ++loadGeneration_;
+    ++checkGeneration_;
+    checker_.reset();
     loader_.reset(); // cancels and waits for its thread
     journal_.clear();
 }

@@ -205,6 +205,9 @@ private:
     /// Takes a read as the cache; starts the background load when it is partial.
     void take(Read read);
     void startBackgroundLoad();
+    /// The quick check of a file kept group by group, on a thread of its own,
+    /// so the first write need not run it (trustIntegrityCheckedAt).
+    void startBackgroundCheck();
     /// Drops the least recently asked-for groups beyond heldGroupLimit() (not while loading).
     void dropOldGroups();
     void stopBackgroundLoad();
@@ -230,6 +233,8 @@ private:
     bool complete_ = true;
     std::vector<std::string> heldGroups_;
     std::unique_ptr<BackgroundEncounterLoad> loader_;
+    std::unique_ptr<BackgroundEncounterLoad> checker_; // see startBackgroundCheck
+    std::uint64_t checkGeneration_ = 0;
     std::uint64_t loadGeneration_ = 0; // results of a cancelled load are dropped
     // This window's encounter changes while the background load runs, applied
     // again to its result (which may or may not have seen them).
