@@ -645,6 +645,10 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <source>Another program changed %1; it was read again and the undo history emptied (encounters %2 → %3, animals %4 → %5), so Undo cannot change records this window did not write.</source>
         <translation type="unfinished"></translation>
     </message>
+    <message>
+        <source>Not every encounter of %1 could be read: %2</source>
+        <translation type="unfinished"></translation>
+    </message>
 </context>
 <context>
     <name>hierloom::ui::ColonyEditFacade</name>
@@ -2251,6 +2255,37 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
 </context>
 <context>
+    <name>hierloom::ui::LoadProgress</name>
+    <message>
+        <source>Read Every Group</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Reads every group&apos;s encounters in the background, for views of all groups (a large centre takes several seconds and much more memory).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 of %2 groups read</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Reading every group&apos;s encounters…</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>A large colony opens with one group; views of all groups fill in when every one is read.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Groups in memory: %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>This centre is read group by group as views turn to them; &quot;All groups&quot; covers only the groups in memory until every group is read.</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
     <name>hierloom::ui::MainWindow</name>
     <message>
         <source>Hierloom colonies (*.hierloom);;All files (*)</source>
@@ -2402,6 +2437,14 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
     <message>
         <source>&amp;Dark</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Cannot Read the Whole Colony</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Encounters: %1 read so far</source>
         <translation type="unfinished"></translation>
     </message>
 </context>

@@ -411,7 +411,8 @@ void ColonyStore::ensureEncounterIndex()
 }
 
 ColonyStore::ColonyStore(ColonyStore&& other) noexcept
-    : db_(other.db_), path_(std::move(other.path_)), intactAtVersion_(other.intactAtVersion_)
+    : db_(other.db_), path_(std::move(other.path_)), intactAtVersion_(other.intactAtVersion_),
+      checkedElsewhereAt_(other.checkedElsewhereAt_)
 {
     other.db_ = nullptr;
 }
@@ -423,6 +424,7 @@ ColonyStore& ColonyStore::operator=(ColonyStore&& other) noexcept
         db_ = other.db_;
         path_ = std::move(other.path_);
         intactAtVersion_ = other.intactAtVersion_;
+        checkedElsewhereAt_ = other.checkedElsewhereAt_;
         other.db_ = nullptr;
     }
     return *this;
@@ -437,7 +439,8 @@ void ColonyStore::checkBeforeWrite()
     SqliteStatement q(db_, "PRAGMA data_version");
     const std::int64_t version = q.step() ? q.integer(0) : -1;
     if (intactAtVersion_ && *intactAtVersion_ == version) return;
-    requireIntactOnce(db_, path_, CheckPurpose::Writing);
+    if (!checkedElsewhereAt_ || *checkedElsewhereAt_ != version) requireIntactOnce(db_, path_, CheckPurpose::Writing);
+    checkedElsewhereAt_.reset();
     ensureFileIdentity(*this);
     intactAtVersion_ = version;
 }

@@ -138,6 +138,12 @@ public:
     /// identity (file_identity.h). Throws ColonyFileError(Damaged) naming the
     /// newest good backup.
     void checkBeforeWrite();
+    /// Another connection of this program passed `PRAGMA quick_check` on the
+    /// file after this one's dataVersion() was `version` (a background read):
+    /// the next checkBeforeWrite skips the check when no other connection has
+    /// committed since, so the first write after opening a large file does not
+    /// read it all again.
+    void trustIntegrityCheckedAt(std::int64_t version) { checkedElsewhereAt_ = version; }
 
 private:
     ColonyStore(sqlite3* db, std::string path) : db_(db), path_(std::move(path)) {}
@@ -149,6 +155,7 @@ private:
     sqlite3* db_ = nullptr;
     std::string path_;
     std::optional<std::int64_t> intactAtVersion_; // data_version when quick_check last passed
+    std::optional<std::int64_t> checkedElsewhereAt_; // see trustIntegrityCheckedAt
 };
 
 /// Reads the schema version and application id of a file without changing it;

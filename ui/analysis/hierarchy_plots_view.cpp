@@ -188,6 +188,9 @@ void HierarchyPlotsView::recompute()
         adopt({});
         return;
     }
+    // A large file read group by group: reading this group announces a change,
+    // which has recomputed this view (or marked it stale) already.
+    if (document_->holdGroup(group_->currentData().toString())) return;
     const ColonyDocument::Snapshot snapshot = document_->snapshot();
     auto colony = snapshot.colony;
     auto where = snapshot.residences;

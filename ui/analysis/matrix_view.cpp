@@ -267,6 +267,9 @@ void MatrixView::recompute()
         adopt({});
         return;
     }
+    // A large file read group by group: reading this group announces a change,
+    // which has recomputed this view (or marked it stale) already.
+    if (document_->holdGroup(group_)) return;
     core::SelectionOptions options;
     const core::AnalysisSettings settings = documentAnalysisSettings(document_);
     options.from = from_;

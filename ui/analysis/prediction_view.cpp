@@ -200,6 +200,12 @@ PredictionView::PredictionView(ColonyDocument* document, AnimalSelection* select
 
 PredictionView::~PredictionView() = default;
 
+void PredictionView::showEvent(QShowEvent* event)
+{
+    document_->readEverything();
+    QWidget::showEvent(event);
+}
+
 void PredictionView::setRule(core::SiblingRule rule)
 {
     if (rule == rule_) return;

@@ -68,6 +68,11 @@ public:
 public slots:
     void recompute();
 
+protected:
+    /// Every group's record: a large file not read whole is read (in the
+    /// background) when this view is first shown; it computes again once complete.
+    void showEvent(QShowEvent* event) override;
+
 private:
     void adopt(core::InheritancePrediction prediction, core::DiscordanceSummary summary, MatrilinePalette palette,
                std::vector<std::string> names);

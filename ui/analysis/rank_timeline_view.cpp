@@ -205,6 +205,9 @@ void RankTimelineView::recompute()
         adopt({}, {});
         return;
     }
+    // A large file read group by group: reading this group announces a change,
+    // which has recomputed this view (or marked it stale) already.
+    if (document_->holdGroup(group_)) return;
     core::RankTimelineOptions options;
     const core::AnalysisSettings settings = documentAnalysisSettings(document_);
     options.inheritance.elo = settings.elo;

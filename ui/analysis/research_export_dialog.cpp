@@ -207,6 +207,9 @@ bool ResearchExportDialog::exportTables()
         report_->setText(tr("Choose a folder for the tables."));
         return false;
     }
+    // A large file not read whole: the tables need every encounter.
+    document_->readEverything();
+    document_->finishLoading();
     QApplication::setOverrideCursor(Qt::WaitCursor);
     try {
         const std::vector<core::ExportTable> tables = core::researchTables(document_->colony(), document_->residences(), *o);

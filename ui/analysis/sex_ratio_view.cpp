@@ -330,6 +330,9 @@ bool SexRatioView::saveSpeciesSetting()
 
 void SexRatioView::recompute()
 {
+    // A large file read group by group: reading this group announces a change,
+    // which has recomputed this view (or marked it stale) already.
+    if (document_->holdGroup(group_->currentData().toString())) return;
     births_ = core::computeMaternalRanks(
         document_->colony(), document_->residences(),
         documentMaternalOptions(toStdString(group_->currentData().toString()), gestation_->value(), maturity_->value(),

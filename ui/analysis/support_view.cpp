@@ -176,6 +176,9 @@ void SupportView::recompute()
         flags_->clear();
         return;
     }
+    // A large file read group by group: reading this group announces a change,
+    // which has recomputed this view (or marked it stale) already.
+    if (document_->holdGroup(group_->currentData().toString())) return;
     core::SupportOptions o;
     const core::AnalysisSettings settings = documentAnalysisSettings(document_);
     o.group = toStdString(group_->currentData().toString());

@@ -1,8 +1,10 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "ui/document/colony_document.h"
 
+#include "ui/document/background_encounter_load.h"
 #include "ui/document/qt_convert.h"
 
+#include <QEventLoop>
 #include <QFileInfo>
 #include <QLocale>
 #include <QUndoStack>
@@ -12,9 +14,24 @@
 
 namespace hierloom::ui {
 
-ColonyDocument::ColonyDocument(QObject* parent) : QObject(parent), undoStack_(new QUndoStack(this)) {}
+namespace {
 
-ColonyDocument::~ColonyDocument() = default;
+// Every encounter that may belong to `group` (core/store/colony_store.h).
+core::EncounterScope groupScope(const std::string& group)
+{
+    core::EncounterScope scope;
+    scope.group = group;
+    return scope;
+}
+
+} // namespace
+
+ColonyDocument::ColonyDocument(QObject* parent)
+    : QObject(parent), colony_(std::make_shared<core::Colony>()), undoStack_(new QUndoStack(this))
+{
+}
+
+ColonyDocument::~ColonyDocument() { stopBackgroundLoad(); }
 
 void ColonyDocument::open(const QString& path, bool readOnly)
 {
@@ -27,31 +44,257 @@ void ColonyDocument::create(const QString& path)
     adopt(core::ColonyStore::create(toStdString(path)), path, false);
 }
 
+ColonyDocument::Read ColonyDocument::readFile(const core::ColonyStore& store, std::vector<std::string> groups) const
+{
+    Read read;
+    read.encounters = store.encounterCount();
+    if (read.encounters < progressiveFrom_) {
+        read.colony = store.load();
+        return read;
+    }
+    // A large file: animals, residences and the encounters of some groups now, the rest later.
+    read.complete = false;
+    read.colony.animals = store.loadAnimals();
+    read.colony.residences = store.loadResidences();
+    if (groups.empty()) {
+        const core::ResidenceIndex where(read.colony.animals, read.colony.residences);
+        if (!where.groups().empty()) groups.push_back(where.groups().front());
+    }
+    for (const std::string& g : groups) {
+        std::vector<core::Encounter> part = store.loadEncounters(groupScope(g));
+        auto& cache = read.colony.encounters;
+        std::vector<core::Encounter> merged;
+        merged.reserve(cache.size() + part.size());
+        std::merge(std::make_move_iterator(cache.begin()), std::make_move_iterator(cache.end()),
+                   std::make_move_iterator(part.begin()), std::make_move_iterator(part.end()), std::back_inserter(merged),
+                   [](const core::Encounter& a, const core::Encounter& b) { return a.seq < b.seq; });
+        merged.erase(std::unique(merged.begin(), merged.end(),
+                                 [](const core::Encounter& a, const core::Encounter& b) { return a.seq == b.seq; }),
+                     merged.end());
+        cache = std::move(merged);
+    }
+    read.groups = std::move(groups);
+    return read;
+}
+
 void ColonyDocument::adopt(core::ColonyStore store, const QString& path, bool readOnly)
 {
     // Load before replacing anything, so a file that fails to load leaves
     // the previous colony open and intact.
     // Asked before loading: a write by another program after this is noticed later.
     const std::int64_t version = store.dataVersion();
-    core::Colony colony = store.load();
-    core::ResidenceIndex residences(colony.animals, colony.residences);
+    Read read = readFile(store, {});
     // The commands of the previous file would write to this one.
     clearHistory(tr("another colony file was opened"));
+    stopBackgroundLoad();
     store_.emplace(std::move(store));
-    colony_ = std::move(colony);
-    colony_.reindex();
-    residences_ = std::move(residences);
     path_ = path;
     readOnly_ = readOnly;
     knownVersion_ = version;
+    const std::vector<std::string> shown = read.groups;
+    take(std::move(read));
     emitChange({});
+    // A partial cache: the views turn to the group it holds, not to "all groups".
+    if (!shown.empty()) emit groupShown(toQString(shown.front()));
+}
+
+void ColonyDocument::take(Read read)
+{
+    stopBackgroundLoad();
+    residences_ = core::ResidenceIndex(read.colony.animals, read.colony.residences);
+    colony_ = std::make_shared<core::Colony>(std::move(read.colony));
+    colony_->reindex();
+    snapshot_ = {};
+    complete_ = read.complete;
+    heldGroups_ = std::move(read.groups);
+    keptFromSeq_ = colony_->encounters.empty() ? 0 : colony_->encounters.back().seq;
+    if (!complete_ && read.encounters <= readEverythingUpTo_) startBackgroundLoad();
+    else if (!complete_) startBackgroundCheck();
+}
+
+void ColonyDocument::startBackgroundCheck()
+{
+    const std::uint64_t generation = ++checkGeneration_;
+    const std::int64_t version = store_->dataVersion();
+    auto done = [this, generation, version](BackgroundEncounterLoad::Encounters, const std::string& error) {
+        QMetaObject::invokeMethod(
+            this,
+            [this, generation, version, error] {
+                if (generation != checkGeneration_) return;
+                checker_.reset(); // its thread has ended
+                if (!error.empty()) {
+                    emit loadFailed(QString::fromUtf8(error.c_str()));
+                    return;
+                }
+                if (store_) store_->trustIntegrityCheckedAt(version);
+            },
+            Qt::QueuedConnection);
+    };
+    checker_ = std::make_unique<BackgroundEncounterLoad>(store_->path(), std::vector<std::string>{}, -1,
+                                                         [](int, int) {}, std::move(done));
+}
+
+void ColonyDocument::readEverything()
+{
+    if (!store_ || complete_ || loader_) return;
+    startBackgroundLoad();
+    emit loadProgress(0, static_cast<int>(residences_.groups().size()));
+}
+
+void ColonyDocument::dropOldGroups()
+{
+    if (loader_ || heldGroups_.size() <= heldGroupLimit_) return;
+    const std::vector<std::string> dropped(heldGroups_.begin(),
+                                           heldGroups_.end() - static_cast<std::ptrdiff_t>(heldGroupLimit_));
+    heldGroups_.erase(heldGroups_.begin(), heldGroups_.end() - static_cast<std::ptrdiff_t>(heldGroupLimit_));
+    // Rows without a group stay (they may be in a held group's scope too), and so do new ones.
+    std::erase_if(editColony().encounters, [&](const core::Encounter& e) {
+        return e.seq <= keptFromSeq_ && !e.group.empty() &&
+               std::find(dropped.begin(), dropped.end(), e.group) != dropped.end();
+    });
+}
+
+void ColonyDocument::startBackgroundLoad()
+{
+    const std::uint64_t generation = ++loadGeneration_;
+    journal_.clear();
+    // The load's connection checks the whole file (quick_check) as it opens;
+    // this one may then skip that check before its first write.
+    const std::int64_t version = store_->dataVersion();
+    // The callbacks run on the load's thread: each is passed to this one, and
+    // dropped there when the load was replaced or stopped meanwhile.
+    auto progress = [this, generation](int done, int total) {
+        QMetaObject::invokeMethod(
+            this,
+            [this, generation, done, total] {
+                if (generation == loadGeneration_) emit loadProgress(done, total);
+            },
+            Qt::QueuedConnection);
+    };
+    auto finished = [this, generation, version](BackgroundEncounterLoad::Encounters all, const std::string& error) {
+        QMetaObject::invokeMethod(
+            this,
+            [this, generation, version, all, error] {
+                if (generation != loadGeneration_) return;
+                if (all) {
+                    store_->trustIntegrityCheckedAt(version);
+                    backgroundLoaded(all);
+                }
+                else {
+                    stopBackgroundLoad();
+                    emit loadFailed(tr("Not every encounter of %1 could be read: %2")
+                                        .arg(QFileInfo(path_).fileName(), QString::fromUtf8(error.c_str())));
+                }
+            },
+            Qt::QueuedConnection);
+    };
+    loader_ = std::make_unique<BackgroundEncounterLoad>(store_->path(), residences_.groups(), store_->encounterCount(),
+                                                        std::move(progress), std::move(finished));
+}
+
+void ColonyDocument::stopBackgroundLoad()
+{
+    ++loadGeneration_;
+    ++checkGeneration_;
+    checker_.reset();
+    loader_.reset(); // cancels and waits for its thread
+    journal_.clear();
+}
+
+void ColonyDocument::backgroundLoaded(std::shared_ptr<std::vector<core::Encounter>> all)
+{
+    // The load read the file while this window may have written to it: its
+    // own changes are applied again, by seq, whether the load saw them or not.
+    std::vector<core::Encounter>& rows = *all;
+    const auto bySeq = [](const core::Encounter& e, std::int64_t seq) { return e.seq < seq; };
+    for (const auto& [removed, inserted] : journal_) {
+        for (const core::Encounter& r : removed) {
+            auto it = std::lower_bound(rows.begin(), rows.end(), r.seq, bySeq);
+            if (it != rows.end() && it->seq == r.seq) rows.erase(it);
+        }
+        for (const core::Encounter& e : inserted) {
+            auto it = std::lower_bound(rows.begin(), rows.end(), e.seq, bySeq);
+            if (it != rows.end() && it->seq == e.seq) *it = e;
+            else rows.insert(it, e);
+        }
+    }
+    stopBackgroundLoad();
+    editColony().encounters = std::move(rows);
+    complete_ = true;
+    heldGroups_.clear();
+    emitChange({ChangeKind::EncountersChanged, 0});
+    emit loadFinished();
+}
+
+bool ColonyDocument::holdsGroup(const std::string& group) const
+{
+    return complete_ || std::find(heldGroups_.begin(), heldGroups_.end(), group) != heldGroups_.end();
+}
+
+bool ColonyDocument::holdGroup(const QString& group)
+{
+    const std::string g = toStdString(group);
+    if (!store_ || g.empty() || complete_) return false;
+    if (auto at = std::find(heldGroups_.begin(), heldGroups_.end(), g); at != heldGroups_.end()) {
+        std::rotate(at, at + 1, heldGroups_.end()); // now the most recently asked for
+        return false;
+    }
+    std::vector<core::Encounter> part = store_->loadEncounters(groupScope(g));
+    std::vector<core::Encounter>& cache = editColony().encounters;
+    std::vector<core::Encounter> merged;
+    merged.reserve(cache.size() + part.size() + 4096);
+    std::merge(std::make_move_iterator(cache.begin()), std::make_move_iterator(cache.end()),
+               std::make_move_iterator(part.begin()), std::make_move_iterator(part.end()), std::back_inserter(merged),
+               [](const core::Encounter& a, const core::Encounter& b) { return a.seq < b.seq; });
+    // This window's own new rows of the group may be in the cache already.
+    merged.erase(std::unique(merged.begin(), merged.end(),
+                             [](const core::Encounter& a, const core::Encounter& b) { return a.seq == b.seq; }),
+                 merged.end());
+    cache = std::move(merged);
+    heldGroups_.push_back(g);
+    dropOldGroups();
+    emitChange({ChangeKind::EncountersChanged, 0});
+    return true;
+}
+
+void ColonyDocument::showGroup(const QString& group)
+{
+    // The views turn first and read the group as they do (one computation,
+    // not one for the old group and one for the new); then whatever no view read.
+    emit groupShown(group);
+    holdGroup(group);
+}
+
+std::int64_t ColonyDocument::encountersInFile() const
+{
+    if (complete_ || !store_) return static_cast<std::int64_t>(colony_->encounters.size());
+    return store_->encounterCount();
+}
+
+void ColonyDocument::finishLoading()
+{
+    if (complete_ || !loader_) return;
+    QEventLoop loop;
+    connect(this, &ColonyDocument::loadFinished, &loop, &QEventLoop::quit);
+    connect(this, &ColonyDocument::loadFailed, &loop, &QEventLoop::quit);
+    loop.exec();
+}
+
+core::Colony& ColonyDocument::editColony()
+{
+    snapshot_ = {};
+    if (colony_.use_count() > 1) colony_ = std::make_shared<core::Colony>(*colony_);
+    return *colony_;
 }
 
 void ColonyDocument::close()
 {
     clearHistory(tr("the colony was closed"));
+    stopBackgroundLoad();
+    complete_ = true;
+    heldGroups_.clear();
     store_.reset();
-    colony_ = core::Colony{};
+    colony_ = std::make_shared<core::Colony>();
     residences_ = core::ResidenceIndex{};
     path_.clear();
     readOnly_ = false;
@@ -69,11 +312,10 @@ void ColonyDocument::reload()
 {
     if (!store_) return;
     const std::int64_t version = store_->dataVersion();
-    core::Colony colony = store_->load();
+    // A partial cache reads the groups it held again (the rest in the background).
+    Read read = readFile(*store_, complete_ ? std::vector<std::string>{} : heldGroups_);
     knownVersion_ = version;
-    residences_ = core::ResidenceIndex(colony.animals, colony.residences);
-    colony_ = std::move(colony);
-    colony_.reindex();
+    take(std::move(read));
     emitChange({});
 }
 
@@ -84,8 +326,8 @@ bool ColonyDocument::catchUpWithFile()
     if (!writtenElsewhere()) return false;
     const QLocale locale;
     const auto count = [&locale](size_t n) { return locale.toString(static_cast<qulonglong>(n)); };
-    const size_t animals = colony_.animals.size();
-    const size_t encounters = colony_.encounters.size();
+    const size_t animals = colony_->animals.size();
+    const auto encounters = static_cast<size_t>(encountersInFile());
     const QString file = QFileInfo(path_).fileName();
     // First the history: its commands would write records as this window last saw them.
     clearHistory(tr("another program changed %1").arg(file));
@@ -100,8 +342,8 @@ bool ColonyDocument::catchUpWithFile()
     // What matters first: a status bar may cut the end off.
     emit changedOutside(tr("Another program changed %1; it was read again and the undo history emptied "
                            "(encounters %2 → %3, animals %4 → %5), so Undo cannot change records this window did not write.")
-                            .arg(file, count(encounters), count(colony_.encounters.size()), count(animals),
-                                 count(colony_.animals.size())));
+                            .arg(file, count(encounters), count(static_cast<size_t>(encountersInFile())), count(animals),
+                                 count(colony_->animals.size())));
     return true;
 }
 
@@ -155,18 +397,20 @@ void ColonyDocument::setAuditUserName(const std::string& name)
 void ColonyDocument::reloadAnimals()
 {
     if (!store_) return;
-    colony_.animals = store_->loadAnimals();
-    colony_.residences = store_->loadResidences();
-    colony_.reindex();
-    residences_ = core::ResidenceIndex(colony_.animals, colony_.residences);
+    core::Colony& colony = editColony();
+    colony.animals = store_->loadAnimals();
+    colony.residences = store_->loadResidences();
+    colony.reindex();
+    residences_ = core::ResidenceIndex(colony.animals, colony.residences);
     emitChange({ChangeKind::AnimalsChanged, 0});
 }
 
 void ColonyDocument::applyEncounterChange(const std::vector<core::Encounter>& removed,
                                           const std::vector<core::Encounter>& inserted)
 {
+    if (loader_) journal_.emplace_back(removed, inserted);
     // The cache is in seq order, so each record is found by binary search.
-    auto& cache = colony_.encounters;
+    auto& cache = editColony().encounters;
     const auto bySeq = [](const core::Encounter& e, std::int64_t seq) { return e.seq < seq; };
     for (const core::Encounter& r : removed) {
         auto it = std::lower_bound(cache.begin(), cache.end(), r.seq, bySeq);
@@ -199,7 +443,7 @@ void ColonyDocument::emitChange(Change change)
 ColonyDocument::Snapshot ColonyDocument::snapshot() const
 {
     if (!snapshot_.colony) {
-        snapshot_.colony = std::make_shared<const core::Colony>(colony_);
+        snapshot_.colony = colony_; // shared: the next change copies it first if a job still holds it
         snapshot_.residences = std::make_shared<const core::ResidenceIndex>(residences_);
     }
     return snapshot_;

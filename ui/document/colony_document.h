@@ -7,6 +7,7 @@
 #include <QObject>
 #include <QString>
 
+#include <algorithm>
 #include <cstdint>
 #include <memory>
 #include <optional>
@@ -16,12 +17,23 @@ class QUndoStack;
 
 namespace hierloom::ui {
 
+class BackgroundEncounterLoad;
 class ColonyEditFacade;
 class ColonyCommand;
 
 /// The one open colony file and a cached copy of its records. Models and
 /// views read the cache (and the file through the const store()) and listen
-/// to changed(kind). Only the edit facade and its undo commands
+/// to changed(kind).
+///
+/// A file of many encounters (progressiveFrom()) opens in steps: the animals,
+/// residences and the encounters of one group first, so the first view shows
+/// at once, then every encounter on a thread of its own (loadProgress,
+/// loadFinished). Until then the cache holds the encounters of the groups
+/// asked for (holdGroup) and of this window's own edits, and isComplete() is
+/// false; views that need every group wait for loadFinished. Above
+/// readEverythingUpTo() encounters (a centre whose records would not fit the
+/// memory aim) nothing more is read by itself: the cache keeps the groups in
+/// use (the last heldGroupLimit() asked for) until readEverything() is called. Only the edit facade and its undo commands
 /// (colony_edit_facade.h, edit_commands.h) may write to the file: they alone
 /// see the writable store. Errors are thrown as core::ColonyFileError.
 class ColonyDocument : public QObject {
@@ -48,6 +60,44 @@ public:
     void close();
     /// Re-reads every record from the file (after a failed write, or when another program wrote to it).
     void reload();
+
+    /// True when the cache holds every encounter of the file (always, below progressiveFrom()).
+    bool isComplete() const { return complete_; }
+    /// True while the background load runs (it stops when it finished, failed or the file was closed).
+    bool isLoading() const { return loader_ != nullptr; }
+    /// True when the cache holds every encounter of `group`'s scope (always once complete).
+    bool holdsGroup(const std::string& group) const;
+    /// Makes sure the cache holds the encounters of `group` (read through the
+    /// encounter_by_group index when the file is still loading; an
+    /// EncountersChanged follows). Views call it when they turn to a group;
+    /// true when it read the group and announced the change (which has
+    /// recomputed a view on screen, or marked a hidden one stale, already).
+    bool holdGroup(const QString& group);
+    /// Shows `group` in every view that has a group choice: holdGroup(group),
+    /// then groupShown(group). The one "go to this group" of the desktop
+    /// (the centre overview, the first group of a large file).
+    void showGroup(const QString& group);
+    /// The encounters in the file: the cache's count once complete, else asked of the file.
+    std::int64_t encountersInFile() const;
+    /// Waits (running the event loop) until the background load has finished or failed.
+    void finishLoading();
+    /// Files with at least this many encounters open in steps (default 300,000).
+    void setProgressiveFrom(std::int64_t encounters) { progressiveFrom_ = encounters; }
+    std::int64_t progressiveFrom() const { return progressiveFrom_; }
+    /// Files with at most this many encounters are read whole in the background
+    /// after the first group (default 1,000,000, about 330 MiB of records);
+    /// larger ones keep only the groups in use until readEverything().
+    void setReadEverythingUpTo(std::int64_t encounters) { readEverythingUpTo_ = encounters; }
+    std::int64_t readEverythingUpTo() const { return readEverythingUpTo_; }
+    /// How many groups a cache that is not complete keeps (default 4); the
+    /// least recently asked for is dropped first, never this window's new rows.
+    void setHeldGroupLimit(std::size_t groups) { heldGroupLimit_ = std::max<std::size_t>(groups, 1); }
+    std::size_t heldGroupLimit() const { return heldGroupLimit_; }
+    /// Starts reading every encounter in the background (progress as on
+    /// opening); nothing when complete or already loading.
+    void readEverything();
+    /// The groups a cache that is not complete holds, least recently asked for first.
+    const std::vector<std::string>& heldGroups() const { return heldGroups_; }
 
     /// True when another program (any other connection: the command line, a
     /// second window) has written to the file since this document last read
@@ -85,7 +135,7 @@ public:
 
     /// The open store for reading, or nullptr; writes go through ColonyEditFacade.
     const core::ColonyStore* store() const { return store_ ? &*store_ : nullptr; }
-    const core::Colony& colony() const { return colony_; }
+    const core::Colony& colony() const { return *colony_; }
     const core::ResidenceIndex& residences() const { return residences_; }
 
     /// The name stamped on the audit rows of this connection's writes (not a
@@ -114,6 +164,14 @@ signals:
     /// An edit was undone (`undone` true) or redone; `text` is the edit's name
     /// ("Enter NC004 over NC012"), for the status bar.
     void historyStepped(bool undone, const QString& text);
+    /// A view with a group choice should turn to `group` (showGroup).
+    void groupShown(const QString& group);
+    /// The background load of a large file: `done` of `total` groups read.
+    void loadProgress(int done, int total);
+    /// Every encounter is now in the cache (an EncountersChanged came just before).
+    void loadFinished();
+    /// The background load failed; the cache keeps the groups it holds.
+    void loadFailed(const QString& message);
 
 private:
     // The writers: the facade and the undo commands reach the store and the
@@ -134,11 +192,32 @@ private:
     /// inside which the history may not be emptied.
     void catchUpLater();
 
+    /// What a read of the file gave: everything, or (a large file) the
+    /// encounters of `groups` only.
+    struct Read {
+        core::Colony colony;
+        bool complete = true;
+        std::vector<std::string> groups;
+        std::int64_t encounters = 0; // in the file
+    };
+    Read readFile(const core::ColonyStore& store, std::vector<std::string> groups) const;
     void adopt(core::ColonyStore store, const QString& path, bool readOnly);
+    /// Takes a read as the cache; starts the background load when it is partial.
+    void take(Read read);
+    void startBackgroundLoad();
+    /// The quick check of a file kept group by group, on a thread of its own,
+    /// so the first write need not run it (trustIntegrityCheckedAt).
+    void startBackgroundCheck();
+    /// Drops the least recently asked-for groups beyond heldGroupLimit() (not while loading).
+    void dropOldGroups();
+    void stopBackgroundLoad();
+    void backgroundLoaded(std::shared_ptr<std::vector<core::Encounter>> all);
+    /// The cache for changing: copied first when a snapshot still shares it.
+    core::Colony& editColony();
     void emitChange(Change change);
 
     std::optional<core::ColonyStore> store_;
-    core::Colony colony_;
+    std::shared_ptr<core::Colony> colony_; // shared with snapshots until changed
     core::ResidenceIndex residences_;
     QString path_;
     bool readOnly_ = false;
@@ -146,6 +225,20 @@ private:
     QUndoStack* undoStack_;
     mutable Snapshot snapshot_; // empty until asked for after a change
     std::int64_t knownVersion_ = 0; // the store's dataVersion() when the file was last read
+    // Opening in steps (a large file): see the class comment.
+    std::int64_t progressiveFrom_ = 300000;
+    std::int64_t readEverythingUpTo_ = 1000000;
+    std::size_t heldGroupLimit_ = 4;
+    std::int64_t keptFromSeq_ = 0; // rows after this (new since the read) are never dropped from the cache
+    bool complete_ = true;
+    std::vector<std::string> heldGroups_;
+    std::unique_ptr<BackgroundEncounterLoad> loader_;
+    std::unique_ptr<BackgroundEncounterLoad> checker_; // see startBackgroundCheck
+    std::uint64_t checkGeneration_ = 0;
+    std::uint64_t loadGeneration_ = 0; // results of a cancelled load are dropped
+    // This window's encounter changes while the background load runs, applied
+    // again to its result (which may or may not have seen them).
+    std::vector<std::pair<std::vector<core::Encounter>, std::vector<core::Encounter>>> journal_;
 };
 
 } // namespace hierloom::ui

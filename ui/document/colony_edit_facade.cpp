@@ -148,9 +148,20 @@ core::FieldProblems ColonyEditFacade::recordBirth(const core::Animal& newborn)
                             tr("Birth of %1 to %2").arg(toQString(newborn.id), toQString(newborn.mother)));
 }
 
+void ColonyEditFacade::holdGroupsOf(const std::string& id)
+{
+    // An animal's encounters are in the scopes of the groups it lived in; a
+    // large file read group by group must hold them for the checks of its edit.
+    if (document_->isComplete()) return;
+    for (const core::Residence& r : document_->colony().residences)
+        if (r.animal == id) document_->holdGroup(toQString(r.group));
+}
+
 core::FieldProblems ColonyEditFacade::editAnimal(const core::Animal& a)
 {
     if (auto p = writable(); !p.empty()) return p;
+    for (const core::Animal& old : document_->colony().animals)
+        if (old.uid == a.uid || old.id == a.id) holdGroupsOf(old.id);
     return pushAnimalChange(core::planAnimalEdit(document_->colony(), a, today()), tr("Edit animal %1").arg(toQString(a.id)));
 }
 
@@ -158,12 +169,14 @@ core::FieldProblems ColonyEditFacade::recordExit(const std::string& id, core::Da
 {
     if (auto p = writable(); !p.empty()) return p;
     const QString what = type == core::ExitType::Died ? tr("Death of %1") : tr("Removal of %1");
+    holdGroupsOf(id);
     return pushAnimalChange(core::planExit(document_->colony(), id, date, type, today()), what.arg(toQString(id)));
 }
 
 core::FieldProblems ColonyEditFacade::moveAnimal(const std::string& id, const std::string& group, core::Day date)
 {
     if (auto p = writable(); !p.empty()) return p;
+    holdGroupsOf(id);
     return pushAnimalChange(core::planMove(document_->colony(), id, group, date, today()),
                             tr("Move %1 to %2").arg(toQString(id), toQString(group)));
 }

@@ -111,6 +111,8 @@ public:
     void restoreDamagedFile(const QString& backupPath, const QString& colonyPath);
 
 private:
+    /// Reads the groups `id` lived in when a large file is not read whole (holdGroup).
+    void holdGroupsOf(const std::string& id);
     /// Catches up with the file, then refuses a closed or read-only colony.
     core::FieldProblems writable();
     /// Pushes a command, whose first redo() writes; the problems of a failed write.

@@ -22,6 +22,12 @@ std::vector<std::string> groupsWithEncounters(const core::Colony& colony, const 
 QStringList groupsWithEncounters(ColonyDocument* document)
 {
     QStringList out;
+    // A large file still loading: which groups have encounters is known once
+    // every one is read; until then every group is offered (and read when chosen).
+    if (!document->isComplete()) {
+        for (const std::string& g : document->residences().groups()) out << toQString(g);
+        return out;
+    }
     for (const std::string& g : groupsWithEncounters(document->colony(), document->residences())) out << toQString(g);
     return out;
 }

@@ -14,6 +14,8 @@ class ColonyDocument;
 
 /// Groups that have encounters and a resident today or earlier, by name.
 std::vector<std::string> groupsWithEncounters(const core::Colony& colony, const core::ResidenceIndex& where);
+/// The same for the open document; while a large file is still loading
+/// (ColonyDocument::isComplete() false), every group with a resident.
 QStringList groupsWithEncounters(ColonyDocument* document);
 
 } // namespace hierloom::ui

@@ -358,6 +358,8 @@ void EncounterEntryPanel::headerChanged()
     // A new date, group or observer is a new notebook page: close the session.
     // (A new date closed it under its own date before it took over, in dateTyped.)
     if (sessionRowCount() > 0) endSession();
+    // A large file read group by group: the duplicate check needs this group's rows.
+    document_->holdGroup(group_->currentText());
     dayIndexValid_ = false;
     refreshResidents();
     refreshList();

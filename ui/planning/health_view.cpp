@@ -172,6 +172,9 @@ void HealthView::recompute()
         runner_->cancel();
         return;
     }
+    // A large file read group by group: reading this group announces a change,
+    // which has recomputed this view (or marked it stale) already.
+    if (document_->holdGroup(group_->currentData().toString())) return;
     core::HealthOptions o;
     o.group = toStdString(group_->currentData().toString());
     o.today = core::today();

@@ -201,6 +201,12 @@ QStringList PlannerView::savedNames() const
     return out;
 }
 
+void PlannerView::waitForEveryEncounter()
+{
+    document_->readEverything();
+    document_->finishLoading();
+}
+
 void PlannerView::refreshSaved()
 {
     const QString current = savedBox_->currentText();
@@ -294,6 +300,7 @@ void PlannerView::rerun()
     }
     core::Scenario s = composer_->scenario();
     s.elo = documentAnalysisSettings(document_).elo; // Elo is no part of a scenario's text
+    waitForEveryEncounter();
     try {
         result_ = core::runScenario(document_->colony(), s);
     } catch (const core::ScenarioError& e) {
@@ -437,6 +444,7 @@ void PlannerView::compare(const QString& first, const QString& second)
             notes << tr("%1: %2").arg(label, error);
             continue;
         }
+        waitForEveryEncounter();
         try {
             results[k] = core::runScenario(document_->colony(), *s);
             QStringList groups;

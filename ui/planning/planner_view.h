@@ -51,6 +51,9 @@ public:
     int paint(QPagedPaintDevice& device, bool comparison);
 
 private:
+    /// A scenario predicts from every group's record: a large file not yet read
+    /// whole is read first (the status bar shows the progress; the window stays live).
+    void waitForEveryEncounter();
     void rerun();
     void refreshSaved();
     void fillOrders(const core::Scenario& scenario);

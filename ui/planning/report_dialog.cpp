@@ -70,6 +70,9 @@ void runReportDialog(QWidget* parent, ColonyDocument* document, ReportTarget tar
     ReportDialog dialog(document, parent);
     if (dialog.exec() != QDialog::Accepted) return;
     const report::HierarchyReportOptions o = dialog.options();
+    // A large file not read whole: the report needs every encounter (progress in the status bar).
+    document->readEverything();
+    document->finishLoading();
     try {
         if (target == ReportTarget::Pdf) {
             QString path = QFileDialog::getSaveFileName(parent, QObject::tr("Save Hierarchy Report"),

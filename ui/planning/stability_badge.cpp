@@ -28,6 +28,7 @@ StabilityBadge::StabilityBadge(ColonyDocument* document, QWidget* parent)
         if (kind == ColonyDocument::ChangeKind::Reset || kind == ColonyDocument::ChangeKind::SettingsChanged) refresh();
         else debounce_.start();
     });
+    connect(document_, &ColonyDocument::loadFinished, this, &StabilityBadge::refresh);
     refresh();
 }
 
@@ -37,6 +38,12 @@ void StabilityBadge::refresh()
 {
     debounce_.stop();
     if (!document_->isOpen()) {
+        runner_->cancel();
+        show({}, {});
+        return;
+    }
+    // A large file still loading: the alerts need every group, so they wait for the rest.
+    if (!document_->isComplete()) {
         runner_->cancel();
         show({}, {});
         return;

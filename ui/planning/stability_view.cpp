@@ -221,6 +221,9 @@ void StabilityView::recompute()
     thresholdsButton_->setToolTip(document_->isReadOnly() ? tr("The colony is open read-only: thresholds cannot be saved")
                                                           : QString());
     const auto length = static_cast<core::PeriodLength>(length_->currentData().toInt());
+    // A large file read group by group: reading this group announces a change,
+    // which has recomputed this view (or marked it stale) already.
+    if (document_->holdGroup(group_->currentText())) return;
     series_ = document_->isOpen() && !group_->currentText().isEmpty()
                   ? documentStability(document_, toStdString(group_->currentText()), length)
                   : core::StabilitySeries{};

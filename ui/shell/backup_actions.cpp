@@ -1,6 +1,8 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "ui/shell/backup_actions.h"
 
+#include "ui/document/background_backup.h"
+
 #include "core/store/colony_backup.h"
 #include "core/store/colony_store.h"
 #include "ui/document/colony_document.h"
@@ -84,8 +86,14 @@ QString chooseBackup(QWidget* parent, const QString& colonyPath)
 
 BackupActions::BackupActions(QMenu* file, QWidget* window, ColonyEditFacade* facade, ReportError reportError,
                              AskQuestion ask)
-    : QObject(window), window_(window), facade_(facade), document_(facade->document()), reportError_(std::move(reportError)), ask_(std::move(ask))
+    : QObject(window), window_(window), facade_(facade), document_(facade->document()),
+      background_(new BackgroundBackup(this)), reportError_(std::move(reportError)), ask_(std::move(ask))
 {
+    connect(background_, &BackgroundBackup::finished, this, [this](const QString& error) {
+        if (error.isEmpty() || scheduleFailureReported_) return;
+        reportError_(tr("Scheduled Backup Failed"), error);
+        scheduleFailureReported_ = true;
+    });
     backUp_ = file->addAction(tr("&Back Up Now"), this, [this] { backUpNow(); });
     restore_ = file->addAction(tr("&Restore from Backup..."), this, &BackupActions::chooseAndRestore);
     merge_ = file->addAction(tr("&Merge Another Colony..."), this, &BackupActions::mergeAnotherColony);
@@ -177,6 +185,12 @@ void BackupActions::afterOpen()
 void BackupActions::checkSchedule(std::chrono::system_clock::time_point now)
 {
     if (!document_->isOpen() || document_->isReadOnly()) return;
+    // A large file (opened in steps): copied and checked on a thread of its own.
+    if (!document_->isComplete() ||
+        static_cast<std::int64_t>(document_->colony().encounters.size()) >= document_->progressiveFrom()) {
+        background_->startIfDue(document_->path(), now);
+        return;
+    }
     try {
         core::backupIfDue(*document_->store(), now);
     } catch (const std::exception& e) {

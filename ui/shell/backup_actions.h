@@ -14,6 +14,7 @@ class QWidget;
 
 namespace hierloom::ui {
 
+class BackgroundBackup;
 class ColonyDocument;
 class ColonyEditFacade;
 
@@ -63,6 +64,7 @@ private:
     QWidget* window_;
     ColonyEditFacade* facade_;
     ColonyDocument* document_;
+    BackgroundBackup* background_; // the scheduled backup of a large file
     ReportError reportError_;
     AskQuestion ask_;
     QString observer_;

@@ -9,6 +9,8 @@
 #include "ui/document/colony_document.h"
 #include "ui/document/colony_edit_facade.h"
 #include "ui/shell/edit_menus.h"
+#include "ui/shell/group_follower.h"
+#include "ui/shell/load_progress.h"
 #include "ui/entry/encounter_entry_panel.h"
 #include "ui/shell/demo_colony_copy.h"
 #include "ui/records/encounter_view.h"
@@ -71,6 +73,7 @@ MainWindow::MainWindow(const QString& colonyPath, QWidget* parent)
     setCentralWidget(stack_);
 
     statusBar()->addWidget(fileLabel_, 1);
+    statusBar()->addPermanentWidget(new LoadProgress(document_, this));
     statusBar()->addPermanentWidget(animalCount_);
     statusBar()->addPermanentWidget(encounterCount_);
 
@@ -88,6 +91,9 @@ MainWindow::MainWindow(const QString& colonyPath, QWidget* parent)
     connect(document_, &ColonyDocument::historyCleared, this, [this](const QString& reason) {
         statusBar()->showMessage(tr("Undo history cleared: %1.").arg(reason), 10000);
     });
+    new GroupFollower(document_, tabs_);
+    connect(document_, &ColonyDocument::loadFailed, this,
+            [this](const QString& message) { reportError(tr("Cannot Read the Whole Colony"), message); });
     connect(document_, &ColonyDocument::changedOutside, this,
             [this](const QString& message) { statusBar()->showMessage(message, 30000); });
     // Undo and Redo (menu, keys or the entry panel) say what they did.
@@ -337,8 +343,9 @@ void MainWindow::refresh()
     fileLabel_->setToolTip(QDir::toNativeSeparators(document_->path()));
     const auto& colony = document_->colony();
     animalCount_->setText(tr("Animals: %1").arg(locale.toString(static_cast<qlonglong>(colony.animals.size()))));
-    encounterCount_->setText(
-        tr("Encounters: %1").arg(locale.toString(static_cast<qlonglong>(colony.encounters.size()))));
+    const QString encounters = locale.toString(static_cast<qlonglong>(colony.encounters.size()));
+    encounterCount_->setText(document_->isComplete() ? tr("Encounters: %1").arg(encounters)
+                                                     : tr("Encounters: %1 read so far").arg(encounters));
 }
 
 QString MainWindow::lastFolder() const

@@ -98,3 +98,33 @@ TEST(IntegrityCheck, ReadingADamagedFileFailsInsteadOfShowingAlteredRecords)
     }
 }
 
+
+// The desktop's background read checks the file on a connection of its own;
+// the writing connection then trusts that check only while nobody else wrote.
+// The damage is in the encounter index, which a write of the observer list
+// never touches: only the check can refuse it.
+TEST(IntegrityCheck, ACheckPassedElsewhereIsTrustedOnlyUntilAnotherConnectionWrites)
+{
+    TempDir dir;
+    const std::string path = dir.file("c.hierloom");
+    makeColony(path);
+    {
+        ColonyStore trusting = ColonyStore::open(path);
+        trusting.trustIntegrityCheckedAt(trusting.dataVersion());
+        breakEncounterIndex(path);
+        EXPECT_NO_THROW(writeObservers(trusting, {"GW"})); // the check was skipped
+        ColonyStore checking = ColonyStore::open(path);
+        EXPECT_THROW(writeObservers(checking, {"HK"}), ColonyFileError); // no trust: checked and refused
+    }
+    const std::string other = dir.file("d.hierloom");
+    makeColony(other);
+    ColonyStore store = ColonyStore::open(other);
+    const std::int64_t checkedAt = store.dataVersion();
+    {
+        ColonyStore second = ColonyStore::open(other);
+        writeObservers(second, {"JL"}); // another connection commits after the check
+    }
+    breakEncounterIndex(other);
+    store.trustIntegrityCheckedAt(checkedAt);
+    EXPECT_THROW(writeObservers(store, {"GW"}), ColonyFileError);
+}
