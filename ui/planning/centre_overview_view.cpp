@@ -89,6 +89,7 @@ CentreOverviewView::CentreOverviewView(ColonyDocument* document, QWidget* parent
     table_->setSelectionMode(QAbstractItemView::SingleSelection);
     table_->setEditTriggers(QAbstractItemView::NoEditTriggers);
     table_->setAlternatingRowColors(true);
+    table_->setWordWrap(false);
     table_->verticalHeader()->hide();
     table_->horizontalHeader()->setSectionResizeMode(QHeaderView::ResizeToContents);
     table_->horizontalHeader()->setStretchLastSection(true);
@@ -98,7 +99,7 @@ CentreOverviewView::CentreOverviewView(ColonyDocument* document, QWidget* parent
     plot_->yAxis->setRangeReversed(true);
     plot_->yAxis->setLabel(tr("Group"));
     plot_->yAxis->grid()->setVisible(false);
-    plot_->xAxis->setLabel(tr("Encounters in the 30 days up to the day"));
+    plot_->xAxis->setLabel(tr("Encounters in the last 30 days"));
     for (int s = 0; s < 3; ++s) {
         auto* bars = new QCPBars(plot_->yAxis, plot_->xAxis);
         bars->setWidth(0.7);
@@ -108,8 +109,13 @@ CentreOverviewView::CentreOverviewView(ColonyDocument* document, QWidget* parent
         bars_[static_cast<size_t>(s)] = bars;
     }
     bars_[static_cast<size_t>(OverviewState::Alert)]->setName(tr("alert in the last month"));
+    // The legend in a row of its own above the bars, so it never covers one.
+    plot_->plotLayout()->insertRow(0);
+    plot_->plotLayout()->addElement(0, 0, plot_->legend);
+    plot_->plotLayout()->setRowStretchFactor(0, 0.001);
+    plot_->legend->setFillOrder(QCPLegend::foColumnsFirst);
     plot_->legend->setVisible(true);
-    plot_->axisRect()->insetLayout()->setInsetAlignment(0, Qt::AlignBottom | Qt::AlignRight);
+    plot_->setMinimumWidth(360);
     followPlotPalette(plot_);
 
     auto* split = new QSplitter(Qt::Horizontal, this);
@@ -117,6 +123,8 @@ CentreOverviewView::CentreOverviewView(ColonyDocument* document, QWidget* parent
     split->addWidget(plot_);
     split->setStretchFactor(0, 3);
     split->setStretchFactor(1, 2);
+    split->setSizes({800, 400}); // the table's columns first, whatever the bars' size hint
+    split->setChildrenCollapsible(false);
 
     auto* layout = new QVBoxLayout(this);
     layout->addLayout(controls);
@@ -171,9 +179,9 @@ void CentreOverviewView::recompute()
         }
     }
     model_->reset(day);
-    showSummary();
     if (!document_->isOpen()) {
         runner_->cancel();
+        showSummary();
         return;
     }
     // The job's own connection reads one group at a time: memory follows the
@@ -181,7 +189,7 @@ void CentreOverviewView::recompute()
     auto incoming = std::make_shared<Incoming>();
     incoming_ = incoming;
     const QString path = document_->path();
-    runner_->start([incoming, path, day](const std::atomic<bool>& cancel, const ComputeRunner::Progress& progress) {
+    runner_->start([this, incoming, path, day](const std::atomic<bool>& cancel, const ComputeRunner::Progress& progress) {
         const core::ColonyStore store = openReadingConnection(path);
         const core::AnalysisSettings settings = core::readAnalysisSettings(store);
         core::CentreOverviewReader reader(store, settings.elo, settings.maturityYears);
@@ -192,7 +200,7 @@ void CentreOverviewView::recompute()
             incoming->day = at;
         }
         progress(0, total);
-        if (!at) return ComputeRunner::Apply([] {});
+        if (!at) return ComputeRunner::Apply([this] { takeRows(); });
         int done = 0;
         for (const std::string& group : reader.groups()) {
             if (cancel) return ComputeRunner::Apply{};
@@ -203,8 +211,9 @@ void CentreOverviewView::recompute()
             }
             progress(++done, total);
         }
-        return ComputeRunner::Apply([] {});
+        return ComputeRunner::Apply([this] { takeRows(); });
     });
+    showSummary();
 }
 
 void CentreOverviewView::takeRows()
@@ -263,7 +272,8 @@ void CentreOverviewView::replot()
     }
     for (size_t s = 0; s < 3; ++s) bars_[s]->setData(keys[s], values[s], true);
     plot_->yAxis->setTicker(ticker);
-    plot_->yAxis->setRange(-0.6, std::max(0.4, plotted_.size() - 0.4));
+    // Room for eight bars at least, so one or two groups do not fill the plot.
+    plot_->yAxis->setRange(-0.6, std::max(7.4, plotted_.size() - 0.4));
     plot_->xAxis->setRange(0, top > 0 ? top * 1.1 : 1);
     plot_->replot(QCustomPlot::rpQueuedReplot);
 }
