@@ -181,6 +181,7 @@ void CentreOverviewView::recompute()
     model_->reset(day);
     if (!document_->isOpen()) {
         runner_->cancel();
+        incoming_.reset(); // rows a cancelled reading still reports are dropped
         showSummary();
         return;
     }
