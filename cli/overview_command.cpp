@@ -4,15 +4,13 @@
 #include "cli/colony_loading.h"
 #include "cli/commands.h"
 
-#include "core/planning/centre_overview.h"
 #include "core/planning/planning_caution.h"
 #include "core/store/analysis_settings_store.h"
+#include "core/store/centre_overview_reader.h"
 #include "core/store/colony_store.h"
-#include "core/store/stability_settings.h"
 
 #include <CLI/CLI.hpp>
 
-#include <algorithm>
 #include <ostream>
 #include <sstream>
 
@@ -32,31 +30,22 @@ void runOverview(CommandContext& ctx, const OverviewOptions& o)
 {
     const std::optional<Day> asked = optionDate(o.at, "--at");
     // One connection (one integrity check); each group's encounters are read
-    // in turn, so memory follows the largest group, not the centre.
+    // in turn (core/store/centre_overview_reader.h), so memory follows the
+    // largest group, not the centre.
     const ColonyStore store = ColonyStore::open(o.colony, ColonyStore::Mode::ReadOnly);
     LoadedColony loaded;
-    loaded.colony.animals = store.loadAnimals();
-    loaded.colony.residences = store.loadResidences();
-    loaded.colony.reindex();
-    loaded.where = ResidenceIndex(loaded.colony.animals, loaded.colony.residences);
     loaded.settings = readAnalysisSettings(store);
     const AnalysisSettings settings = analysisSettingsOf(loaded, o.analysis, {});
     reportAnalysisSettings(ctx, "overview", settings, &o.analysis, {});
-    const std::optional<Day> at = asked ? asked : store.lastEncounterDay();
+    CentreOverviewReader reader(store, settings.elo, settings.maturityYears);
+    const std::optional<Day> at = asked ? asked : reader.lastEncounterDay();
     if (!at) throw BadInputError("the colony has no encounters; give a date with --at");
-    StabilityOptions so;
-    so.elo = settings.elo;
-    so.thresholds = readStabilityThresholds(store);
-    so.severity = behaviourSeverities(store);
-    const Matrilines lines(loaded.colony);
     std::ostringstream out;
     out << "group,animals,adult_females,matrilines,last_encounter,encounters_30_days,stability,alerts\n";
     int alerting = 0;
-    std::vector<std::string> groups = loaded.where.groups();
-    std::sort(groups.begin(), groups.end());
+    const std::vector<std::string>& groups = reader.groups();
     for (const std::string& group : groups) {
-        loaded.colony.encounters = store.loadEncounters(EncounterScope{group, {}, at});
-        const GroupOverview g = overviewOfGroup(loaded.colony, loaded.where, lines, group, *at, so, settings.maturityYears);
+        const GroupOverview g = reader.read(group, *at);
         std::string alerts;
         for (StabilitySignal s : g.alerts) alerts += (alerts.empty() ? "" : " ") + std::string(toString(s));
         alerting += g.alerts.empty() ? 0 : 1;

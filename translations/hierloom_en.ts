@@ -624,6 +624,155 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
 </context>
 <context>
+    <name>hierloom::ui::CentreOverviewModel</name>
+    <message>
+        <source>no encounters</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>calm</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>alert</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Counter-dominance</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Rank changes</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Severe aggression</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>No encounters of this group up to %1: there is nothing to watch.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>The monthly stability watch raised no alert in the group&apos;s last month up to %1.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message numerus="yes">
+        <source>The monthly stability watch raised %n alert(s) in the group&apos;s last month up to %1; the Alerts column says which.</source>
+        <translation type="unfinished">
+            <numerusform></numerusform>
+            <numerusform></numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>The Stability view shows the evidence period by period.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Enter or double-click: this group in the Hierarchy view</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Group</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Animals</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Adult females</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Matrilines</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Last encounter</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Encounters, 30 days</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Stability</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Alerts</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Animals resident in the group on the day</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Resident females at or past the maturity age on the day</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Distinct matrilines among the resident females</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>The group&apos;s last encounter up to the day</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>The group&apos;s encounters in the 30 days ending on the day, draws included</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>The monthly stability watch in the group&apos;s last month up to the day</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>The alerts of that month; the tooltip of a row gives the evidence</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
+    <name>hierloom::ui::CentreOverviewView</name>
+    <message>
+        <source>the overview, group by group</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>last encounter</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>The day of the overview (2026-10-05 or 20261005); empty: the colony&apos;s last encounter</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>O&amp;n:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Group</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Encounters in the last 30 days</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>alert in the last month</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>No encounters yet: give a day.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1: groups %2, with alerts in their last month %3</source>
+        <translation type="unfinished"></translation>
+    </message>
+</context>
+<context>
     <name>hierloom::ui::ColonyDocument</name>
     <message>
         <source>another colony file was opened</source>
@@ -4258,6 +4407,10 @@ animal</source>
     </message>
     <message>
         <source>&amp;Data Health</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Centre Overview</source>
         <translation type="unfinished"></translation>
     </message>
 </context>

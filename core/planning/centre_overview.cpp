@@ -24,7 +24,10 @@ GroupOverview overviewOfGroup(const Colony& colony, const ResidenceIndex& where,
     stability.length = PeriodLength::Month;
     const StabilitySeries series = stabilityWatch(colony, where, lines, stability);
     out.watched = !series.periods.empty();
-    for (const StabilityAlert& a : series.latestAlerts()) out.alerts.push_back(a.signal);
+    for (const StabilityAlert& a : series.latestAlerts()) {
+        out.alerts.push_back(a.signal);
+        out.evidence.push_back(describeAlert(series, a));
+    }
     return out;
 }
 

@@ -23,6 +23,7 @@ struct GroupOverview {
     int recentEncounters = 0;            ///< its encounters in the kRecentDays up to the day
     bool watched = false;                ///< the stability watch has at least one month
     std::vector<StabilitySignal> alerts; ///< alerts of the watch's last month (up to the day)
+    std::vector<std::string> evidence;   ///< one describeAlert sentence per alert, in the same order
 };
 
 /// The overview row of `group` on day `at`. `colony` needs only the group's

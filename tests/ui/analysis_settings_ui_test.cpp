@@ -77,7 +77,7 @@ TEST(ViewRegistry, ViewMenuHasEveryViewWithItsShortcut)
 {
     OpenWindow w;
     const std::vector<ui::ViewEntry>& views = ui::viewRegistry();
-    ASSERT_EQ(views.size(), 12U);
+    ASSERT_EQ(views.size(), 13U);
     const QList<QAction*>& actions = w.window.viewActions();
     ASSERT_EQ(actions.size(), static_cast<qsizetype>(views.size()));
     std::set<QString> shortcuts, ids;
@@ -96,6 +96,7 @@ TEST(ViewRegistry, ViewMenuHasEveryViewWithItsShortcut)
     EXPECT_EQ(actions[9]->shortcut(), QKeySequence(Qt::CTRL | Qt::Key_0));
     EXPECT_EQ(actions[10]->shortcut(), QKeySequence(Qt::CTRL | Qt::Key_K)); // the eleventh, Support
     EXPECT_EQ(actions[11]->shortcut(), QKeySequence(Qt::CTRL | Qt::Key_D)); // the twelfth, Data Health
+    EXPECT_EQ(actions[12]->shortcut(), QKeySequence(Qt::CTRL | Qt::Key_G)); // the thirteenth, Centre Overview
     EXPECT_EQ(QString::fromLatin1(views[2].id), QStringLiteral("timeline"));
 
     // Pressing each shortcut on the window shows that view, from the last view backwards.

@@ -6,17 +6,19 @@ class QTabWidget;
 
 namespace hierloom::ui {
 
+class CentreOverviewView;
 class ColonyDocument;
 class ColonyEditFacade;
 class PlannerView;
 class StabilityBadge;
 class StabilityView;
 
-/// The colony manager's tabs (made by ui/shell/view_registry.h) and the status-bar alert.
+/// The colony manager's tabs (planner, stability, centre overview) (made by ui/shell/view_registry.h) and the status-bar alert.
 struct ColonyManagerViews {
     PlannerView* planner = nullptr;
     StabilityView* stability = nullptr;
     StabilityBadge* badge = nullptr;
+    CentreOverviewView* overview = nullptr;
 };
 
 /// Adds the stability badge to the window's status bar (a click shows the

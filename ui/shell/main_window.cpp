@@ -20,6 +20,10 @@
 #include "ui/records/record_history_dialog.h"
 #include "ui/analysis/analysis_settings_dialog.h"
 #include "ui/analysis/research_export_dialog.h"
+#include "ui/analysis/hierarchy_plots_view.h"
+#include "ui/analysis/rank_timeline_view.h"
+#include "ui/planning/centre_overview_view.h"
+#include "ui/planning/stability_view.h"
 #include "ui/document/animal_selection.h"
 #include "ui/shell/welcome_panel.h"
 
@@ -78,6 +82,14 @@ MainWindow::MainWindow(const QString& colonyPath, QWidget* parent)
     statusBar()->addPermanentWidget(encounterCount_);
 
     addStabilityBadge(this, tabs_, document_, views_.manager);
+    // A group chosen in the centre overview: its hierarchy, with the same group
+    // chosen in the rank timeline and the stability watch.
+    connect(views_.manager.overview, &CentreOverviewView::groupChosen, this, [this](const QString& group) {
+        views_.analysis.timeline->setGroup(group);
+        views_.manager.stability->setGroup(group);
+        views_.analysis.hierarchy->setGroup(group);
+        showView(QStringLiteral("hierarchy"));
+    });
 
     buildMenus();
     new EditMenus(this, facade_, [this] {

@@ -8,6 +8,7 @@
 #include "ui/analysis/sex_ratio_view.h"
 #include "ui/analysis/support_view.h"
 #include "ui/entry/encounter_entry_panel.h"
+#include "ui/planning/centre_overview_view.h"
 #include "ui/planning/health_view.h"
 #include "ui/planning/planner_view.h"
 #include "ui/planning/stability_view.h"
@@ -53,6 +54,9 @@ const std::vector<ViewEntry>& viewRegistry()
          [](const ViewContext& c) { return c.parts.analysis.support = new SupportView(c.document, c.window); }},
         {"health", QT_TRANSLATE_NOOP("hierloom::ui::ViewRegistry", "&Data Health"), Qt::Key_D,
          [](const ViewContext& c) { return new HealthView(c.document, c.window); }},
+        // Every group of a centre in one table; Ctrl+G for "groups".
+        {"overview", QT_TRANSLATE_NOOP("hierloom::ui::ViewRegistry", "&Centre Overview"), Qt::Key_G,
+         [](const ViewContext& c) { return c.parts.manager.overview = new CentreOverviewView(c.document, c.window); }},
     };
     return views;
 }

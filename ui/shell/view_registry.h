@@ -38,7 +38,7 @@ struct ViewContext {
 };
 
 /// One tab of the main window. The registry order is the tab order, the View
-/// menu order and the shortcut order (Ctrl+1 ... Ctrl+9, Ctrl+0, then Ctrl+K).
+/// menu order and the shortcut order (Ctrl+1 ... Ctrl+9, Ctrl+0, then Ctrl+K, Ctrl+D, Ctrl+G).
 struct ViewEntry {
     const char* id;    ///< objectName and `hierloom --view NAME`
     const char* title; ///< menu text with its mnemonic; translated in the "hierloom::ui::ViewRegistry" context
@@ -47,7 +47,7 @@ struct ViewEntry {
 };
 
 /// Every view, in tab order: animals, encounters, timeline, prediction, matrix,
-/// hierarchy, sex-ratio, entry, planner, stability, support, health.
+/// hierarchy, sex-ratio, entry, planner, stability, support, health, overview.
 const std::vector<ViewEntry>& viewRegistry();
 
 /// The translated title; without the mnemonic '&' for tab labels.
