@@ -82,12 +82,10 @@ MainWindow::MainWindow(const QString& colonyPath, QWidget* parent)
     statusBar()->addPermanentWidget(encounterCount_);
 
     addStabilityBadge(this, tabs_, document_, views_.manager);
-    // A group chosen in the centre overview: its hierarchy, with the same group
-    // chosen in the rank timeline and the stability watch.
+    // A group chosen in the centre overview: every view with a group choice
+    // turns to it (the document's one "go to this group"), the hierarchy shows.
     connect(views_.manager.overview, &CentreOverviewView::groupChosen, this, [this](const QString& group) {
-        views_.analysis.timeline->setGroup(group);
-        views_.manager.stability->setGroup(group);
-        views_.analysis.hierarchy->setGroup(group);
+        document_->showGroup(group);
         showView(QStringLiteral("hierarchy"));
     });
 
