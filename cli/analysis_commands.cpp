@@ -5,6 +5,7 @@
 #include "cli/code_help.h"
 #include "cli/commands.h"
 
+#include "core/ranks/compact_selection.h"
 #include "core/ranks/hierarchy_metrics.h"
 #include "core/base/number_format.h"
 #include "core/ranks/parallel_randomisation.h"
@@ -43,9 +44,11 @@ struct RanksOptions {
 
 void runRanks(CommandContext& ctx, const RanksOptions& o)
 {
-    const LoadedColony loaded = loadColony(o.colony, scopeOf(o.window));
+    // Compact records (core/base/compact_encounters.h): every rank method works on the selection's bouts.
+    const LoadedColony loaded = loadCompactColony(o.colony, scopeOf(o.window));
     const AnalysisSettings settings = analysisSettingsOf(loaded, o.analysis, o.window.draws);
     const SelectionOptions sel = withDefaultWindow(selectionOf(o.window, loaded), settings, loaded);
+    auto selected = [&] { return selectEncounters(loaded.compact, loaded.colony.animals, loaded.where, sel); };
     reportAnalysisSettings(ctx, "ranks", settings, &o.analysis, o.window.draws);
     RankOptions r;
     r.method = *parseRankMethod(o.method);
@@ -72,13 +75,14 @@ void runRanks(CommandContext& ctx, const RanksOptions& o)
     if (!o.every.empty()) {
         if (r.at || o.randomise > 0) throw BadInputError("--every cannot be combined with --at or --randomise");
         out << "period_start,period_end,animal,rank,score" << (elo ? ",start_rule" : "") << "\n";
-        for (const PeriodRankRow& p : computeRanksByPeriod(loaded.colony, loaded.where, sel, r, *parsePeriodLength(o.every)))
+        for (const PeriodRankRow& p : computeRanksByPeriod(selected(), loaded.colony, loaded.where, sel, r,
+                                                                *parsePeriodLength(o.every)))
             out << formatDate(p.period.start) << ',' << formatDate(p.period.end) << ',' << csvField(p.row.animal) << ','
                 << p.row.rank << ',' << formatNumber(p.row.score) << (elo ? ruleCell : "") << '\n';
         emit(ctx, out.str());
         return;
     }
-    const RankTable table = computeRanks(loaded.colony, loaded.where, sel, r);
+    const RankTable table = computeRanks(selected(), loaded.colony, loaded.where, sel, r);
     if (table.rows.empty()) ctx.err << "hierloom-cli: no animal could be ranked in this window\n";
     if (r.method == RankMethod::Elo && table.kUsed)
         ctx.err << "elo: k = " << formatNumber(*table.kUsed) << (o.optimiseK ? " (optimised)" : "")
@@ -87,7 +91,7 @@ void runRanks(CommandContext& ctx, const RanksOptions& o)
     // Data health (docs/methods.md, "Data health"): the encounters behind each
     // rank and a flag below the threshold, added after the original columns.
     std::map<std::string, int> counts;
-    for (const auto& [id, n] : encounterCounts(loaded.colony, sel.from, sel.to, sel.group)) counts[id] = n;
+    for (const auto& [id, n] : encounterCounts(loaded.compact, sel.from, sel.to, sel.group)) counts[id] = n;
     out << "animal,rank,score";
     if (o.randomise > 0) out << ",rating_low,rating_high,mean_rank";
     if (elo) out << ",start_rule";

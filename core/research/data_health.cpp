@@ -81,6 +81,25 @@ std::vector<std::pair<std::string, int>> encounterCounts(const Colony& colony, s
     return {counts.begin(), counts.end()};
 }
 
+std::vector<std::pair<std::string, int>> encounterCounts(const CompactEncounters& encounters, std::optional<Day> from,
+                                                         std::optional<Day> to, const std::string& group)
+{
+    const std::int32_t groupCode = group.empty() ? -1 : encounters.groups.find(group);
+    if (!group.empty() && groupCode < 0) return {};
+    const Day last = to.value_or(ResidenceIndex::openEnd);
+    std::vector<int> counts(static_cast<size_t>(encounters.animals.size()), 0);
+    for (const CompactEncounter& e : encounters.records) {
+        if ((from && e.date < *from) || e.date > last || (groupCode >= 0 && e.group != groupCode)) continue;
+        ++counts[static_cast<size_t>(e.winner)];
+        ++counts[static_cast<size_t>(e.loser)];
+    }
+    std::vector<std::pair<std::string, int>> out;
+    for (std::int32_t a = 0; a < encounters.animals.size(); ++a)
+        if (counts[static_cast<size_t>(a)] > 0) out.emplace_back(encounters.animals.name(a), counts[static_cast<size_t>(a)]);
+    std::sort(out.begin(), out.end());
+    return out;
+}
+
 DataHealth dataHealth(const Colony& colony, const ResidenceIndex& where, const HealthOptions& o)
 {
     DataHealth h;

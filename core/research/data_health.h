@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
 #include "core/base/colony.h"
+#include "core/base/compact_encounters.h"
 #include "core/base/residence_index.h"
 #include "core/ranks/elo_rating.h"
 
@@ -101,6 +102,9 @@ DataHealth dataHealth(const Colony& colony, const ResidenceIndex& where, const H
 /// Counted encounters per animal id in a window and group (both animals of
 /// an encounter count it; ignored draws are not counted when draws are ignored).
 std::vector<std::pair<std::string, int>> encounterCounts(const Colony& colony, std::optional<Day> from,
+                                                         std::optional<Day> to, const std::string& group);
+/// The same counts from compact records (core/base/compact_encounters.h).
+std::vector<std::pair<std::string, int>> encounterCounts(const CompactEncounters& encounters, std::optional<Day> from,
                                                          std::optional<Day> to, const std::string& group);
 
 } // namespace hierloom::core
