@@ -7,27 +7,65 @@
 
 namespace hierloom::core {
 
+namespace {
+
+/// FNV-1a, 64 bits: ids and codes are short texts.
+std::uint64_t hashOf(std::string_view text)
+{
+    std::uint64_t h = 14695981039346656037ULL;
+    for (const char c : text) h = (h ^ static_cast<unsigned char>(c)) * 1099511628211ULL;
+    return h;
+}
+
+} // namespace
+
+size_t CodeTable::slotOf(std::string_view text, std::uint64_t hash) const
+{
+    const size_t mask = slots_.size() - 1;
+    for (size_t i = static_cast<size_t>(hash) & mask;; i = (i + 1) & mask) {
+        const std::int32_t code = slots_[i];
+        if (code < 0) return i;
+        const auto c = static_cast<size_t>(code);
+        if (hashes_[c] == hash && names_[c] == text) return i;
+    }
+}
+
+void CodeTable::rehash(size_t slots)
+{
+    slots_.assign(slots, -1);
+    const size_t mask = slots - 1;
+    for (size_t c = 0; c < names_.size(); ++c) {
+        size_t i = static_cast<size_t>(hashes_[c]) & mask;
+        while (slots_[i] >= 0) i = (i + 1) & mask;
+        slots_[i] = static_cast<std::int32_t>(c);
+    }
+}
+
 std::int32_t CodeTable::intern(std::string_view text)
 {
-    if (const auto it = index_.find(text); it != index_.end()) return it->second;
+    if (slots_.empty()) rehash(16);
+    const std::uint64_t hash = hashOf(text);
+    const size_t slot = slotOf(text, hash);
+    if (slots_[slot] >= 0) return slots_[slot];
     const auto code = static_cast<std::int32_t>(names_.size());
     names_.emplace_back(text);
-    index_.emplace(names_.back(), code);
+    hashes_.push_back(hash);
+    slots_[slot] = code;
+    if (names_.size() * 2 > slots_.size()) rehash(slots_.size() * 2);
     return code;
 }
 
 std::int32_t CodeTable::find(std::string_view text) const
 {
-    const auto it = index_.find(text);
-    return it == index_.end() ? -1 : it->second;
+    if (slots_.empty()) return -1;
+    return slots_[slotOf(text, hashOf(text))];
 }
 
 size_t CodeTable::bytesHeld() const
 {
-    size_t bytes = names_.capacity() * sizeof(std::string);
+    size_t bytes = names_.capacity() * sizeof(std::string) + hashes_.capacity() * sizeof(std::uint64_t) +
+                   slots_.capacity() * sizeof(std::int32_t);
     for (const std::string& s : names_) bytes += s.capacity() > 15 ? s.capacity() + 1 : 0;
-    // The index holds a copy of each text, a node and a bucket pointer.
-    bytes += index_.bucket_count() * sizeof(void*) + index_.size() * (sizeof(std::string) + 2 * sizeof(void*) + 8);
     return bytes;
 }
 
@@ -149,13 +187,27 @@ std::vector<std::uint32_t> analysisOrder(const std::vector<CompactEncounter>& re
     bool datesAscend = true;
     for (size_t i = 1; i < records.size() && datesAscend; ++i) datesAscend = records[i - 1].date <= records[i].date;
     if (datesAscend) {
+        // When seq ascends with the index too (records as loaded), time and
+        // index decide the order within a day: one 64-bit key each.
+        bool seqAscends = true;
+        for (size_t i = 1; i < records.size() && seqAscends; ++i) seqAscends = records[i - 1].seq <= records[i].seq;
+        std::vector<std::uint64_t> keys;
         for (size_t first = 0; first < records.size();) {
             size_t last = first + 1;
             while (last < records.size() && records[last].date == records[first].date) ++last;
-            std::sort(order.begin() + static_cast<std::ptrdiff_t>(first), order.begin() + static_cast<std::ptrdiff_t>(last),
-                      [&](std::uint32_t a, std::uint32_t b) {
-                          return AnalysisKey::of(records[a], a) < AnalysisKey::of(records[b], b);
-                      });
+            const auto from = order.begin() + static_cast<std::ptrdiff_t>(first);
+            const auto to = order.begin() + static_cast<std::ptrdiff_t>(last);
+            if (seqAscends) {
+                keys.clear();
+                for (auto i = static_cast<std::uint32_t>(first); i < last; ++i)
+                    keys.push_back(static_cast<std::uint64_t>(AnalysisKey::of(records[i], i).time) << 32 | i);
+                std::sort(keys.begin(), keys.end());
+                for (size_t k = 0; k < keys.size(); ++k) order[first + k] = static_cast<std::uint32_t>(keys[k]);
+            } else {
+                std::sort(from, to, [&](std::uint32_t a, std::uint32_t b) {
+                    return AnalysisKey::of(records[a], a) < AnalysisKey::of(records[b], b);
+                });
+            }
             first = last;
         }
         return order;

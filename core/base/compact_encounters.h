@@ -5,7 +5,6 @@
 // "Compact encounters"). 32 bytes per encounter, supporters in a side table
 // holding only the encounters that have them.
 #include "core/base/colony.h"
-#include "core/base/residence_index.h"
 
 #include <cstddef>
 #include <cstdint>
@@ -16,7 +15,9 @@
 namespace hierloom::core {
 
 /// Texts interned once each: code i stands for names()[i]. Lookups take a
-/// string_view, so reading a row builds no std::string for a known text.
+/// string_view, so reading a row builds no std::string for a known text; the
+/// index is an open-addressing table of codes (a loader looks up four or
+/// five texts per row, millions of times).
 class CodeTable {
 public:
     /// The code of `text`, added when new.
@@ -30,8 +31,13 @@ public:
     size_t bytesHeld() const;
 
 private:
+    /// The slot holding `text`'s code, or the empty slot where it would go.
+    size_t slotOf(std::string_view text, std::uint64_t hash) const;
+    void rehash(size_t slots);
+
     std::vector<std::string> names_;
-    IdIndex index_;
+    std::vector<std::uint64_t> hashes_; ///< of each name
+    std::vector<std::int32_t> slots_;   ///< codes, -1 empty; size a power of two, at most half full
 };
 
 /// One encounter in 32 bytes. Animals are codes of CompactEncounters::animals;
