@@ -121,7 +121,7 @@ struct ReportOptions {
 void runReport(CommandContext& ctx, const ReportOptions& o)
 {
 #ifdef HIERLOOM_HAVE_REPORT
-    const LoadedColony loaded = loadCompactColony(o.colony, EncounterScope{o.group, {}, {}});
+    const LoadedColony loaded = loadColony(o.colony, EncounterScope{o.group, {}, {}});
     const std::string group = chosenGroup(loaded, o.group);
     const StoredStability stored = storedStability(o.colony);
     report::HierarchyReportOptions ro;
