@@ -5,6 +5,7 @@
 #include "cli/code_help.h"
 #include "cli/commands.h"
 
+#include "core/ranks/compact_selection.h"
 #include "core/ranks/hierarchy_metrics.h"
 #include "core/base/number_format.h"
 #include "core/ranks/parallel_randomisation.h"
@@ -43,9 +44,11 @@ struct RanksOptions {
 
 void runRanks(CommandContext& ctx, const RanksOptions& o)
 {
-    const LoadedColony loaded = loadColony(o.colony, scopeOf(o.window));
+    // Compact records (core/base/compact_encounters.h): every rank method works on the selection's bouts.
+    const LoadedColony loaded = loadCompactColony(o.colony, scopeOf(o.window));
     const AnalysisSettings settings = analysisSettingsOf(loaded, o.analysis, o.window.draws);
     const SelectionOptions sel = withDefaultWindow(selectionOf(o.window, loaded), settings, loaded);
+    auto selected = [&] { return selectEncounters(loaded.compact, loaded.colony.animals, loaded.where, sel); };
     reportAnalysisSettings(ctx, "ranks", settings, &o.analysis, o.window.draws);
     RankOptions r;
     r.method = *parseRankMethod(o.method);
@@ -74,13 +77,13 @@ void runRanks(CommandContext& ctx, const RanksOptions& o)
         out << "period_start,period_end,animal,rank,score" << (elo ? ",start_rule" : "")
             << (o.health ? ",encounters,few_encounters" : "") << "\n";
         const std::vector<PeriodRankRow> rows =
-            computeRanksByPeriod(loaded.colony, loaded.where, sel, r, *parsePeriodLength(o.every));
+            computeRanksByPeriod(selected(), loaded.colony, loaded.where, sel, r, *parsePeriodLength(o.every));
         // Data health per period (docs/methods.md, "Data health"): the encounters each row's
         // score rests on: Elo runs on from the window's start, the other methods use the period alone.
         std::vector<CalendarPeriod> periods;
         for (const PeriodRankRow& p : rows)
             if (periods.empty() || periods.back().start != p.period.start) periods.push_back(p.period);
-        const auto flags = periodRankFlags(loaded.colony, periods, sel.from, sel.group, o.minEncounters, elo);
+        const auto flags = periodRankFlags(loaded.compact, periods, sel.from, sel.group, o.minEncounters, elo);
         size_t k = 0;
         int flagged = 0;
         for (const PeriodRankRow& p : rows) {
@@ -99,7 +102,7 @@ void runRanks(CommandContext& ctx, const RanksOptions& o)
         emit(ctx, out.str());
         return;
     }
-    const RankTable table = computeRanks(loaded.colony, loaded.where, sel, r);
+    const RankTable table = computeRanks(selected(), loaded.colony, loaded.where, sel, r);
     if (table.rows.empty()) ctx.err << "hierloom-cli: no animal could be ranked in this window\n";
     if (r.method == RankMethod::Elo && table.kUsed)
         ctx.err << "elo: k = " << formatNumber(*table.kUsed) << (o.optimiseK ? " (optimised)" : "")
@@ -107,7 +110,7 @@ void runRanks(CommandContext& ctx, const RanksOptions& o)
                 << ", ranked among animals resident on " << (table.rankedOn ? formatDate(*table.rankedOn) : "-") << "\n";
     // Data health (docs/methods.md, "Data health"): the encounters behind each
     // rank and a flag below the threshold, added after the original columns.
-    const std::map<std::string, RankFlag> flags = rankFlags(loaded.colony, sel.from, sel.to, sel.group, o.minEncounters);
+    const std::map<std::string, RankFlag> flags = rankFlags(loaded.compact, sel.from, sel.to, sel.group, o.minEncounters);
     out << "animal,rank,score";
     if (o.randomise > 0) out << ",rating_low,rating_high,mean_rank";
     if (elo) out << ",start_rule";

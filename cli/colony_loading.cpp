@@ -3,6 +3,7 @@
 
 #include "core/store/analysis_settings_store.h"
 #include "core/store/colony_store.h"
+#include "core/store/compact_encounter_loader.h"
 
 namespace hierloom::cli {
 
@@ -23,6 +24,25 @@ LoadedColony loadColony(const std::string& path, EncounterScope scope, bool need
     out.settings = readAnalysisSettings(store);
     if (scope.everything()) {
         for (const Encounter& e : out.colony.encounters)
+            if (!out.lastDay || e.date > *out.lastDay) out.lastDay = e.date;
+    } else if (needLastDay || out.settings.windowDays > 0) {
+        out.lastDay = store.lastEncounterDay();
+    }
+    return out;
+}
+
+LoadedColony loadCompactColony(const std::string& path, EncounterScope scope, bool needLastDay)
+{
+    const ColonyStore store = ColonyStore::open(path, ColonyStore::Mode::ReadOnly);
+    LoadedColony out;
+    out.colony.animals = store.loadAnimals();
+    out.colony.residences = store.loadResidences();
+    out.compact = loadCompactEncounters(store, scope);
+    out.colony.reindex();
+    out.where = ResidenceIndex(out.colony.animals, out.colony.residences);
+    out.settings = readAnalysisSettings(store);
+    if (scope.everything()) {
+        for (const CompactEncounter& e : out.compact.records)
             if (!out.lastDay || e.date > *out.lastDay) out.lastDay = e.date;
     } else if (needLastDay || out.settings.windowDays > 0) {
         out.lastDay = store.lastEncounterDay();

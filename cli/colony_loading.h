@@ -2,6 +2,7 @@
 #pragma once
 #include "cli/command_context.h"
 #include "core/base/colony.h"
+#include "core/base/compact_encounters.h"
 #include "core/base/csv_writer.h"
 #include "core/ranks/analysis_settings.h"
 #include "core/ranks/encounter_selection.h"
@@ -23,6 +24,9 @@ struct LoadedColony {
     /// The file's latest encounter day (every group): known when everything was
     /// loaded, when the settings have a default window, or when asked for.
     std::optional<core::Day> lastDay;
+    /// The scope's encounters as compact records, filled by loadCompactColony
+    /// only (then colony.encounters stays empty).
+    core::CompactEncounters compact;
 };
 
 /// Opens a colony file read-only and loads everything but the encounters'
@@ -33,6 +37,12 @@ LoadedColony loadColony(const std::string& path);
 /// `needLastDay` also finds the file's latest encounter day.
 /// Encounters are read without their uids (no analysis uses them).
 LoadedColony loadColony(const std::string& path, core::EncounterScope scope, bool needLastDay = false);
+
+/// Same as loadColony(path, scope, needLastDay), but the encounters are read
+/// as compact records into `compact` (core/store/compact_encounter_loader.h;
+/// about 32 bytes per encounter instead of one string per field), for the
+/// commands whose engines take them (`ranks`).
+LoadedColony loadCompactColony(const std::string& path, core::EncounterScope scope, bool needLastDay = false);
 
 /// The scope of the common window options: the group and the dates as given.
 /// A date that does not parse is left open here; selectionOf reports it.

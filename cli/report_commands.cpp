@@ -73,7 +73,7 @@ struct StabilityCommandOptions {
 void runStability(CommandContext& ctx, const StabilityCommandOptions& o)
 {
     // Elo runs over the group's whole record; --from and --to only choose the periods shown.
-    const LoadedColony loaded = loadColony(o.colony, EncounterScope{o.group, {}, {}});
+    const LoadedColony loaded = loadCompactColony(o.colony, EncounterScope{o.group, {}, {}});
     const std::string group = chosenGroup(loaded, o.group);
     const StoredStability stored = storedStability(o.colony);
     const AnalysisSettings settings = analysisSettingsOf(loaded, o.analysis, o.draws);
@@ -87,7 +87,7 @@ void runStability(CommandContext& ctx, const StabilityCommandOptions& o)
     so.severity = stored.severity;
     so.thresholds = stored.thresholds;
     const Matrilines lines(loaded.colony);
-    const StabilitySeries s = stabilityWatch(loaded.colony, loaded.where, lines, so);
+    const StabilitySeries s = stabilityWatch(loaded.compact, loaded.colony.animals, loaded.where, lines, so);
     std::vector<std::string> alerts(s.periods.size());
     for (const StabilityAlert& a : s.alerts) {
         alerts[a.period] += (alerts[a.period].empty() ? "" : " ") + std::string(toString(a.signal));

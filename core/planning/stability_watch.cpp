@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "core/planning/stability_watch.h"
 
+#include "core/ranks/compact_selection.h"
 #include "core/ranks/elo_kernel.h"
 #include "core/ranks/encounter_selection.h"
 #include "core/base/number_format.h"
@@ -64,20 +65,26 @@ std::optional<double> median(std::vector<double> v)
     return n % 2 ? v[n / 2] : (v[n / 2 - 1] + v[n / 2]) / 2;
 }
 
-} // namespace
+/// The selection of the watch: Elo runs over the group's whole record so that
+/// ratings at the window's start carry their history; the window only
+/// chooses the periods shown.
+SelectionOptions watchSelection(const StabilityOptions& o)
+{
+    SelectionOptions so;
+    so.group = o.group;
+    so.draws = o.elo.draws;
+    return so;
+}
 
-StabilitySeries stabilityWatch(const Colony& colony, const ResidenceIndex& where, const Matrilines& lines,
-                               const StabilityOptions& o)
+/// The watch over a selection made by watchSelection; `behaviourOf(i)` is the
+/// behaviour code of the selection's source encounter i.
+template <typename BehaviourOf>
+StabilitySeries watch(const EncounterSelection& sel, const BehaviourOf& behaviourOf, const ResidenceIndex& where,
+                      const Matrilines& lines, const StabilityOptions& o)
 {
     StabilitySeries series;
     series.group = o.group;
     series.length = o.length;
-    SelectionOptions so;
-    so.group = o.group;
-    so.draws = o.elo.draws;
-    // Elo runs over the group's whole record so that ratings at the window's
-    // start carry their history; the window only chooses the periods shown.
-    const EncounterSelection sel = selectEncounters(colony, where, so);
     if (sel.bouts.empty()) return series;
     const Day from = std::max(o.from.value_or(*sel.firstDay), *sel.firstDay);
     const Day to = std::min(o.to.value_or(*sel.lastDay), *sel.lastDay);
@@ -129,12 +136,12 @@ StabilitySeries stabilityWatch(const Colony& colony, const ResidenceIndex& where
             const auto w = static_cast<size_t>(bout.winner), l = static_cast<size_t>(bout.loser);
             const bool inWindow = d >= periods[p].start;
             if (inWindow) {
-                const Encounter& e = colony.encounters[sel.source[b]];
+                const std::string& behaviour = behaviourOf(sel.source[b]);
                 ++sp.encounters;
                 if (observedDays.empty() || observedDays.back() != d) observedDays.push_back(d);
-                if (const auto it = o.severity.find(e.behaviour); it != o.severity.end() && it->second >= severeAt) {
+                if (const auto it = o.severity.find(behaviour); it != o.severity.end() && it->second >= severeAt) {
                     ++sp.severe;
-                    sp.severeEncounters.push_back({d, e.winner, e.loser, e.behaviour});
+                    sp.severeEncounters.push_back({d, sel.ids[w], sel.ids[l], behaviour});
                 }
                 // Ranked just before the encounter: both rated and not tied.
                 if (!bout.draw && rated[w] && rated[l] && rating[w] != rating[l]) {
@@ -223,6 +230,25 @@ StabilitySeries stabilityWatch(const Colony& colony, const ResidenceIndex& where
                                      t.severeFactor * *series.medianSevereRate});
     }
     return series;
+}
+
+} // namespace
+
+StabilitySeries stabilityWatch(const Colony& colony, const ResidenceIndex& where, const Matrilines& lines,
+                               const StabilityOptions& o)
+{
+    const EncounterSelection sel = selectEncounters(colony, where, watchSelection(o));
+    return watch(sel, [&](size_t i) -> const std::string& { return colony.encounters[i].behaviour; }, where, lines, o);
+}
+
+StabilitySeries stabilityWatch(const CompactEncounters& encounters, const std::vector<Animal>& animals,
+                               const ResidenceIndex& where, const Matrilines& lines, const StabilityOptions& o)
+{
+    const EncounterSelection sel = selectEncounters(encounters, animals, where, watchSelection(o));
+    return watch(
+        sel,
+        [&](size_t i) -> const std::string& { return encounters.behaviours.name(encounters.records[i].behaviour); },
+        where, lines, o);
 }
 
 std::string describeAlert(const StabilitySeries& series, const StabilityAlert& alert)

@@ -2,6 +2,7 @@
 #pragma once
 #include "core/base/calendar_period.h"
 #include "core/base/colony.h"
+#include "core/base/compact_encounters.h"
 #include "core/ranks/elo_rating.h"
 #include "core/pedigree/matriline.h"
 #include "core/base/residence_index.h"
@@ -129,6 +130,10 @@ struct StabilitySeries {
 /// with the alerts its thresholds raise.
 StabilitySeries stabilityWatch(const Colony& colony, const ResidenceIndex& where, const Matrilines& lines,
                                const StabilityOptions& options);
+/// The same watch on compact records (core/base/compact_encounters.h);
+/// `animals` is the colony's animal list.
+StabilitySeries stabilityWatch(const CompactEncounters& encounters, const std::vector<Animal>& animals,
+                               const ResidenceIndex& where, const Matrilines& lines, const StabilityOptions& options);
 
 /// A sentence describing an alert and its evidence (which dyads, which dates).
 std::string describeAlert(const StabilitySeries& series, const StabilityAlert& alert);

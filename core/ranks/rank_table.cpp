@@ -73,7 +73,12 @@ EloSettings eloSettingsOf(const RankOptions& o, const SelectionOptions& s)
 RankTable computeRanks(const Colony& colony, const ResidenceIndex& where, const SelectionOptions& selection,
                        const RankOptions& o)
 {
-    const EncounterSelection sel = selectEncounters(colony, where, selection);
+    return computeRanks(selectEncounters(colony, where, selection), colony, where, selection, o);
+}
+
+RankTable computeRanks(EncounterSelection sel, const Colony& colony, const ResidenceIndex& where,
+                       const SelectionOptions& selection, const RankOptions& o)
+{
     RankTable table;
     if (o.method != RankMethod::Elo) {
         table.rows = matrixRanks(sel.ids, sel.bouts, o, selection.draws);
@@ -86,7 +91,10 @@ RankTable computeRanks(const Colony& colony, const ResidenceIndex& where, const 
     if (!day) return table;
     const size_t count =
         static_cast<size_t>(std::upper_bound(sel.days.begin(), sel.days.end(), *day) - sel.days.begin());
-    const std::vector<Bout> bouts(sel.bouts.begin(), sel.bouts.begin() + static_cast<std::ptrdiff_t>(count));
+    // The bouts up to that day, in place (no copy of millions of bouts).
+    sel.bouts.resize(count);
+    sel.days.resize(count);
+    const std::vector<Bout>& bouts = sel.bouts;
     EloSettings settings = eloSettingsOf(o, selection);
     const int n = sel.size();
     if (o.optimiseK) {
@@ -94,8 +102,7 @@ RankTable computeRanks(const Colony& colony, const ResidenceIndex& where, const 
     }
     const EloRun run = o.startRule == EloStartRule::None
                            ? runElo(n, bouts, settings)
-                           : std::move(traceElo(n, bouts, std::vector<Day>(sel.days.begin(), sel.days.begin() + static_cast<std::ptrdiff_t>(count)),
-                                                settings, o.startRule, eloFamilyOf(colony, sel.ids),
+                           : std::move(traceElo(n, bouts, sel.days, settings, o.startRule, eloFamilyOf(colony, sel.ids),
                                                 residencePresence(sel.ids, where, selection.group), {count})
                                            .checkpoints.front());
     table.kUsed = settings.k;
@@ -127,7 +134,13 @@ std::vector<PeriodRankRow> computeRanksByPeriod(const Colony& colony, const Resi
                                                 const SelectionOptions& selection, const RankOptions& o,
                                                 PeriodLength every)
 {
-    const EncounterSelection sel = selectEncounters(colony, where, selection);
+    return computeRanksByPeriod(selectEncounters(colony, where, selection), colony, where, selection, o, every);
+}
+
+std::vector<PeriodRankRow> computeRanksByPeriod(const EncounterSelection& sel, const Colony& colony,
+                                                const ResidenceIndex& where, const SelectionOptions& selection,
+                                                const RankOptions& o, PeriodLength every)
+{
     std::vector<PeriodRankRow> out;
     const std::optional<Day> from = selection.from ? selection.from : sel.firstDay;
     const std::optional<Day> to = selection.to ? selection.to : sel.lastDay;

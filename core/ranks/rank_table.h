@@ -55,6 +55,12 @@ struct RankTable {
 RankTable computeRanks(const Colony& colony, const ResidenceIndex& where, const SelectionOptions& selection,
                        const RankOptions& options);
 
+/// computeRanks of a selection already made (selectEncounters of the colony's
+/// encounters or of their compact records, compact_selection.h) of `selection`'s
+/// window; `colony` gives the animals (its encounters are not read).
+RankTable computeRanks(EncounterSelection sel, const Colony& colony, const ResidenceIndex& where,
+                       const SelectionOptions& selection, const RankOptions& options);
+
 /// One row of the long per-period table.
 struct PeriodRankRow {
     CalendarPeriod period;
@@ -66,6 +72,11 @@ struct PeriodRankRow {
 std::vector<PeriodRankRow> computeRanksByPeriod(const Colony& colony, const ResidenceIndex& where,
                                                 const SelectionOptions& selection, const RankOptions& options,
                                                 PeriodLength every);
+
+/// computeRanksByPeriod of a selection already made (as computeRanks above).
+std::vector<PeriodRankRow> computeRanksByPeriod(const EncounterSelection& sel, const Colony& colony,
+                                                const ResidenceIndex& where, const SelectionOptions& selection,
+                                                const RankOptions& options, PeriodLength every);
 
 /// Ordinal order of the selection's animals by a method over the whole
 /// window (all analysed animals, resident or not); index list, top first.

@@ -94,43 +94,106 @@ std::vector<std::pair<std::string, int>> encounterCounts(const Colony& colony, s
     return {counts.begin(), counts.end()};
 }
 
-std::map<std::string, RankFlag> rankFlags(const Colony& colony, std::optional<Day> from, std::optional<Day> to,
-                                          const std::string& group, int minEncounters)
+std::vector<std::pair<std::string, int>> encounterCounts(const CompactEncounters& encounters, std::optional<Day> from,
+                                                         std::optional<Day> to, const std::string& group)
 {
-    std::map<std::string, RankFlag> flags;
-    for (const auto& [id, n] : encounterCounts(colony, from, to, group))
-        flags[id] = RankFlag{n, tooFewEncounters(n, minEncounters), std::nullopt};
-    return flags;
+    const std::int32_t groupCode = group.empty() ? -1 : encounters.groups.find(group);
+    if (!group.empty() && groupCode < 0) return {};
+    const Day last = to.value_or(ResidenceIndex::openEnd);
+    std::vector<int> counts(static_cast<size_t>(encounters.animals.size()), 0);
+    for (const CompactEncounter& e : encounters.records) {
+        if ((from && e.date < *from) || e.date > last || (groupCode >= 0 && e.group != groupCode)) continue;
+        ++counts[static_cast<size_t>(e.winner)];
+        ++counts[static_cast<size_t>(e.loser)];
+    }
+    std::vector<std::pair<std::string, int>> out;
+    for (std::int32_t a = 0; a < encounters.animals.size(); ++a)
+        if (counts[static_cast<size_t>(a)] > 0) out.emplace_back(encounters.animals.name(a), counts[static_cast<size_t>(a)]);
+    std::sort(out.begin(), out.end());
+    return out;
 }
 
-std::vector<std::map<std::string, RankFlag>> periodRankFlags(const Colony& colony,
-                                                             const std::vector<CalendarPeriod>& periods,
-                                                             std::optional<Day> from, const std::string& group,
-                                                             int minEncounters, bool cumulative)
+namespace {
+
+/// One encounter as the per-period counts need it.
+struct CountedEncounter {
+    Day date = 0;
+    const std::string* winner = nullptr;
+    const std::string* loser = nullptr;
+};
+
+std::vector<std::map<std::string, RankFlag>> periodFlagsOf(std::vector<CountedEncounter> sorted,
+                                                           const std::vector<CalendarPeriod>& periods,
+                                                           int minEncounters, bool cumulative)
 {
     std::vector<std::map<std::string, RankFlag>> out(periods.size());
-    if (periods.empty()) return out;
-    const Day last = periods.back().end;
-    std::vector<const Encounter*> sorted;
-    for (const Encounter& e : colony.encounters)
-        if (inWindow(e, from, last, group)) sorted.push_back(&e);
     std::stable_sort(sorted.begin(), sorted.end(),
-                     [](const Encounter* x, const Encounter* y) { return x->date < y->date; });
+                     [](const CountedEncounter& x, const CountedEncounter& y) { return x.date < y.date; });
     std::map<std::string, int> counts;
     size_t next = 0;
     for (size_t k = 0; k < periods.size(); ++k) {
         const CalendarPeriod& p = periods[k];
         if (!cumulative) {
             counts.clear();
-            while (next < sorted.size() && sorted[next]->date < p.start) ++next;
+            while (next < sorted.size() && sorted[next].date < p.start) ++next;
         }
-        for (; next < sorted.size() && sorted[next]->date <= p.end; ++next) {
-            ++counts[sorted[next]->winner];
-            ++counts[sorted[next]->loser];
+        for (; next < sorted.size() && sorted[next].date <= p.end; ++next) {
+            ++counts[*sorted[next].winner];
+            ++counts[*sorted[next].loser];
         }
         for (const auto& [id, n] : counts) out[k][id] = RankFlag{n, tooFewEncounters(n, minEncounters), std::nullopt};
     }
     return out;
+}
+
+std::map<std::string, RankFlag> flagsOf(const std::vector<std::pair<std::string, int>>& counts, int minEncounters)
+{
+    std::map<std::string, RankFlag> flags;
+    for (const auto& [id, n] : counts) flags[id] = RankFlag{n, tooFewEncounters(n, minEncounters), std::nullopt};
+    return flags;
+}
+
+} // namespace
+
+std::vector<std::map<std::string, RankFlag>> periodRankFlags(const Colony& colony,
+                                                             const std::vector<CalendarPeriod>& periods,
+                                                             std::optional<Day> from, const std::string& group,
+                                                             int minEncounters, bool cumulative)
+{
+    if (periods.empty()) return {};
+    std::vector<CountedEncounter> rows;
+    for (const Encounter& e : colony.encounters)
+        if (inWindow(e, from, periods.back().end, group)) rows.push_back({e.date, &e.winner, &e.loser});
+    return periodFlagsOf(std::move(rows), periods, minEncounters, cumulative);
+}
+
+std::vector<std::map<std::string, RankFlag>> periodRankFlags(const CompactEncounters& encounters,
+                                                             const std::vector<CalendarPeriod>& periods,
+                                                             std::optional<Day> from, const std::string& group,
+                                                             int minEncounters, bool cumulative)
+{
+    if (periods.empty()) return {};
+    const std::int32_t groupCode = group.empty() ? -1 : encounters.groups.find(group);
+    if (!group.empty() && groupCode < 0) return std::vector<std::map<std::string, RankFlag>>(periods.size());
+    const Day last = periods.back().end;
+    std::vector<CountedEncounter> rows;
+    for (const CompactEncounter& e : encounters.records) {
+        if ((from && e.date < *from) || e.date > last || (groupCode >= 0 && e.group != groupCode)) continue;
+        rows.push_back({e.date, &encounters.animals.name(e.winner), &encounters.animals.name(e.loser)});
+    }
+    return periodFlagsOf(std::move(rows), periods, minEncounters, cumulative);
+}
+
+std::map<std::string, RankFlag> rankFlags(const Colony& colony, std::optional<Day> from, std::optional<Day> to,
+                                          const std::string& group, int minEncounters)
+{
+    return flagsOf(encounterCounts(colony, from, to, group), minEncounters);
+}
+
+std::map<std::string, RankFlag> rankFlags(const CompactEncounters& encounters, std::optional<Day> from,
+                                          std::optional<Day> to, const std::string& group, int minEncounters)
+{
+    return flagsOf(encounterCounts(encounters, from, to, group), minEncounters);
 }
 
 std::map<std::string, double> eloIntervalWidths(const Colony& colony, const ResidenceIndex& where,

@@ -2,6 +2,7 @@
 #pragma once
 #include "core/base/calendar_period.h"
 #include "core/base/colony.h"
+#include "core/base/compact_encounters.h"
 #include "core/base/residence_index.h"
 #include "core/ranks/elo_rating.h"
 
@@ -127,6 +128,9 @@ struct RankFlag {
 /// id order, without interval widths (cheap: one pass over the encounters).
 std::map<std::string, RankFlag> rankFlags(const Colony& colony, std::optional<Day> from, std::optional<Day> to,
                                           const std::string& group, int minEncounters);
+/// The same flags from compact records (core/base/compact_encounters.h).
+std::map<std::string, RankFlag> rankFlags(const CompactEncounters& encounters, std::optional<Day> from,
+                                          std::optional<Day> to, const std::string& group, int minEncounters);
 
 /// The flags of a long rank table's periods (`ranks --every`), one map per
 /// period in the order given (periods in calendar order, as
@@ -135,6 +139,11 @@ std::map<std::string, RankFlag> rankFlags(const Colony& colony, std::optional<Da
 /// to the period's last day; otherwise (David's score, I&SI: each period
 /// alone) the period's own encounters. One pass over the encounters.
 std::vector<std::map<std::string, RankFlag>> periodRankFlags(const Colony& colony,
+                                                             const std::vector<CalendarPeriod>& periods,
+                                                             std::optional<Day> from, const std::string& group,
+                                                             int minEncounters, bool cumulative);
+/// The same flags from compact records.
+std::vector<std::map<std::string, RankFlag>> periodRankFlags(const CompactEncounters& encounters,
                                                              const std::vector<CalendarPeriod>& periods,
                                                              std::optional<Day> from, const std::string& group,
                                                              int minEncounters, bool cumulative);
@@ -151,6 +160,9 @@ std::map<std::string, double> eloIntervalWidths(const Colony& colony, const Resi
 /// Counted encounters per animal id in a window and group (both animals of
 /// an encounter count it; ignored draws are not counted when draws are ignored).
 std::vector<std::pair<std::string, int>> encounterCounts(const Colony& colony, std::optional<Day> from,
+                                                         std::optional<Day> to, const std::string& group);
+/// The same counts from compact records (core/base/compact_encounters.h).
+std::vector<std::pair<std::string, int>> encounterCounts(const CompactEncounters& encounters, std::optional<Day> from,
                                                          std::optional<Day> to, const std::string& group);
 
 } // namespace hierloom::core

@@ -104,6 +104,13 @@ std::string SqliteStatement::uid(int column) const
     return text(column);
 }
 
+std::string_view SqliteStatement::textView(int column) const
+{
+    const auto* p = sqlite3_column_text(stmt_, column);
+    return p ? std::string_view(reinterpret_cast<const char*>(p), static_cast<size_t>(sqlite3_column_bytes(stmt_, column)))
+             : std::string_view();
+}
+
 std::optional<std::string> SqliteStatement::optionalText(int column) const
 {
     if (isNull(column)) return std::nullopt;

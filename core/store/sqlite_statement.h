@@ -37,6 +37,8 @@ public:
     void reset();
 
     std::string text(int column) const;
+    /// The text of a column without a copy; valid until the next step or reset.
+    std::string_view textView(int column) const;
     std::optional<std::string> optionalText(int column) const;
     std::int64_t integer(int column) const;
     /// A record uid column as text, whichever way it is stored.
