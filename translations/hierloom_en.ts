@@ -1510,10 +1510,6 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <translation type="unfinished"></translation>
     </message>
     <message>
-        <source>today</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
         <source>Group:</source>
         <translation type="unfinished"></translation>
     </message>
@@ -1578,6 +1574,29 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
     <message>
         <source>the data health</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>last record</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 (the window&apos;s last day)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>%1 (today)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message numerus="yes">
+        <source>%1 (the file&apos;s last day of records, %n day(s) before today)</source>
+        <translation type="unfinished">
+            <numerusform></numerusform>
+            <numerusform></numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>%1 (the file&apos;s last day of records, today)</source>
         <translation type="unfinished"></translation>
     </message>
 </context>
@@ -1935,10 +1954,6 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <translation type="unfinished"></translation>
     </message>
     <message>
-        <source>T&amp;ime:</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
         <source>&amp;Winner:</source>
         <translation type="unfinished"></translation>
     </message>
@@ -1955,31 +1970,11 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <translation type="unfinished"></translation>
     </message>
     <message>
-        <source>&amp;Outcome:</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
         <source>&amp;Behaviour:</source>
         <translation type="unfinished"></translation>
     </message>
     <message>
         <source>&amp;Group column:</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>O&amp;bserver:</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>&amp;Note:</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Br&amp;owse...</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>&amp;Check</source>
         <translation type="unfinished"></translation>
     </message>
     <message>
@@ -2079,15 +2074,7 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
         <translation type="unfinished"></translation>
     </message>
     <message>
-        <source>Separator:</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
         <source>One group for the &amp;file:</source>
-        <translation type="unfinished"></translation>
-    </message>
-    <message>
-        <source>Win codes (actor won):</source>
         <translation type="unfinished"></translation>
     </message>
     <message>
@@ -2238,6 +2225,55 @@ The newest backup of this colony was taken %2. Restore it over the damaged file 
     </message>
     <message>
         <source>Saved the mapping as &quot;%1&quot; in the colony file.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>&amp;Time:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>O&amp;utcome:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Obs&amp;erver:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Note:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Browse...</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Save the mapping under this name with the import</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Chec&amp;k</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Se&amp;parator:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Win &amp;codes (actor won):</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Saved in the same write as the records: a refused import saves nothing.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Rows read without a problem: %1. Check tests them against the import&apos;s rules without writing; Import writes them.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <source>Nothing was imported and the mapping was not saved; the colony is unchanged.
+</source>
         <translation type="unfinished"></translation>
     </message>
 </context>

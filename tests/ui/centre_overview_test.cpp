@@ -203,6 +203,9 @@ TEST(CentreOverview, EnterOnARowShowsThatGroupsHierarchy)
     QTest::keyClick(QApplication::focusWidget(), Qt::Key_Return);
     EXPECT_EQ(w.tabs()->currentWidget()->objectName(), QStringLiteral("hierarchy"));
     EXPECT_EQ(w.window.analysisViews().hierarchy->groupBox()->currentData().toString(), QStringLiteral("South"));
+    // Every view with a group choice follows when it is next shown (the document's showGroup).
+    QTest::keyClick(&w.window, Qt::Key_0, Qt::ControlModifier);
+    ASSERT_EQ(w.tabs()->currentWidget(), w.window.managerViews().stability);
     EXPECT_EQ(w.window.managerViews().stability->series().group, "South");
 
     // Back to the overview; a double-click on North's row.
@@ -228,6 +231,9 @@ TEST(CentreOverview, ClickOnAGroupsBarShowsItsHierarchy)
     QTest::mouseClick(plot, Qt::LeftButton, {}, QPoint(static_cast<int>(x), static_cast<int>(y)));
     EXPECT_EQ(w.tabs()->currentWidget()->objectName(), QStringLiteral("hierarchy"));
     EXPECT_EQ(w.window.analysisViews().hierarchy->groupBox()->currentData().toString(), QStringLiteral("South"));
+    // Every view with a group choice follows when it is next shown (the document's showGroup).
+    QTest::keyClick(&w.window, Qt::Key_0, Qt::ControlModifier);
+    ASSERT_EQ(w.tabs()->currentWidget(), w.window.managerViews().stability);
     EXPECT_EQ(w.window.managerViews().stability->series().group, "South");
 }
 

@@ -67,6 +67,7 @@ TEST(HealthView, OpenWindowCountsToTheFilesLastRecord)
     QTest::keyClick(focusIn(&view), Qt::Key_A, Qt::ControlModifier);
     QTest::keyClick(focusIn(&view), Qt::Key_Backspace); // the window's end emptied again
     QTest::keyClick(focusIn(&view), Qt::Key_Return);
+    view.runner()->wait(); // computed on a worker thread
     EXPECT_EQ(view.health().reference, *core::parseDate("2021-05-20"));
     EXPECT_EQ(view.health().referenceKind, core::ReferenceDay::LastRecord);
     QTreeWidget* unseen = view.unseenList();

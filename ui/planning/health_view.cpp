@@ -234,7 +234,7 @@ void HealthView::adopt(core::DataHealth health)
                                          number(a.kappa)});
     if (!health_.unseen.empty()) {
         QString day = toQString(core::formatDate(health_.reference));
-        const int behind = o.today - health_.reference;
+        const int behind = core::today() - health_.reference;
         switch (health_.referenceKind) {
         case core::ReferenceDay::WindowEnd: day = tr("%1 (the window's last day)").arg(day); break;
         case core::ReferenceDay::Today: day = tr("%1 (today)").arg(day); break;
