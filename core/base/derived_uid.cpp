@@ -31,6 +31,13 @@ std::string uuidText(Bytes b)
 {
     b[6] = static_cast<unsigned char>((b[6] & 0x0f) | 0x80); // version 8
     b[8] = static_cast<unsigned char>((b[8] & 0x3f) | 0x80); // variant 10
+    return uuidTextOf(b.data());
+}
+
+} // namespace
+
+std::string uuidTextOf(const unsigned char* b)
+{
     static const char* hex = "0123456789abcdef";
     std::string out;
     out.reserve(36);
@@ -41,8 +48,6 @@ std::string uuidText(Bytes b)
     }
     return out;
 }
-
-} // namespace
 
 std::string derivedUid(std::string_view key) { return uuidText(fnv1a128(key)); }
 

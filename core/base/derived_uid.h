@@ -14,6 +14,9 @@ namespace hierloom::core {
 /// records the same identities (docs/file-formats.md, "Identities").
 std::string derivedUid(std::string_view key);
 
+/// The canonical text form (lower-case hex, dashed 8-4-4-4-12) of 16 bytes.
+std::string uuidTextOf(const unsigned char* bytes);
+
 /// A derived uid for the `row`-th record (from 0) of one load: 48 bits from
 /// the hash of `place` (the same for the whole load), then `row` in 34 bits,
 /// then 40 bits from the hash of `key`; version 8, RFC 9562 variant. The uids

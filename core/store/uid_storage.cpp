@@ -1,6 +1,8 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "core/store/uid_storage.h"
 
+#include "core/base/derived_uid.h"
+
 #include <sqlite3.h>
 
 namespace hierloom::core {
@@ -49,18 +51,7 @@ std::optional<UidBytes> compactUid(std::string_view u)
     return out;
 }
 
-std::string uidText(const unsigned char* b)
-{
-    static const char* hex = "0123456789abcdef";
-    std::string out;
-    out.reserve(36);
-    for (size_t i = 0; i < 16; ++i) {
-        if (i == 4 || i == 6 || i == 8 || i == 10) out += '-';
-        out += hex[b[i] >> 4];
-        out += hex[b[i] & 0x0f];
-    }
-    return out;
-}
+std::string uidText(const unsigned char* b) { return uuidTextOf(b); }
 
 std::string uidSqlLiteral(std::string_view uid)
 {

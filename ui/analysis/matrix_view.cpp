@@ -344,6 +344,7 @@ void MatrixView::rebuildPlot()
 {
     plot_->clearPlottables();
     plot_->clearItems();
+    cellCounts_.clear(); // the items are gone with clearItems
     const int n = matrix_.n;
     boundaries_ = 0;
     marks_ = nullptr;

@@ -8,17 +8,6 @@
 
 namespace hierloom::ui {
 
-namespace {
-
-// Every encounter that may belong to `group` (core/store/colony_store.h).
-core::EncounterScope groupScope(const std::string& group)
-{
-    core::EncounterScope scope;
-    scope.group = group;
-    return scope;
-}
-
-} // namespace
 
 BackgroundEncounterLoad::BackgroundEncounterLoad(std::string path, std::vector<std::string> groups,
                                                  std::int64_t expected, Progress progress, Done done)
@@ -50,7 +39,7 @@ void BackgroundEncounterLoad::run(std::string path, std::vector<std::string> gro
         const int total = static_cast<int>(groups.size());
         for (int i = 0; i < total; ++i) {
             if (cancelled_) return;
-            std::vector<core::Encounter> part = store.loadEncounters(groupScope(groups[static_cast<size_t>(i)]));
+            std::vector<core::Encounter> part = store.loadEncounters(core::EncounterScope{.group = groups[static_cast<size_t>(i)]});
             std::move(part.begin(), part.end(), std::back_inserter(*all));
             progress(i + 1, total);
         }

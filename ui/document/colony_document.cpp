@@ -14,17 +14,6 @@
 
 namespace hierloom::ui {
 
-namespace {
-
-// Every encounter that may belong to `group` (core/store/colony_store.h).
-core::EncounterScope groupScope(const std::string& group)
-{
-    core::EncounterScope scope;
-    scope.group = group;
-    return scope;
-}
-
-} // namespace
 
 ColonyDocument::ColonyDocument(QObject* parent)
     : QObject(parent), colony_(std::make_shared<core::Colony>()), undoStack_(new QUndoStack(this))
@@ -61,7 +50,7 @@ ColonyDocument::Read ColonyDocument::readFile(const core::ColonyStore& store, st
         if (!where.groups().empty()) groups.push_back(where.groups().front());
     }
     for (const std::string& g : groups) {
-        std::vector<core::Encounter> part = store.loadEncounters(groupScope(g));
+        std::vector<core::Encounter> part = store.loadEncounters(core::EncounterScope{.group = g});
         auto& cache = read.colony.encounters;
         std::vector<core::Encounter> merged;
         merged.reserve(cache.size() + part.size());
@@ -239,7 +228,7 @@ bool ColonyDocument::holdGroup(const QString& group)
         std::rotate(at, at + 1, heldGroups_.end()); // now the most recently asked for
         return false;
     }
-    std::vector<core::Encounter> part = store_->loadEncounters(groupScope(g));
+    std::vector<core::Encounter> part = store_->loadEncounters(core::EncounterScope{.group = g});
     std::vector<core::Encounter>& cache = editColony().encounters;
     std::vector<core::Encounter> merged;
     merged.reserve(cache.size() + part.size() + 4096);
