@@ -6,12 +6,24 @@
 // group, behaviour codes, observers and supporters. All invented.
 #include "core/base/colony.h"
 
+#include <bit>
 #include <cstdint>
+#include <optional>
+#include <sstream>
 #include <random>
 #include <string>
 #include <vector>
 
 namespace hierloom::test {
+
+/// A number by its exact bits ("-" when absent), for comparing two paths bit for bit.
+inline std::string bits(const std::optional<double>& x)
+{
+    if (!x) return "-";
+    std::ostringstream s;
+    s << std::hex << std::bit_cast<std::uint64_t>(*x);
+    return s.str();
+}
 
 struct RandomColonyShape {
     int animals = 14;

@@ -14,6 +14,24 @@
 
 namespace hierloom::ui {
 
+namespace {
+
+/// Adds a group's rows `part` to `cache`, both in entry order (seq), keeping
+/// one copy of a row that is in both; `spare` more rows are reserved.
+void mergeBySeq(std::vector<core::Encounter>& cache, std::vector<core::Encounter> part, size_t spare = 0)
+{
+    std::vector<core::Encounter> merged;
+    merged.reserve(cache.size() + part.size() + spare);
+    std::merge(std::make_move_iterator(cache.begin()), std::make_move_iterator(cache.end()),
+               std::make_move_iterator(part.begin()), std::make_move_iterator(part.end()), std::back_inserter(merged),
+               [](const core::Encounter& a, const core::Encounter& b) { return a.seq < b.seq; });
+    merged.erase(std::unique(merged.begin(), merged.end(),
+                             [](const core::Encounter& a, const core::Encounter& b) { return a.seq == b.seq; }),
+                 merged.end());
+    cache = std::move(merged);
+}
+
+} // namespace
 
 ColonyDocument::ColonyDocument(QObject* parent)
     : QObject(parent), colony_(std::make_shared<core::Colony>()), undoStack_(new QUndoStack(this))
@@ -51,16 +69,7 @@ ColonyDocument::Read ColonyDocument::readFile(const core::ColonyStore& store, st
     }
     for (const std::string& g : groups) {
         std::vector<core::Encounter> part = store.loadEncounters(core::EncounterScope{.group = g});
-        auto& cache = read.colony.encounters;
-        std::vector<core::Encounter> merged;
-        merged.reserve(cache.size() + part.size());
-        std::merge(std::make_move_iterator(cache.begin()), std::make_move_iterator(cache.end()),
-                   std::make_move_iterator(part.begin()), std::make_move_iterator(part.end()), std::back_inserter(merged),
-                   [](const core::Encounter& a, const core::Encounter& b) { return a.seq < b.seq; });
-        merged.erase(std::unique(merged.begin(), merged.end(),
-                                 [](const core::Encounter& a, const core::Encounter& b) { return a.seq == b.seq; }),
-                     merged.end());
-        cache = std::move(merged);
+        mergeBySeq(read.colony.encounters, std::move(part));
     }
     read.groups = std::move(groups);
     return read;
@@ -229,17 +238,9 @@ bool ColonyDocument::holdGroup(const QString& group)
         return false;
     }
     std::vector<core::Encounter> part = store_->loadEncounters(core::EncounterScope{.group = g});
-    std::vector<core::Encounter>& cache = editColony().encounters;
-    std::vector<core::Encounter> merged;
-    merged.reserve(cache.size() + part.size() + 4096);
-    std::merge(std::make_move_iterator(cache.begin()), std::make_move_iterator(cache.end()),
-               std::make_move_iterator(part.begin()), std::make_move_iterator(part.end()), std::back_inserter(merged),
-               [](const core::Encounter& a, const core::Encounter& b) { return a.seq < b.seq; });
     // This window's own new rows of the group may be in the cache already.
-    merged.erase(std::unique(merged.begin(), merged.end(),
-                             [](const core::Encounter& a, const core::Encounter& b) { return a.seq == b.seq; }),
-                 merged.end());
-    cache = std::move(merged);
+    // Room for an evening's new lines without moving every record.
+    mergeBySeq(editColony().encounters, std::move(part), 4096);
     heldGroups_.push_back(g);
     dropOldGroups();
     emitChange({ChangeKind::EncountersChanged, 0});

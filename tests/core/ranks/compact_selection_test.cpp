@@ -23,13 +23,7 @@ using namespace hierloom::core;
 
 namespace {
 
-std::string bits(const std::optional<double>& x)
-{
-    if (!x) return "-";
-    std::ostringstream s;
-    s << std::hex << std::bit_cast<std::uint64_t>(*x);
-    return s.str();
-}
+using hierloom::test::bits;
 
 /// Every field of a rank table, numbers by their bits.
 std::string text(const RankTable& t)
