@@ -244,12 +244,13 @@ void addMetricsCommand(CLI::App& app, CommandContext& ctx, CommandAction& action
     cmd->add_option("--out", ctx.outFile, "write the CSV to this file instead of standard output");
     cmd->callback([&ctx, &action, o] {
         action = [&ctx, o] {
-            const LoadedColony loaded = loadColony(o->colony, scopeOf(o->window));
+            // Compact records (core/base/compact_encounters.h): the figures need only the selection's bouts.
+            const LoadedColony loaded = loadCompactColony(o->colony, scopeOf(o->window));
             const AnalysisSettings settings = analysisSettingsOf(loaded, {}, o->window.draws);
             SelectionOptions sel = withDefaultWindow(selectionOf(o->window, loaded), settings, loaded);
             reportAnalysisSettings(ctx, "metrics", settings, nullptr, o->window.draws);
             sel.includeResidents = o->residents;
-            const EncounterSelection s = selectEncounters(loaded.colony, loaded.where, sel);
+            const EncounterSelection s = selectEncounters(loaded.compact, loaded.colony.animals, loaded.where, sel);
             const unsigned threads = o->threads == 0 ? defaultThreadCount() : o->threads;
             const HierarchyMetrics m = computeHierarchyMetrics(s, sel.draws, o->randomisations, o->seed, threads);
             std::ostringstream out;

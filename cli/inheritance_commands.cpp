@@ -71,7 +71,11 @@ void runInherit(CommandContext& ctx, const InheritOptions& o)
     EncounterScope scope;
     scope.group = o.group;
     if (!o.monthly) scope.to = parseDate(o.at);
-    const LoadedColony loaded = loadColony(o.colony, scope, o.at.empty() && !o.monthly && !o.acquisition);
+    // The prediction needs only Elo at one date: compact records (core/base/compact_encounters.h);
+    // the monthly series and rank acquisition still read the records as Encounters.
+    const bool compact = !o.monthly && !o.acquisition;
+    const LoadedColony loaded = compact ? loadCompactColony(o.colony, scope, o.at.empty())
+                                        : loadColony(o.colony, scope, false);
     WindowOptions window;
     window.group = o.group;
     window.draws = o.draws;
@@ -120,7 +124,7 @@ void runInherit(CommandContext& ctx, const InheritOptions& o)
     if (!opt.at) opt.at = loaded.lastDay;
     InheritancePrediction p;
     try {
-        p = predictInheritance(loaded.colony, loaded.where, lines, opt);
+        p = predictInheritance(loaded.compact, loaded.colony.animals, loaded.where, lines, opt);
     } catch (const std::invalid_argument& e) {
         throw BadInputError(e.what());
     }

@@ -1,14 +1,17 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "report/hierarchy_report.h"
 
+#include "core/base/compact_encounters.h"
 #include "core/base/display_names.h"
 
 #include "core/pedigree/discordance.h"
 #include "core/pedigree/foresight.h"
 #include "core/pedigree/matriline.h"
 #include "core/planning/planning_caution.h"
+#include "core/ranks/compact_selection.h"
 #include "core/ranks/rank_table.h"
 #include "core/base/residence_index.h"
+#include "core/base/vector_state.h"
 #include "core/research/data_health.h"
 #include "report/health_section.h"
 #include "report/report_layout.h"
@@ -36,9 +39,24 @@ std::string lineOf(const Matrilines& lines, const std::string& id)
     return k >= 0 ? lines.id(lines.matriarch(k)) : std::string();
 }
 
-std::map<std::string, int> eloRanks(const Colony& colony, const ResidenceIndex& where, const std::string& group, Day at,
+/// The colony's encounters held twice by the report: as records (data health,
+/// foresight) and as compact records (every computation that needs only a
+/// selection: one interning pass instead of a string lookup per selection).
+struct ReportColony {
+    const Colony& colony;
+    const ResidenceIndex& where;
+    CompactEncounters compact;
+};
+
+EncounterSelection selectionOf(const ReportColony& c, const SelectionOptions& sel)
+{
+    return selectEncounters(c.compact, c.colony.animals, c.where, sel);
+}
+
+std::map<std::string, int> eloRanks(const ReportColony& c, const std::string& group, Day at,
                                     const EloSettings& elo, EloStartRule startRule, std::vector<RankRow>* rows = nullptr)
 {
+    clearUpperVectorState(); // the text painted before left them dirty (vector_state.h)
     SelectionOptions sel;
     sel.group = group;
     sel.to = at;
@@ -47,18 +65,19 @@ std::map<std::string, int> eloRanks(const Colony& colony, const ResidenceIndex& 
     ro.elo = elo;
     ro.startRule = startRule;
     ro.at = at;
-    const RankTable t = computeRanks(colony, where, sel, ro);
+    const RankTable t = computeRanks(selectionOf(c, sel), c.colony, c.where, sel, ro);
     std::map<std::string, int> out;
     for (const RankRow& r : t.rows) out[r.animal] = r.rank;
     if (rows) *rows = t.rows;
     return out;
 }
 
-void observedAndPredicted(ReportLayout& doc, const Colony& colony, const ResidenceIndex& where, const Matrilines& lines,
+void observedAndPredicted(ReportLayout& doc, const ReportColony& c, const Matrilines& lines,
                           const HierarchyReportOptions& o, Day at, const InheritancePrediction& p, const DataHealth& health)
 {
     std::vector<RankRow> rows;
-    eloRanks(colony, where, o.group, at, o.elo, o.startRule, &rows);
+    eloRanks(c, o.group, at, o.elo, o.startRule, &rows);
+    const Colony& colony = c.colony;
     ReportTable observed;
     observed.header = {QObject::tr("#"), QObject::tr("Animal"), QObject::tr("Sex"), QObject::tr("Matriline"),
                        QObject::tr("Elo"), QObject::tr("Enc."), QObject::tr("Int.")};
@@ -132,14 +151,14 @@ void discordances(ReportLayout& doc, const Matrilines& lines, const InheritanceP
                       true);
 }
 
-void rankChanges(ReportLayout& doc, const Colony& colony, const ResidenceIndex& where, const Matrilines& lines,
+void rankChanges(ReportLayout& doc, const ReportColony& c, const Matrilines& lines,
                  const HierarchyReportOptions& o, Day at)
 {
     const Day before = at - o.changeDays;
-    const auto now = eloRanks(colony, where, o.group, at, o.elo, o.startRule);
+    const auto now = eloRanks(c, o.group, at, o.elo, o.startRule);
     std::map<std::string, int> then;
     try {
-        then = eloRanks(colony, where, o.group, before, o.elo, o.startRule);
+        then = eloRanks(c, o.group, before, o.elo, o.startRule);
     } catch (const std::exception&) {
         // No encounters that early: nothing to compare.
     }
@@ -184,6 +203,7 @@ void rankChanges(ReportLayout& doc, const Colony& colony, const ResidenceIndex& 
 void foresight(ReportLayout& doc, const Colony& colony, const ResidenceIndex& where, const HierarchyReportOptions& o,
                Day at)
 {
+    clearUpperVectorState();
     SelectionOptions sel;
     sel.group = o.group;
     sel.to = at;
@@ -246,9 +266,10 @@ void foresight(ReportLayout& doc, const Colony& colony, const ResidenceIndex& wh
     doc.chart(QObject::tr("Share of winners each model predicted, per year"), series, labels);
 }
 
-void stability(ReportLayout& doc, const Colony& colony, const ResidenceIndex& where, const Matrilines& lines,
+void stability(ReportLayout& doc, const ReportColony& c, const Matrilines& lines,
                const HierarchyReportOptions& o, Day at)
 {
+    clearUpperVectorState();
     StabilityOptions so;
     so.group = o.group;
     so.length = PeriodLength::Month;
@@ -256,7 +277,7 @@ void stability(ReportLayout& doc, const Colony& colony, const ResidenceIndex& wh
     so.elo = o.elo;
     so.severity = o.severity;
     so.thresholds = o.thresholds;
-    const StabilitySeries s = stabilityWatch(colony, where, lines, so);
+    const StabilitySeries s = stabilityWatch(c.compact, c.colony.animals, c.where, lines, so);
     doc.heading(QObject::tr("Stability"));
     doc.paragraph(stabilityMethodText(o.thresholds), true);
     std::vector<bool> alerted(s.periods.size(), false);
@@ -333,13 +354,18 @@ void stability(ReportLayout& doc, const Colony& colony, const ResidenceIndex& wh
 int paintHierarchyReport(QPagedPaintDevice& device, const Colony& colony, const HierarchyReportOptions& o,
                          QStringList* headings)
 {
+    // Qt's start and the text painted between the sections leave the vector
+    // registers dirty, which slows every computation after it many times over
+    // (core/base/vector_state.h): each computing step cleans them first.
+    clearUpperVectorState();
     const ResidenceIndex where(colony.animals, colony.residences);
     if (where.group(o.group) < 0) throw std::invalid_argument("no group '" + o.group + "' in the colony");
     SelectionOptions sel;
     sel.group = o.group;
     sel.to = o.at;
     sel.draws = o.elo.draws;
-    const EncounterSelection es = selectEncounters(colony, where, sel);
+    const ReportColony c{colony, where, compactEncounters(colony.encounters)};
+    const EncounterSelection es = selectionOf(c, sel);
     if (es.bouts.empty())
         throw std::invalid_argument("the group '" + o.group + "' has no encounters" +
                                     (o.at ? " up to " + formatDate(*o.at) : std::string()));
@@ -351,7 +377,7 @@ int paintHierarchyReport(QPagedPaintDevice& device, const Colony& colony, const 
     io.rule = o.rule;
     io.maturityYears = o.maturityYears;
     io.elo = o.elo;
-    const InheritancePrediction p = predictInheritance(colony, where, lines, io);
+    const InheritancePrediction p = predictInheritance(c.compact, colony.animals, where, lines, io);
 
     ReportLayout doc(device);
     doc.title(QObject::tr("Hierarchy report: %1").arg(qs(o.group)),
@@ -375,13 +401,14 @@ int paintHierarchyReport(QPagedPaintDevice& device, const Colony& colony, const 
     ho.today = at;
     ho.elo = o.elo;
     ho.randomisations = 500;
+    clearUpperVectorState();
     const DataHealth health = dataHealth(colony, where, ho);
-    observedAndPredicted(doc, colony, where, lines, o, at, p, health);
+    observedAndPredicted(doc, c, lines, o, at, p, health);
     doc.caution(qs(kPlanningCaution));
     discordances(doc, lines, p);
-    rankChanges(doc, colony, where, lines, o, at);
+    rankChanges(doc, c, lines, o, at);
     foresight(doc, colony, where, o, at);
-    stability(doc, colony, where, lines, o, at);
+    stability(doc, c, lines, o, at);
     paintHealthSection(doc, health, qs(o.group));
     doc.heading(QObject::tr("Methods and references"));
     for (const QString& m : methodsText(o.elo)) doc.paragraph(m, true);

@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "core/pedigree/inheritance_prediction.h"
 
+#include "core/ranks/compact_selection.h"
 #include "core/ranks/encounter_selection.h"
 #include "core/ranks/ordinal_ranks.h"
 
@@ -26,16 +27,29 @@ int InheritancePrediction::find(std::string_view id) const
     return -1;
 }
 
+std::vector<int> femaleResidenceIndices(const Matrilines& lines, const ResidenceIndex& where)
+{
+    std::vector<int> out(static_cast<size_t>(lines.recordedCount()), -1);
+    for (int i = 0; i < lines.recordedCount(); ++i)
+        if (lines.sex(i) == Sex::Female) out[static_cast<size_t>(i)] = where.animal(lines.id(i));
+    return out;
+}
+
 RankedFemales rankedFemalesOn(const Matrilines& lines, const ResidenceIndex& where, Day d, const std::string& group,
                               int maturityYears)
+{
+    return rankedFemalesOn(lines, where, femaleResidenceIndices(lines, where), d, group, maturityYears);
+}
+
+RankedFemales rankedFemalesOn(const Matrilines& lines, const ResidenceIndex& where, const std::vector<int>& femaleIndices,
+                              Day d, const std::string& group, int maturityYears)
 {
     RankedFemales out;
     out.ranked.assign(static_cast<size_t>(lines.size()), false);
     const int g = group.empty() ? -1 : where.group(group);
     if (!group.empty() && g < 0) return out;
     for (int i = 0; i < lines.recordedCount(); ++i) {
-        if (lines.sex(i) != Sex::Female) continue;
-        const int k = where.animal(lines.id(i));
+        const int k = femaleIndices[static_cast<size_t>(i)];
         if (k < 0) continue;
         const int on = where.groupOn(k, d);
         if (on < 0 || (g >= 0 && on != g)) continue;
@@ -159,19 +173,49 @@ InheritancePrediction predictOrder(const Matrilines& lines, const RankedFemales&
     return p;
 }
 
-ObservedScores eloScoresAt(const Colony& colony, const ResidenceIndex& where, Day d, const std::string& group,
-                           const EloSettings& settings)
+namespace {
+
+/// Elo ratings of every rated animal of a selection.
+ObservedScores ratedScores(const EncounterSelection& sel, const EloSettings& settings)
 {
-    SelectionOptions s;
-    s.to = d;
-    s.group = group;
-    s.draws = settings.draws;
-    const EncounterSelection sel = selectEncounters(colony, where, s);
     const EloRun run = runElo(sel.size(), sel.bouts, settings);
     ObservedScores out;
     for (int i = 0; i < sel.size(); ++i)
         if (run.rated[static_cast<size_t>(i)]) out.emplace(sel.ids[static_cast<size_t>(i)], run.rating[static_cast<size_t>(i)]);
     return out;
+}
+
+SelectionOptions scoresSelection(Day d, const std::string& group, const EloSettings& settings)
+{
+    SelectionOptions s;
+    s.to = d;
+    s.group = group;
+    s.draws = settings.draws;
+    return s;
+}
+
+/// The prediction once the date and the observed scores are known.
+InheritancePrediction predictWith(const ResidenceIndex& where, const Matrilines& lines, const InheritanceOptions& o,
+                                  Day at, const ObservedScores& observed)
+{
+    const RankedFemales ranked = rankedFemalesOn(lines, where, at, o.group, o.maturityYears);
+    InheritancePrediction p = predictOrder(lines, ranked, observed, o.rule, o.matrilineOrder);
+    p.at = at;
+    return p;
+}
+
+} // namespace
+
+ObservedScores eloScoresAt(const Colony& colony, const ResidenceIndex& where, Day d, const std::string& group,
+                           const EloSettings& settings)
+{
+    return ratedScores(selectEncounters(colony, where, scoresSelection(d, group, settings)), settings);
+}
+
+ObservedScores eloScoresAt(const CompactEncounters& encounters, const std::vector<Animal>& animals,
+                           const ResidenceIndex& where, Day d, const std::string& group, const EloSettings& settings)
+{
+    return ratedScores(selectEncounters(encounters, animals, where, scoresSelection(d, group, settings)), settings);
 }
 
 std::optional<Day> lastEncounterDay(const Colony& colony)
@@ -182,16 +226,29 @@ std::optional<Day> lastEncounterDay(const Colony& colony)
     return last;
 }
 
+std::optional<Day> lastEncounterDay(const CompactEncounters& encounters)
+{
+    std::optional<Day> last;
+    for (const CompactEncounter& e : encounters.records)
+        if (!last || e.date > *last) last = e.date;
+    return last;
+}
+
 InheritancePrediction predictInheritance(const Colony& colony, const ResidenceIndex& where, const Matrilines& lines,
                                          const InheritanceOptions& o)
 {
     const std::optional<Day> at = o.at ? o.at : lastEncounterDay(colony);
     if (!at) throw std::invalid_argument("the colony has no encounters; give a date");
-    const RankedFemales ranked = rankedFemalesOn(lines, where, *at, o.group, o.maturityYears);
-    const ObservedScores observed = eloScoresAt(colony, where, *at, o.group, o.elo);
-    InheritancePrediction p = predictOrder(lines, ranked, observed, o.rule, o.matrilineOrder);
-    p.at = *at;
-    return p;
+    return predictWith(where, lines, o, *at, eloScoresAt(colony, where, *at, o.group, o.elo));
+}
+
+InheritancePrediction predictInheritance(const CompactEncounters& encounters, const std::vector<Animal>& animals,
+                                         const ResidenceIndex& where, const Matrilines& lines,
+                                         const InheritanceOptions& o)
+{
+    const std::optional<Day> at = o.at ? o.at : lastEncounterDay(encounters);
+    if (!at) throw std::invalid_argument("the colony has no encounters; give a date");
+    return predictWith(where, lines, o, *at, eloScoresAt(encounters, animals, where, *at, o.group, o.elo));
 }
 
 } // namespace hierloom::core

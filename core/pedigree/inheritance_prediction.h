@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
 #include "core/base/colony.h"
+#include "core/base/compact_encounters.h"
 #include "core/ranks/analysis_settings.h"
 #include "core/ranks/elo_rating.h"
 #include "core/pedigree/matriline.h"
@@ -51,6 +52,14 @@ struct RankedFemales {
 /// and after her maturity-age birthday; an unknown birth date counts as mature).
 RankedFemales rankedFemalesOn(const Matrilines& lines, const ResidenceIndex& where, Day d, const std::string& group,
                               int maturityYears);
+
+/// where.animal of every recorded female of the lines (-1 for the others and
+/// for a female without a stay): the id lookups rankedFemalesOn makes, made
+/// once for a series of days.
+std::vector<int> femaleResidenceIndices(const Matrilines& lines, const ResidenceIndex& where);
+/// rankedFemalesOn with those lookups made beforehand (the same result).
+RankedFemales rankedFemalesOn(const Matrilines& lines, const ResidenceIndex& where, const std::vector<int>& femaleIndices,
+                              Day d, const std::string& group, int maturityYears);
 
 /// Offspring ordered by the sibling rule (Kawamura 1958): youngest rule birth date
 /// descending, eldest rule ascending; unknown birth dates count as the eldest, and
@@ -103,13 +112,25 @@ InheritancePrediction predictOrder(const Matrilines& lines, const RankedFemales&
 ObservedScores eloScoresAt(const Colony& colony, const ResidenceIndex& where, Day d, const std::string& group,
                            const EloSettings& settings);
 
+/// The same scores from compact records (core/base/compact_encounters.h);
+/// `animals` is the colony's animal list.
+ObservedScores eloScoresAt(const CompactEncounters& encounters, const std::vector<Animal>& animals,
+                           const ResidenceIndex& where, Day d, const std::string& group, const EloSettings& settings);
+
 /// Date of the record's last encounter, if any (the default date of a prediction).
 std::optional<Day> lastEncounterDay(const Colony& colony);
+/// The same of compact records.
+std::optional<Day> lastEncounterDay(const CompactEncounters& encounters);
 
 /// The predicted order at options.at with observed ranks by Elo at that date
 /// (docs/methods.md "Small choices", `inherit`). Throws std::invalid_argument for a
 /// colony without encounters and no date, or a bad explicit matriline order.
 InheritancePrediction predictInheritance(const Colony& colony, const ResidenceIndex& where, const Matrilines& lines,
+                                         const InheritanceOptions& options);
+/// The same prediction from compact records (`inherit` on the command line);
+/// `animals` is the colony's animal list.
+InheritancePrediction predictInheritance(const CompactEncounters& encounters, const std::vector<Animal>& animals,
+                                         const ResidenceIndex& where, const Matrilines& lines,
                                          const InheritanceOptions& options);
 
 } // namespace hierloom::core

@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "core/ranks/elo_optimisation.h"
 
+#include "core/base/vector_state.h"
 #include "core/ranks/elo_kernel.h"
 
 #include <algorithm>
@@ -27,6 +28,32 @@ double likelihoodAt(double k, int n, const std::vector<Bout>& bouts, const EloSe
     return tally.logLikelihood;
 }
 
+constexpr int kLanes = 4;
+
+/// L(k) of kLanes values of k in one pass (eloLikelihoodLanes): the same
+/// values as likelihoodAt of each.
+void likelihoodsAt(const double* k, double* out, int n, const std::vector<Bout>& bouts, const EloSettings& settings)
+{
+    const auto size = static_cast<size_t>(std::max(n, 0));
+    std::vector<double> ratings(size * kLanes, settings.start);
+    std::vector<unsigned char> flags(size * kLanes, 0);
+    double* rating[kLanes];
+    unsigned char* rated[kLanes];
+    for (int j = 0; j < kLanes; ++j) {
+        rating[j] = ratings.data() + size * static_cast<size_t>(j);
+        rated[j] = flags.data() + size * static_cast<size_t>(j);
+    }
+    detail::EloTally tally[kLanes];
+    const bool ignoreDraws = settings.draws == DrawPolicy::Ignore;
+    const Bout* first = bouts.data();
+    const Bout* last = first + bouts.size();
+    if (settings.curve == EloCurve::Logistic)
+        detail::eloLikelihoodLanes<EloCurve::Logistic, kLanes>(first, last, rating, rated, k, ignoreDraws, tally);
+    else
+        detail::eloLikelihoodLanes<EloCurve::Normal, kLanes>(first, last, rating, rated, k, ignoreDraws, tally);
+    for (int j = 0; j < kLanes; ++j) out[j] = tally[j].logLikelihood;
+}
+
 } // namespace
 
 double eloLogLikelihood(int n, const std::vector<Bout>& bouts, const EloSettings& settings)
@@ -42,6 +69,7 @@ std::optional<EloOptimum> optimiseEloK(int n, const std::vector<Bout>& bouts, co
 {
     detail::checkBoutIndices(n, bouts);
     if (std::none_of(bouts.begin(), bouts.end(), [](const Bout& b) { return !b.draw; })) return std::nullopt;
+    clearUpperVectorState();
 
     std::vector<double> rating;
     std::vector<unsigned char> rated;
@@ -57,12 +85,17 @@ std::optional<EloOptimum> optimiseEloK(int n, const std::vector<Bout>& bouts, co
     const int cells = static_cast<int>(kMaxK / kGridStep);
     std::vector<double> grid(static_cast<size_t>(cells) + 1);
     grid[0] = best.logLikelihood;
-    threads = std::max(1U, std::min<unsigned>(threads, static_cast<unsigned>(cells)));
+    // Cells 1..cells in runs of kLanes computed in one pass each (cells is a multiple of kLanes).
+    static_assert(static_cast<int>(kMaxK / kGridStep) % kLanes == 0);
+    const int runs = cells / kLanes;
+    threads = std::max(1U, std::min<unsigned>(threads, static_cast<unsigned>(runs)));
     auto work = [&](unsigned t) {
-        std::vector<double> r;
-        std::vector<unsigned char> f;
-        for (int i = 1 + static_cast<int>(t); i <= cells; i += static_cast<int>(threads))
-            grid[static_cast<size_t>(i)] = likelihoodAt(kGridStep * i, n, bouts, settings, r, f);
+        clearUpperVectorState(); // a thread inherits its starter's registers
+        for (int r = static_cast<int>(t); r < runs; r += static_cast<int>(threads)) {
+            double k[kLanes];
+            for (int j = 0; j < kLanes; ++j) k[j] = kGridStep * (1 + r * kLanes + j);
+            likelihoodsAt(k, grid.data() + 1 + static_cast<size_t>(r) * kLanes, n, bouts, settings);
+        }
     };
     if (threads == 1) {
         work(0);

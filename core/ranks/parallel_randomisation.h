@@ -1,5 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
+#include "core/base/vector_state.h"
+
 #include <algorithm>
 #include <cstdint>
 #include <random>
@@ -40,6 +42,7 @@ std::vector<Result> runRandomisations(int iterations, std::uint64_t seed, unsign
     const int blocks = (iterations + blockSize - 1) / blockSize;
     threads = std::max(1U, std::min<unsigned>(threads, static_cast<unsigned>(std::max(blocks, 1))));
     auto work = [&](unsigned t) {
+        clearUpperVectorState(); // a thread inherits its starter's registers
         for (int b = static_cast<int>(t); b < blocks; b += static_cast<int>(threads)) {
             RandomEngine engine(blockSeed(seed, static_cast<std::uint64_t>(b)));
             const int end = std::min(iterations, (b + 1) * blockSize);
