@@ -64,16 +64,16 @@ EloStartRule startRuleOf(SiblingRule rule)
 
 /// Whether the rule's order of day d puts each pair's winner higher, for the
 /// bouts [first, last) of that day; `rating` and `rated` are plain Elo before the day.
-void judgeDay(const Matrilines& lines, const ResidenceIndex& where, const std::vector<int>& femaleIndices,
-              const SelectionOptions& selection,
-              const ForesightOptions& o, const EncounterSelection& sel, const std::vector<double>& rating,
-              const std::vector<unsigned char>& rated, size_t first, size_t last, std::vector<ForesightEncounter>& out)
+void judgeDay(const Matrilines& lines, const ResidenceIndex& where, const std::vector<FemaleCandidate>& candidates,
+              const SelectionOptions& selection, const ForesightOptions& o, const EncounterSelection& sel,
+              const std::vector<double>& rating, const std::vector<unsigned char>& rated, size_t first, size_t last,
+              std::vector<ForesightEncounter>& out)
 {
     const Day d = sel.days[first];
     ObservedScores observed;
     for (int i = 0; i < sel.size(); ++i)
         if (rated[static_cast<size_t>(i)]) observed.emplace(sel.ids[static_cast<size_t>(i)], rating[static_cast<size_t>(i)]);
-    const RankedFemales ranked = rankedFemalesOn(lines, where, femaleIndices, d, selection.group, o.maturityYears);
+    const RankedFemales ranked = rankedFemalesOn(lines, where, candidates, d, selection.group, o.maturityYears);
     const InheritancePrediction p = predictOrder(lines, ranked, observed, o.rule);
     std::set<std::string, std::less<>> placed; // matrilines placed by an observed rank
     for (const PredictedFemale& f : p.females)
@@ -111,12 +111,13 @@ Foresight computeForesight(const Colony& colony, const ResidenceIndex& where, co
     }
     // Plain Elo: the rule's matriline order is judged from its ratings before each day's first bout.
     const Matrilines lines(colony);
-    const std::vector<int> femaleIndices = femaleResidenceIndices(lines, where); // not one lookup per female and day
+    // The females that can be ranked in the group, found once instead of on every day.
+    const std::vector<FemaleCandidate> candidates = rankedFemaleCandidates(lines, where, selection.group);
     const EloObserver judge = [&](size_t b, const std::vector<double>& rating, const std::vector<unsigned char>& rated) {
         if (b > 0 && sel.days[b] == sel.days[b - 1]) return;
         size_t last = b + 1;
         while (last < sel.days.size() && sel.days[last] == sel.days[b]) ++last;
-        judgeDay(lines, where, femaleIndices, selection, o, sel, rating, rated, b, last, all);
+        judgeDay(lines, where, candidates, selection, o, sel, rating, rated, b, last, all);
     };
     const EloTrace plain = traceElo(n, sel.bouts, sel.days, elo, EloStartRule::None, family, present, {}, judge);
     const EloTrace informed = traceElo(n, sel.bouts, sel.days, elo, startRuleOf(o.rule), family, present, {});

@@ -27,36 +27,44 @@ int InheritancePrediction::find(std::string_view id) const
     return -1;
 }
 
-std::vector<int> femaleResidenceIndices(const Matrilines& lines, const ResidenceIndex& where)
+std::vector<FemaleCandidate> rankedFemaleCandidates(const Matrilines& lines, const ResidenceIndex& where,
+                                                    const std::string& group)
 {
-    std::vector<int> out(static_cast<size_t>(lines.recordedCount()), -1);
-    for (int i = 0; i < lines.recordedCount(); ++i)
-        if (lines.sex(i) == Sex::Female) out[static_cast<size_t>(i)] = where.animal(lines.id(i));
+    std::vector<FemaleCandidate> out;
+    const int g = group.empty() ? -1 : where.group(group);
+    if (!group.empty() && g < 0) return out;
+    for (int i = 0; i < lines.recordedCount(); ++i) {
+        if (lines.sex(i) != Sex::Female) continue;
+        const int k = where.animal(lines.id(i));
+        if (k < 0) continue;
+        const auto& stints = where.stints(k);
+        if (g < 0 || std::any_of(stints.begin(), stints.end(), [&](const auto& s) { return s.group == g; }))
+            out.push_back({i, k});
+    }
     return out;
 }
 
 RankedFemales rankedFemalesOn(const Matrilines& lines, const ResidenceIndex& where, Day d, const std::string& group,
                               int maturityYears)
 {
-    return rankedFemalesOn(lines, where, femaleResidenceIndices(lines, where), d, group, maturityYears);
+    return rankedFemalesOn(lines, where, rankedFemaleCandidates(lines, where, group), d, group, maturityYears);
 }
 
-RankedFemales rankedFemalesOn(const Matrilines& lines, const ResidenceIndex& where, const std::vector<int>& femaleIndices,
-                              Day d, const std::string& group, int maturityYears)
+RankedFemales rankedFemalesOn(const Matrilines& lines, const ResidenceIndex& where,
+                              const std::vector<FemaleCandidate>& candidates, Day d, const std::string& group,
+                              int maturityYears)
 {
     RankedFemales out;
     out.ranked.assign(static_cast<size_t>(lines.size()), false);
     const int g = group.empty() ? -1 : where.group(group);
     if (!group.empty() && g < 0) return out;
-    for (int i = 0; i < lines.recordedCount(); ++i) {
-        const int k = femaleIndices[static_cast<size_t>(i)];
-        if (k < 0) continue;
-        const int on = where.groupOn(k, d);
+    for (const FemaleCandidate& c : candidates) {
+        const int on = where.groupOn(c.animal, d);
         if (on < 0 || (g >= 0 && on != g)) continue;
-        const std::optional<Day> birth = lines.birth(i);
+        const std::optional<Day> birth = lines.birth(c.node);
         if (birth && d < anniversary(*birth, maturityYears)) continue;
-        out.ranked[static_cast<size_t>(i)] = true;
-        if (!birth) out.unknownBirth.push_back(lines.id(i));
+        out.ranked[static_cast<size_t>(c.node)] = true;
+        if (!birth) out.unknownBirth.push_back(lines.id(c.node));
     }
     std::sort(out.unknownBirth.begin(), out.unknownBirth.end());
     return out;

@@ -53,13 +53,22 @@ struct RankedFemales {
 RankedFemales rankedFemalesOn(const Matrilines& lines, const ResidenceIndex& where, Day d, const std::string& group,
                               int maturityYears);
 
-/// where.animal of every recorded female of the lines (-1 for the others and
-/// for a female without a stay): the id lookups rankedFemalesOn makes, made
-/// once for a series of days.
-std::vector<int> femaleResidenceIndices(const Matrilines& lines, const ResidenceIndex& where);
-/// rankedFemalesOn with those lookups made beforehand (the same result).
-RankedFemales rankedFemalesOn(const Matrilines& lines, const ResidenceIndex& where, const std::vector<int>& femaleIndices,
-                              Day d, const std::string& group, int maturityYears);
+/// A recorded female of the lines (`node`) with her index in a ResidenceIndex.
+struct FemaleCandidate {
+    int node = 0;
+    int animal = 0;
+};
+
+/// The recorded females of the lines that ever stayed in `group` (in any
+/// group when empty), node order: the only ones rankedFemalesOn can rank
+/// there, with the id lookups it makes done once for a series of days.
+std::vector<FemaleCandidate> rankedFemaleCandidates(const Matrilines& lines, const ResidenceIndex& where,
+                                                    const std::string& group);
+/// rankedFemalesOn looking only at those candidates (the same result when
+/// they were found for the same lines, index and group).
+RankedFemales rankedFemalesOn(const Matrilines& lines, const ResidenceIndex& where,
+                              const std::vector<FemaleCandidate>& candidates, Day d, const std::string& group,
+                              int maturityYears);
 
 /// Offspring ordered by the sibling rule (Kawamura 1958): youngest rule birth date
 /// descending, eldest rule ascending; unknown birth dates count as the eldest, and

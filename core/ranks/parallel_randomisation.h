@@ -30,6 +30,10 @@ inline unsigned defaultThreadCount()
     return hw == 0 ? 1U : hw;
 }
 
+/// Iterations per block of runRandomisations: one thread runs a block's
+/// iterations in order, one after the other.
+inline constexpr int kRandomisationBlock = 64;
+
 /// Runs `iterations` randomisations split into fixed blocks of 64; block b
 /// draws from RandomEngine(blockSeed(seed, b)). `body(engine, iteration)`
 /// returns a value stored at results[iteration]. The results are identical
@@ -37,7 +41,7 @@ inline unsigned defaultThreadCount()
 template <typename Result, typename Body>
 std::vector<Result> runRandomisations(int iterations, std::uint64_t seed, unsigned threads, Body body)
 {
-    constexpr int blockSize = 64;
+    constexpr int blockSize = kRandomisationBlock;
     std::vector<Result> results(static_cast<size_t>(std::max(iterations, 0)));
     const int blocks = (iterations + blockSize - 1) / blockSize;
     threads = std::max(1U, std::min<unsigned>(threads, static_cast<unsigned>(std::max(blocks, 1))));

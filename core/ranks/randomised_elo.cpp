@@ -76,10 +76,16 @@ std::vector<RandomisedEloRow> randomisedElo(int n, const std::vector<Bout>& bout
         rated[static_cast<size_t>(b.loser)] = true;
     }
 
+    std::vector<std::vector<Bout>> buffers(
+        static_cast<size_t>((iterations + kRandomisationBlock - 1) / kRandomisationBlock));
     const std::vector<Outcome> outcomes = runRandomisations<Outcome>(
-        iterations, seed, threads, [&](RandomEngine& engine, int) {
+        iterations, seed, threads, [&](RandomEngine& engine, int it) {
             if (cancel && cancel->load(std::memory_order_relaxed)) return Outcome{};
-            std::vector<Bout> order = counted;
+            // One buffer per block (its iterations run one after the other on one thread),
+            // refilled for every order and freed after the block's last.
+            const int block = it / kRandomisationBlock;
+            std::vector<Bout>& order = buffers[static_cast<size_t>(block)];
+            order.assign(counted.begin(), counted.end());
             shuffleBouts(order, engine);
             Outcome out;
             out.rating.assign(size, settings.start);
@@ -88,6 +94,7 @@ std::vector<RandomisedEloRow> randomisedElo(int n, const std::vector<Bout>& bout
             detail::eloStepsFor<false>(settings.curve, order.data(), order.data() + order.size(), out.rating.data(),
                                        seen.data(), settings.k, false, unused);
             out.rank = ordinalRanks(out.rating, rated);
+            if ((it + 1) % kRandomisationBlock == 0 || it + 1 == iterations) std::vector<Bout>().swap(order);
             return out;
         });
 

@@ -93,3 +93,51 @@ TEST(CompactInheritance, RandomColoniesGiveTheSamePrediction)
     }
     EXPECT_GT(ranked, 100U); // the colonies rank females, so the orders compared are not empty
 }
+
+namespace {
+
+/// The ranked females by the definition (docs/methods.md): every recorded
+/// female resident in the group on day d and mature; the reference for the
+/// candidates' shortcut.
+std::vector<bool> rankedByDefinition(const Matrilines& lines, const ResidenceIndex& where, Day d,
+                                     const std::string& group, int maturityYears)
+{
+    std::vector<bool> out(static_cast<size_t>(lines.size()), false);
+    for (int i = 0; i < lines.recordedCount(); ++i) {
+        if (lines.sex(i) != Sex::Female) continue;
+        const int k = where.animal(lines.id(i));
+        if (k < 0) continue;
+        const int on = where.groupOn(k, d);
+        if (on < 0 || (!group.empty() && (on != where.group(group) || where.group(group) < 0))) continue;
+        const std::optional<Day> birth = lines.birth(i);
+        if (birth && d < anniversary(*birth, maturityYears)) continue;
+        out[static_cast<size_t>(i)] = true;
+    }
+    return out;
+}
+
+} // namespace
+
+TEST(RankedFemaleCandidates, RankTheSameFemalesAsTheDefinitionOnEveryDay)
+{
+    int ranked = 0;
+    for (std::uint64_t seed = 1; seed <= 20; ++seed) {
+        hierloom::test::RandomColonyShape shape;
+        shape.animals = 10 + static_cast<int>(seed % 15);
+        const Colony colony = hierloom::test::randomColony(seed, shape);
+        const ResidenceIndex where(colony.animals, colony.residences);
+        const Matrilines lines(colony);
+        for (const std::string& group : {std::string(), std::string("G1"), std::string("G3"), std::string("nowhere")}) {
+            const std::vector<FemaleCandidate> candidates = rankedFemaleCandidates(lines, where, group);
+            for (Day d = 17850; d <= 18100; d += 5) {
+                const int years = 1 + static_cast<int>(seed % 5);
+                const RankedFemales r = rankedFemalesOn(lines, where, candidates, d, group, years);
+                EXPECT_EQ(r.ranked, rankedByDefinition(lines, where, d, group, years))
+                    << "seed " << seed << ", group '" << group << "', day " << d;
+                EXPECT_EQ(r.unknownBirth, rankedFemalesOn(lines, where, d, group, years).unknownBirth);
+                for (bool b : r.ranked) ranked += b;
+            }
+        }
+    }
+    EXPECT_GT(ranked, 1000); // the days compared rank females
+}
