@@ -11,6 +11,7 @@
 #include "ui/document/compute_runner.h"
 #include "core/base/display_names.h"
 #include "ui/widgets/figure_caption.h"
+#include "ui/widgets/plot_clearing.h"
 #include "ui/widgets/plot_export.h"
 #include "ui/widgets/progress_strip.h"
 #include "ui/document/qt_convert.h"
@@ -391,8 +392,7 @@ void PredictionView::adoptForesight(core::Foresight foresight)
 
 void PredictionView::rebuildPlot()
 {
-    plot_->clearGraphs();
-    plot_->clearItems();
+    clearPlot(plot_);
     connectors_.assign(prediction_.females.size(), nullptr);
     observedLabels_.clear();
     const QString selected = selection_->animal();
