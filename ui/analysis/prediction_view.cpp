@@ -194,7 +194,8 @@ PredictionView::PredictionView(ColonyDocument* document, AnimalSelection* select
     // Recomputed only while on screen; a hidden tab catches up when shown.
     auto* refresh = new VisibleRefresh(this, [this] { recompute(); });
     connect(document_, &ColonyDocument::changed, refresh, &VisibleRefresh::request);
-    connect(selection_, &AnimalSelection::dayChanged, this, &PredictionView::recompute);
+    // The timeline's date slider moves the day too: a hidden tab catches up when shown.
+    connect(selection_, &AnimalSelection::dayChanged, refresh, &VisibleRefresh::request);
     connect(selection_, &AnimalSelection::animalChanged, this, &PredictionView::rebuildPlot);
     recompute();
 }

@@ -28,6 +28,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <set>
 
 namespace hierloom::ui {
 
@@ -284,7 +285,10 @@ void RankTimelineView::adopt(core::RankTimeline timeline, MatrilinePalette palet
         const QSignalBlocker block(lineBox_);
         lineBox_->clear();
         lineBox_->addItem(tr("All matrilines"), QString());
+        std::set<std::string> shown; // the lines with a female on the plot, as in the legend
+        for (const core::RankTimelineFemale& f : timeline_.females) shown.insert(f.matriarch);
         for (const std::string& m : palette_.matriarchs()) {
+            if (!shown.count(m)) continue;
             const int f = timeline_.find(m);
             const QString name = f >= 0 ? toQString(timeline_.females[static_cast<size_t>(f)].name) : QString();
             lineBox_->addItem(tr("Line of %1").arg(name.isEmpty() ? toQString(m) : name), toQString(m));
@@ -329,7 +333,12 @@ void RankTimelineView::rebuildPlot()
     changes_.clear();
     const size_t nCheck = timeline_.checkpoints.size();
     // Legend: one entry per matriline, then the markers.
+    // Only the lines with a female on the plot: a centre's palette holds every
+    // group's matrilines (hundreds), and each colour stays the palette's.
+    std::set<std::string> shown;
+    for (const core::RankTimelineFemale& f : timeline_.females) shown.insert(f.matriarch);
     for (int l = 0; l < palette_.lineCount(); ++l) {
+        if (!shown.count(palette_.matriarchs()[static_cast<size_t>(l)])) continue;
         QCPGraph* key = plot_->addGraph();
         key->setPen(MatrilinePalette::penAt(l, 2));
         const std::string& m = palette_.matriarchs()[static_cast<size_t>(l)];

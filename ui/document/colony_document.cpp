@@ -11,17 +11,19 @@
 
 #include <algorithm>
 #include <cassert>
+#include <utility>
 
 namespace hierloom::ui {
 
 namespace {
 
-/// Adds a group's rows `part` to `cache`, both in entry order (seq), keeping
-/// one copy of a row that is in both and leaving out the cached rows that
-/// `drop` names; `spare` more rows are reserved. One pass: each row kept
-/// moves once (a group switch at a centre moves hundreds of thousands).
-template <class Drop>
-void mergeBySeq(std::vector<core::Encounter>& cache, std::vector<core::Encounter> part, size_t spare, Drop drop)
+/// A group's rows `part` added to `cache`, both in entry order (seq): one
+/// copy of a row that is in both, without the cached rows that `drop` names,
+/// `spare` more rows reserved. One pass: each row kept moves once (a group
+/// switch at a centre moves hundreds of thousands), or is copied once when
+/// `cache` is const (still read by a worker's snapshot).
+template <class Cache, class Drop>
+std::vector<core::Encounter> mergedBySeq(Cache& cache, std::vector<core::Encounter> part, size_t spare, Drop drop)
 {
     std::vector<core::Encounter> merged;
     merged.reserve(cache.size() + part.size() + spare);
@@ -37,12 +39,12 @@ void mergeBySeq(std::vector<core::Encounter>& cache, std::vector<core::Encounter
             merged.push_back(std::move(*p++));
         }
     }
-    cache = std::move(merged);
+    return merged;
 }
 
 void mergeBySeq(std::vector<core::Encounter>& cache, std::vector<core::Encounter> part)
 {
-    mergeBySeq(cache, std::move(part), 0, [](const core::Encounter&) { return false; });
+    cache = mergedBySeq(cache, std::move(part), 0, [](const core::Encounter&) { return false; });
 }
 
 } // namespace
@@ -257,7 +259,19 @@ bool ColonyDocument::holdGroup(const QString& group)
         return !dropped.empty() && e.seq <= keptFromSeq_ && !e.group.empty() &&
                std::find(dropped.begin(), dropped.end(), e.group) != dropped.end();
     };
-    mergeBySeq(editColony().encounters, std::move(part), 4096, drop);
+    snapshot_ = {};
+    if (colony_.use_count() > 1) {
+        // A worker still reads the records: the new cache is made beside
+        // them, each kept row copied once (not every row copied, then merged).
+        auto next = std::make_shared<core::Colony>();
+        next->animals = colony_->animals;
+        next->residences = colony_->residences;
+        next->reindex();
+        next->encounters = mergedBySeq(std::as_const(colony_->encounters), std::move(part), 4096, drop);
+        colony_ = std::move(next);
+    } else {
+        colony_->encounters = mergedBySeq(colony_->encounters, std::move(part), 4096, drop);
+    }
     // The rows read are the file's as this window knows it, unless another
     // program wrote since (then results of the same revision may differ).
     emitChange({ChangeKind::EncountersChanged, 0}, writtenElsewhere());
