@@ -120,18 +120,23 @@ InheritancePrediction predictOrder(const Matrilines& lines, const RankedFemales&
     for (size_t k = 0; k < scored.size(); ++k) observedRank[static_cast<size_t>(scored[k])] = ordinal[k];
 
     // Each line with ranked members and its best observed rank (0: none).
-    std::map<int, int> best; // matriarch -> best observed rank
+    // A vector by matriarch, not a map: this runs at every checkpoint of a timeline.
+    std::vector<int> best(static_cast<size_t>(n), -1); // matriarch -> best observed rank (-1: no ranked member)
+    std::vector<int> order;
     for (int i = 0; i < n; ++i) {
         if (!ranked.ranked[static_cast<size_t>(i)]) continue;
         const int m = lines.matriarch(i);
         const int r = observedRank[static_cast<size_t>(i)];
-        auto [it, added] = best.emplace(m, r);
-        if (!added && r > 0 && (it->second == 0 || r < it->second)) it->second = r;
+        int& b = best[static_cast<size_t>(m)];
+        if (b < 0) {
+            b = r;
+            order.push_back(m);
+        } else if (r > 0 && (b == 0 || r < b)) {
+            b = r;
+        }
     }
-    std::vector<int> order;
-    for (const auto& [m, r] : best) order.push_back(m);
     std::sort(order.begin(), order.end(), [&](int a, int b) {
-        const int ra = best[a], rb = best[b];
+        const int ra = best[static_cast<size_t>(a)], rb = best[static_cast<size_t>(b)];
         if ((ra > 0) != (rb > 0)) return ra > 0;
         if (ra > 0 && ra != rb) return ra < rb;
         return lines.id(a) < lines.id(b);
@@ -146,7 +151,7 @@ InheritancePrediction predictOrder(const Matrilines& lines, const RankedFemales&
                 throw std::invalid_argument("matriline order: " + id + " is not a matriarch (her matriarch is " +
                                             lines.id(lines.matriarch(m)) + ")");
             if (!seen.insert(m).second) throw std::invalid_argument("matriline order: " + id + " is listed twice");
-            if (best.count(m)) listed.push_back(m);
+            if (best[static_cast<size_t>(m)] >= 0) listed.push_back(m);
         }
         for (int m : order)
             if (!seen.count(m)) listed.push_back(m);

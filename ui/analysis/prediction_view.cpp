@@ -11,6 +11,7 @@
 #include "ui/document/compute_runner.h"
 #include "core/base/display_names.h"
 #include "ui/widgets/figure_caption.h"
+#include "ui/widgets/plot_clearing.h"
 #include "ui/widgets/plot_export.h"
 #include "ui/widgets/progress_strip.h"
 #include "ui/document/qt_convert.h"
@@ -193,7 +194,8 @@ PredictionView::PredictionView(ColonyDocument* document, AnimalSelection* select
     // Recomputed only while on screen; a hidden tab catches up when shown.
     auto* refresh = new VisibleRefresh(this, [this] { recompute(); });
     connect(document_, &ColonyDocument::changed, refresh, &VisibleRefresh::request);
-    connect(selection_, &AnimalSelection::dayChanged, this, &PredictionView::recompute);
+    // The timeline's date slider moves the day too: a hidden tab catches up when shown.
+    connect(selection_, &AnimalSelection::dayChanged, refresh, &VisibleRefresh::request);
     connect(selection_, &AnimalSelection::animalChanged, this, &PredictionView::rebuildPlot);
     recompute();
 }
@@ -391,8 +393,7 @@ void PredictionView::adoptForesight(core::Foresight foresight)
 
 void PredictionView::rebuildPlot()
 {
-    plot_->clearGraphs();
-    plot_->clearItems();
+    clearPlot(plot_);
     connectors_.assign(prediction_.females.size(), nullptr);
     observedLabels_.clear();
     const QString selected = selection_->animal();

@@ -43,19 +43,39 @@ void RankFlagWatch::request(std::optional<core::Day> from, std::optional<core::D
     o.elo = documentAnalysisSettings(document_).elo;
     o.randomisations = kRandomisations;
     o.threads = 1;
+    const auto dayText = [](std::optional<core::Day> d) { return d ? std::to_string(*d) : std::string(); };
+    const std::string key = group + '|' + dayText(from) + '|' + dayText(to) + '|' + std::to_string(o.today) + '|' +
+                            std::to_string(threshold_);
+    const std::uint64_t revision = document_->revision();
+    // "Every group" of a file kept group by group changes as groups are read: never kept.
+    const bool keep = !group.empty() || document_->isComplete();
+    if (keep) {
+        if (const auto hit = widths_.find(key, revision)) {
+            runner_->cancel();
+            applyWidths(*hit);
+            return;
+        }
+    }
     const ColonyDocument::Snapshot snapshot = document_->snapshot();
-    runner_->start([this, snapshot, o](const std::atomic<bool>& cancel, const ComputeRunner::Progress&) {
-        auto widths = std::make_shared<std::map<std::string, double>>(
-            core::eloIntervalWidths(*snapshot.colony, *snapshot.residences, o, &cancel));
-        return ComputeRunner::Apply([this, widths] {
-            for (auto& [id, flag] : flags_) {
-                const auto it = widths->find(id);
-                flag.intervalWidth = it != widths->end() ? std::optional<double>(it->second) : std::nullopt;
-            }
-            widthsReady_ = true;
-            emit updated();
+    runner_->start([this, snapshot, o, key, revision, keep](const std::atomic<bool>& cancel, const ComputeRunner::Progress&) {
+        auto widths = std::make_shared<const Widths>(core::eloIntervalWidths(*snapshot.colony, *snapshot.residences, o, &cancel));
+        return ComputeRunner::Apply([this, widths, key, revision, keep] {
+            // Records changed meanwhile: these widths are not theirs.
+            if (document_->revision() != revision) return;
+            if (keep) widths_.store(key, revision, widths);
+            applyWidths(*widths);
         });
     });
+}
+
+void RankFlagWatch::applyWidths(const Widths& widths)
+{
+    for (auto& [id, flag] : flags_) {
+        const auto it = widths.find(id);
+        flag.intervalWidth = it != widths.end() ? std::optional<double>(it->second) : std::nullopt;
+    }
+    widthsReady_ = true;
+    emit updated();
 }
 
 bool RankFlagWatch::flagged(const std::string& id) const { return core::tooFewEncounters(encounters(id), threshold_); }

@@ -2,6 +2,7 @@
 #pragma once
 #include "core/base/civil_date.h"
 #include "core/research/data_health.h"
+#include "ui/document/result_cache.h"
 
 #include <QObject>
 #include <QString>
@@ -55,11 +56,17 @@ signals:
     void updated();
 
 private:
+    using Widths = std::map<std::string, double>;
+    void applyWidths(const Widths& widths);
+
     ColonyDocument* document_;
     ComputeRunner* runner_;
     int threshold_ = core::kDefaultMinEncounters;
     std::map<std::string, core::RankFlag> flags_;
     bool widthsReady_ = false;
+    // Widths computed at the document's current revision, by group, window
+    // and threshold: turning back to a group does not randomise again.
+    ResultCache<Widths> widths_;
 };
 
 } // namespace hierloom::ui

@@ -11,6 +11,7 @@
 #include "ui/document/compute_runner.h"
 #include "ui/analysis/pedigree_view.h"
 #include "ui/widgets/figure_caption.h"
+#include "ui/widgets/plot_clearing.h"
 #include "ui/widgets/plot_export.h"
 #include "ui/widgets/progress_strip.h"
 #include "ui/document/qt_convert.h"
@@ -27,6 +28,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <set>
 
 namespace hierloom::ui {
 
@@ -202,6 +204,7 @@ void RankTimelineView::recompute()
     if (!document_->isOpen()) {
         runner_->cancel();
         flags_->clear();
+        shownKey_.clear();
         adopt({}, {});
         return;
     }
@@ -214,17 +217,62 @@ void RankTimelineView::recompute()
     options.inheritance.maturityYears = settings.maturityYears;
     options.step = step_;
     options.inheritance.group = toStdString(group_);
-    // Copies: the worker must not read the document while an edit changes it.
+    // A timeline computed at this revision is shown at once. "All groups" of a
+    // file kept group by group changes as groups are read: never kept.
+    const std::string key = resultKey();
+    const std::uint64_t revision = document_->revision();
+    const bool keep = !group_.isEmpty() || document_->isComplete();
+    if (keep) {
+        if (const auto hit = results_.find(key, revision)) {
+            runner_->cancel();
+            ++resultsReused_;
+            shownKey_ = key;
+            adopt(hit->timeline, hit->palette);
+            return;
+        }
+    }
+    if (key != shownKey_) showComputing();
+    // Shared, unchanging records: the worker must not read the document while an edit changes it.
     const ColonyDocument::Snapshot snapshot = document_->snapshot();
     auto colony = snapshot.colony;
     auto where = snapshot.residences;
-    runner_->start([this, colony, where, options](const std::atomic<bool>& cancel, const ComputeRunner::Progress& progress) {
+    runner_->start([this, colony, where, options, key, revision, keep](const std::atomic<bool>& cancel,
+                                                                      const ComputeRunner::Progress& progress) {
         const core::Matrilines lines(*colony);
-        auto result = std::make_shared<core::RankTimeline>(
-            core::computeRankTimeline(*colony, *where, lines, options, &cancel, progress));
-        auto palette = std::make_shared<MatrilinePalette>(lines);
-        return ComputeRunner::Apply([this, result, palette] { adopt(std::move(*result), *palette); });
+        auto result = std::make_shared<Result>();
+        result->timeline = core::computeRankTimeline(*colony, *where, lines, options, &cancel, progress);
+        result->palette = MatrilinePalette(lines);
+        return ComputeRunner::Apply([this, result, key, revision, keep] {
+            // Records changed meanwhile: this result is not theirs (the change
+            // has started a new computation, or marked a hidden view stale).
+            if (document_->revision() != revision) return;
+            if (keep && !result->timeline.cancelled) results_.store(key, revision, result);
+            shownKey_ = key;
+            adopt(result->timeline, result->palette);
+        });
     });
+}
+
+std::string RankTimelineView::resultKey() const
+{
+    return toStdString(group_) + (step_ == core::TimelineStep::Month ? "\nmonth" : "\nweek");
+}
+
+void RankTimelineView::showComputing()
+{
+    clearPlot(plot_);
+    lines_.clear();
+    events_.clear();
+    changes_.clear();
+    flagMarks_ = nullptr;
+    dayLine_ = nullptr;
+    computingText_ = new QCPItemText(plot_);
+    computingText_->position->setType(QCPItemPosition::ptAxisRectRatio);
+    computingText_->position->setCoords(0.5, 0.5);
+    computingText_->setText(group_.isEmpty() ? tr("Computing the ranks of every group…")
+                                             : tr("Computing the ranks in %1…").arg(group_));
+    computingText_->setColor(plot_->xAxis->labelColor()); // the plot's own text colour (light or dark plots)
+    plot_->replot(QCustomPlot::rpQueuedReplot);
 }
 
 void RankTimelineView::adopt(core::RankTimeline timeline, MatrilinePalette palette)
@@ -237,7 +285,10 @@ void RankTimelineView::adopt(core::RankTimeline timeline, MatrilinePalette palet
         const QSignalBlocker block(lineBox_);
         lineBox_->clear();
         lineBox_->addItem(tr("All matrilines"), QString());
+        std::set<std::string> shown; // the lines with a female on the plot, as in the legend
+        for (const core::RankTimelineFemale& f : timeline_.females) shown.insert(f.matriarch);
         for (const std::string& m : palette_.matriarchs()) {
+            if (!shown.count(m)) continue;
             const int f = timeline_.find(m);
             const QString name = f >= 0 ? toQString(timeline_.females[static_cast<size_t>(f)].name) : QString();
             lineBox_->addItem(tr("Line of %1").arg(name.isEmpty() ? toQString(m) : name), toQString(m));
@@ -275,14 +326,19 @@ std::optional<double> RankTimelineView::valueOf(const core::RankTimelinePoint& p
 
 void RankTimelineView::rebuildPlot()
 {
-    plot_->clearGraphs();
-    plot_->clearItems();
+    clearPlot(plot_);
+    computingText_ = nullptr;
     lines_.clear();
     events_.clear();
     changes_.clear();
     const size_t nCheck = timeline_.checkpoints.size();
     // Legend: one entry per matriline, then the markers.
+    // Only the lines with a female on the plot: a centre's palette holds every
+    // group's matrilines (hundreds), and each colour stays the palette's.
+    std::set<std::string> shown;
+    for (const core::RankTimelineFemale& f : timeline_.females) shown.insert(f.matriarch);
     for (int l = 0; l < palette_.lineCount(); ++l) {
+        if (!shown.count(palette_.matriarchs()[static_cast<size_t>(l)])) continue;
         QCPGraph* key = plot_->addGraph();
         key->setPen(MatrilinePalette::penAt(l, 2));
         const std::string& m = palette_.matriarchs()[static_cast<size_t>(l)];

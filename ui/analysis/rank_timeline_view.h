@@ -2,6 +2,7 @@
 #pragma once
 #include "core/pedigree/rank_timeline.h"
 #include "core/pedigree/timeline_rank_changes.h"
+#include "ui/document/result_cache.h"
 #include "ui/widgets/matriline_palette.h"
 
 #include <QWidget>
@@ -11,6 +12,7 @@
 
 class QCPGraph;
 class QCPItemStraightLine;
+class QCPItemText;
 class QComboBox;
 class QCustomPlot;
 class QLabel;
@@ -91,6 +93,14 @@ public:
     QLabel* flagLegend() const { return flagLegend_; }
     /// Plot key of a day (seconds since 1970, as the date axis counts).
     static double keyOf(core::Day day) { return day * 86400.0; }
+    /// True while the plot shows "computing" instead of the lines (a group
+    /// or step whose timeline is not computed yet).
+    bool isComputing() const { return computingText_ != nullptr; }
+    /// How many times a timeline was shown again from the kept results instead of computed.
+    int resultsReused() const { return resultsReused_; }
+    /// The group whose ranks are shown (empty: every group) and the checkpoint step.
+    const QString& timelineGroup() const { return group_; }
+    core::TimelineStep step() const { return step_; }
 
 public slots:
     void recompute();
@@ -102,7 +112,16 @@ private:
         QCPGraph* marks = nullptr;
         std::vector<int> pointAt; // checkpoint -> point index, or -1
     };
+    /// A computed timeline and the colours of its matrilines.
+    struct Result {
+        core::RankTimeline timeline;
+        MatrilinePalette palette;
+    };
     void adopt(core::RankTimeline timeline, MatrilinePalette palette);
+    /// Empties the plot and says what is being computed (another group or step).
+    void showComputing();
+    /// The question a result answers (group and step; the settings are in the revision).
+    std::string resultKey() const;
     void rebuildPlot();
     void applyFilters();
     void applySelection();
@@ -145,6 +164,12 @@ private:
 
     core::RankTimeline timeline_;
     MatrilinePalette palette_;
+    // The timelines computed at the document's current revision, so turning
+    // back to a group shows it at once; and which one the plot shows.
+    ResultCache<Result> results_;
+    std::string shownKey_;
+    QCPItemText* computingText_ = nullptr;
+    int resultsReused_ = 0;
     std::vector<Line> lines_;
     Scale scale_ = Scale::Rank;
     core::TimelineStep step_ = core::TimelineStep::Month;

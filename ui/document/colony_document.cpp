@@ -11,24 +11,40 @@
 
 #include <algorithm>
 #include <cassert>
+#include <utility>
 
 namespace hierloom::ui {
 
 namespace {
 
-/// Adds a group's rows `part` to `cache`, both in entry order (seq), keeping
-/// one copy of a row that is in both; `spare` more rows are reserved.
-void mergeBySeq(std::vector<core::Encounter>& cache, std::vector<core::Encounter> part, size_t spare = 0)
+/// A group's rows `part` added to `cache`, both in entry order (seq): one
+/// copy of a row that is in both, without the cached rows that `drop` names,
+/// `spare` more rows reserved. One pass: each row kept moves once (a group
+/// switch at a centre moves hundreds of thousands), or is copied once when
+/// `cache` is const (still read by a worker's snapshot).
+template <class Cache, class Drop>
+std::vector<core::Encounter> mergedBySeq(Cache& cache, std::vector<core::Encounter> part, size_t spare, Drop drop)
 {
     std::vector<core::Encounter> merged;
     merged.reserve(cache.size() + part.size() + spare);
-    std::merge(std::make_move_iterator(cache.begin()), std::make_move_iterator(cache.end()),
-               std::make_move_iterator(part.begin()), std::make_move_iterator(part.end()), std::back_inserter(merged),
-               [](const core::Encounter& a, const core::Encounter& b) { return a.seq < b.seq; });
-    merged.erase(std::unique(merged.begin(), merged.end(),
-                             [](const core::Encounter& a, const core::Encounter& b) { return a.seq == b.seq; }),
-                 merged.end());
-    cache = std::move(merged);
+    auto c = cache.begin();
+    auto p = part.begin();
+    while (c != cache.end() || p != part.end()) {
+        if (c != cache.end() && drop(*c)) {
+            ++c;
+        } else if (p == part.end() || (c != cache.end() && c->seq <= p->seq)) {
+            if (p != part.end() && p->seq == c->seq) ++p; // the same row: the cached one stays
+            merged.push_back(std::move(*c++));
+        } else {
+            merged.push_back(std::move(*p++));
+        }
+    }
+    return merged;
+}
+
+void mergeBySeq(std::vector<core::Encounter>& cache, std::vector<core::Encounter> part)
+{
+    cache = mergedBySeq(cache, std::move(part), 0, [](const core::Encounter&) { return false; });
 }
 
 } // namespace
@@ -139,17 +155,13 @@ void ColonyDocument::readEverything()
     emit loadProgress(0, static_cast<int>(residences_.groups().size()));
 }
 
-void ColonyDocument::dropOldGroups()
+std::vector<std::string> ColonyDocument::dropOldGroups()
 {
-    if (loader_ || heldGroups_.size() <= heldGroupLimit_) return;
-    const std::vector<std::string> dropped(heldGroups_.begin(),
-                                           heldGroups_.end() - static_cast<std::ptrdiff_t>(heldGroupLimit_));
-    heldGroups_.erase(heldGroups_.begin(), heldGroups_.end() - static_cast<std::ptrdiff_t>(heldGroupLimit_));
-    // Rows without a group stay (they may be in a held group's scope too), and so do new ones.
-    std::erase_if(editColony().encounters, [&](const core::Encounter& e) {
-        return e.seq <= keptFromSeq_ && !e.group.empty() &&
-               std::find(dropped.begin(), dropped.end(), e.group) != dropped.end();
-    });
+    if (loader_ || heldGroups_.size() <= heldGroupLimit_) return {};
+    const auto keep = heldGroups_.end() - static_cast<std::ptrdiff_t>(heldGroupLimit_);
+    std::vector<std::string> dropped(heldGroups_.begin(), keep);
+    heldGroups_.erase(heldGroups_.begin(), keep);
+    return dropped;
 }
 
 void ColonyDocument::startBackgroundLoad()
@@ -220,7 +232,7 @@ void ColonyDocument::backgroundLoaded(std::shared_ptr<std::vector<core::Encounte
     editColony().encounters = std::move(rows);
     complete_ = true;
     heldGroups_.clear();
-    emitChange({ChangeKind::EncountersChanged, 0});
+    emitChange({ChangeKind::EncountersChanged, 0}, false);
     emit loadFinished();
 }
 
@@ -240,10 +252,29 @@ bool ColonyDocument::holdGroup(const QString& group)
     std::vector<core::Encounter> part = store_->loadEncounters(core::EncounterScope{.group = g});
     // This window's own new rows of the group may be in the cache already.
     // Room for an evening's new lines without moving every record.
-    mergeBySeq(editColony().encounters, std::move(part), 4096);
     heldGroups_.push_back(g);
-    dropOldGroups();
-    emitChange({ChangeKind::EncountersChanged, 0});
+    const std::vector<std::string> dropped = dropOldGroups();
+    // Rows without a group stay (they may be in a held group's scope too), and so do new ones.
+    const auto drop = [&](const core::Encounter& e) {
+        return !dropped.empty() && e.seq <= keptFromSeq_ && !e.group.empty() &&
+               std::find(dropped.begin(), dropped.end(), e.group) != dropped.end();
+    };
+    snapshot_ = {};
+    if (colony_.use_count() > 1) {
+        // A worker still reads the records: the new cache is made beside
+        // them, each kept row copied once (not every row copied, then merged).
+        auto next = std::make_shared<core::Colony>();
+        next->animals = colony_->animals;
+        next->residences = colony_->residences;
+        next->reindex();
+        next->encounters = mergedBySeq(std::as_const(colony_->encounters), std::move(part), 4096, drop);
+        colony_ = std::move(next);
+    } else {
+        colony_->encounters = mergedBySeq(colony_->encounters, std::move(part), 4096, drop);
+    }
+    // The rows read are the file's as this window knows it, unless another
+    // program wrote since (then results of the same revision may differ).
+    emitChange({ChangeKind::EncountersChanged, 0}, writtenElsewhere());
     return true;
 }
 
@@ -423,9 +454,10 @@ void ColonyDocument::applyEncounterChange(const std::vector<core::Encounter>& re
 
 void ColonyDocument::announce(ChangeKind kind) { emitChange({kind, 0}); }
 
-void ColonyDocument::emitChange(Change change)
+void ColonyDocument::emitChange(Change change, bool recordsChanged)
 {
     lastChange_ = change;
+    if (recordsChanged) ++revision_;
     snapshot_ = {};
     emit changed(change.kind);
 }

@@ -122,6 +122,12 @@ public:
         size_t firstAppended = 0; // EncountersAppended: index of the first new encounter
     };
     const Change& lastChange() const { return lastChange_; }
+    /// The revision of the records as this window knows the file: a new
+    /// number after every open, close, re-read and write (edits, undo, lists,
+    /// settings), unchanged when more groups are only read into the cache or
+    /// dropped from it. A result computed from the encounters of a group this
+    /// document holds (holdsGroup) stays true while the revision is the same.
+    std::uint64_t revision() const { return revision_; }
 
     /// The undo history of edits to this file. Cleared only through clearHistory().
     QUndoStack* undoStack() const { return undoStack_; }
@@ -208,13 +214,16 @@ private:
     /// The quick check of a file kept group by group, on a thread of its own,
     /// so the first write need not run it (trustIntegrityCheckedAt).
     void startBackgroundCheck();
-    /// Drops the least recently asked-for groups beyond heldGroupLimit() (not while loading).
-    void dropOldGroups();
+    /// Forgets the least recently asked-for groups beyond heldGroupLimit() (not
+    /// while loading) and returns them; the caller drops their rows.
+    std::vector<std::string> dropOldGroups();
     void stopBackgroundLoad();
     void backgroundLoaded(std::shared_ptr<std::vector<core::Encounter>> all);
     /// The cache for changing: copied first when a snapshot still shares it.
     core::Colony& editColony();
-    void emitChange(Change change);
+    /// Announces a change; `recordsChanged` false when the cache only read
+    /// or dropped groups (the file's records, and revision(), are as they were).
+    void emitChange(Change change, bool recordsChanged = true);
 
     std::optional<core::ColonyStore> store_;
     std::shared_ptr<core::Colony> colony_; // shared with snapshots until changed
@@ -222,6 +231,7 @@ private:
     QString path_;
     bool readOnly_ = false;
     Change lastChange_;
+    std::uint64_t revision_ = 0;
     QUndoStack* undoStack_;
     mutable Snapshot snapshot_; // empty until asked for after a change
     std::int64_t knownVersion_ = 0; // the store's dataVersion() when the file was last read

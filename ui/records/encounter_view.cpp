@@ -135,13 +135,17 @@ void EncounterView::refillChoices()
     const QString animal = animal_->currentData().toString();
     const QVariant observer = observer_->currentData();
 
-    std::vector<QString> ids;
-    for (const core::Animal& a : document_->colony().animals) ids.push_back(toQString(a.id));
-    std::sort(ids.begin(), ids.end());
-    animal_->clear();
-    animal_->addItem(tr("Any animal"), QString());
-    for (const QString& id : ids) animal_->addItem(id, id);
-    animal_->setCurrentIndex(std::max(0, animal_->findData(animal)));
+    // The animal list comes from the animals alone (thousands in a centre):
+    // not rebuilt when only encounters changed, or a group was read.
+    if (change.kind != ColonyDocument::ChangeKind::EncountersChanged || animal_->count() == 1) {
+        std::vector<QString> ids;
+        for (const core::Animal& a : document_->colony().animals) ids.push_back(toQString(a.id));
+        std::sort(ids.begin(), ids.end());
+        animal_->clear();
+        animal_->addItem(tr("Any animal"), QString());
+        for (const QString& id : ids) animal_->addItem(id, id);
+        animal_->setCurrentIndex(std::max(0, animal_->findData(animal)));
+    }
 
     observer_->clear();
     observer_->addItem(tr("Any observer"));
