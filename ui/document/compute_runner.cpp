@@ -1,6 +1,8 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "ui/document/compute_runner.h"
 
+#include "core/base/vector_state.h"
+
 #include <QCoreApplication>
 
 #include <exception>
@@ -31,6 +33,8 @@ void ComputeRunner::start(Job job)
     busy_ = true;
     emit started();
     thread_ = std::thread([this, run, job = std::move(job)] {
+        // A thread inherits its starter's registers; Qt's painting leaves them dirty (vector_state.h).
+        core::clearUpperVectorState();
         const Progress report = [this, run](int done, int total) {
             QMetaObject::invokeMethod(
                 this, [this, run, done, total] {
