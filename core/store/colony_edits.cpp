@@ -262,7 +262,7 @@ void writeEncounterChange(ColonyStore& store, const std::vector<Encounter>& remo
     sqlite3* db = store.handle();
     inTransaction(store, [&] {
         {
-            SqliteStatement del(db, "DELETE FROM encounter WHERE uid = ?");
+            SqliteStatement del(db, "DELETE FROM encounter_row WHERE uid = ?");
             for (const Encounter& e : remove) {
                 deleteSupportRows(db, e.uid);
                 del.bindUid(1, e.uid);
@@ -274,12 +274,11 @@ void writeEncounterChange(ColonyStore& store, const std::vector<Encounter>& remo
         SqliteStatement ins(db, kInsertEncounterSql);
         SupportWriter support(db);
         SqliteStatement obs(db, "INSERT OR IGNORE INTO observer(name) VALUES (?)");
-        std::string date;
+        EncounterTermCodes terms(db);
         for (Encounter& e : insert) {
             if (e.uid.empty()) e.uid = newUid();
             if (e.seq <= 0) e.seq = ++seq;
-            date = formatDate(e.date);
-            bindEncounterColumns(ins, e, date);
+            bindEncounterColumns(ins, e, terms);
             ins.run();
             support.add(e);
             if (!e.observer.empty()) {
@@ -324,12 +323,13 @@ std::vector<Encounter> deleteEncounters(ColonyStore& store, const std::vector<st
 
 std::vector<Encounter> encountersByUid(const ColonyStore& store, const std::vector<std::string>& uids)
 {
-    SqliteStatement q(store.handle(), (std::string("SELECT ") + kEncounterColumnsSql + " FROM encounter WHERE uid = ?").c_str());
+    SqliteStatement q(store.handle(), (std::string("SELECT ") + kEncounterColumnsSql + " FROM encounter_row WHERE uid = ?").c_str());
+    const EncounterTermTexts terms(store.handle(), store.path());
     std::vector<Encounter> out;
     for (const std::string& uid : uids) {
         q.bindUid(1, uid);
         if (q.step()) {
-            out.push_back(readEncounterRow(q, store.path()));
+            out.push_back(readEncounterRow(q, terms, store.path()));
             loadSupportRowsOf(store.handle(), out.back());
         }
         q.reset();

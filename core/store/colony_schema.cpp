@@ -84,21 +84,36 @@ struct AuditedTable {
     const char* uidColumn = "uid"; // the audit row's uid: the record's own, or its encounter's
 };
 
+/// Whether the audited table is the encounter table of version 5, whose
+/// trigger sits on `encounter_row` and turns its numbers back into the texts
+/// the audit rows have always held.
+bool onEncounterRows(const AuditedTable& t, int schemaVersion)
+{
+    return schemaVersion >= 5 && std::string(t.name) == "encounter";
+}
+
 /// ROW.col, or its uid text for a column holding a uid (stored as 16 bytes
-/// from version 4; JSON cannot hold bytes and audit rows keep text uids).
-std::string valueOf(const AuditedTable& t, const char* row, const std::string& column)
+/// from version 4; JSON cannot hold bytes and audit rows keep text uids);
+/// from version 5 an encounter's value as its view `encounter` shows it.
+std::string valueOf(const AuditedTable& t, const char* row, const std::string& column, int schemaVersion)
 {
     const std::string value = std::string(row) + "." + column;
-    return column == "uid" || column == t.uidColumn ? uidTextSql(value) : value;
+    if (column == "uid" || column == t.uidColumn) return uidTextSql(value);
+    if (!onEncounterRows(t, schemaVersion)) return value;
+    if (column == "date") return dateOfDaySql(std::string(row) + ".day");
+    if (column == "outcome") return outcomeOfDrawSql(std::string(row) + ".draw");
+    if (column == "behaviour" || column == "grp" || column == "observer")
+        return "(SELECT text FROM encounter_term WHERE code = " + value + ")";
+    return value;
 }
 
 /// json_object('col', ROW.col, ...) for the columns of one table.
-std::string jsonOf(const AuditedTable& t, const char* row)
+std::string jsonOf(const AuditedTable& t, const char* row, int schemaVersion)
 {
     std::string out = "json_object(";
     for (size_t i = 0; i < t.columns.size(); ++i) {
         if (i) out += ", ";
-        out += std::string("'") + t.columns[i] + "', " + valueOf(t, row, t.columns[i]);
+        out += std::string("'") + t.columns[i] + "', " + valueOf(t, row, t.columns[i], schemaVersion);
     }
     return out + ")";
 }
@@ -153,27 +168,30 @@ CREATE INDEX audit_by_uid ON audit(uid);
 CREATE TABLE audit_pause (reason TEXT NOT NULL);
 )SQL";
     for (const AuditedTable& t : auditedTables())
-        for (const char* action : {"insert", "update", "delete"}) sql += auditTriggerSql(t.name, action);
+        for (const char* action : {"insert", "update", "delete"}) sql += auditTriggerSql(t.name, action, 4);
     return sql;
 }
 
 } // namespace
 
-std::string auditTriggerSql(const std::string& table, const std::string& action)
+std::string auditTriggerSql(const std::string& table, const std::string& action, int schemaVersion)
 {
     const AuditedTable& t = auditedTable(table);
+    const std::string on = onEncounterRows(t, schemaVersion) ? "encounter_row" : table;
     const std::string head = "CREATE TRIGGER audit_" + table + "_" + action + " AFTER " +
                              (action == "insert" ? "INSERT" : action == "update" ? "UPDATE" : "DELETE") + " ON " +
-                             table + " WHEN NOT EXISTS (SELECT 1 FROM audit_pause) BEGIN\n";
+                             on + " WHEN NOT EXISTS (SELECT 1 FROM audit_pause) BEGIN\n";
+    const auto uidOf = [&](const char* row) { return valueOf(t, row, t.uidColumn, schemaVersion); };
+    const auto json = [&](const char* row) { return jsonOf(t, row, schemaVersion); };
     if (action == "insert")
-        return head + "  INSERT INTO audit(tbl, uid, action, new_values) VALUES ('" + table + "', " + valueOf(t, "new", t.uidColumn) + ", 'insert', " +
-               jsonOf(t, "new") + ");\nEND;\n";
+        return head + "  INSERT INTO audit(tbl, uid, action, new_values) VALUES ('" + table + "', " + uidOf("new") +
+               ", 'insert', " + json("new") + ");\nEND;\n";
     if (action == "update")
-        return head + "  INSERT INTO audit(tbl, uid, action, old_values, new_values) VALUES ('" + table +
-               "', " + valueOf(t, "new", t.uidColumn) + ", 'update', " + jsonOf(t, "old") + ", " + jsonOf(t, "new") + ");\nEND;\n";
+        return head + "  INSERT INTO audit(tbl, uid, action, old_values, new_values) VALUES ('" + table + "', " +
+               uidOf("new") + ", 'update', " + json("old") + ", " + json("new") + ");\nEND;\n";
     if (action == "delete")
-        return head + "  INSERT INTO audit(tbl, uid, action, old_values) VALUES ('" + table + "', " + valueOf(t, "old", t.uidColumn) + ", 'delete', " +
-               jsonOf(t, "old") + ");\nEND;\n";
+        return head + "  INSERT INTO audit(tbl, uid, action, old_values) VALUES ('" + table + "', " + uidOf("old") +
+               ", 'delete', " + json("old") + ");\nEND;\n";
     throw std::invalid_argument("no audit trigger for " + action);
 }
 
@@ -192,8 +210,98 @@ const char* schemaVersion2Sql()
 const char* encounterIndexSql()
 {
     // grp first: a group's rows (and the rows without a group) are one range
-    // each; date second: a window within the group narrows that range.
+    // each; day second: a window within the group narrows that range.
+    return "CREATE INDEX IF NOT EXISTS encounter_by_group ON encounter_row(grp, day);";
+}
+
+const char* encounterIndexSqlBeforeVersion5()
+{
     return "CREATE INDEX IF NOT EXISTS encounter_by_group ON encounter(grp, date);";
+}
+
+std::string dateOfDaySql(const std::string& day)
+{
+    // 2440587.5 is the Julian day of 1970-01-01 at midnight.
+    return "date(" + day + " + 2440587.5)";
+}
+
+std::string dayOfDateSql(const std::string& date)
+{
+    // NULL (refused by NOT NULL) for anything but a real date in ISO form:
+    // with a modifier date() turns '2025-02-30' into '2025-03-02' (without
+    // one it gives the text back), which then differs.
+    return "CASE WHEN date(" + date + ", '+0 days') IS " + date + " THEN CAST(julianday(" + date +
+           ") - 2440587.5 AS INTEGER) END";
+}
+
+std::string outcomeOfDrawSql(const std::string& draw)
+{
+    return "CASE " + draw + " WHEN 1 THEN 'draw' ELSE 'decided' END";
+}
+
+const char* encounterRowTablesSql()
+{
+    return R"SQL(
+CREATE TABLE encounter_term (
+  code  INTEGER PRIMARY KEY,
+  text  TEXT NOT NULL UNIQUE
+);
+INSERT INTO encounter_term(code, text) VALUES (0, '');
+CREATE TABLE encounter_row (
+  seq        INTEGER PRIMARY KEY,
+  uid        TEXT NOT NULL UNIQUE,
+  day        INTEGER NOT NULL CHECK (day BETWEEN -719528 AND 2932896),
+  time       INTEGER CHECK (time IS NULL OR time BETWEEN 0 AND 1439),
+  winner     TEXT NOT NULL REFERENCES animal(id) ON UPDATE CASCADE,
+  loser      TEXT NOT NULL REFERENCES animal(id) ON UPDATE CASCADE,
+  draw       INTEGER NOT NULL DEFAULT 0 CHECK (draw IN (0, 1)),
+  behaviour  INTEGER NOT NULL DEFAULT 0 REFERENCES encounter_term(code),
+  grp        INTEGER NOT NULL DEFAULT 0 REFERENCES encounter_term(code),
+  observer   INTEGER NOT NULL DEFAULT 0 REFERENCES encounter_term(code),
+  note       TEXT NOT NULL DEFAULT '',
+  CHECK (winner <> loser)
+);
+CREATE TABLE encounter_support_v5 (
+  encounter  TEXT NOT NULL REFERENCES encounter_row(uid) ON UPDATE CASCADE ON DELETE CASCADE,
+  animal     TEXT NOT NULL REFERENCES animal(id) ON UPDATE CASCADE,
+  side       TEXT NOT NULL CHECK (side IN ('winner', 'loser')),
+  PRIMARY KEY (encounter, animal)
+);
+)SQL";
+}
+
+const char* encounterViewSql()
+{
+    static const std::string sql = [] {
+        // A column left out of an INSERT is NULL in a view: the old table's defaults apply.
+        const auto term = [](const char* column) {
+            return std::string("(SELECT code FROM encounter_term WHERE text = coalesce(new.") + column + ", ''))";
+        };
+        const std::string addTerms =
+            "  INSERT INTO encounter_term(text) SELECT t FROM (SELECT coalesce(new.behaviour, '') AS t UNION SELECT "
+            "coalesce(new.grp, '') UNION SELECT coalesce(new.observer, '')) WHERE t NOT IN (SELECT text FROM "
+            "encounter_term);\n";
+        std::string out =
+            "CREATE VIEW encounter AS SELECT e.seq AS seq, e.uid AS uid, " + dateOfDaySql("e.day") +
+            " AS date, e.time AS time, e.winner AS winner, e.loser AS loser, " + outcomeOfDrawSql("e.draw") +
+            " AS outcome, b.text AS behaviour, g.text AS grp, o.text AS observer, e.note AS note "
+            "FROM encounter_row e JOIN encounter_term b ON b.code = e.behaviour "
+            "JOIN encounter_term g ON g.code = e.grp JOIN encounter_term o ON o.code = e.observer;\n";
+        const std::string values = dayOfDateSql("new.date") + ", new.time, new.winner, new.loser, "
+                                   "CASE coalesce(new.outcome, 'decided') WHEN 'decided' THEN 0 WHEN 'draw' THEN 1 END, " +
+                                   term("behaviour") + ", " + term("grp") + ", " + term("observer") +
+                                   ", coalesce(new.note, '')";
+        out += "CREATE TRIGGER encounter_insert INSTEAD OF INSERT ON encounter BEGIN\n" + addTerms +
+               "  INSERT INTO encounter_row(seq, uid, day, time, winner, loser, draw, behaviour, grp, observer, note) "
+               "VALUES (new.seq, new.uid, " + values + ");\nEND;\n";
+        out += "CREATE TRIGGER encounter_update INSTEAD OF UPDATE ON encounter BEGIN\n" + addTerms +
+               "  UPDATE encounter_row SET (seq, uid, day, time, winner, loser, draw, behaviour, grp, observer, note) = "
+               "(new.seq, new.uid, " + values + ") WHERE seq = old.seq;\nEND;\n";
+        out += "CREATE TRIGGER encounter_delete INSTEAD OF DELETE ON encounter BEGIN\n"
+               "  DELETE FROM encounter_row WHERE seq = old.seq;\nEND;\n";
+        return out;
+    }();
+    return sql.c_str();
 }
 
 const char* schemaVersion3Sql()
@@ -211,7 +319,7 @@ CREATE TABLE encounter_support (
 );
 CREATE INDEX encounter_support_by_animal ON encounter_support(animal);
 )SQL";
-        for (const char* action : {"insert", "update", "delete"}) out += auditTriggerSql(supportTable().name, action);
+        for (const char* action : {"insert", "update", "delete"}) out += auditTriggerSql(supportTable().name, action, 4);
         return out;
     }();
     return sql.c_str();

@@ -8,7 +8,7 @@ namespace hierloom::core {
 constexpr int colonyApplicationId = 0x48524C4D;
 
 /// The schema version this build writes (`PRAGMA user_version`).
-constexpr int currentSchemaVersion = 4;
+constexpr int currentSchemaVersion = 5;
 
 /// SQL creating the version-1 schema.
 const char* schemaVersion1Sql();
@@ -29,10 +29,18 @@ const char* schemaVersion3Sql();
 /// (core/store/uid_migration.h), and the audit triggers the functions below
 /// write turn a stored uid back into text.
 
+/// Version 5 keeps the encounters in `encounter_row` (day numbers, 0/1
+/// outcomes, behaviour, group and observer as codes into `encounter_term`)
+/// behind a view `encounter` with the columns and texts of versions 1-4; its
+/// step is C++ too (core/store/encounter_row_migration.h).
+
 /// The audit trigger of one table ("animal", "residence", "encounter"
 /// from version 2, "encounter_support" from version 3) and action ("insert", "update", "delete"), exactly as the
-/// schema creates it, and the statement dropping it.
-std::string auditTriggerSql(const std::string& table, const std::string& action);
+/// schema of `schemaVersion` creates it (from version 5 the encounter's
+/// trigger sits on `encounter_row` and writes the same JSON as before), and
+/// the statement dropping it.
+std::string auditTriggerSql(const std::string& table, const std::string& action,
+                            int schemaVersion = currentSchemaVersion);
 std::string auditTriggerDropSql(const std::string& table, const std::string& action);
 
 /// The indexes that let a question about one group read only that group's
@@ -40,8 +48,26 @@ std::string auditTriggerDropSql(const std::string& table, const std::string& act
 /// own: an index changes nothing an older program reads or writes, so a file
 /// of any version gets it when this program first opens it for writing.
 const char* encounterIndexSql();
+/// The same index on the text columns of versions 1-4.
+const char* encounterIndexSqlBeforeVersion5();
 /// Whether the file already has them.
 constexpr const char* kEncounterIndexName = "encounter_by_group";
+
+/// Version 5's new tables: `encounter_term`, `encounter_row` and
+/// `encounter_support_v5` (renamed `encounter_support` by the migration once
+/// the old table is gone; its key now points at `encounter_row`).
+const char* encounterRowTablesSql();
+/// The view `encounter` over `encounter_row` and the INSTEAD OF triggers
+/// that let a statement written for versions 1-4 (the merge's updates, the
+/// shell) change it.
+const char* encounterViewSql();
+
+/// SQL expressions: the ISO date of a day number, the day number of an ISO
+/// date (NULL unless it is a real date written as YYYY-MM-DD), the outcome
+/// text of a 0/1 draw column.
+std::string dateOfDaySql(const std::string& day);
+std::string dayOfDateSql(const std::string& date);
+std::string outcomeOfDrawSql(const std::string& draw);
 
 /// SQL run on every connection to a version-2 file: the per-connection
 /// `session_user` (who is writing) and the TEMP trigger that stamps it on

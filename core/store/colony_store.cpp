@@ -9,6 +9,8 @@
 #include "core/store/record_binding.h"
 #include "core/store/sqlite_uri.h"
 #include "core/store/support_rows.h"
+#include "core/store/encounter_row_migration.h"
+#include "core/store/encounter_scope_sql.h"
 #include "core/store/uid_migration.h"
 #include "core/store/write_transaction.h"
 #include "core/store/sqlite_statement.h"
@@ -227,8 +229,8 @@ ColonyStore ColonyStore::create(const std::string& path, const std::function<voi
                 WriteTransaction tx(store);
                 store.exec(schemaVersion1Sql());
                 store.exec(schemaVersion2Sql());
-                store.exec(encounterIndexSql());
                 store.exec(schemaVersion3Sql());
+                storeEncounterRows(store); // on empty tables: version 5's tables, view and index
                 store.exec(("PRAGMA application_id = " + std::to_string(colonyApplicationId)).c_str());
                 store.exec(("PRAGMA user_version = " + std::to_string(currentSchemaVersion)).c_str());
                 tx.commit();
@@ -374,17 +376,21 @@ void ColonyStore::migrate(int fromVersion)
             } else if (v == 3) {
                 // Version 4 stores uids as 16 bytes: a fifth of the file for many encounters.
                 storeUidsCompactly(*this);
+            } else if (v == 4) {
+                // Version 5 stores encounters with day numbers and codes behind a view of the old columns.
+                storeEncounterRows(*this);
             }
             exec(("PRAGMA user_version = " + std::to_string(v + 1)).c_str());
         }
         tx.commit();
     }
     exec("PRAGMA journal_mode = WAL");
-    // The shorter uids leave every page of the old tables partly empty; a
+    // The shorter uids (version 4) and rows (version 5) leave every page of
+    // the old tables partly empty; a
     // rewrite gives the space back. VACUUM is all-or-nothing like any
     // transaction: stopped half-way, the file stays as the commit above left it.
     // Only space is at stake: a file another program holds open keeps it for now.
-    if (fromVersion <= 3) {
+    if (fromVersion <= 4) {
         try {
             exec("VACUUM");
         } catch (const ColonyFileError&) {
@@ -494,38 +500,50 @@ std::vector<Residence> ColonyStore::loadResidences() const
 
 std::vector<Encounter> ColonyStore::loadEncounters() const
 {
-    SqliteStatement q(db_, (std::string("SELECT ") + kEncounterColumnsSql + " FROM encounter ORDER BY seq").c_str());
+    SqliteStatement q(db_, (std::string("SELECT ") + kEncounterColumnsSql + " FROM encounter_row ORDER BY seq").c_str());
+    const EncounterTermTexts terms(db_, path_);
     std::vector<Encounter> out;
     // Growing a vector of a million records by doubling moved each several
     // times; the headroom keeps an evening's new entries from moving them all.
     out.reserve(static_cast<size_t>(encounterCount()) + 4096);
-    while (q.step()) out.push_back(readEncounterRow(q, path_));
+    while (q.step()) out.push_back(readEncounterRow(q, terms, path_));
     loadSupportRows(db_, out);
     return out;
+}
+
+std::string encounterScopeSql(const EncounterScope& scope)
+{
+    std::string sql;
+    if (!scope.group.empty())
+        sql += " AND grp IN (0, (SELECT code FROM encounter_term WHERE text = ?1)) AND (grp <> 0 OR "
+               "winner IN (SELECT animal FROM residence WHERE grp = ?1))";
+    if (scope.from) sql += " AND day >= ?2";
+    if (scope.to) sql += " AND day <= ?3";
+    return sql;
+}
+
+void bindEncounterScope(SqliteStatement& q, const EncounterScope& scope)
+{
+    if (!scope.group.empty()) q.bind(1, scope.group);
+    if (scope.from) q.bind(2, static_cast<std::int64_t>(*scope.from));
+    if (scope.to) q.bind(3, static_cast<std::int64_t>(*scope.to));
 }
 
 std::vector<Encounter> ColonyStore::loadEncounters(const EncounterScope& scope) const
 {
     if (scope.everything() && scope.uids) return loadEncounters();
-    // Parameters: ?1 group, ?2 from, ?3 to. `grp IN (?1, '')` is two ranges
-    // of encounter_by_group; the date bounds narrow each of them.
-    std::string sql = std::string("SELECT ") + (scope.uids ? kEncounterColumnsSql : kEncounterColumnsWithoutUidSql) +
-                      " FROM encounter WHERE 1";
-    if (!scope.group.empty())
-        sql += " AND grp IN (?1, '') AND (grp = ?1 OR winner IN (SELECT animal FROM residence WHERE grp = ?1))";
-    if (scope.from) sql += " AND date >= ?2";
-    if (scope.to) sql += " AND date <= ?3";
     // No ORDER BY: SQLite would copy every row through its sorter (a sixth of
     // a one-group command). The rows come in index order, which is entry order
     // within each of the two ranges whenever entries were made in date order;
     // they are put in entry order below.
-    SqliteStatement q(db_, sql.c_str());
-    if (!scope.group.empty()) q.bind(1, scope.group);
-    if (scope.from) q.bind(2, formatDate(*scope.from));
-    if (scope.to) q.bind(3, formatDate(*scope.to));
+    SqliteStatement q(db_, (std::string("SELECT ") + (scope.uids ? kEncounterColumnsSql : kEncounterColumnsWithoutUidSql) +
+                            " FROM encounter_row WHERE 1" + encounterScopeSql(scope))
+                               .c_str());
+    bindEncounterScope(q, scope);
+    const EncounterTermTexts terms(db_, path_);
     std::vector<Encounter> out;
     if (scope.everything()) out.reserve(static_cast<size_t>(encounterCount()) + 4096);
-    while (q.step()) out.push_back(readEncounterRow(q, path_));
+    while (q.step()) out.push_back(readEncounterRow(q, terms, path_));
     const auto bySeq = [](const Encounter& a, const Encounter& b) { return a.seq < b.seq; };
     if (!std::is_sorted(out.begin(), out.end(), bySeq)) std::sort(out.begin(), out.end(), bySeq);
     loadSupportRows(db_, out); // by seq, so a selection gets its own supporters
@@ -534,23 +552,21 @@ std::vector<Encounter> ColonyStore::loadEncounters(const EncounterScope& scope) 
 
 std::optional<Day> ColonyStore::lastEncounterDay() const
 {
-    // max(date) alone walks the whole encounter_by_group index (a fifth of a
-    // second at 3,000,000 encounters); the latest date of each group is one
+    // max(day) alone walks the whole encounter_by_group index (a fifth of a
+    // second at 3,000,000 encounters); the latest day of each group is one
     // seek at the end of its range, and the groups are found by seeking past
     // each one (a few dozen seeks). A file without the index (made before it,
     // opened read-only) is scanned once instead.
     SqliteStatement has(db_, "SELECT 1 FROM sqlite_schema WHERE type = 'index' AND name = ?");
     has.bind(1, std::string_view(kEncounterIndexName));
-    SqliteStatement q(db_, has.step() ? "WITH RECURSIVE g(grp) AS (SELECT min(grp) FROM encounter UNION ALL "
-                                        "SELECT (SELECT min(grp) FROM encounter WHERE grp > g.grp) FROM g "
+    SqliteStatement q(db_, has.step() ? "WITH RECURSIVE g(grp) AS (SELECT min(grp) FROM encounter_row UNION ALL "
+                                        "SELECT (SELECT min(grp) FROM encounter_row WHERE grp > g.grp) FROM g "
                                         "WHERE g.grp IS NOT NULL) "
-                                        "SELECT max((SELECT max(date) FROM encounter e WHERE e.grp = g.grp)) FROM g "
+                                        "SELECT max((SELECT max(day) FROM encounter_row e WHERE e.grp = g.grp)) FROM g "
                                         "WHERE grp IS NOT NULL"
-                                      : "SELECT max(date) FROM encounter");
+                                      : "SELECT max(day) FROM encounter_row");
     if (!q.step() || q.isNull(0)) return std::nullopt;
-    const std::optional<Day> d = parseDate(q.text(0));
-    if (!d) throw ColonyFileError(Kind::Damaged, path_ + ": holds an impossible date '" + q.text(0) + "'");
-    return d;
+    return storedDay(q.integer(0), path_);
 }
 
 Colony ColonyStore::load() const
@@ -565,14 +581,14 @@ Colony ColonyStore::load() const
 
 std::int64_t ColonyStore::encounterCount() const
 {
-    SqliteStatement q(db_, "SELECT count(*) FROM encounter");
+    SqliteStatement q(db_, "SELECT count(*) FROM encounter_row");
     q.step();
     return q.integer(0);
 }
 
 std::unordered_set<std::string> ColonyStore::encounterUids() const
 {
-    SqliteStatement q(db_, "SELECT uid FROM encounter");
+    SqliteStatement q(db_, "SELECT uid FROM encounter_row");
     std::unordered_set<std::string> out;
     while (q.step()) out.insert(q.uid(0));
     return out;

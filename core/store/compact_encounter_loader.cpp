@@ -1,9 +1,10 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "core/store/compact_encounter_loader.h"
 
+#include "core/store/encounter_scope_sql.h"
+#include "core/store/encounter_terms.h"
 #include "core/store/sqlite_statement.h"
 
-#include <cstring>
 #include <stdexcept>
 #include <string>
 
@@ -13,47 +14,35 @@ namespace {
 
 using Kind = ColonyFileError::Kind;
 
-// The one query of this loader. Its scope clause is that of
-// ColonyStore::loadEncounters(scope) (the index encounter_by_group (grp,
-// date): `grp IN (?1, '')` is two ranges, the dates narrow each); a test
-// (CompactEncounterLoader.*) checks both read the same rows.
-// Parameters: ?1 group, ?2 from, ?3 to.
-constexpr const char* kColumns = "SELECT seq, date, time, winner, loser, outcome, behaviour, grp, observer FROM encounter";
+// The one query of this loader, on the physical table of schema version 5.
+// Its scope clause is that of ColonyStore::loadEncounters(scope)
+// (encounterScopeSql); a test (CompactEncounterLoader.*) checks both read the
+// same rows.
+constexpr const char* kColumns =
+    "SELECT seq, day, time, winner, loser, draw, behaviour, grp, observer FROM encounter_row WHERE 1";
 
-std::string scopedQuery(const EncounterScope& scope)
-{
-    std::string sql = std::string(kColumns) + " WHERE 1";
-    if (!scope.group.empty())
-        sql += " AND grp IN (?1, '') AND (grp = ?1 OR winner IN (SELECT animal FROM residence WHERE grp = ?1))";
-    if (scope.from) sql += " AND date >= ?2";
-    if (scope.to) sql += " AND date <= ?3";
-    return sql + " ORDER BY seq";
-}
-
-/// Dates arrive as 'YYYY-MM-DD', mostly the same as the row before.
-class DateReader {
+/// The code tables' codes of the file's term codes (encounter_term), one
+/// code table's worth, looked up once per term.
+class TermCodes {
 public:
-    explicit DateReader(const std::string& path) : path_(path) {}
+    TermCodes(const EncounterTermTexts& terms, CodeTable& table) : terms_(terms), table_(table), codes_(terms.size(), -1) {}
 
-    Day operator()(std::string_view text)
+    std::int32_t operator()(std::int64_t code)
     {
-        if (text.size() == last_.size() && std::memcmp(text.data(), last_.data(), text.size()) == 0) return day_;
-        const std::optional<Day> d = parseDate(text);
-        if (!d) throw ColonyFileError(Kind::Damaged, path_ + ": holds an impossible date '" + std::string(text) + "'");
-        last_.assign(text);
-        day_ = *d;
-        return day_;
+        const std::string& text = terms_[code]; // a code the file lacks: Damaged
+        std::int32_t& c = codes_[static_cast<size_t>(code)];
+        if (c < 0) c = table_.intern(text);
+        return c;
     }
 
 private:
-    const std::string& path_;
-    std::string last_;
-    Day day_ = 0;
+    const EncounterTermTexts& terms_;
+    CodeTable& table_;
+    std::vector<std::int32_t> codes_;
 };
 
-std::int16_t smallCode(CodeTable& table, std::string_view text, const char* what, const std::string& path)
+std::int16_t smallCode(std::int32_t code, const char* what, const std::string& path)
 {
-    const std::int32_t code = table.intern(text);
     if (code > CompactEncounters::kMaxCodes)
         throw ColonyFileError(Kind::Damaged, path + ": uses more than " + std::to_string(CompactEncounters::kMaxCodes) +
                                                  " different " + what + "; this program cannot analyse it");
@@ -65,7 +54,7 @@ std::int16_t smallCode(CodeTable& table, std::string_view text, const char* what
 void loadSupporters(sqlite3* db, CompactEncounters& out)
 {
     if (!hasTable(db, "encounter_support")) return; // schema versions 1 and 2
-    SqliteStatement q(db, "SELECT e.seq, s.animal, s.side FROM encounter_support s JOIN encounter e "
+    SqliteStatement q(db, "SELECT e.seq, s.animal, s.side FROM encounter_support s JOIN encounter_row e "
                           "ON e.uid = s.encounter ORDER BY e.seq, s.rowid");
     size_t at = 0;
     while (q.step()) {
@@ -86,22 +75,21 @@ CompactEncounters loadCompactEncounters(const ColonyStore& store, const Encounte
     const std::string& path = store.path();
     // The whole file: room for every row at once (no doubling of millions of records).
     if (scope.everything()) out.records.reserve(static_cast<size_t>(store.encounterCount()));
-    SqliteStatement q(store.handle(), scopedQuery(scope).c_str());
-    if (!scope.group.empty()) q.bind(1, scope.group);
-    if (scope.from) q.bind(2, formatDate(*scope.from));
-    if (scope.to) q.bind(3, formatDate(*scope.to));
-    DateReader dateOf(path);
+    SqliteStatement q(store.handle(), (kColumns + encounterScopeSql(scope) + " ORDER BY seq").c_str());
+    bindEncounterScope(q, scope);
+    const EncounterTermTexts terms(store.handle(), path);
+    TermCodes behaviourOf(terms, out.behaviours), groupOf(terms, out.groups), observerOf(terms, out.observers);
     while (q.step()) {
         CompactEncounter r;
         r.seq = q.integer(0);
-        r.date = dateOf(q.textView(1));
+        r.date = storedDay(q.integer(1), path);
         r.time = static_cast<std::int16_t>(q.isNull(2) ? -1 : q.integer(2));
         r.winner = out.animals.intern(q.textView(3));
         r.loser = out.animals.intern(q.textView(4));
-        r.draw = q.textView(5) == "draw";
-        r.behaviour = smallCode(out.behaviours, q.textView(6), "behaviour codes", path);
-        r.group = smallCode(out.groups, q.textView(7), "groups", path);
-        r.observer = out.observers.intern(q.textView(8));
+        r.draw = q.integer(5) == 1;
+        r.behaviour = smallCode(behaviourOf(q.integer(6)), "behaviour codes", path);
+        r.group = smallCode(groupOf(q.integer(7)), "groups", path);
+        r.observer = observerOf(q.integer(8));
         out.records.push_back(r);
     }
     if (out.records.size() > UINT32_MAX)

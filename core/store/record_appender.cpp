@@ -35,7 +35,8 @@ void insertResidences(ColonyStore& store, std::vector<Residence>& residences)
 }
 
 EncounterAppender::EncounterAppender(ColonyStore& store, const WriteTransaction& transaction)
-    : store_(store), bulk_(transaction.bulk()), insert_(store.handle(), kInsertEncounterSql), support_(store.handle())
+    : store_(store), bulk_(transaction.bulk()), insert_(store.handle(), kInsertEncounterSql), terms_(store.handle()),
+      support_(store.handle())
 {
     nextSeq_ = highestEncounterSeq(store.handle()) + 1;
     firstSeq_ = nextSeq_;
@@ -57,11 +58,7 @@ void EncounterAppender::add(Encounter& e)
 {
     if (e.uid.empty()) e.uid = newUid();
     e.seq = nextSeq_++;
-    if (count_ == 0 || e.date != lastDate_) {
-        date_ = formatDate(e.date);
-        lastDate_ = e.date;
-    }
-    bindEncounterColumns(insert_, e, date_);
+    bindEncounterColumns(insert_, e, terms_);
     insert_.run();
     support_.add(e);
     ++count_;

@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
 #include "core/base/colony.h"
+#include "core/store/encounter_terms.h"
 #include "core/store/sqlite_statement.h"
 #include "core/store/support_rows.h"
 
@@ -42,12 +43,11 @@ private:
     bool bulk_;
     bool indexAfter_ = false; ///< the group index was dropped for the load; finish() builds it
     SqliteStatement insert_;
+    EncounterTermCodes terms_;
     SupportWriter support_;
     std::int64_t nextSeq_ = 1;
     std::int64_t firstSeq_ = 1;
     std::int64_t count_ = 0;
-    std::string date_; // lastDate_ as text
-    Day lastDate_ = 0;
     std::string lastObserver_;
     std::unordered_set<std::string> observers_;
 };

@@ -1,7 +1,6 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "core/store/record_binding.h"
 
-#include "core/base/colony_file_error.h"
 
 namespace hierloom::core {
 
@@ -35,46 +34,42 @@ void bindResidenceColumns(SqliteStatement& q, const Residence& r)
     q.bindOptional(5, storedDate(r.to));
 }
 
-void bindEncounterColumns(SqliteStatement& q, const Encounter& e, const std::string& dateText)
+void bindEncounterColumns(SqliteStatement& q, const Encounter& e, EncounterTermCodes& terms)
 {
     q.bind(1, e.seq);
     q.bindUid(2, e.uid);
-    q.bindStatic(3, dateText);
+    q.bind(3, static_cast<std::int64_t>(e.date));
     if (e.time) q.bind(4, static_cast<std::int64_t>(*e.time));
     else q.bindNull(4);
     q.bindStatic(5, e.winner);
     q.bindStatic(6, e.loser);
-    q.bindStatic(7, toString(e.outcome));
-    q.bindStatic(8, e.behaviour);
-    q.bindStatic(9, e.group);
-    q.bindStatic(10, e.observer);
+    q.bind(7, static_cast<std::int64_t>(e.outcome == Outcome::Draw ? 1 : 0));
+    q.bind(8, terms(e.behaviour));
+    q.bind(9, terms(e.group));
+    q.bind(10, terms(e.observer));
     q.bindStatic(11, e.note);
 }
 
-Encounter readEncounterRow(const SqliteStatement& q, const std::string& path)
+Encounter readEncounterRow(const SqliteStatement& q, const EncounterTermTexts& terms, const std::string& path)
 {
     Encounter e;
     e.seq = q.integer(0);
     e.uid = q.uid(1);
-    const std::string date = q.text(2);
-    const auto day = parseDate(date);
-    if (!day)
-        throw ColonyFileError(ColonyFileError::Kind::Damaged, path + ": holds an impossible date '" + date + "'");
-    e.date = *day;
+    e.date = storedDay(q.integer(2), path);
     if (!q.isNull(3)) e.time = static_cast<int>(q.integer(3));
     e.winner = q.text(4);
     e.loser = q.text(5);
-    e.outcome = q.text(6) == "draw" ? Outcome::Draw : Outcome::Decided;
-    e.behaviour = q.text(7);
-    e.group = q.text(8);
-    e.observer = q.text(9);
+    e.outcome = q.integer(6) == 1 ? Outcome::Draw : Outcome::Decided;
+    e.behaviour = terms[q.integer(7)];
+    e.group = terms[q.integer(8)];
+    e.observer = terms[q.integer(9)];
     e.note = q.text(10);
     return e;
 }
 
 std::int64_t highestEncounterSeq(sqlite3* db)
 {
-    SqliteStatement q(db, "SELECT coalesce(max(seq), 0) FROM encounter");
+    SqliteStatement q(db, "SELECT coalesce(max(seq), 0) FROM encounter_row");
     q.step();
     return q.integer(0);
 }

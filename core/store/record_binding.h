@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
 #include "core/base/colony.h"
+#include "core/store/encounter_terms.h"
 #include "core/store/sqlite_statement.h"
 
 #include <optional>
@@ -17,12 +18,12 @@ inline constexpr const char* kInsertAnimalSql =
 inline constexpr const char* kInsertResidenceSql =
     "INSERT INTO residence(uid, animal, grp, from_date, to_date) VALUES (?,?,?,?,?)";
 inline constexpr const char* kInsertEncounterSql =
-    "INSERT INTO encounter(seq, uid, date, time, winner, loser, outcome, behaviour, grp, observer, note) "
+    "INSERT INTO encounter_row(seq, uid, day, time, winner, loser, draw, behaviour, grp, observer, note) "
     "VALUES (?,?,?,?,?,?,?,?,?,?,?)";
 
-/// The columns of an encounter row in the order readEncounterRow expects.
+/// The columns of an encounter row (`encounter_row`, schema version 5) in the order readEncounterRow expects.
 inline constexpr const char* kEncounterColumnsSql =
-    "seq, uid, date, time, winner, loser, outcome, behaviour, grp, observer, note";
+    "seq, uid, day, time, winner, loser, draw, behaviour, grp, observer, note";
 
 /// A stored date: ISO text, or NULL when unknown.
 std::optional<std::string> storedDate(const std::optional<Day>& d);
@@ -31,18 +32,18 @@ std::optional<std::string> storedDate(const std::optional<Day>& d);
 void bindAnimalColumns(SqliteStatement& q, const Animal& a);
 /// Binds parameters 1-5 of kInsertResidenceSql.
 void bindResidenceColumns(SqliteStatement& q, const Residence& r);
-/// Binds parameters 1-11 of kInsertEncounterSql without copying: `e` and
-/// `dateText` (the formatted date) must stay unchanged until the statement runs.
-void bindEncounterColumns(SqliteStatement& q, const Encounter& e, const std::string& dateText);
+/// Binds parameters 1-11 of kInsertEncounterSql without copying: `e` must
+/// stay unchanged until the statement runs. `terms` gives (and adds) the codes.
+void bindEncounterColumns(SqliteStatement& q, const Encounter& e, EncounterTermCodes& terms);
 
 /// The same columns with an empty text in place of the uid (same positions).
 inline constexpr const char* kEncounterColumnsWithoutUidSql =
-    "seq, '', date, time, winner, loser, outcome, behaviour, grp, observer, note";
+    "seq, '', day, time, winner, loser, draw, behaviour, grp, observer, note";
 
 /// The encounter in the current row of a query that selected kEncounterColumnsSql.
-/// A date that is not a real date means the file was changed outside the program:
+/// A day or code the file cannot hold means it was changed outside the program:
 /// throws ColonyFileError (Damaged) naming `path`.
-Encounter readEncounterRow(const SqliteStatement& q, const std::string& path);
+Encounter readEncounterRow(const SqliteStatement& q, const EncounterTermTexts& terms, const std::string& path);
 
 /// The highest encounter seq in the file (0 when there is none): new encounters
 /// continue after it, whichever path writes them.

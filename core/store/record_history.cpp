@@ -11,7 +11,7 @@ std::vector<AuditEntry> recordHistory(const ColonyStore& store, const std::strin
     SqliteStatement q(store.handle(),
                       "SELECT id, time, user, tbl, uid, action, coalesce(old_values, ''), coalesce(new_values, '') "
                       "FROM audit WHERE uid = ?1 OR (action = 'import' AND tbl = 'encounter' AND "
-                      "(SELECT seq FROM encounter WHERE uid = ?2) BETWEEN json_extract(new_values, '$.first_seq') "
+                      "(SELECT seq FROM encounter_row WHERE uid = ?2) BETWEEN json_extract(new_values, '$.first_seq') "
                       "AND json_extract(new_values, '$.last_seq')) ORDER BY id");
     q.bind(1, uid); // audit rows keep uids as text
     q.bindUid(2, uid);

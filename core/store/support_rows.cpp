@@ -52,7 +52,7 @@ void loadSupportRows(sqlite3* db, std::vector<Encounter>& encounters)
 {
     // Joined on the encounter so the rows arrive in seq order; a walk along the
     // loaded encounters (also in seq order) then places them without a map.
-    SqliteStatement q(db, "SELECT e.seq, s.animal, s.side FROM encounter_support s JOIN encounter e "
+    SqliteStatement q(db, "SELECT e.seq, s.animal, s.side FROM encounter_support s JOIN encounter_row e "
                           "ON e.uid = s.encounter ORDER BY e.seq, s.rowid");
     size_t at = 0;
     while (q.step()) {

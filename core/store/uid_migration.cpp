@@ -27,7 +27,7 @@ void storeUidsCompactly(ColonyStore& store)
     store.exec("UPDATE encounter SET uid = hierloom_compact_uid(uid) WHERE typeof(uid) = 'text'");
     store.exec("UPDATE encounter_support SET encounter = hierloom_compact_uid(encounter) WHERE typeof(encounter) = 'text'");
     for (const char* t : tables)
-        for (const char* a : actions) store.exec(auditTriggerSql(t, a).c_str());
+        for (const char* a : actions) store.exec(auditTriggerSql(t, a, 4).c_str());
 }
 
 } // namespace hierloom::core

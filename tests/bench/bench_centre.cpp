@@ -173,8 +173,14 @@ int main(int argc, char** argv)
     ::unsetenv("HIERLOOM_CHECK_EVERY_OPEN");
     const auto forgetChecks = [&] { fs::remove_all(cache); };
 
-    const std::vector<std::string> groupScan = {"sqlite3", "-readonly", colony,
-                                                "SELECT * FROM encounter NOT INDEXED WHERE grp = '" + group + "'"};
+    // From schema version 5 `encounter` is a view over `encounter_row`: the
+    // full scan reads the table itself (a view takes no NOT INDEXED).
+    const bool rowTable = shellValue(colony, "SELECT count(*) FROM sqlite_schema WHERE name = 'encounter_row'") == "1";
+    const std::vector<std::string> groupScan = {
+        "sqlite3", "-readonly", colony,
+        rowTable ? "SELECT * FROM encounter_row NOT INDEXED WHERE grp = (SELECT code FROM encounter_term WHERE text = '" +
+                       group + "')"
+                 : "SELECT * FROM encounter NOT INDEXED WHERE grp = '" + group + "'"};
     const std::vector<std::string> groupRows = {"sqlite3", "-readonly", colony,
                                                 "SELECT * FROM encounter WHERE grp = '" + group + "'"};
     const std::vector<std::string> everything = {"sqlite3", "-readonly", colony, "SELECT * FROM encounter"};
@@ -217,7 +223,8 @@ int main(int argc, char** argv)
     const std::string empty = (dir / "no-encounters.hierloom").string();
     fs::copy_file(colony, empty);
     std::system(("sqlite3 '" + empty + "' "
-                 "'INSERT INTO audit_pause VALUES (1); DELETE FROM encounter; DELETE FROM audit_pause; VACUUM;' >/dev/null").c_str());
+                 "'INSERT INTO audit_pause VALUES (1); DELETE FROM " + (rowTable ? "encounter_row" : "encounter") +
+                 "; DELETE FROM audit_pause; VACUUM;' >/dev/null").c_str());
     const Run bare = runProcess({cli, "ranks", empty, "--method", "elo"});
     std::printf("memory per encounter held (whole-file ranks, peak RSS %.1f MiB, minus %.1f MiB without "
                 "encounters): %.0f bytes\n",

@@ -48,14 +48,14 @@ std::vector<std::string> floatOptions(const std::string& command)
     return out;
 }
 
-/// Breaks the page of an index of the encounter table (records still read, a check fails).
+/// Breaks the page of the audit trail's index (records still read, a check fails).
 void breakAnIndex(const std::string& path)
 {
     int page = 0;
     {
         const auto store = hierloom::core::ColonyStore::open(path, hierloom::core::ColonyStore::Mode::ReadOnly);
         hierloom::core::SqliteStatement q(store.handle(), "SELECT rootpage FROM sqlite_schema WHERE type = 'index' "
-                                                          "AND tbl_name = 'encounter' ORDER BY name LIMIT 1");
+                                                          "AND tbl_name = 'audit' ORDER BY name LIMIT 1");
         ASSERT_TRUE(q.step());
         page = static_cast<int>(q.integer(0));
     }

@@ -146,7 +146,7 @@ TEST(BulkImport, AFailedWriteStopsTheCheckingThreadAndWritesNothing)
     Fixture f;
     ColonyStore store = ColonyStore::open(f.colony);
     // A write that fails part way, as a full disk would.
-    store.exec("CREATE TEMP TRIGGER fail_midway BEFORE INSERT ON main.encounter WHEN new.seq = 15000 "
+    store.exec("CREATE TEMP TRIGGER fail_midway BEFORE INSERT ON main.encounter_row WHEN new.seq = 15000 "
                "BEGIN SELECT RAISE(ABORT, 'no space left'); END");
     try {
         importFiles(store, {"", "", f.encounters}, today());

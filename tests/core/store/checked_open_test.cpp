@@ -63,8 +63,9 @@ int rootPage(const std::string& path, const std::string& table, bool index)
     sqlite3_open_v2(path.c_str(), &db, SQLITE_OPEN_READONLY, nullptr);
     int page = 0;
     {
+        // The uid index (sqlite_autoindex_...), which count(*) and the loaders never read.
         SqliteStatement q(db, index ? "SELECT rootpage FROM sqlite_schema WHERE type = 'index' AND tbl_name = ? "
-                                      "ORDER BY name LIMIT 1"
+                                      "ORDER BY name DESC LIMIT 1"
                                     : "SELECT rootpage FROM sqlite_schema WHERE type = 'table' AND name = ?");
         q.bind(1, table);
         if (q.step()) page = static_cast<int>(q.integer(0));
@@ -87,7 +88,7 @@ void breakPage(const std::string& path, int page)
 
 /// A file whose index on encounters is broken: a scan of the table reads as
 /// before, only a check sees the damage.
-void breakEncounterIndex(const std::string& path) { breakPage(path, rootPage(path, "encounter", true)); }
+void breakEncounterIndex(const std::string& path) { breakPage(path, rootPage(path, "encounter_row", true)); }
 
 void expectRefusedAsDamaged(const std::string& path)
 {
@@ -198,7 +199,7 @@ TEST(CheckedOpen, ADamagedPageMetWhileReadingIsRefusedAndTheFileCheckedAgain)
     TempDir dir;
     const std::string path = dir.file("c.hierloom");
     hierloom::test::twoAnimalColony(path, 50);
-    breakPage(path, rootPage(path, "encounter", false));
+    breakPage(path, rootPage(path, "encounter_row", false));
     vouchAsIs(path);
     const ColonyStore store = ColonyStore::open(path, ColonyStore::Mode::ReadOnly); // trusted as recorded
     try {

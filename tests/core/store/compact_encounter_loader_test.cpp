@@ -122,14 +122,34 @@ TEST(CompactEncounterLoader, FilesWithoutTheSupportTableAndDamagedDates)
         const CompactEncounters compact = loadCompactEncounters(store, {});
         EXPECT_TRUE(compact.supporters.empty());
         EXPECT_EQ(compact.size(), 300U);
-        // A date the CHECK lets through but the calendar does not: refused as the record loader refuses it.
-        store.exec("UPDATE encounter SET date = '2021-02-30' WHERE seq = 7");
-        try {
-            loadCompactEncounters(store, {});
-            ADD_FAILURE() << "an impossible date was read";
-        } catch (const ColonyFileError& e) {
-            EXPECT_EQ(e.kind(), ColonyFileError::Kind::Damaged);
-            EXPECT_EQ(std::string(e.what()), path + ": holds an impossible date '2021-02-30'");
-        }
+        // A day number past 9999-12-31 (written with the CHECKs off) or a
+        // code the term table lacks (foreign keys off): refused as the record
+        // loader refuses them.
+        store.exec("PRAGMA ignore_check_constraints = ON");
+        store.exec("UPDATE encounter_row SET day = 2932897 WHERE seq = 7");
+        store.exec("PRAGMA ignore_check_constraints = OFF");
+        for (int loader = 0; loader < 2; ++loader)
+            try {
+                if (loader == 0) loadCompactEncounters(store, {});
+                else store.loadEncounters();
+                ADD_FAILURE() << "an impossible day was read";
+            } catch (const ColonyFileError& e) {
+                EXPECT_EQ(e.kind(), ColonyFileError::Kind::Damaged);
+                EXPECT_EQ(std::string(e.what()), path + ": holds an impossible day number 2932897");
+            }
+        store.exec("UPDATE encounter_row SET day = 18000 WHERE seq = 7");
+        EXPECT_EQ(loadCompactEncounters(store, {}).size(), 300U);
+        store.exec("PRAGMA foreign_keys = OFF");
+        store.exec("UPDATE encounter_row SET behaviour = 999 WHERE seq = 7");
+        store.exec("PRAGMA foreign_keys = ON");
+        for (int loader = 0; loader < 2; ++loader)
+            try {
+                if (loader == 0) loadCompactEncounters(store, {});
+                else store.loadEncounters();
+                ADD_FAILURE() << "an unknown code was read";
+            } catch (const ColonyFileError& e) {
+                EXPECT_EQ(e.kind(), ColonyFileError::Kind::Damaged);
+                EXPECT_EQ(std::string(e.what()), path + ": an encounter names the code 999, which the file lacks");
+            }
     }
 }

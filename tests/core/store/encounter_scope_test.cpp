@@ -3,6 +3,7 @@
 // that makes it cheap.
 #include "core/store/colony_schema.h"
 #include "core/store/colony_store.h"
+#include "core/store/encounter_scope_sql.h"
 #include "core/store/sqlite_statement.h"
 #include "import_test_support.h"
 
@@ -109,8 +110,9 @@ TEST(EncounterScope, GroupQueryUsesTheIndexAndOlderFilesGetItOnTheirFirstWrite)
     TempDir dir;
     const std::string path = writeTwoGroups(dir);
     auto plan = [](const ColonyStore& store) {
-        SqliteStatement q(store.handle(), "EXPLAIN QUERY PLAN SELECT seq FROM encounter WHERE grp IN ('North', '') "
-                                          "AND date <= '2020-02-01' ORDER BY seq");
+        const EncounterScope scope{"North", std::nullopt, *parseDate("2020-02-01")};
+        SqliteStatement q(store.handle(),
+                          ("EXPLAIN QUERY PLAN SELECT seq FROM encounter_row WHERE 1" + encounterScopeSql(scope)).c_str());
         std::string out;
         while (q.step()) out += q.text(3) + "\n";
         return out;

@@ -35,7 +35,7 @@ void breakEncounterIndex(const std::string& path)
     {
         const ColonyStore store = ColonyStore::open(path, ColonyStore::Mode::ReadOnly);
         SqliteStatement q(store.handle(), "SELECT rootpage FROM sqlite_schema WHERE type = 'index' AND "
-                                          "tbl_name = 'encounter' ORDER BY name LIMIT 1");
+                                          "tbl_name = 'encounter_row' ORDER BY name LIMIT 1");
         ASSERT_TRUE(q.step());
         page = static_cast<int>(q.integer(0));
         SqliteStatement s(store.handle(), "PRAGMA page_size");
