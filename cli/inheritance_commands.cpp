@@ -71,7 +71,7 @@ void runInherit(CommandContext& ctx, const InheritOptions& o)
     EncounterScope scope;
     scope.group = o.group;
     if (!o.monthly) scope.to = parseDate(o.at);
-    const LoadedColony loaded = loadColony(o.colony, scope, o.at.empty() && !o.monthly && !o.acquisition);
+    const LoadedColony loaded = loadColony(ctx, o.colony, scope, o.at.empty() && !o.monthly && !o.acquisition);
     WindowOptions window;
     window.group = o.group;
     window.draws = o.draws;
@@ -150,7 +150,7 @@ void runInherit(CommandContext& ctx, const InheritOptions& o)
 
 void runScenarioCommand(CommandContext& ctx, const std::string& colonyPath, const std::string& file, bool dyads)
 {
-    const LoadedColony loaded = loadColony(colonyPath);
+    const LoadedColony loaded = loadColony(ctx, colonyPath);
     // The colony's settings stand unless the scenario file gives its own (maturity).
     Scenario defaults;
     defaults.maturityYears = loaded.settings.maturityYears;

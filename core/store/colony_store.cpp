@@ -278,11 +278,16 @@ int probeColonyFile(const std::string& path)
     return version;
 }
 
-ColonyStore ColonyStore::open(const std::string& path, Mode mode) { return openAs(path, mode, false); }
+ColonyStore ColonyStore::open(const std::string& path, Mode mode) { return openAs(path, mode, Check::Once); }
 
-ColonyStore ColonyStore::openVerified(const std::string& path) { return openAs(path, Mode::ReadOnly, true); }
+ColonyStore ColonyStore::openVerified(const std::string& path) { return openAs(path, Mode::ReadOnly, Check::Fully); }
 
-ColonyStore ColonyStore::openAs(const std::string& path, Mode mode, bool verify)
+ColonyStore ColonyStore::openCheckedElsewhere(const std::string& path)
+{
+    return openAs(path, Mode::ReadOnly, Check::Elsewhere);
+}
+
+ColonyStore ColonyStore::openAs(const std::string& path, Mode mode, Check check)
 {
     const int version = probeColonyFile(path);
     if (version > currentSchemaVersion)
@@ -305,8 +310,8 @@ ColonyStore ColonyStore::openAs(const std::string& path, Mode mode, bool verify)
     }
     ColonyStore store(db, path);
     configureConnection(db, path);
-    if (verify) requireIntactFully(db, path);
-    else if (mode == Mode::ReadOnly) requireIntactOnce(db, path);
+    if (check == Check::Fully) requireIntactFully(db, path);
+    else if (mode == Mode::ReadOnly && check == Check::Once) requireIntactOnce(db, path);
     if (version < currentSchemaVersion) {
         if (mode == Mode::ReadOnly)
             throw ColonyFileError(Kind::NewerVersion, path + ": uses an older file version (" + std::to_string(version) +

@@ -58,6 +58,11 @@ public:
     /// Opens read-only like open(), running SQLite's full `PRAGMA
     /// integrity_check` whatever an earlier check found (requireIntactFully).
     static ColonyStore openVerified(const std::string& path);
+    /// Opens read-only like open() but without the whole-file check, for a
+    /// caller that runs that check on a connection of its own meanwhile
+    /// (BackgroundCheck, background_check.h) and shows or writes nothing read
+    /// here before it has passed.
+    static ColonyStore openCheckedElsewhere(const std::string& path);
 
     ColonyStore(ColonyStore&& other) noexcept;
     ColonyStore& operator=(ColonyStore&& other) noexcept;
@@ -154,7 +159,8 @@ public:
 
 private:
     ColonyStore(sqlite3* db, std::string path) : db_(db), path_(std::move(path)) {}
-    static ColonyStore openAs(const std::string& path, Mode mode, bool verify);
+    enum class Check { Once, Fully, Elsewhere };
+    static ColonyStore openAs(const std::string& path, Mode mode, Check check);
     void migrate(int fromVersion);
     void ensureEncounterIndex();
     void startSession();

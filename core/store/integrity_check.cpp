@@ -102,10 +102,13 @@ void requireIntact(sqlite3* db, const std::string& path)
 
 void requireIntactOnce(sqlite3* db, const std::string& path)
 {
-    const CheckCache cache = CheckCache::fromEnvironment();
+    if (!checkVouchedFor(path)) checkAndRecord(db, path, "PRAGMA quick_check(1)", CheckCache::fromEnvironment());
+}
+
+bool checkVouchedFor(const std::string& path)
+{
     const auto state = colonyFileState(path);
-    if (!state || !cache.vouchesFor(path, *state, nowNs() / 1'000'000'000))
-        checkAndRecord(db, path, "PRAGMA quick_check(1)", cache);
+    return state && CheckCache::fromEnvironment().vouchesFor(path, *state, nowNs() / 1'000'000'000);
 }
 
 std::optional<ColonyFileState> requireIntactBeforeWrite(sqlite3* db, const std::string& path, bool checkedAlready)

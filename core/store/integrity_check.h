@@ -29,6 +29,10 @@ void requireIntact(sqlite3* db, const std::string& path);
 /// before (settledBefore); a damaged file's entry is forgotten.
 void requireIntactOnce(sqlite3* db, const std::string& path);
 
+/// Whether the checked-files cache vouches for the file at `path` as it lies
+/// now: requireIntactOnce would skip its check.
+bool checkVouchedFor(const std::string& path);
+
 /// The same rule before a write, under the write lock (inside BEGIN
 /// IMMEDIATE, so no other SQLite connection writes until the commit). When the
 /// cache vouches for the file as it lies now, no check runs and that state is
