@@ -45,7 +45,7 @@ struct RanksOptions {
 void runRanks(CommandContext& ctx, const RanksOptions& o)
 {
     // Compact records (core/base/compact_encounters.h): every rank method works on the selection's bouts.
-    const LoadedColony loaded = loadCompactColony(o.colony, scopeOf(o.window));
+    const LoadedColony loaded = loadCompactColony(ctx, o.colony, scopeOf(o.window));
     const AnalysisSettings settings = analysisSettingsOf(loaded, o.analysis, o.window.draws);
     const SelectionOptions sel = withDefaultWindow(selectionOf(o.window, loaded), settings, loaded);
     auto selected = [&] { return selectEncounters(loaded.compact, loaded.colony.animals, loaded.where, sel); };
@@ -191,7 +191,7 @@ void addMatrixCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
     cmd->add_option("--out", ctx.outFile, "write the CSV to this file instead of standard output");
     cmd->callback([&ctx, &action, o] {
         action = [&ctx, o] {
-            const LoadedColony loaded = loadColony(o->colony, scopeOf(o->window));
+            const LoadedColony loaded = loadColony(ctx, o->colony, scopeOf(o->window));
             const AnalysisSettings settings = analysisSettingsOf(loaded, o->analysis, o->window.draws);
             const SelectionOptions sel = withDefaultWindow(selectionOf(o->window, loaded), settings, loaded);
             reportAnalysisSettings(ctx, "matrix", settings, &o->analysis, o->window.draws);
@@ -245,7 +245,7 @@ void addMetricsCommand(CLI::App& app, CommandContext& ctx, CommandAction& action
     cmd->callback([&ctx, &action, o] {
         action = [&ctx, o] {
             // Compact records (core/base/compact_encounters.h): the figures need only the selection's bouts.
-            const LoadedColony loaded = loadCompactColony(o->colony, scopeOf(o->window));
+            const LoadedColony loaded = loadCompactColony(ctx, o->colony, scopeOf(o->window));
             const AnalysisSettings settings = analysisSettingsOf(loaded, {}, o->window.draws);
             SelectionOptions sel = withDefaultWindow(selectionOf(o->window, loaded), settings, loaded);
             reportAnalysisSettings(ctx, "metrics", settings, nullptr, o->window.draws);

@@ -1,6 +1,8 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "cli/colony_loading.h"
 
+#include "cli/checked_output.h"
+
 #include "core/store/analysis_settings_store.h"
 #include "core/store/colony_store.h"
 #include "core/store/compact_encounter_loader.h"
@@ -9,11 +11,19 @@ namespace hierloom::cli {
 
 using namespace hierloom::core;
 
-LoadedColony loadColony(const std::string& path) { return loadColony(path, EncounterScope{}); }
-
-LoadedColony loadColony(const std::string& path, EncounterScope scope, bool needLastDay)
+ColonyStore openColony(CommandContext& ctx, const std::string& path)
 {
-    const ColonyStore store = ColonyStore::open(path, ColonyStore::Mode::ReadOnly);
+    return ctx.checked ? ctx.checked->open(path) : ColonyStore::open(path, ColonyStore::Mode::ReadOnly);
+}
+
+LoadedColony loadColony(CommandContext& ctx, const std::string& path)
+{
+    return loadColony(ctx, path, EncounterScope{});
+}
+
+LoadedColony loadColony(CommandContext& ctx, const std::string& path, EncounterScope scope, bool needLastDay)
+{
+    const ColonyStore store = openColony(ctx, path);
     LoadedColony out;
     out.colony.animals = store.loadAnimals();
     out.colony.residences = store.loadResidences();
@@ -31,9 +41,9 @@ LoadedColony loadColony(const std::string& path, EncounterScope scope, bool need
     return out;
 }
 
-LoadedColony loadCompactColony(const std::string& path, EncounterScope scope, bool needLastDay)
+LoadedColony loadCompactColony(CommandContext& ctx, const std::string& path, EncounterScope scope, bool needLastDay)
 {
-    const ColonyStore store = ColonyStore::open(path, ColonyStore::Mode::ReadOnly);
+    const ColonyStore store = openColony(ctx, path);
     LoadedColony out;
     out.colony.animals = store.loadAnimals();
     out.colony.residences = store.loadResidences();

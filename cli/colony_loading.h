@@ -29,20 +29,27 @@ struct LoadedColony {
     core::CompactEncounters compact;
 };
 
-/// Opens a colony file read-only and loads everything but the encounters'
-/// uids, its analysis settings included.
-LoadedColony loadColony(const std::string& path);
+/// Opens a colony file read-only for a command: when the checked-files cache
+/// does not vouch for it, its whole-file check runs alongside on a thread of
+/// its own and the command's output waits for it (cli/checked_output.h).
+core::ColonyStore openColony(CommandContext& ctx, const std::string& path);
+
+/// Opens a colony file read-only (openColony) and loads everything but the
+/// encounters' uids, its analysis settings included.
+LoadedColony loadColony(CommandContext& ctx, const std::string& path);
 
 /// Same, with only the encounters a question needs (core::EncounterScope);
 /// `needLastDay` also finds the file's latest encounter day.
 /// Encounters are read without their uids (no analysis uses them).
-LoadedColony loadColony(const std::string& path, core::EncounterScope scope, bool needLastDay = false);
+LoadedColony loadColony(CommandContext& ctx, const std::string& path, core::EncounterScope scope,
+                        bool needLastDay = false);
 
 /// Same as loadColony(path, scope, needLastDay), but the encounters are read
 /// as compact records into `compact` (core/store/compact_encounter_loader.h;
 /// about 32 bytes per encounter instead of one string per field), for the
 /// commands whose engines take them (`ranks`).
-LoadedColony loadCompactColony(const std::string& path, core::EncounterScope scope, bool needLastDay = false);
+LoadedColony loadCompactColony(CommandContext& ctx, const std::string& path, core::EncounterScope scope,
+                               bool needLastDay = false);
 
 /// The scope of the common window options: the group and the dates as given.
 /// A date that does not parse is left open here; selectionOf reports it.

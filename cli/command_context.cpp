@@ -1,6 +1,8 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "cli/command_context.h"
 
+#include "cli/checked_output.h"
+
 #include <CLI/CLI.hpp>
 
 #include <cstdio>
@@ -29,8 +31,14 @@ std::optional<hierloom::core::Day> optionDate(const std::string& text, const cha
     return d;
 }
 
+void passCheck(CommandContext& ctx)
+{
+    if (ctx.checked) ctx.checked->pass();
+}
+
 void emit(CommandContext& ctx, const std::string& text)
 {
+    passCheck(ctx);
     if (ctx.outFile.empty()) {
         ctx.out << text;
         ctx.out.flush();

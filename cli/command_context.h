@@ -15,6 +15,8 @@ class App;
 
 namespace hierloom::cli {
 
+class CheckedOutput;
+
 /// A mistake in the command line or its input, reported with exit status 2.
 class BadInputError : public std::runtime_error {
 public:
@@ -26,7 +28,15 @@ struct CommandContext {
     std::ostream& out;
     std::ostream& err;
     std::string outFile; // --out
+    /// The streams' owner, which holds the output while the colony file is
+    /// checked alongside the command (cli/checked_output.h); none in a copy for a side file.
+    CheckedOutput* checked = nullptr;
 };
+
+/// Waits for the whole-file check running alongside the command, if any (the
+/// output held meanwhile is written out); throws ColonyFileError when the file
+/// is damaged. Called before anything is written to a file.
+void passCheck(CommandContext& ctx);
 
 /// Options every analysis command takes (docs/file-formats.md "Common options").
 struct WindowOptions {
@@ -42,7 +52,8 @@ void addWindowOptions(CLI::App& command, WindowOptions& options);
 /// Parses a `YYYY-MM-DD` option value; BadInput naming the option otherwise.
 std::optional<hierloom::core::Day> optionDate(const std::string& text, const char* option);
 
-/// Writes `text` to --out FILE (atomically, via a temporary file) or to standard output.
+/// Writes `text` to --out FILE (atomically, via a temporary file) or to
+/// standard output, once the colony file's check has passed (passCheck).
 void emit(CommandContext& ctx, const std::string& text);
 
 /// Writes several files all or nothing: each into a temporary file beside it,

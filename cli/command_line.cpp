@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "cli/command_line.h"
 
+#include "cli/checked_output.h"
 #include "cli/code_help.h"
 #include "cli/commands.h"
 #include "cli/finite_number.h"
@@ -21,7 +22,8 @@ int run(int argc, const char* const* argv, std::ostream& out, std::ostream& err)
     app.set_version_flag("--version", std::string("hierloom-cli ") + HIERLOOM_VERSION);
     app.require_subcommand(1);
     app.fallthrough(false);
-    CommandContext ctx{out, err, {}};
+    CheckedOutput checked(out, err);
+    CommandContext ctx{checked.out(), checked.err(), {}, &checked};
     CommandAction action;
     addInitCommand(app, ctx, action);
     addImportCommand(app, ctx, action);
@@ -66,8 +68,21 @@ int run(int argc, const char* const* argv, std::ostream& out, std::ostream& err)
             err << "Run 'hierloom-cli --help' for the list of commands.\n";
         return BadInput;
     }
+    std::exception_ptr failure;
     try {
         if (action) action();
+    } catch (...) {
+        failure = std::current_exception();
+    }
+    // A colony file checked alongside the command: a damaged file is refused
+    // as by a check before reading, whatever the command met while reading it.
+    try {
+        checked.pass();
+    } catch (...) {
+        failure = std::current_exception();
+    }
+    try {
+        if (failure) std::rethrow_exception(failure);
         return Success;
     } catch (const BadInputError& e) {
         err << "hierloom-cli: " << e.what() << "\n";

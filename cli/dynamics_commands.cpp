@@ -30,7 +30,7 @@ struct DynamicsOptions {
 
 void runDynamics(CommandContext& ctx, const DynamicsOptions& o)
 {
-    const LoadedColony loaded = loadColony(o.colony);
+    const LoadedColony loaded = loadColony(ctx, o.colony);
     const AnalysisSettings settings = analysisSettingsOf(loaded, o.analysis, o.window.draws);
     const SelectionOptions sel = withDefaultWindow(selectionOf(o.window, loaded), settings, loaded);
     reportAnalysisSettings(ctx, "dynamics", settings, &o.analysis, o.window.draws);
@@ -57,6 +57,7 @@ void runDynamics(CommandContext& ctx, const DynamicsOptions& o)
                     << formatNumber(r.score.brier) << ", winners predicted " << r.score.predicted << " of "
                     << r.score.encounters << "\n";
     // The side files first, all or nothing, so a failure leaves standard output untouched.
+    passCheck(ctx);
     std::vector<std::pair<std::string, std::string>> side;
     if (!o.foresightFile.empty()) side.emplace_back(o.foresightFile, tableCsv(foresightTable(foresight), false));
     if (!o.encountersFile.empty())

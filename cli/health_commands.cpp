@@ -49,7 +49,7 @@ std::string referenceNote(const DataHealth& health, Day today)
 
 void runHealth(CommandContext& ctx, const HealthCommandOptions& o)
 {
-    const LoadedColony loaded = loadColony(o.colony);
+    const LoadedColony loaded = loadColony(ctx, o.colony);
     const AnalysisSettings settings = analysisSettingsOf(loaded, o.analysis, o.window.draws);
     const SelectionOptions sel = selectionOf(o.window, loaded);
     HealthOptions h;

@@ -74,8 +74,8 @@ void runInherit(CommandContext& ctx, const InheritOptions& o)
     // The prediction needs only Elo at one date: compact records (core/base/compact_encounters.h);
     // the monthly series and rank acquisition still read the records as Encounters.
     const bool compact = !o.monthly && !o.acquisition;
-    const LoadedColony loaded = compact ? loadCompactColony(o.colony, scope, o.at.empty())
-                                        : loadColony(o.colony, scope, false);
+    const LoadedColony loaded = compact ? loadCompactColony(ctx, o.colony, scope, o.at.empty())
+                                        : loadColony(ctx, o.colony, scope, false);
     WindowOptions window;
     window.group = o.group;
     window.draws = o.draws;
@@ -154,7 +154,7 @@ void runInherit(CommandContext& ctx, const InheritOptions& o)
 
 void runScenarioCommand(CommandContext& ctx, const std::string& colonyPath, const std::string& file, bool dyads)
 {
-    const LoadedColony loaded = loadColony(colonyPath);
+    const LoadedColony loaded = loadColony(ctx, colonyPath);
     // The colony's settings stand unless the scenario file gives its own (maturity).
     Scenario defaults;
     defaults.maturityYears = loaded.settings.maturityYears;

@@ -29,10 +29,10 @@ struct OverviewOptions {
 void runOverview(CommandContext& ctx, const OverviewOptions& o)
 {
     const std::optional<Day> asked = optionDate(o.at, "--at");
-    // One connection (one integrity check); each group's encounters are read
-    // in turn (core/store/centre_overview_reader.h), so memory follows the
-    // largest group, not the centre.
-    const ColonyStore store = ColonyStore::open(o.colony, ColonyStore::Mode::ReadOnly);
+    // One connection (its integrity check alongside, openColony); each group's
+    // encounters are read in turn (core/store/centre_overview_reader.h), so
+    // memory follows the largest group, not the centre.
+    const ColonyStore store = openColony(ctx, o.colony);
     LoadedColony loaded;
     loaded.settings = readAnalysisSettings(store);
     const AnalysisSettings settings = analysisSettingsOf(loaded, o.analysis, {});

@@ -39,9 +39,9 @@ struct StoredStability {
     std::map<std::string, int, std::less<>> severity;
 };
 
-StoredStability storedStability(const std::string& path)
+StoredStability storedStability(CommandContext& ctx, const std::string& path)
 {
-    const ColonyStore store = ColonyStore::open(path, ColonyStore::Mode::ReadOnly);
+    const ColonyStore store = openColony(ctx, path);
     return {readStabilityThresholds(store), behaviourSeverities(store)};
 }
 
@@ -73,9 +73,9 @@ struct StabilityCommandOptions {
 void runStability(CommandContext& ctx, const StabilityCommandOptions& o)
 {
     // Elo runs over the group's whole record; --from and --to only choose the periods shown.
-    const LoadedColony loaded = loadCompactColony(o.colony, EncounterScope{o.group, {}, {}});
+    const LoadedColony loaded = loadCompactColony(ctx, o.colony, EncounterScope{o.group, {}, {}});
     const std::string group = chosenGroup(loaded, o.group);
-    const StoredStability stored = storedStability(o.colony);
+    const StoredStability stored = storedStability(ctx, o.colony);
     const AnalysisSettings settings = analysisSettingsOf(loaded, o.analysis, o.draws);
     reportAnalysisSettings(ctx, "stability", settings, &o.analysis, o.draws);
     StabilityOptions so;
@@ -121,9 +121,9 @@ struct ReportOptions {
 void runReport(CommandContext& ctx, const ReportOptions& o)
 {
 #ifdef HIERLOOM_HAVE_REPORT
-    const LoadedColony loaded = loadColony(o.colony, EncounterScope{o.group, {}, {}});
+    const LoadedColony loaded = loadColony(ctx, o.colony, EncounterScope{o.group, {}, {}});
     const std::string group = chosenGroup(loaded, o.group);
-    const StoredStability stored = storedStability(o.colony);
+    const StoredStability stored = storedStability(ctx, o.colony);
     report::HierarchyReportOptions ro;
     ro.group = group;
     ro.at = optionDate(o.at, "--at");
@@ -143,6 +143,7 @@ void runReport(CommandContext& ctx, const ReportOptions& o)
     static char* argv[] = {name, nullptr};
     if (!QCoreApplication::instance()) app = std::make_unique<QGuiApplication>(argc, argv);
     int pages = 0;
+    passCheck(ctx);
     try {
         pages = report::writeHierarchyReportPdf(QString::fromStdString(o.out), loaded.colony, ro);
     } catch (const std::invalid_argument& e) {

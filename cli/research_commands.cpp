@@ -161,7 +161,7 @@ void runSexRatio(CommandContext& ctx, const BirthOptions& o, const std::string& 
                  const std::string& thirdsFile)
 {
     const SpeciesSettings species = speciesFor(o);
-    const LoadedColony loaded = loadColony(o.colony);
+    const LoadedColony loaded = loadColony(ctx, o.colony);
     const AnalysisSettings settings = birthSettings(ctx, "sex-ratio", o, loaded, species);
     const MaternalRankOptions m = maternalOptions(o, loaded, species, settings);
     const std::vector<MaternalRankRow> births = computeMaternalRanks(loaded.colony, loaded.where, m);
@@ -172,7 +172,7 @@ void runSexRatio(CommandContext& ctx, const BirthOptions& o, const std::string& 
     // The side files first, so a failure leaves standard output untouched.
     auto side = [&](const std::string& path, const ExportTable& t, const char* option) {
         if (path.empty()) return;
-        CommandContext file{ctx.out, ctx.err, path};
+        CommandContext file{ctx.out, ctx.err, path, ctx.checked};
         try {
             emit(file, tableCsv(t, false));
         } catch (const BadInputError&) {
@@ -187,7 +187,7 @@ void runSexRatio(CommandContext& ctx, const BirthOptions& o, const std::string& 
 void runMaternalRanks(CommandContext& ctx, const BirthOptions& o)
 {
     const SpeciesSettings species = speciesFor(o);
-    const LoadedColony loaded = loadColony(o.colony);
+    const LoadedColony loaded = loadColony(ctx, o.colony);
     const AnalysisSettings settings = birthSettings(ctx, "maternal-ranks", o, loaded, species);
     const MaternalRankOptions m = maternalOptions(o, loaded, species, settings);
     const std::vector<MaternalRankRow> births = computeMaternalRanks(loaded.colony, loaded.where, m);
@@ -225,7 +225,7 @@ void runExportTables(CommandContext& ctx, const ExportTablesOptions& o)
 {
     if (!o.every.empty() && !o.windows.empty()) throw BadInputError("--every and --window cannot be combined");
     const SpeciesSettings species = speciesFor(o.births);
-    const LoadedColony loaded = loadColony(o.births.colony);
+    const LoadedColony loaded = loadColony(ctx, o.births.colony);
     const AnalysisSettings settings = birthSettings(ctx, "export-tables", o.births, loaded, species);
     ResearchExportOptions r;
     r.selection = selectionOf(o.births.window, loaded);
@@ -243,6 +243,7 @@ void runExportTables(CommandContext& ctx, const ExportTablesOptions& o)
     if (o.health) r.healthMinEncounters = o.minEncounters;
     reportSettings(ctx, "export-tables", species);
     const std::vector<ExportTable> tables = researchTables(loaded.colony, loaded.where, r);
+    passCheck(ctx);
     try {
         writeTableSet(tables, o.dir, o.spreadsheet);
     } catch (const std::runtime_error& e) {

@@ -33,7 +33,7 @@ struct SupportCommandOptions {
 
 void runSupport(CommandContext& ctx, const SupportCommandOptions& o)
 {
-    const LoadedColony loaded = loadColony(o.colony);
+    const LoadedColony loaded = loadColony(ctx, o.colony);
     const AnalysisSettings settings = analysisSettingsOf(loaded, o.analysis, o.window.draws);
     const SelectionOptions selection = withDefaultWindow(selectionOf(o.window, loaded), settings, loaded);
     reportAnalysisSettings(ctx, "support", settings, &o.analysis, o.window.draws);

@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
 #include "core/base/colony.h"
+#include "core/base/compact_encounters.h"
 #include "core/base/residence_index.h"
 #include "core/pedigree/group_composition.h"
 #include "core/pedigree/matriline.h"
@@ -33,5 +34,11 @@ struct GroupOverview {
 /// runs monthly with `stability` (its group and `to` are set here).
 GroupOverview overviewOfGroup(const Colony& colony, const ResidenceIndex& where, const Matrilines& lines,
                               const std::string& group, Day at, StabilityOptions stability, int maturityYears);
+/// The same row from compact records (core/base/compact_encounters.h): the
+/// group's encounters in `encounters`, every animal and residence in `colony`
+/// (its own encounters are not read).
+GroupOverview overviewOfGroup(const CompactEncounters& encounters, const Colony& colony, const ResidenceIndex& where,
+                              const Matrilines& lines, const std::string& group, Day at, StabilityOptions stability,
+                              int maturityYears);
 
 } // namespace hierloom::core

@@ -7,6 +7,7 @@
 #include "core/base/number_format.h"
 
 #include <algorithm>
+#include <limits>
 #include <map>
 #include <numeric>
 #include <utility>
@@ -116,6 +117,14 @@ StabilitySeries watch(const EncounterSelection& sel, const BehaviourOf& behaviou
         return g >= 0 && (groupIndex < 0 || g == groupIndex);
     };
 
+    // Only animals that ever lived in the group can be resident on a day (a
+    // centre's other groups' animals would be asked once per watched day each).
+    std::vector<int> everResident;
+    for (int a = 0; a < where.animalCount(); ++a)
+        if (groupIndex < 0 || where.residentDuring(a, std::numeric_limits<Day>::min(), std::numeric_limits<Day>::max(),
+                                                   groupIndex))
+            everResident.push_back(a);
+
     std::vector<double> rating(static_cast<size_t>(n), o.elo.start);
     std::vector<unsigned char> rated(static_cast<size_t>(n), 0);
     const bool ignoreDraws = o.elo.draws == DrawPolicy::Ignore;
@@ -194,7 +203,7 @@ StabilitySeries watch(const EncounterSelection& sel, const BehaviourOf& behaviou
 
         // Animal-days count the residents of the days someone watched the group.
         for (Day d : observedDays)
-            for (int a = 0; a < where.animalCount(); ++a)
+            for (int a : everResident)
                 if (residentOn(a, d)) ++sp.animalDays;
         if (sp.animalDays > 0) sp.severePerAnimalDay = static_cast<double>(sp.severe) / static_cast<double>(sp.animalDays);
 

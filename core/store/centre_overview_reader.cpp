@@ -2,6 +2,7 @@
 #include "core/store/centre_overview_reader.h"
 
 #include "core/store/colony_store.h"
+#include "core/store/compact_encounter_loader.h"
 #include "core/store/stability_settings.h"
 
 #include <algorithm>
@@ -31,11 +32,8 @@ GroupOverview CentreOverviewReader::read(const std::string& group, Day at)
 {
     EncounterScope scope{group, {}, at};
     scope.uids = false;
-    colony_.encounters = store_.loadEncounters(scope);
-    GroupOverview row = overviewOfGroup(colony_, where_, *lines_, group, at, stability_, maturityYears_);
-    colony_.encounters.clear();
-    colony_.encounters.shrink_to_fit();
-    return row;
+    const CompactEncounters encounters = loadCompactEncounters(store_, scope);
+    return overviewOfGroup(encounters, colony_, where_, *lines_, group, at, stability_, maturityYears_);
 }
 
 } // namespace hierloom::core

@@ -18,8 +18,8 @@ class ColonyStore;
 /// Reads the centre overview (centre_overview.h) from a colony file one group
 /// at a time: every animal and residence, the stability thresholds and the
 /// behaviour severities once, then for each row only the encounters the group
-/// can use up to the day (ColonyStore::loadEncounters(EncounterScope), without
-/// uids), so memory follows the largest group, not the centre. The command
+/// can use up to the day, through the group index as compact records
+/// (compact_encounter_loader.h), so memory follows the largest group, not the centre. The command
 /// line's `overview` and the desktop's Centre Overview read through it, so the
 /// two show the same figures. Uses the store from one thread at a time.
 class CentreOverviewReader {
@@ -37,7 +37,7 @@ public:
 
 private:
     const ColonyStore& store_;
-    Colony colony_; ///< every animal and residence; the encounters of the last row read
+    Colony colony_; ///< every animal and residence (no encounters)
     ResidenceIndex where_;
     std::unique_ptr<Matrilines> lines_;
     StabilityOptions stability_;

@@ -230,13 +230,17 @@ void CheckCache::write(const std::vector<Entry>& entries) const
     if (!written || std::rename(partial.c_str(), target.c_str()) != 0) ::unlink(partial.c_str());
 }
 
+bool CheckCache::vouches(const Entry& entry, const ColonyFileState& state, std::int64_t nowSeconds)
+{
+    return entry.state == state && entry.checkedAt <= nowSeconds && nowSeconds - entry.checkedAt < kCheckTrustSeconds;
+}
+
 bool CheckCache::vouchesFor(const std::string& colonyPath, const ColonyFileState& state, std::int64_t nowSeconds) const
 {
     if (folder_.empty()) return false;
     const std::string key = keyOf(colonyPath);
     for (const Entry& e : read())
-        if (e.path == key)
-            return e.state == state && e.checkedAt <= nowSeconds && nowSeconds - e.checkedAt < kCheckTrustSeconds;
+        if (e.path == key) return vouches(e, state, nowSeconds);
     return false;
 }
 
@@ -249,6 +253,20 @@ void CheckCache::record(const std::string& colonyPath, const ColonyFileState& st
     entries.insert(entries.begin(), Entry{key, state, checkedAtSeconds});
     if (entries.size() > kCheckCacheEntries) entries.resize(kCheckCacheEntries);
     write(entries);
+}
+
+bool CheckCache::carryOver(const std::string& colonyPath, const ColonyFileState& before, const ColonyFileState& after,
+                           std::int64_t nowSeconds) const
+{
+    if (folder_.empty()) return false;
+    const std::string key = keyOf(colonyPath);
+    std::vector<Entry> entries = read();
+    const auto e = std::find_if(entries.begin(), entries.end(), [&](const Entry& x) { return x.path == key; });
+    if (e == entries.end() || !vouches(*e, before, nowSeconds)) return false;
+    if (before == after) return true;
+    e->state = after;
+    write(entries);
+    return true;
 }
 
 void CheckCache::forget(const std::string& colonyPath) const

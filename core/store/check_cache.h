@@ -81,7 +81,14 @@ public:
     /// Records that `colonyPath` passed a check in `state` at `checkedAtSeconds`.
     void record(const std::string& colonyPath, const ColonyFileState& state, std::int64_t checkedAtSeconds) const;
 
-    /// Forgets `colonyPath` (this program is about to write it, or found it damaged).
+    /// This program changed `colonyPath` from `before` to `after` and nobody
+    /// else wrote meanwhile: when the cache vouches for `before` (at
+    /// `nowSeconds`), the same pass is recorded for `after`, keeping the time
+    /// of the check (kCheckTrustSeconds still counts from it). Returns whether it did.
+    bool carryOver(const std::string& colonyPath, const ColonyFileState& before, const ColonyFileState& after,
+                   std::int64_t nowSeconds) const;
+
+    /// Forgets `colonyPath` (it changed in a way this program cannot vouch for, or is damaged).
     void forget(const std::string& colonyPath) const;
 
 private:
@@ -90,6 +97,7 @@ private:
         ColonyFileState state;
         std::int64_t checkedAt = 0;
     };
+    static bool vouches(const Entry& entry, const ColonyFileState& state, std::int64_t nowSeconds);
     std::vector<Entry> read() const;
     void write(const std::vector<Entry>& entries) const;
 

@@ -280,11 +280,16 @@ int probeColonyFile(const std::string& path)
     return version;
 }
 
-ColonyStore ColonyStore::open(const std::string& path, Mode mode) { return openAs(path, mode, false); }
+ColonyStore ColonyStore::open(const std::string& path, Mode mode) { return openAs(path, mode, Check::Once); }
 
-ColonyStore ColonyStore::openVerified(const std::string& path) { return openAs(path, Mode::ReadOnly, true); }
+ColonyStore ColonyStore::openVerified(const std::string& path) { return openAs(path, Mode::ReadOnly, Check::Fully); }
 
-ColonyStore ColonyStore::openAs(const std::string& path, Mode mode, bool verify)
+ColonyStore ColonyStore::openCheckedElsewhere(const std::string& path)
+{
+    return openAs(path, Mode::ReadOnly, Check::Elsewhere);
+}
+
+ColonyStore ColonyStore::openAs(const std::string& path, Mode mode, Check check)
 {
     const int version = probeColonyFile(path);
     if (version > currentSchemaVersion)
@@ -307,8 +312,8 @@ ColonyStore ColonyStore::openAs(const std::string& path, Mode mode, bool verify)
     }
     ColonyStore store(db, path);
     configureConnection(db, path);
-    if (verify) requireIntactFully(db, path);
-    else if (mode == Mode::ReadOnly) requireIntactOnce(db, path, CheckPurpose::Reading);
+    if (check == Check::Fully) requireIntactFully(db, path);
+    else if (mode == Mode::ReadOnly && check == Check::Once) requireIntactOnce(db, path);
     if (version < currentSchemaVersion) {
         if (mode == Mode::ReadOnly)
             throw ColonyFileError(Kind::NewerVersion, path + ": uses an older file version (" + std::to_string(version) +
@@ -418,7 +423,7 @@ void ColonyStore::ensureEncounterIndex()
 
 ColonyStore::ColonyStore(ColonyStore&& other) noexcept
     : db_(other.db_), path_(std::move(other.path_)), intactAtVersion_(other.intactAtVersion_),
-      checkedElsewhereAt_(other.checkedElsewhereAt_)
+      checkedElsewhereAt_(other.checkedElsewhereAt_), vouched_(other.vouched_)
 {
     other.db_ = nullptr;
 }
@@ -426,29 +431,74 @@ ColonyStore::ColonyStore(ColonyStore&& other) noexcept
 ColonyStore& ColonyStore::operator=(ColonyStore&& other) noexcept
 {
     if (this != &other) {
-        sqlite3_close(db_);
+        close();
         db_ = other.db_;
         path_ = std::move(other.path_);
         intactAtVersion_ = other.intactAtVersion_;
         checkedElsewhereAt_ = other.checkedElsewhereAt_;
+        vouched_ = other.vouched_;
         other.db_ = nullptr;
     }
     return *this;
 }
 
-ColonyStore::~ColonyStore() { sqlite3_close(db_); }
+ColonyStore::~ColonyStore() { close(); }
+
+void ColonyStore::close() noexcept
+{
+    if (!db_) return;
+    // The last connection to close copies the -wal into the file and deletes
+    // it: a change this program can vouch for when nobody else has written
+    // since its last commit.
+    std::optional<ColonyFileState> before;
+    try {
+        if (vouched_ && dataVersion() == vouched_->dataVersion) before = colonyFileState(path_);
+    } catch (...) {
+    }
+    sqlite3_close(db_);
+    db_ = nullptr;
+    if (!before || *before != vouched_->state) return;
+    // A -wal still holding transactions after the close is another connection's
+    // (ours was either left as it was or copied and deleted).
+    if (const auto after = colonyFileState(path_); after && (*after == *before || !after->wal))
+        carryCheckOver(path_, *before, *after);
+}
 
 void ColonyStore::exec(const char* sql) const { execOn(db_, sql, path_); }
 
 void ColonyStore::checkBeforeWrite()
 {
-    SqliteStatement q(db_, "PRAGMA data_version");
-    const std::int64_t version = q.step() ? q.integer(0) : -1;
-    if (intactAtVersion_ && *intactAtVersion_ == version) return;
-    if (!checkedElsewhereAt_ || *checkedElsewhereAt_ != version) requireIntactOnce(db_, path_, CheckPurpose::Writing);
+    const std::int64_t version = dataVersion();
+    const bool checkedAlready = (intactAtVersion_ && *intactAtVersion_ == version) ||
+                                (checkedElsewhereAt_ && *checkedElsewhereAt_ == version);
+    vouched_.reset();
+    if (const auto state = requireIntactBeforeWrite(db_, path_, checkedAlready)) vouched_ = {*state, version};
     checkedElsewhereAt_.reset();
     ensureFileIdentity(*this);
     intactAtVersion_ = version;
+}
+
+void ColonyStore::commitWrite()
+{
+    // A write transaction in WAL mode writes only the -wal: a change of the
+    // file itself meanwhile is another program's.
+    if (vouched_) {
+        const auto now = colonyFileState(path_);
+        if (!now || now->file != vouched_->state.file) vouched_.reset();
+    }
+    try {
+        exec("COMMIT");
+    } catch (...) {
+        vouched_.reset();
+        throw;
+    }
+    if (!vouched_) return;
+    // Read after the file's state: another connection committing after this
+    // commit (or during its checkpoint) moves data_version.
+    const auto after = colonyFileState(path_);
+    const bool alone = dataVersion() == vouched_->dataVersion;
+    if (after && alone && carryCheckOver(path_, vouched_->state, *after)) vouched_->state = *after;
+    else vouched_.reset();
 }
 
 std::int64_t ColonyStore::dataVersion() const
@@ -619,9 +669,13 @@ std::vector<std::string> ColonyStore::observers() const
 
 void ColonyStore::addObserver(const std::string& name)
 {
-    SqliteStatement q(db_, "INSERT OR IGNORE INTO observer(name) VALUES (?)");
-    q.bind(1, name);
-    q.run();
+    WriteTransaction tx(*this); // checked, counted, and the checked-files cache's pass kept, like every write
+    {
+        SqliteStatement q(db_, "INSERT OR IGNORE INTO observer(name) VALUES (?)");
+        q.bind(1, name);
+        q.run();
+    }
+    tx.commit();
 }
 
 std::vector<ColonyStore::BehaviourCode> ColonyStore::behaviourCodes() const
@@ -641,11 +695,15 @@ std::string ColonyStore::setting(const std::string& key, const std::string& fall
 
 void ColonyStore::setSetting(const std::string& key, const std::string& value)
 {
-    SqliteStatement q(db_, "INSERT INTO setting(key, value) VALUES (?, ?) "
-                           "ON CONFLICT(key) DO UPDATE SET value = excluded.value");
-    q.bind(1, key);
-    q.bind(2, value);
-    q.run();
+    WriteTransaction tx(*this);
+    {
+        SqliteStatement q(db_, "INSERT INTO setting(key, value) VALUES (?, ?) "
+                               "ON CONFLICT(key) DO UPDATE SET value = excluded.value");
+        q.bind(1, key);
+        q.bind(2, value);
+        q.run();
+    }
+    tx.commit();
 }
 
 } // namespace hierloom::core

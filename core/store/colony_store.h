@@ -2,6 +2,7 @@
 #pragma once
 #include "core/base/colony.h"
 #include "core/base/colony_file_error.h"
+#include "core/store/check_cache.h"
 
 #include <cstdint>
 #include <functional>
@@ -57,6 +58,11 @@ public:
     /// Opens read-only like open(), running SQLite's full `PRAGMA
     /// integrity_check` whatever an earlier check found (requireIntactFully).
     static ColonyStore openVerified(const std::string& path);
+    /// Opens read-only like open() but without the whole-file check, for a
+    /// caller that runs that check on a connection of its own meanwhile
+    /// (BackgroundCheck, background_check.h) and shows or writes nothing read
+    /// here before it has passed.
+    static ColonyStore openCheckedElsewhere(const std::string& path);
 
     ColonyStore(ColonyStore&& other) noexcept;
     ColonyStore& operator=(ColonyStore&& other) noexcept;
@@ -130,14 +136,20 @@ public:
     /// Runs `sql` (no results) or throws ColonyFileError naming the file.
     void exec(const char* sql) const;
 
-    /// Called by WriteTransaction when it begins: runs `PRAGMA quick_check`
-    /// unless it passed on this connection and no other connection has
-    /// committed since (`PRAGMA data_version`) or the file is unchanged since
-    /// it last passed (requireIntactOnce, which also forgets that pass, as the
-    /// file is about to change), and makes sure the file has its
-    /// identity (file_identity.h). Throws ColonyFileError(Damaged) naming the
-    /// newest good backup.
+    /// Called by WriteTransaction when it begins, under the write lock: runs
+    /// `PRAGMA quick_check` unless it passed on this connection and no other
+    /// connection has committed since (`PRAGMA data_version`) or the file is
+    /// unchanged since it last passed (requireIntactBeforeWrite), and makes
+    /// sure the file has its identity (file_identity.h). Throws
+    /// ColonyFileError(Damaged) naming the newest good backup.
     void checkBeforeWrite();
+    /// Called by WriteTransaction to end the outermost transaction: COMMIT,
+    /// and when the checked-files cache vouched for the file as this write
+    /// began, the pass is carried over to the state the commit leaves, unless
+    /// the file changed meanwhile in a way this write does not explain (its
+    /// main file touched during the transaction, another connection's commit
+    /// since). The close carries it over the final checkpoint likewise.
+    void commitWrite();
     /// Another connection of this program passed `PRAGMA quick_check` on the
     /// file after this one's dataVersion() was `version` (a background read):
     /// the next checkBeforeWrite skips the check when no other connection has
@@ -147,15 +159,24 @@ public:
 
 private:
     ColonyStore(sqlite3* db, std::string path) : db_(db), path_(std::move(path)) {}
-    static ColonyStore openAs(const std::string& path, Mode mode, bool verify);
+    enum class Check { Once, Fully, Elsewhere };
+    static ColonyStore openAs(const std::string& path, Mode mode, Check check);
     void migrate(int fromVersion);
     void ensureEncounterIndex();
     void startSession();
+    void close() noexcept;
 
     sqlite3* db_ = nullptr;
     std::string path_;
     std::optional<std::int64_t> intactAtVersion_; // data_version when quick_check last passed
     std::optional<std::int64_t> checkedElsewhereAt_; // see trustIntegrityCheckedAt
+    /// The state the checked-files cache vouches for, and this connection's
+    /// data_version when the file was in it (commitWrite, close).
+    struct VouchedState {
+        ColonyFileState state;
+        std::int64_t dataVersion = 0;
+    };
+    std::optional<VouchedState> vouched_;
 };
 
 /// Reads the schema version and application id of a file without changing it;

@@ -100,23 +100,38 @@ void requireIntact(sqlite3* db, const std::string& path)
     if (!problem.empty()) refuseDamaged(path, problem);
 }
 
-void requireIntactOnce(sqlite3* db, const std::string& path, CheckPurpose purpose)
+void requireIntactOnce(sqlite3* db, const std::string& path)
+{
+    if (!checkVouchedFor(path)) checkAndRecord(db, path, "PRAGMA quick_check(1)", CheckCache::fromEnvironment());
+}
+
+bool checkVouchedFor(const std::string& path)
+{
+    const auto state = colonyFileState(path);
+    return state && CheckCache::fromEnvironment().vouchesFor(path, *state, nowNs() / 1'000'000'000);
+}
+
+std::optional<ColonyFileState> requireIntactBeforeWrite(sqlite3* db, const std::string& path, bool checkedAlready)
 {
     const CheckCache cache = CheckCache::fromEnvironment();
     const auto state = colonyFileState(path);
-    const bool trusted = state && cache.vouchesFor(path, *state, nowNs() / 1'000'000'000);
-    if (purpose == CheckPurpose::Writing) {
-        if (!trusted) {
-            const std::string problem = quickCheckProblem(db);
-            if (!problem.empty()) {
-                cache.forget(path);
-                refuseDamaged(path, problem);
-            }
+    if (state && cache.vouchesFor(path, *state, nowNs() / 1'000'000'000)) return state;
+    if (!checkedAlready) {
+        const std::string problem = quickCheckProblem(db);
+        if (!problem.empty()) {
+            cache.forget(path);
+            refuseDamaged(path, problem);
         }
-        cache.forget(path);
-        return;
     }
-    if (!trusted) checkAndRecord(db, path, "PRAGMA quick_check(1)", cache);
+    // The file changed in a way this program cannot vouch for (or was never
+    // checked): after this write the next open checks it.
+    cache.forget(path);
+    return std::nullopt;
+}
+
+bool carryCheckOver(const std::string& path, const ColonyFileState& before, const ColonyFileState& after)
+{
+    return CheckCache::fromEnvironment().carryOver(path, before, after, nowNs() / 1'000'000'000);
 }
 
 void requireIntactFully(sqlite3* db, const std::string& path)

@@ -1,5 +1,8 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
+#include "core/store/check_cache.h"
+
+#include <optional>
 #include <string>
 
 struct sqlite3;
@@ -16,21 +19,35 @@ std::string quickCheckProblem(sqlite3* db);
 /// (when there is one), unless the database behind `db` passes the quick check.
 void requireIntact(sqlite3* db, const std::string& path);
 
-/// What a check before opening or writing is for.
-enum class CheckPurpose {
-    Reading, ///< a pass is recorded in the checked-files cache (check_cache.h)
-    Writing, ///< the file is about to change: its cache entry is forgotten
-};
+/// "Checked once, trusted until it changes", before a read-only open:
+/// requireIntact, skipped when the checked-files cache
+/// (CheckCache::fromEnvironment) vouches that the file at `path` passed a
+/// check while it was in the state it is in now (device, inode, size,
+/// modification and status-change times of the file and of its -wal, header
+/// change counter, schema version; at most kCheckTrustSeconds ago). A pass is
+/// recorded when the file did not change while it was checked and had settled
+/// before (settledBefore); a damaged file's entry is forgotten.
+void requireIntactOnce(sqlite3* db, const std::string& path);
 
-/// "Checked once, trusted until it changes": requireIntact, skipped when the
-/// checked-files cache (CheckCache::fromEnvironment) vouches that the file
-/// at `path` passed a check while it was in the state it is in now (device,
-/// inode, size, modification and status-change times of the file and of its
-/// -wal, header change counter, schema version; at most kCheckTrustSeconds
-/// ago). For Reading a pass is recorded when the file did not change while
-/// it was checked and had settled before (settledBefore); for Writing, and
-/// when the file is damaged, its entry is forgotten.
-void requireIntactOnce(sqlite3* db, const std::string& path, CheckPurpose purpose);
+/// Whether the checked-files cache vouches for the file at `path` as it lies
+/// now: requireIntactOnce would skip its check.
+bool checkVouchedFor(const std::string& path);
+
+/// The same rule before a write, under the write lock (inside BEGIN
+/// IMMEDIATE, so no other SQLite connection writes until the commit). When the
+/// cache vouches for the file as it lies now, no check runs and that state is
+/// returned: the caller carries the pass over to the state its commit leaves
+/// (carryCheckOver). Otherwise the quick check runs unless `checkedAlready`
+/// (it passed on this program's connections and no other connection has
+/// committed since), the file's entry is forgotten, and nothing is returned.
+std::optional<ColonyFileState> requireIntactBeforeWrite(sqlite3* db, const std::string& path, bool checkedAlready);
+
+/// This program changed the file at `path` from `before`, which the cache
+/// vouched for, to `after`, and no other program wrote meanwhile (the caller
+/// knows it: the write lock, `PRAGMA data_version`): records the pass for
+/// `after` (CheckCache::carryOver). False when the cache no longer vouches
+/// for `before`.
+bool carryCheckOver(const std::string& path, const ColonyFileState& before, const ColonyFileState& after);
 
 /// SQLite's full `PRAGMA integrity_check` (the quick check plus every index
 /// against its table) on the database behind `db`, whatever the cache says;

@@ -2,6 +2,7 @@
 #include "core/store/saved_scenarios.h"
 
 #include "core/store/sqlite_statement.h"
+#include "core/store/write_transaction.h"
 
 #include <stdexcept>
 
@@ -35,9 +36,13 @@ void saveScenarioText(ColonyStore& store, const std::string& name, const std::st
 
 void deleteSavedScenario(ColonyStore& store, const std::string& name)
 {
-    SqliteStatement st(store.handle(), "DELETE FROM setting WHERE key = ?1");
-    st.bind(1, kScenarioKeyPrefix + name);
-    st.run();
+    WriteTransaction tx(store);
+    {
+        SqliteStatement st(store.handle(), "DELETE FROM setting WHERE key = ?1");
+        st.bind(1, kScenarioKeyPrefix + name);
+        st.run();
+    }
+    tx.commit();
 }
 
 } // namespace hierloom::core

@@ -63,7 +63,8 @@ void WriteTransaction::commit()
         store_.exec(auditTriggerSql("encounter_support", "insert").c_str());
     }
     if (!nested_) countFileWrite(store_); // every -wal this program writes carries the file's identity
-    store_.exec(nested_ ? "RELEASE write_records" : "COMMIT");
+    if (nested_) store_.exec("RELEASE write_records");
+    else store_.commitWrite();
     done_ = true;
     restoreConnection();
 }

@@ -221,3 +221,49 @@ TEST(CliFileSafety, CheckReadsTheWholeFileWhateverAnEarlierCheckFound)
     EXPECT_NE(after.err.find(colony + ": is damaged ("), std::string::npos) << after.err;
     EXPECT_EQ(runCli({"check", dir.file("missing.hierloom")}).status, 2);
 }
+
+// The first open of a file (no pass in the checked-files cache) reads and
+// computes while the whole-file check runs alongside: the same output as a
+// trusted open, and nothing at all of a damaged file, whose refusal reads as
+// that of a check before reading (export's, which checks first).
+TEST(CliFileSafety, AFirstOpenComputesDuringTheCheckAndShowsNothingOfADamagedFile)
+{
+    using namespace hierloom::core;
+    CliTempDir dir;
+    const std::string colony = dir.file("d.hierloom");
+    ASSERT_EQ(runCli({"demo", colony}).status, 0);
+    auto now = [] { return std::chrono::system_clock::now().time_since_epoch(); };
+    while (!settledBefore(*colonyFileState(colony), std::chrono::nanoseconds(now()).count()))
+        std::this_thread::sleep_for(std::chrono::milliseconds(20));
+    const auto vouched = [&] {
+        return CheckCache::fromEnvironment().vouchesFor(
+            colony, *colonyFileState(colony), std::chrono::duration_cast<std::chrono::seconds>(now()).count());
+    };
+    const std::vector<std::vector<std::string>> commands = {
+        {"ranks", colony, "--method", "elo", "--group", "North Corral"},
+        {"stability", colony, "--group", "North Corral"},
+        {"inherit", colony, "--at", "2023-08-01", "--group", "North Corral"},
+        {"overview", colony}};
+    for (const auto& args : commands) {
+        CheckCache::fromEnvironment().forget(colony);
+        const CliResult first = runCli(args);
+        EXPECT_EQ(first.status, 0) << first.err;
+        EXPECT_TRUE(vouched()) << args[0]; // the check alongside passed and was recorded
+        const CliResult trusted = runCli(args);
+        EXPECT_EQ(first.out, trusted.out) << args[0];
+        EXPECT_EQ(first.err, trusted.err) << args[0];
+        EXPECT_FALSE(first.out.empty()) << args[0];
+    }
+    breakAnIndex(colony);
+    const CliResult exported = runCli({"export", colony, "--dir", dir.file("out")});
+    ASSERT_EQ(exported.status, 2);
+    ASSERT_EQ(exported.err.rfind("hierloom-cli: " + colony + ": is damaged (", 0), 0U) << exported.err;
+    for (auto args : commands) {
+        args.insert(args.end(), {"--out", dir.file("table.csv")});
+        const CliResult refused = runCli(args);
+        EXPECT_EQ(refused.status, exported.status) << args[0];
+        EXPECT_EQ(refused.err, exported.err) << args[0];
+        EXPECT_EQ(refused.out, "") << args[0];
+        EXPECT_FALSE(fs::exists(dir.file("table.csv"))) << args[0];
+    }
+}

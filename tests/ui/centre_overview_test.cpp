@@ -13,11 +13,14 @@
 #include "ui/planning/centre_overview_view.h"
 #include "ui/planning/stability_view.h"
 #include "ui/shell/main_window.h"
+#include "ui/widgets/figure_caption.h"
+#include "ui/widgets/plot_export.h"
 
 #include <QAbstractItemModel>
 #include <QApplication>
 #include <QComboBox>
 #include <QHeaderView>
+#include <QImage>
 #include <QLabel>
 #include <QLineEdit>
 #include <QProcess>
@@ -28,6 +31,8 @@
 #include <qcustomplot.h>
 
 #include <gtest/gtest.h>
+
+#include <cmath>
 
 using namespace hierloom;
 using hierloom::test::TempDir;
@@ -300,4 +305,38 @@ TEST(CentreOverview, AlertsExplainThemselvesWithTheCaution)
     const QString tip = m->data(m->index(0, ui::CentreOverviewModel::Alerts), Qt::ToolTipRole).toString();
     EXPECT_TRUE(tip.contains(QStringLiteral("veterinary"))) << tip.toStdString();
     EXPECT_FALSE(w.view->caution()->isHidden());
+}
+
+// The picture exports like every other plot (the same Export button), and in a
+// narrow window its legend wraps to the plot's width instead of being cut.
+TEST(CentreOverview, ThePictureExportsAndItsLegendFitsANarrowWindow)
+{
+    TempDir dir;
+    Window w(makeCentre(dir));
+    auto* button = w.view->findChild<ui::FigureExportButton*>();
+    ASSERT_NE(button, nullptr);
+    const ui::PlotFigure& figure = button->figure();
+    EXPECT_EQ(figure.plot, w.view->plot());
+    EXPECT_TRUE(ui::figureCaption(figure).startsWith(QStringLiteral("on 2024-03-31 · "))) << ui::figureCaption(figure).toStdString();
+    for (const bool doubleColumn : {false, true}) {
+        const QString png = QString::fromStdString(dir.file(doubleColumn ? "double.png" : "single.png"));
+        ASSERT_TRUE(ui::exportFigure(figure, png, figure.size(doubleColumn, 150)));
+        const QImage image(png);
+        EXPECT_NEAR(image.width(), (doubleColumn ? 175 : 85) / 25.4 * 150, 1.0);
+    }
+    QCustomPlot* plot = w.view->plot();
+    for (const int width : {1600, 1024, 800}) {
+        w.window.resize(width, 700);
+        QApplication::processEvents();
+        plot->replot();
+        const QRect legend = plot->legend->outerRect();
+        EXPECT_GE(legend.left(), 0) << width;
+        EXPECT_LE(legend.right(), plot->viewport().right()) << width << " px: legend " << legend.width()
+                                                             << " px wide in a plot of " << plot->width();
+    }
+    ui::fitLegendToWidth(plot->legend, 120); // narrower than any two entries side by side
+    EXPECT_EQ(plot->legend->wrap(), 1);
+    plot->replot(); // the view fits it to the plot's width again
+    EXPECT_GT(plot->legend->wrap(), 1);
+    EXPECT_LE(plot->legend->outerRect().right(), plot->viewport().right());
 }

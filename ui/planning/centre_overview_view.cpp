@@ -9,7 +9,9 @@
 #include "ui/document/reading_connection.h"
 #include "ui/document/visible_refresh.h"
 #include "ui/widgets/caution_label.h"
+#include "ui/widgets/figure_caption.h"
 #include "ui/widgets/help_button.h"
+#include "ui/widgets/plot_export.h"
 #include "ui/widgets/plot_palette.h"
 #include "ui/widgets/progress_strip.h"
 #include "ui/widgets/typed_date.h"
@@ -25,6 +27,7 @@
 
 #include <qcustomplot.h>
 
+#include <algorithm>
 #include <cmath>
 #include <mutex>
 
@@ -77,6 +80,19 @@ CentreOverviewView::CentreOverviewView(ColonyDocument* document, QWidget* parent
         controls->addWidget(new HelpButton(QString::fromLatin1(key), this));
     controls->addWidget(progress_, 1);
     controls->addStretch();
+    PlotFigure figure;
+    figure.plot = plot_;
+    figure.baseName = QStringLiteral("centre-overview");
+    figure.title = tr("Centre overview");
+    figure.caption = [this] {
+        const std::optional<core::Day> day = model_->day();
+        return caption::join({day ? tr("on %1").arg(formatDay(*day)) : QString(),
+                              tr("encounters of each group in the 30 days up to the day"),
+                              tr("colour: the stability watch's last month")});
+    };
+    // One bar per group: the figure grows with the groups, within a page.
+    figure.height = [this](bool) { return std::clamp(35.0 + 4.5 * static_cast<double>(plotted_.size()), 70.0, 230.0); };
+    controls->addWidget(makeExportButton(figure, this));
 
     sorted_->setSourceModel(model_);
     sorted_->setSortRole(CentreOverviewModel::SortRole);
@@ -115,6 +131,11 @@ CentreOverviewView::CentreOverviewView(ColonyDocument* document, QWidget* parent
     plot_->plotLayout()->setRowStretchFactor(0, 0.001);
     plot_->legend->setFillOrder(QCPLegend::foColumnsFirst);
     plot_->legend->setVisible(true);
+    // In a narrow window the legend wraps to the plot's width instead of being cut at its sides.
+    connect(plot_, &QCustomPlot::beforeReplot, this, [this] {
+        const QMargins m = plot_->plotLayout()->margins();
+        fitLegendToWidth(plot_->legend, plot_->viewport().width() - m.left() - m.right());
+    });
     plot_->setMinimumWidth(360);
     followPlotPalette(plot_);
 

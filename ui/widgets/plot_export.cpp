@@ -159,7 +159,7 @@ public:
                     parent->addElement(row, column, legend);
                 });
             }
-            fitLegend(legend, viewport.width() - 8);
+            fitLegendToWidth(legend, viewport.width() - 8);
         }
         // First wrapped to the first column's share of the page, then to the width that column got.
         const double lineWidth = (viewport.width() - 12.0) / std::max(1, plot->plotLayout()->columnCount());
@@ -210,28 +210,6 @@ private:
         lines_.push_back(line);
     }
 
-    /// The most legend columns whose widest entries fit in `width`.
-    static void fitLegend(QCPLegend* legend, int width)
-    {
-        const std::vector<QCPAbstractLegendItem*> items = legendItems(legend);
-        const int n = static_cast<int>(items.size());
-        if (n == 0) return;
-        for (int columns = n; columns >= 1; --columns) {
-            std::vector<int> widest(static_cast<size_t>(columns), 0);
-            for (int i = 0; i < n; ++i)
-                widest[static_cast<size_t>(i % columns)] =
-                    std::max(widest[static_cast<size_t>(i % columns)],
-                             items[static_cast<size_t>(i)]->minimumOuterSizeHint().width());
-            int total = legend->margins().left() + legend->margins().right() + (columns - 1) * legend->columnSpacing();
-            for (int w : widest) total += w;
-            if (total <= width || columns == 1) {
-                legend->setWrap(columns);
-                legend->setFillOrder(QCPLayoutGrid::foColumnsFirst, true);
-                return;
-            }
-        }
-    }
-
     /// Fewer ticks on short or narrow axes, so their labels stay apart.
     void fitTickCounts()
     {
@@ -264,6 +242,27 @@ private:
 };
 
 } // namespace
+
+void fitLegendToWidth(QCPLegend* legend, int width)
+{
+    const std::vector<QCPAbstractLegendItem*> items = legendItems(legend);
+    const int n = static_cast<int>(items.size());
+    if (n == 0) return;
+    for (int columns = n; columns >= 1; --columns) {
+        std::vector<int> widest(static_cast<size_t>(columns), 0);
+        for (int i = 0; i < n; ++i)
+            widest[static_cast<size_t>(i % columns)] =
+                std::max(widest[static_cast<size_t>(i % columns)], items[static_cast<size_t>(i)]->minimumOuterSizeHint().width());
+        int total = legend->margins().left() + legend->margins().right() + (columns - 1) * legend->columnSpacing();
+        for (int w : widest) total += w;
+        if (total <= width || columns == 1) {
+            if (legend->wrap() == columns && legend->fillOrder() == QCPLayoutGrid::foColumnsFirst) return;
+            legend->setWrap(columns);
+            legend->setFillOrder(QCPLayoutGrid::foColumnsFirst, true);
+            return;
+        }
+    }
+}
 
 void fitLegendToHeight(QCPLegend* legend, int height)
 {

@@ -86,6 +86,11 @@ private:
 
 QToolButton* makeExportButton(const PlotFigure& figure, QWidget* parent);
 
+/// Arranges a legend above or below a plot in as many columns as fit in
+/// `width` pixels (at least one), filled row by row: a legend wider than its
+/// plot wraps instead of being cut at the sides.
+void fitLegendToWidth(QCPLegend* legend, int width);
+
 /// Arranges a legend beside a plot in as many columns as it needs so that no
 /// entry falls below `height` pixels (the plot's height): a long legend is
 /// never clipped.

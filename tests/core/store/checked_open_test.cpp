@@ -3,7 +3,8 @@
 // core/store/integrity_check.h): a read-only open skips the whole-file check
 // only while the file is as it was when the check passed; a byte changed by
 // another program is refused at the next open, even with its modification time
-// put back; a write by this program forgets the pass; the forced check always
+// put back; a write by this program keeps the pass only when the file was
+// trusted as the write began and nobody else wrote; the forced check always
 // reads everything. Each test process has its own cache (private_cache_folder.h).
 #include "core/store/check_cache.h"
 #include "core/store/colony_store.h"
@@ -101,6 +102,16 @@ void expectRefusedAsDamaged(const std::string& path)
     }
 }
 
+/// The checked_at field of the file's line in the checked-files cache.
+std::string checkTimeOf(const std::string& path)
+{
+    const std::string text = hierloom::test::fileBytes(CheckCache::fromEnvironment().filePath());
+    const auto at = text.find("\t" + path + "\n");
+    if (at == std::string::npos) return {};
+    const auto start = text.rfind('\n', at) + 1;
+    return text.substr(start, text.find('\t', start) - start);
+}
+
 struct timespec mtimeOf(const std::string& path)
 {
     struct stat st {};
@@ -125,12 +136,123 @@ TEST(CheckedOpen, APassIsRecordedOnlyForAFileThatHadSettledAndHeldStill)
     waitUntilSettled(path);
     ColonyStore::open(path, ColonyStore::Mode::ReadOnly);
     EXPECT_TRUE(cacheVouches(path));
-    // Opening for writing neither checks nor forgets; the first write forgets.
+    // Opening for writing neither checks nor forgets.
     ColonyStore store = ColonyStore::open(path);
     EXPECT_TRUE(cacheVouches(path));
-    store.append({}, {}, hierloom::test::twoAnimalEncounters(1));
+}
+
+TEST(CheckedOpen, WritesOfThisProgramToATrustedFileKeepItTrusted)
+{
+    TempDir dir;
+    const std::string path = dir.file("c.hierloom");
+    hierloom::test::twoAnimalColony(path, 20);
+    waitUntilSettled(path);
+    ColonyStore::open(path, ColonyStore::Mode::ReadOnly);
+    ASSERT_TRUE(cacheVouches(path));
+    const std::string checkedAt = checkTimeOf(path);
+    {
+        ColonyStore store = ColonyStore::open(path);
+        store.append({}, {}, hierloom::test::twoAnimalEncounters(1));
+        EXPECT_TRUE(colonyFileState(path)->wal); // the commit is in the -wal, which the pass now covers
+        EXPECT_TRUE(cacheVouches(path));
+        store.addObserver("GW");
+        store.append({}, {}, hierloom::test::twoAnimalEncounters(ColonyStore::kBulkEncounters + 1), "bulk");
+        EXPECT_TRUE(cacheVouches(path));
+    }
+    // The last connection's close copied the -wal into the file and deleted it.
+    EXPECT_FALSE(colonyFileState(path)->wal);
+    EXPECT_TRUE(cacheVouches(path));
+    EXPECT_EQ(checkTimeOf(path), checkedAt); // a week after the check it is checked again, writes or not
+    {
+        // A reader open meanwhile (as the desktop's background connection): the
+        // writer's close leaves the -wal to it. (The reader opens first: SQLite
+        // running as root gives the -wal the file's owner at every open, which
+        // moves the -wal's status-change time.)
+        const ColonyStore reader = ColonyStore::open(path, ColonyStore::Mode::ReadOnly);
+        {
+            ColonyStore store = ColonyStore::open(path);
+            store.append({}, {}, hierloom::test::twoAnimalEncounters(2));
+        }
+        EXPECT_TRUE(colonyFileState(path)->wal);
+        EXPECT_TRUE(cacheVouches(path));
+        EXPECT_EQ(reader.encounterCount(), 20 + 1 + ColonyStore::kBulkEncounters + 1 + 2);
+    }
+    EXPECT_TRUE(cacheVouches(path));
+    EXPECT_EQ(ColonyStore::open(path, ColonyStore::Mode::ReadOnly).encounterCount(),
+              20 + 1 + ColonyStore::kBulkEncounters + 1 + 2);
+}
+
+TEST(CheckedOpen, AWriteToAFileNotTrustedAsItBeganLeavesItUntrusted)
+{
+    TempDir dir;
+    const std::string path = dir.file("c.hierloom");
+    hierloom::test::twoAnimalColony(path, 20);
+    // Never checked: the write checks it and the next open checks again.
+    ColonyStore::open(path).append({}, {}, hierloom::test::twoAnimalEncounters(1));
+    EXPECT_FALSE(cacheVouches(path));
+    // The same bytes written back from outside, the modification time put back:
+    // only the status-change time moves, and that is enough.
+    waitUntilSettled(path);
+    ColonyStore::open(path, ColonyStore::Mode::ReadOnly);
+    ASSERT_TRUE(cacheVouches(path));
+    const struct timespec before = mtimeOf(path);
+    {
+        const std::string bytes = hierloom::test::fileBytes(path);
+        std::fstream f(path, std::ios::in | std::ios::out | std::ios::binary);
+        f.seekp(16384);
+        f.write(bytes.data() + 16384, 100);
+    }
+    const struct timespec times[2] = {{0, UTIME_OMIT}, before};
+    ASSERT_EQ(::utimensat(AT_FDCWD, path.c_str(), times, 0), 0);
+    ColonyStore::open(path).append({}, {}, hierloom::test::twoAnimalEncounters(1));
     EXPECT_FALSE(cacheVouches(path));
     EXPECT_EQ(hierloom::test::fileBytes(CheckCache::fromEnvironment().filePath()).find(path), std::string::npos);
+}
+
+TEST(CheckedOpen, AnotherConnectionsWriteLosesTheTrust)
+{
+    TempDir dir;
+    const std::string path = dir.file("c.hierloom");
+    hierloom::test::twoAnimalColony(path, 20);
+    auto trustNow = [&] {
+        waitUntilSettled(path);
+        ColonyStore::open(path, ColonyStore::Mode::ReadOnly);
+        ASSERT_TRUE(cacheVouches(path));
+    };
+    int outsideWrites = 0;
+    auto writeWithSqlite = [&] {
+        sqlite3* db = nullptr;
+        ASSERT_EQ(sqlite3_open_v2(path.c_str(), &db, SQLITE_OPEN_READWRITE, nullptr), SQLITE_OK);
+        const std::string sql = "INSERT INTO observer(name) VALUES ('other " + std::to_string(++outsideWrites) + "')";
+        EXPECT_EQ(sqlite3_exec(db, sql.c_str(), nullptr, nullptr, nullptr), SQLITE_OK);
+        sqlite3_close(db);
+    };
+    // Between the pass and this program's write.
+    trustNow();
+    writeWithSqlite();
+    ColonyStore::open(path).append({}, {}, hierloom::test::twoAnimalEncounters(1));
+    EXPECT_FALSE(cacheVouches(path));
+    // Between this program's commit and its close.
+    trustNow();
+    {
+        ColonyStore store = ColonyStore::open(path);
+        store.append({}, {}, hierloom::test::twoAnimalEncounters(1));
+        ASSERT_TRUE(cacheVouches(path));
+        writeWithSqlite();
+        EXPECT_FALSE(cacheVouches(path));
+    }
+    EXPECT_FALSE(cacheVouches(path));
+    // Between two writes of one connection.
+    trustNow();
+    {
+        ColonyStore store = ColonyStore::open(path);
+        store.append({}, {}, hierloom::test::twoAnimalEncounters(1));
+        writeWithSqlite();
+        store.append({}, {}, hierloom::test::twoAnimalEncounters(1));
+        EXPECT_FALSE(cacheVouches(path));
+    }
+    EXPECT_FALSE(cacheVouches(path));
+    EXPECT_EQ(ColonyStore::open(path, ColonyStore::Mode::ReadOnly).observers().size(), 3U);
 }
 
 TEST(CheckedOpen, AByteChangedAfterAPassingOpenIsRefusedAtTheNextOpen)
@@ -246,7 +368,7 @@ TEST(CheckedOpen, OpensAndWritesSucceedExactlyWhenTheFileIsSound)
     std::mt19937_64 rng(1717);
     bool damaged = false;
     std::int64_t encounters = 30, goodEncounters = 30;
-    int trustedOpens = 0, refusedOpens = 0;
+    int trustedOpens = 0, refusedOpens = 0, keptTrust = 0;
     for (int step = 0; step < 150; ++step) {
         // Four in ten steps are read-only opens, two pauses, one in ten each of the others.
         const int draw = static_cast<int>(rng() % 10);
@@ -264,13 +386,16 @@ TEST(CheckedOpen, OpensAndWritesSucceedExactlyWhenTheFileIsSound)
                           static_cast<std::size_t>(encounters));
             }
         } else if (op == 2) { // a write by this program
-            ColonyStore store = ColonyStore::open(path);
+            const bool trusted = cacheVouches(path);
             if (damaged) {
-                EXPECT_THROW(store.append({}, {}, hierloom::test::twoAnimalEncounters(1)), ColonyFileError);
+                EXPECT_FALSE(trusted);
+                EXPECT_THROW(ColonyStore::open(path).append({}, {}, hierloom::test::twoAnimalEncounters(1)),
+                             ColonyFileError);
             } else {
-                store.append({}, {}, hierloom::test::twoAnimalEncounters(1));
+                ColonyStore::open(path).append({}, {}, hierloom::test::twoAnimalEncounters(1)); // and closes
                 ++encounters;
-                EXPECT_FALSE(cacheVouches(path));
+                keptTrust += trusted;
+                EXPECT_EQ(cacheVouches(path), trusted); // trusted after the write only if trusted before
             }
         } else if (op == 3) { // the forced check
             if (damaged) EXPECT_THROW(ColonyStore::openVerified(path), ColonyFileError);
@@ -298,4 +423,5 @@ TEST(CheckedOpen, OpensAndWritesSucceedExactlyWhenTheFileIsSound)
     // The sequence did exercise opens the cache vouched for, and refusals.
     EXPECT_GE(trustedOpens, 5);
     EXPECT_GE(refusedOpens, 5);
+    EXPECT_GE(keptTrust, 2);
 }

@@ -2,7 +2,11 @@
 // Crash safety (issue 9): a child process runs the real import (importFiles:
 // read, check every row, one transaction) and is killed with SIGKILL at
 // seeded random moments; after each kill the file must pass
-// `PRAGMA integrity_check` and hold either none or all of the import.
+// `PRAGMA integrity_check` and hold either none or all of the import. The
+// file is trusted by the checked-files cache as each import begins; a kill
+// while the import writes its transaction leaves it untrusted, and a file
+// left trusted passes the check.
+#include "core/store/check_cache.h"
 #include "core/store/colony_import.h"
 #include "core/store/colony_store.h"
 #include "core/base/csv_reader.h"
@@ -98,10 +102,25 @@ std::int64_t fileSize(const std::string& path)
     return ec ? 0 : static_cast<std::int64_t>(n);
 }
 
+std::int64_t nowSeconds()
+{
+    return std::chrono::duration_cast<std::chrono::seconds>(std::chrono::system_clock::now().time_since_epoch())
+        .count();
+}
+
+/// A copy of the sound file `from`, recorded in the checked-files cache as checked.
 void freshCopy(const std::string& from, const std::string& to)
 {
     for (const char* suffix : {"", "-wal", "-shm"}) std::filesystem::remove(to + suffix);
     std::filesystem::copy_file(from, to);
+    CheckCache::fromEnvironment().record(to, *colonyFileState(to), nowSeconds());
+}
+
+/// Whether the checked-files cache vouches for the file as the import left it (before any recovery).
+bool trusted(const std::string& path)
+{
+    const auto s = colonyFileState(path);
+    return s && CheckCache::fromEnvironment().vouchesFor(path, *s, nowSeconds());
 }
 
 } // namespace
@@ -138,6 +157,7 @@ TEST(ColonyCrash, KilledImportLeavesTheWholeImportOrNoneOfIt)
     }
     const double fullSeconds = std::chrono::duration<double>(Clock::now() - t0).count();
     const std::int64_t finalSize = fileSize(colony);
+    EXPECT_TRUE(trusted(colony)); // a whole import keeps the pass it began with
     ASSERT_EQ(inspect(colony).encounters, crashRows);
     ASSERT_GT(walPeak, 0);
 
@@ -149,7 +169,7 @@ TEST(ColonyCrash, KilledImportLeavesTheWholeImportOrNoneOfIt)
     std::uniform_real_distribution<double> when(0.9 * planSeconds, 1.05 * fullSeconds);
     std::uniform_real_distribution<double> part(0.02, 0.98);
     const int killPoints = 12;
-    int none = 0, whole = 0, walLeft = 0;
+    int none = 0, whole = 0, walLeft = 0, stillTrusted = 0;
     for (int k = 0; k < killPoints; ++k) {
         freshCopy(base, colony);
         const int kind = k % 3;
@@ -176,7 +196,16 @@ TEST(ColonyCrash, KilledImportLeavesTheWholeImportOrNoneOfIt)
             ::waitpid(pid, &status, 0);
         }
         if (fileSize(colony + "-wal") > 0) ++walLeft;
+        const bool vouched = trusted(colony);
+        // Killed while writing its transaction: the file is not as any pass saw it.
+        if (!exited && kind == 1) {
+            EXPECT_FALSE(vouched) << "kill point " << k;
+        }
+        stillTrusted += vouched;
         const FileState s = inspect(colony);
+        if (vouched) {
+            EXPECT_EQ(s.integrity, "ok") << "a file left trusted fails the check, kill point " << k;
+        }
         EXPECT_EQ(s.integrity, "ok") << "kill point " << k << " (kind " << kind << ")";
         EXPECT_TRUE(s.encounters == 0 || s.encounters == crashRows)
             << "kill point " << k << " (kind " << kind << ") left " << s.encounters << " encounters";
@@ -185,8 +214,9 @@ TEST(ColonyCrash, KilledImportLeavesTheWholeImportOrNoneOfIt)
         EXPECT_NO_THROW(ColonyStore::open(colony).loadAnimals());
     }
     std::printf("[ crash    ] %ld rows, plan %.2f s, import %.2f s, -wal peak %lld bytes; %d kill points: %d left "
-                "no import, %d the whole import, %d left a -wal file to recover\n",
-                crashRows, planSeconds, fullSeconds, static_cast<long long>(walPeak), killPoints, none, whole, walLeft);
+                "no import, %d the whole import, %d left a -wal file to recover, %d still trusted\n",
+                crashRows, planSeconds, fullSeconds, static_cast<long long>(walPeak), killPoints, none, whole, walLeft,
+                stillTrusted);
     RecordProperty("kill_points", killPoints);
     EXPECT_EQ(none + whole, killPoints);
 }
