@@ -5,6 +5,7 @@
 #include "core/store/colony_backup.h"
 #include "core/store/colony_csv_export.h"
 #include "core/store/colony_import.h"
+#include "core/store/colony_schema.h"
 #include "core/store/colony_store.h"
 #include "core/base/csv_reader.h"
 #include "core/store/saved_mappings.h"
@@ -22,6 +23,22 @@
 namespace hierloom::cli {
 
 using namespace hierloom::core;
+
+namespace {
+
+/// What a refused import says of the colony file. Its records are always as
+/// they were; a file of an older version was updated by the open for writing
+/// (as every such open does) and its old form kept beside it, which the
+/// message says instead of "unchanged".
+std::string nothingImported(const std::string& colony, int versionBefore)
+{
+    if (versionBefore >= currentSchemaVersion) return "nothing was imported; " + colony + " is unchanged";
+    return "nothing was imported; the records of " + colony + " are unchanged (the file was first updated from file "
+           "version " + std::to_string(versionBefore) + " to " + std::to_string(currentSchemaVersion) +
+           "; the file as it was is kept as " + colony + ".v" + std::to_string(versionBefore) + ".bak)";
+}
+
+} // namespace
 
 void addInitCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
 {
@@ -79,6 +96,7 @@ void addImportCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
                 throw BadInputError("import: --dates and --save-mapping need --mapping");
             if (!o->saveAs.empty() && o->mapping.empty())
                 throw BadInputError("import: --save-mapping saves a --mapping file");
+            const int versionBefore = probeColonyFile(o->colony);
             ColonyStore store = ColonyStore::open(o->colony);
             ImportMapping mapping;
             std::string mappingText;
@@ -104,7 +122,7 @@ void addImportCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
                 MappingFile file = readMappingFile(name, mappingText);
                 if (!file.ok()) {
                     ctx.err << file.problems.text();
-                    throw BadInputError("nothing was imported; " + o->colony + " is unchanged");
+                    throw BadInputError(nothingImported(o->colony, versionBefore));
                 }
                 mapping = std::move(file.mapping);
                 if (!o->dates.empty()) mapping.dates = *parseDateOrder(o->dates);
@@ -134,7 +152,7 @@ void addImportCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
             }
             if (!result.ok()) {
                 ctx.err << result.problems.text();
-                throw BadInputError("nothing was imported; " + o->colony + " is unchanged");
+                throw BadInputError(nothingImported(o->colony, versionBefore));
             }
             if (!o->saveAs.empty()) ctx.err << "saved the mapping as '" << o->saveAs << "' in " << o->colony << "\n";
             ctx.err << "imported " << result.animals << " animals, " << result.residences

@@ -1,6 +1,9 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "cli_test_support.h"
+#include "core/store/colony_schema.h"
 #include "core/store/colony_store.h"
+
+#include <sqlite3.h>
 
 #include <gtest/gtest.h>
 
@@ -95,4 +98,44 @@ TEST(CliFiles, OutFileIsWrittenWhole)
     ASSERT_GT(rows.size(), 10U);
     EXPECT_EQ(rows[0], "animal,rank,score,start_rule"); // Elo tables end with the start rule used
     EXPECT_FALSE(std::filesystem::exists(dir.file("ranks.csv.part")));
+}
+
+TEST(CliFiles, ARefusedImportIntoAnOlderFileSaysTheFileWasUpdated)
+{
+    // A version-1 file as that program wrote it: two animals, one encounter.
+    CliTempDir dir;
+    const std::string colony = dir.file("old.hierloom");
+    sqlite3* db = nullptr;
+    ASSERT_EQ(sqlite3_open(colony.c_str(), &db), SQLITE_OK);
+    const std::string sql =
+        std::string("BEGIN;") + hierloom::core::schemaVersion1Sql() +
+        "INSERT INTO animal(uid, id, sex, entry_date, entry_type) VALUES "
+        "('11111111-1111-4111-8111-111111111111', 'F1', 'F', '2010-01-01', 'founder'),"
+        "('22222222-2222-4222-8222-222222222222', 'M1', 'M', '2010-01-01', 'founder');"
+        "INSERT INTO encounter(seq, uid, date, winner, loser, grp) VALUES "
+        "(1, '55555555-5555-4555-8555-555555555555', '2011-01-01', 'F1', 'M1', 'main');"
+        "PRAGMA application_id = " + std::to_string(hierloom::core::colonyApplicationId) +
+        "; PRAGMA user_version = 1; COMMIT;";
+    ASSERT_EQ(sqlite3_exec(db, sql.c_str(), nullptr, nullptr, nullptr), SQLITE_OK) << sqlite3_errmsg(db);
+    sqlite3_close(db);
+    const std::string bad = dir.write("bad.csv", "date,winner,loser\n2011-02-30,F1,M1\n");
+
+    const CliResult r = runCli({"import", colony, "--encounters", bad});
+    EXPECT_EQ(r.status, 2);
+    EXPECT_NE(r.err.find("bad.csv:2: date:"), std::string::npos) << r.err;
+    // Not "unchanged": the open for writing updated the file and kept its old form.
+    EXPECT_EQ(r.err.find(colony + " is unchanged"), std::string::npos) << r.err;
+    EXPECT_NE(r.err.find("the records of " + colony + " are unchanged (the file was first updated from file version 1 "
+                         "to " + std::to_string(hierloom::core::currentSchemaVersion)),
+              std::string::npos)
+        << r.err;
+    EXPECT_TRUE(std::filesystem::exists(colony + ".v1.bak"));
+    EXPECT_EQ(hierloom::core::probeColonyFile(colony), hierloom::core::currentSchemaVersion);
+
+    // A second refused import into the now current file is "unchanged", byte for byte.
+    const std::string before = CliTempDir::read(colony);
+    const CliResult again = runCli({"import", colony, "--encounters", bad});
+    EXPECT_EQ(again.status, 2);
+    EXPECT_NE(again.err.find("nothing was imported; " + colony + " is unchanged"), std::string::npos) << again.err;
+    EXPECT_EQ(CliTempDir::read(colony), before);
 }
