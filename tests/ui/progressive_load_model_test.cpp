@@ -21,6 +21,7 @@
 #include "core/store/colony_edits.h"
 
 #include "tests/ui/facade_test_support.h"
+#include "tests/ui/two_group_encounters.h"
 
 #include <QCoreApplication>
 #include <QSignalSpy>
@@ -35,8 +36,6 @@ using hierloom::test::TempDir;
 
 namespace {
 
-const std::vector<std::string> kGroupA = {"F1", "F2", "D1", "D2"};
-const std::vector<std::string> kGroupB = {"M1", "G1"};
 
 core::EncounterScope groupScope(const std::string& group)
 {
@@ -105,16 +104,8 @@ private:
 
     core::Encounter randomEncounter()
     {
-        const auto& group = uniform(0, 1) ? kGroupA : kGroupB;
-        core::Encounter e;
-        e.date = core::dayFromCivil(2018, 1, 1) + uniform(0, 2500);
-        const size_t w = static_cast<size_t>(uniform(0, static_cast<int>(group.size()) - 1));
-        size_t l = static_cast<size_t>(uniform(0, static_cast<int>(group.size()) - 2));
-        if (l >= w) ++l;
-        e.winner = group[w];
-        e.loser = group[l];
-        e.observer = "GW";
-        return e;
+        const auto& group = uniform(0, 1) ? test::kGroupA : test::kGroupB;
+        return test::randomEncounterIn(random_, group, core::dayFromCivil(2018, 1, 1), 2500);
     }
 
     void reopen()

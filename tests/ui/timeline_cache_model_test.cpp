@@ -20,6 +20,7 @@
 #include "core/store/colony_edits.h"
 
 #include "tests/ui/facade_test_support.h"
+#include "tests/ui/two_group_encounters.h"
 
 #include <QCoreApplication>
 
@@ -33,8 +34,6 @@ using hierloom::test::TempDir;
 
 namespace {
 
-const std::vector<std::string> kGroupA = {"F1", "F2", "D1", "D2"};
-const std::vector<std::string> kGroupB = {"M1", "G1"};
 
 /// Every figure of a timeline as one comparable text (numbers exact).
 std::string timelineText(const core::RankTimeline& t)
@@ -103,16 +102,8 @@ private:
 
     core::Encounter randomEncounter()
     {
-        const auto& group = uniform(0, 2) ? kGroupA : kGroupB;
-        core::Encounter e;
-        e.date = core::dayFromCivil(2019, 1, 1) + uniform(0, 2000);
-        const size_t w = static_cast<size_t>(uniform(0, static_cast<int>(group.size()) - 1));
-        size_t l = static_cast<size_t>(uniform(0, static_cast<int>(group.size()) - 2));
-        if (l >= w) ++l;
-        e.winner = group[w];
-        e.loser = group[l];
-        e.observer = "GW";
-        return e;
+        const auto& group = uniform(0, 2) ? test::kGroupA : test::kGroupB;
+        return test::randomEncounterIn(random_, group, core::dayFromCivil(2019, 1, 1), 2000);
     }
 
     void turn()

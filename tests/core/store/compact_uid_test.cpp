@@ -8,6 +8,8 @@
 #include "core/store/record_history.h"
 #include "core/store/uid_storage.h"
 #include "import_test_support.h"
+#include "file_queries.h"
+#include "killed_open.h"
 
 #include <gtest/gtest.h>
 #include <sqlite3.h>
@@ -21,31 +23,13 @@
 #include <unistd.h>
 
 using namespace hierloom::core;
+using hierloom::test::scalar;
+using hierloom::test::scalarOfFile;
 using hierloom::test::TempDir;
 
 namespace {
 
 Day day(const char* text) { return *parseDate(text); }
-
-std::string scalar(sqlite3* db, const std::string& sql)
-{
-    sqlite3_stmt* q = nullptr;
-    sqlite3_prepare_v2(db, sql.c_str(), -1, &q, nullptr);
-    std::string out = "<none>";
-    if (q && sqlite3_step(q) == SQLITE_ROW)
-        out = sqlite3_column_type(q, 0) == SQLITE_NULL ? "NULL" : reinterpret_cast<const char*>(sqlite3_column_text(q, 0));
-    sqlite3_finalize(q);
-    return out;
-}
-
-std::string scalarOfFile(const std::string& path, const std::string& sql)
-{
-    sqlite3* db = nullptr;
-    sqlite3_open_v2(path.c_str(), &db, SQLITE_OPEN_READONLY, nullptr);
-    std::string out = scalar(db, sql);
-    sqlite3_close(db);
-    return out;
-}
 
 /// The schema SQL as programs before version 4 wrote it: the audit triggers
 /// put the uid column itself (then always text) into the audit row.
@@ -314,18 +298,7 @@ TEST(CompactUid, AKilledMigrationLeavesTheOldFileOrTheWholeNewOne)
     for (int round = 0; round < 6; ++round) {
         SCOPED_TRACE(round);
         const std::string path = writeLargeVersion3File(dir, "r" + std::to_string(round) + ".hierloom", n);
-        const pid_t pid = ::fork();
-        if (pid == 0) {
-            try {
-                ColonyStore::open(path);
-            } catch (...) {
-            }
-            ::_exit(0);
-        }
-        std::this_thread::sleep_for(std::chrono::duration<double>(std::uniform_real_distribution<>(0.0, full)(rng)));
-        ::kill(pid, SIGKILL);
-        int status = 0;
-        ::waitpid(pid, &status, 0);
+        hierloom::test::openAndKillAtRandomMoment(path, full, rng);
         const std::string version = scalarOfFile(path, "PRAGMA user_version");
         EXPECT_EQ(scalarOfFile(path, "PRAGMA integrity_check"), "ok");
         if (version == "3") {
