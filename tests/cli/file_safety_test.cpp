@@ -65,6 +65,19 @@ void breakAnIndex(const std::string& path)
     f.write(&bad, 1);
 }
 
+/// Writes the demo colony and waits until its state has settled (its time
+/// stamps are older than now), so the checked-files cache may vouch for it.
+std::string settledDemo(const CliTempDir& dir)
+{
+    const std::string colony = dir.file("d.hierloom");
+    EXPECT_EQ(runCli({"demo", colony}).status, 0);
+    const auto now = [] { return std::chrono::system_clock::now().time_since_epoch(); };
+    while (!hierloom::core::settledBefore(*hierloom::core::colonyFileState(colony),
+                                          std::chrono::nanoseconds(now()).count()))
+        std::this_thread::sleep_for(std::chrono::milliseconds(20));
+    return colony;
+}
+
 } // namespace
 
 TEST(CliFileSafety, EveryFloatingOptionRefusesNanAndInfinities)
@@ -197,11 +210,9 @@ TEST(CliFileSafety, CheckReadsTheWholeFileWhateverAnEarlierCheckFound)
 {
     using namespace hierloom::core;
     CliTempDir dir;
-    const std::string colony = dir.file("d.hierloom");
-    ASSERT_EQ(runCli({"demo", colony}).status, 0);
+    const std::string colony = settledDemo(dir);
+    ASSERT_FALSE(::testing::Test::HasFailure());
     auto now = [] { return std::chrono::system_clock::now().time_since_epoch(); };
-    while (!settledBefore(*colonyFileState(colony), std::chrono::nanoseconds(now()).count()))
-        std::this_thread::sleep_for(std::chrono::milliseconds(20));
     const CliResult intact = runCli({"check", colony});
     EXPECT_EQ(intact.status, 0) << intact.err;
     EXPECT_EQ(intact.err, colony + ": intact (SQLite's integrity check of the whole file found no problem)\n");
@@ -230,11 +241,9 @@ TEST(CliFileSafety, AFirstOpenComputesDuringTheCheckAndShowsNothingOfADamagedFil
 {
     using namespace hierloom::core;
     CliTempDir dir;
-    const std::string colony = dir.file("d.hierloom");
-    ASSERT_EQ(runCli({"demo", colony}).status, 0);
+    const std::string colony = settledDemo(dir);
+    ASSERT_FALSE(::testing::Test::HasFailure());
     auto now = [] { return std::chrono::system_clock::now().time_since_epoch(); };
-    while (!settledBefore(*colonyFileState(colony), std::chrono::nanoseconds(now()).count()))
-        std::this_thread::sleep_for(std::chrono::milliseconds(20));
     const auto vouched = [&] {
         return CheckCache::fromEnvironment().vouchesFor(
             colony, *colonyFileState(colony), std::chrono::duration_cast<std::chrono::seconds>(now()).count());
