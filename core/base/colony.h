@@ -91,6 +91,10 @@ bool encounterBefore(const Encounter& a, const Encounter& b);
 
 /// Indices of `encounters` in analysis order.
 std::vector<size_t> chronologicalOrder(const std::vector<Encounter>& encounters);
+/// The indices `subset` of `encounters` (ascending) in analysis order: the
+/// same order as chronologicalOrder(encounters) keeps them in, at the cost of
+/// the subset (one group's rows of a whole centre) rather than of every row.
+std::vector<size_t> chronologicalOrder(const std::vector<Encounter>& encounters, std::vector<size_t> subset);
 
 const char* toString(Sex s);
 const char* toString(EntryType t);

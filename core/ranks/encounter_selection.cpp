@@ -18,8 +18,11 @@ EncounterSelection selectEncounters(const Colony& colony, const ResidenceIndex& 
 {
     EncounterSelection sel;
     const int groupIndex = o.group.empty() ? -1 : where.group(o.group);
+    // Each row is kept or not on its own, so the rows are picked first and
+    // only the picked ones are put in analysis order (one group of a centre
+    // costs its own rows' sort, not the whole file's).
     std::vector<size_t> picked;
-    for (size_t i : chronologicalOrder(colony.encounters)) {
+    for (size_t i = 0; i < colony.encounters.size(); ++i) {
         const Encounter& e = colony.encounters[i];
         if (o.from && e.date < *o.from) continue;
         if (o.to && e.date > *o.to) continue;
@@ -35,6 +38,7 @@ EncounterSelection selectEncounters(const Colony& colony, const ResidenceIndex& 
         }
         picked.push_back(i);
     }
+    picked = chronologicalOrder(colony.encounters, std::move(picked));
     // Distinct ids first (a million encounters name a few hundred animals), then sorted.
     std::unordered_set<std::string_view> distinct;
     for (size_t i : picked) {

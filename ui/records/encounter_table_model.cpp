@@ -21,13 +21,12 @@ void EncounterTableModel::rebuild()
 {
     const auto& encounters = document_->colony().encounters;
     const ColonyDocument::Change& change = document_->lastChange();
-    if (change.kind == ColonyDocument::ChangeKind::EncountersAppended && change.firstAppended == newestFirst_.size()) {
+    if (change.kind == ColonyDocument::ChangeKind::EncountersAppended && change.firstAppended == known_) {
         // An evening entry appends a row: place it (and tell the view of one
         // inserted row) instead of re-sorting and resetting a million.
         const auto newer = [&](size_t a, size_t b) { return core::encounterBefore(encounters[b], encounters[a]); };
         for (size_t i = change.firstAppended; i < encounters.size(); ++i) {
-            newestFirst_.insert(std::upper_bound(newestFirst_.begin(), newestFirst_.end(), i, newer), i);
-            if (filter_ == EncounterFilter{} || filter_.accepts(encounters[i])) {
+            if (filter_.accepts(encounters[i])) {
                 const auto at = std::upper_bound(rows_.begin(), rows_.end(), i, newer);
                 const int row = static_cast<int>(at - rows_.begin());
                 beginInsertRows(QModelIndex(), row, row);
@@ -38,15 +37,15 @@ void EncounterTableModel::rebuild()
             const auto o = std::lower_bound(observers_.begin(), observers_.end(), name);
             if (o == observers_.end() || *o != name) observers_.insert(o, name);
         }
+        known_ = encounters.size();
         return;
     }
     if (change.kind == ColonyDocument::ChangeKind::AnimalsChanged || change.kind == ColonyDocument::ChangeKind::ListsChanged ||
         change.kind == ColonyDocument::ChangeKind::SettingsChanged) {
-        if (newestFirst_.size() == encounters.size()) return; // the encounters are as they were
+        if (known_ == encounters.size()) return; // the encounters are as they were
     }
     beginResetModel();
-    newestFirst_ = core::chronologicalOrder(encounters);
-    std::reverse(newestFirst_.begin(), newestFirst_.end());
+    known_ = encounters.size();
     std::set<std::string_view> names;
     for (const core::Encounter& e : encounters) names.insert(e.observer);
     observers_.clear();
@@ -66,14 +65,14 @@ void EncounterTableModel::setFilter(const EncounterFilter& filter)
 
 void EncounterTableModel::applyFilter()
 {
+    // The rows shown are picked first and only they are sorted: a group's
+    // log in a file kept group by group sorts that group, not every row held.
     const auto& encounters = document_->colony().encounters;
-    rows_.clear();
-    if (filter_ == EncounterFilter{}) {
-        rows_ = newestFirst_;
-        return;
-    }
-    for (size_t i : newestFirst_)
-        if (filter_.accepts(encounters[i])) rows_.push_back(i);
+    std::vector<size_t> shown;
+    for (size_t i = 0; i < encounters.size(); ++i)
+        if (filter_.accepts(encounters[i])) shown.push_back(i);
+    rows_ = core::chronologicalOrder(encounters, std::move(shown));
+    std::reverse(rows_.begin(), rows_.end());
 }
 
 const core::Encounter& EncounterTableModel::encounterAt(int row) const

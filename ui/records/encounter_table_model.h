@@ -31,7 +31,7 @@ public:
     const EncounterFilter& filter() const { return filter_; }
 
     /// Every encounter of the colony, whether shown or not.
-    int totalCount() const { return static_cast<int>(newestFirst_.size()); }
+    int totalCount() const { return static_cast<int>(known_); }
     /// The encounter shown in a row.
     const core::Encounter& encounterAt(int row) const;
     /// Distinct observers, sorted, for the observer choice.
@@ -43,8 +43,8 @@ private:
 
     const ColonyDocument* document_;
     EncounterFilter filter_;
-    std::vector<size_t> newestFirst_; // indices into colony().encounters
-    std::vector<size_t> rows_;        // the filtered subset, still newest first
+    size_t known_ = 0;         // colony().encounters.size() when rows_ was last made
+    std::vector<size_t> rows_; // indices into colony().encounters of the rows shown, newest first
     QStringList observers_;
 };
 

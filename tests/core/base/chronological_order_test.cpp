@@ -34,3 +34,26 @@ TEST(ChronologicalOrder, EqualsAStableSortByTheDefinition)
     sorted[2].date = 2;
     EXPECT_EQ(chronologicalOrder(sorted), (std::vector<size_t>{0, 1, 2}));
 }
+
+TEST(ChronologicalOrder, OfASubsetKeepsTheWholeOrdersRelativeOrder)
+{
+    // Reference: the whole file's order, restricted to the subset (what
+    // selectEncounters did before it picked rows first and sorted only those).
+    std::mt19937 rng(23);
+    for (int round = 0; round < 50; ++round) {
+        std::vector<Encounter> encounters(1 + rng() % 300);
+        for (Encounter& e : encounters) {
+            e.date = -3 + static_cast<Day>(rng() % 8);
+            if (rng() % 3 != 0) e.time = static_cast<int>(rng() % 4) * 480;
+            e.seq = static_cast<std::int64_t>(rng() % 5);
+        }
+        std::vector<size_t> subset;
+        for (size_t i = 0; i < encounters.size(); ++i)
+            if (rng() % 3 == 0) subset.push_back(i);
+        std::vector<size_t> expected;
+        for (size_t i : chronologicalOrder(encounters))
+            if (std::binary_search(subset.begin(), subset.end(), i)) expected.push_back(i);
+        EXPECT_EQ(chronologicalOrder(encounters, subset), expected) << "round " << round;
+    }
+    EXPECT_TRUE(chronologicalOrder(std::vector<Encounter>(4), {}).empty());
+}
