@@ -196,21 +196,32 @@ std::map<std::string, RankFlag> rankFlags(const CompactEncounters& encounters, s
     return flagsOf(encounterCounts(encounters, from, to, group), minEncounters);
 }
 
-std::map<std::string, double> eloIntervalWidths(const Colony& colony, const ResidenceIndex& where,
-                                                const HealthOptions& o, const std::atomic<bool>* cancel)
+EncounterSelection eloIntervalSelection(const Colony& colony, const ResidenceIndex& where, const HealthOptions& o)
 {
-    std::map<std::string, double> widths;
-    if (o.randomisations <= 0) return widths;
     SelectionOptions sel;
     sel.from = o.from;
     sel.to = o.to.value_or(o.today);
     sel.group = o.group;
     sel.draws = o.elo.draws;
-    const EncounterSelection s = selectEncounters(colony, where, sel);
+    return selectEncounters(colony, where, sel);
+}
+
+std::map<std::string, double> eloIntervalWidths(const EncounterSelection& s, const HealthOptions& o,
+                                                const std::atomic<bool>* cancel)
+{
+    std::map<std::string, double> widths;
+    if (o.randomisations <= 0) return widths;
     const std::vector<RandomisedEloRow> rows = randomisedElo(s.size(), s.bouts, o.elo, o.randomisations, o.seed, o.threads, cancel);
     for (size_t i = 0; i < rows.size(); ++i)
         if (rows[i].rated) widths[s.ids[i]] = rows[i].high - rows[i].low;
     return widths;
+}
+
+std::map<std::string, double> eloIntervalWidths(const Colony& colony, const ResidenceIndex& where,
+                                                const HealthOptions& o, const std::atomic<bool>* cancel)
+{
+    if (o.randomisations <= 0) return {};
+    return eloIntervalWidths(eloIntervalSelection(colony, where, o), o, cancel);
 }
 
 DataHealth dataHealth(const Colony& colony, const ResidenceIndex& where, const HealthOptions& o,

@@ -2,6 +2,7 @@
 #pragma once
 #include "core/base/calendar_period.h"
 #include "core/base/colony.h"
+#include "core/ranks/encounter_selection.h"
 #include "core/base/compact_encounters.h"
 #include "core/base/residence_index.h"
 #include "core/ranks/elo_rating.h"
@@ -155,6 +156,12 @@ std::vector<std::map<std::string, RankFlag>> periodRankFlags(const CompactEncoun
 /// randomisations or when `cancel` was set (a view's worker gives up).
 std::map<std::string, double> eloIntervalWidths(const Colony& colony, const ResidenceIndex& where,
                                                 const HealthOptions& options,
+                                                const std::atomic<bool>* cancel = nullptr);
+/// The selection eloIntervalWidths draws from (its window, group and draws
+/// policy), and the widths of a selection so made: a worker may select, let
+/// go of the colony, then randomise.
+EncounterSelection eloIntervalSelection(const Colony& colony, const ResidenceIndex& where, const HealthOptions& options);
+std::map<std::string, double> eloIntervalWidths(const EncounterSelection& selection, const HealthOptions& options,
                                                 const std::atomic<bool>* cancel = nullptr);
 
 /// Counted encounters per animal id in a window and group (both animals of

@@ -57,8 +57,12 @@ void RankFlagWatch::request(std::optional<core::Day> from, std::optional<core::D
         }
     }
     const ColonyDocument::Snapshot snapshot = document_->snapshot();
-    runner_->start([this, snapshot, o, key, revision, keep](const std::atomic<bool>& cancel, const ComputeRunner::Progress&) {
-        auto widths = std::make_shared<const Widths>(core::eloIntervalWidths(*snapshot.colony, *snapshot.residences, o, &cancel));
+    runner_->start([this, snapshot = snapshot, o, key, revision, keep](const std::atomic<bool>& cancel, const ComputeRunner::Progress&) mutable {
+        // The rows picked, the document's records are let go before the long
+        // part: an edit meanwhile need not copy them (colony_document.h, snapshot()).
+        const core::EncounterSelection picked = core::eloIntervalSelection(*snapshot.colony, *snapshot.residences, o);
+        snapshot = {};
+        auto widths = std::make_shared<const Widths>(core::eloIntervalWidths(picked, o, &cancel));
         return ComputeRunner::Apply([this, widths, key, revision, keep] {
             // Records changed meanwhile: these widths are not theirs.
             if (document_->revision() != revision) return;

@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "ui/planning/stability_badge.h"
 
+#include "core/base/compact_encounters.h"
 #include "core/pedigree/matriline.h"
 #include "ui/widgets/caution_label.h"
 #include "ui/document/colony_document.h"
@@ -55,15 +56,22 @@ void StabilityBadge::refresh()
         checks.push_back({g,
                           {documentStabilityOptions(document_, g, core::PeriodLength::Week),
                            documentStabilityOptions(document_, g, core::PeriodLength::Month)}});
-    runner_->start([this, snapshot, checks](const std::atomic<bool>& cancel, const ComputeRunner::Progress& progress) {
+    runner_->start([this, snapshot = snapshot, checks](const std::atomic<bool>& cancel, const ComputeRunner::Progress& progress) mutable {
+        // A compact copy of the records first, then the document's records are
+        // let go: the check of every group takes long on a centre, and an edit
+        // meanwhile need not copy them (colony_document.h, snapshot()).
         const core::Matrilines lines(*snapshot.colony);
+        const core::CompactEncounters records = core::compactEncounters(snapshot.colony->encounters);
+        const std::vector<core::Animal> animals = snapshot.colony->animals;
+        const std::shared_ptr<const core::ResidenceIndex> where = snapshot.residences;
+        snapshot = {};
         QStringList groups, evidence;
         int done = 0;
         for (const auto& [group, options] : checks) {
             bool alerted = false;
             for (const core::StabilityOptions& o : options) {
                 if (cancel) return ComputeRunner::Apply{};
-                const core::StabilitySeries s = core::stabilityWatch(*snapshot.colony, *snapshot.residences, lines, o);
+                const core::StabilitySeries s = core::stabilityWatch(records, animals, *where, lines, o);
                 for (const core::StabilityAlert& a : s.latestAlerts()) {
                     alerted = true;
                     evidence << QStringLiteral("%1: %2").arg(toQString(group), toQString(core::describeAlert(s, a)));
