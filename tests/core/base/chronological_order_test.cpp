@@ -57,3 +57,33 @@ TEST(ChronologicalOrder, OfASubsetKeepsTheWholeOrdersRelativeOrder)
     }
     EXPECT_TRUE(chronologicalOrder(std::vector<Encounter>(4), {}).empty());
 }
+
+TEST(ChronologicalOrder, DatesAlreadyAscendingTimesNot)
+{
+    // Records of several groups entered day by day: the dates ascend, the
+    // times within a day do not (the day-by-day sort's case). Reference: the
+    // stable sort by the definition, whole and restricted to a subset.
+    std::mt19937 rng(29);
+    for (int round = 0; round < 50; ++round) {
+        std::vector<Encounter> encounters(1 + rng() % 300);
+        Day day = -2;
+        for (Encounter& e : encounters) {
+            if (rng() % 4 == 0) day += 1 + static_cast<Day>(rng() % 2);
+            e.date = day;
+            if (rng() % 3 != 0) e.time = static_cast<int>(rng() % 5) * 300;
+            e.seq = static_cast<std::int64_t>(rng() % 7); // ties too
+        }
+        std::vector<size_t> expected(encounters.size());
+        std::iota(expected.begin(), expected.end(), size_t{0});
+        std::stable_sort(expected.begin(), expected.end(),
+                         [&](size_t a, size_t b) { return encounterBefore(encounters[a], encounters[b]); });
+        EXPECT_EQ(chronologicalOrder(encounters), expected) << "round " << round;
+        std::vector<size_t> subset;
+        for (size_t i = 0; i < encounters.size(); ++i)
+            if (rng() % 2 == 0) subset.push_back(i);
+        std::vector<size_t> part;
+        for (size_t i : expected)
+            if (std::binary_search(subset.begin(), subset.end(), i)) part.push_back(i);
+        EXPECT_EQ(chronologicalOrder(encounters, subset), part) << "round " << round;
+    }
+}
