@@ -561,6 +561,26 @@ std::vector<Encounter> ColonyStore::loadEncounters() const
     return out;
 }
 
+std::vector<Encounter> ColonyStore::loadEncounterRange(std::int64_t first, std::int64_t last) const
+{
+    SqliteStatement q(db_, (std::string("SELECT ") + kEncounterColumnsSql +
+                            " FROM encounter_row WHERE seq BETWEEN ?1 AND ?2 ORDER BY seq").c_str());
+    q.bind(1, first);
+    q.bind(2, last);
+    const EncounterTermTexts terms(db_, path_);
+    std::vector<Encounter> out;
+    while (q.step()) out.push_back(readEncounterRow(q, terms, path_));
+    loadSupportRows(db_, out);
+    return out;
+}
+
+std::optional<std::pair<std::int64_t, std::int64_t>> ColonyStore::encounterSeqRange() const
+{
+    SqliteStatement q(db_, "SELECT min(seq), max(seq) FROM encounter_row");
+    if (!q.step() || q.isNull(0)) return std::nullopt;
+    return std::pair{q.integer(0), q.integer(1)};
+}
+
 std::string encounterScopeSql(const EncounterScope& scope)
 {
     std::string sql;

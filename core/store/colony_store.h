@@ -7,6 +7,7 @@
 #include <cstdint>
 #include <functional>
 #include <optional>
+#include <utility>
 #include <string>
 #include <unordered_set>
 #include <vector>
@@ -84,6 +85,11 @@ public:
     std::vector<Encounter> loadEncounters() const;
     /// The encounters of a scope, in entry order (seq ascending).
     std::vector<Encounter> loadEncounters(const EncounterScope& scope) const;
+    /// The encounters whose seq lies in [first, last], in entry order: a
+    /// whole file read in parts along its primary key (no sort, no scope).
+    std::vector<Encounter> loadEncounterRange(std::int64_t first, std::int64_t last) const;
+    /// The lowest and the highest seq of the file's encounters; none when it has none.
+    std::optional<std::pair<std::int64_t, std::int64_t>> encounterSeqRange() const;
     /// The date of the file's latest encounter (every group), if any.
     std::optional<Day> lastEncounterDay() const;
     /// Everything: animals, residences and encounters.

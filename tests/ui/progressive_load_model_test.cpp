@@ -241,10 +241,10 @@ TEST(ProgressiveLoad, OpensWithOneGroupThenReadsEveryEncounterInTheBackground)
     EXPECT_FALSE(document.isLoading());
     EXPECT_EQ(document.colony().encounters.size(), 30u);
     EXPECT_EQ(finished.count(), 1);
-    // One report per group, the last one "2 of 2".
-    ASSERT_EQ(progress.count(), 2);
-    EXPECT_EQ(progress.back().at(0).toInt(), 2);
-    EXPECT_EQ(progress.back().at(1).toInt(), 2);
+    // One report per part: 30 rows are one part, "1 of 1".
+    ASSERT_EQ(progress.count(), 1);
+    EXPECT_EQ(progress.back().at(0).toInt(), 1);
+    EXPECT_EQ(progress.back().at(1).toInt(), 1);
 
     // Closing while a load runs stops it: nothing arrives afterwards.
     document.open(ui::toQString(path));

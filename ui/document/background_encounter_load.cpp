@@ -9,11 +9,15 @@
 namespace hierloom::ui {
 
 
-BackgroundEncounterLoad::BackgroundEncounterLoad(std::string path, std::vector<std::string> groups,
-                                                 std::int64_t expected, Progress progress, Done done)
+BackgroundEncounterLoad::BackgroundEncounterLoad(std::string path, std::int64_t expected, Progress progress, Done done)
 {
-    thread_ = std::thread(&BackgroundEncounterLoad::run, this, std::move(path), std::move(groups), expected,
-                          std::move(progress), std::move(done));
+    thread_ = std::thread(&BackgroundEncounterLoad::run, this, std::move(path), expected, std::move(progress),
+                          std::move(done));
+}
+
+int BackgroundEncounterLoad::partsFor(std::int64_t encounters)
+{
+    return static_cast<int>(std::clamp<std::int64_t>(encounters / 50000 + 1, 1, 100));
 }
 
 BackgroundEncounterLoad::~BackgroundEncounterLoad() { cancel(); }
@@ -24,8 +28,7 @@ void BackgroundEncounterLoad::cancel()
     if (thread_.joinable()) thread_.join();
 }
 
-void BackgroundEncounterLoad::run(std::string path, std::vector<std::string> groups, std::int64_t expected,
-                                  Progress progress, Done done)
+void BackgroundEncounterLoad::run(std::string path, std::int64_t expected, Progress progress, Done done)
 {
     try {
         core::ColonyStore store = core::ColonyStore::open(path, core::ColonyStore::Mode::ReadOnly);
@@ -36,21 +39,25 @@ void BackgroundEncounterLoad::run(std::string path, std::vector<std::string> gro
         }
         auto all = std::make_shared<std::vector<core::Encounter>>();
         all->reserve(static_cast<size_t>(std::max<std::int64_t>(expected, 0)) + 4096);
-        const int total = static_cast<int>(groups.size());
-        for (int i = 0; i < total; ++i) {
-            if (cancelled_) return;
-            std::vector<core::Encounter> part = store.loadEncounters(core::EncounterScope{.group = groups[static_cast<size_t>(i)]});
-            std::move(part.begin(), part.end(), std::back_inserter(*all));
-            progress(i + 1, total);
+        // Equal spans of seq: each part is one range of the primary key, its
+        // rows already in entry order, so the parts only append (no sort of
+        // millions of records, no row read twice).
+        const int total = partsFor(expected);
+        if (const auto range = store.encounterSeqRange()) {
+            const auto [low, high] = *range;
+            const std::int64_t span = (high - low) / total + 1;
+            for (int i = 0; i < total; ++i) {
+                if (cancelled_) return;
+                const std::int64_t first = low + span * i;
+                std::vector<core::Encounter> part = store.loadEncounterRange(first, std::min(high, first + span - 1));
+                std::move(part.begin(), part.end(), std::back_inserter(*all));
+                progress(i + 1, total);
+            }
+        } else {
+            progress(total, total);
         }
         if (cancelled_) return;
-        // A row without a group is in the scope of every group its winner lived in: keep one.
-        const auto bySeq = [](const core::Encounter& a, const core::Encounter& b) { return a.seq < b.seq; };
-        std::sort(all->begin(), all->end(), bySeq);
-        all->erase(std::unique(all->begin(), all->end(),
-                               [](const core::Encounter& a, const core::Encounter& b) { return a.seq == b.seq; }),
-                   all->end());
-        // The groups did not reach every row (or the file changed meanwhile): read it whole.
+        // Another program wrote while the parts were read: read it whole.
         if (static_cast<std::int64_t>(all->size()) != store.encounterCount()) {
             all->clear();
             *all = store.loadEncounters();

@@ -13,26 +13,28 @@
 namespace hierloom::ui {
 
 /// Reads every encounter of a colony file on a thread of its own, through a
-/// read-only connection of its own, one group at a time (the encounter_by_group
-/// index), so a large file opens with one group shown while the rest arrives.
-/// The callbacks run on that thread; the owner passes them on to its own.
-/// Destroying the load cancels it and waits for the thread (a query in
-/// progress is interrupted within a few thousand SQLite steps).
+/// read-only connection of its own, in parts along the primary key (seq), so
+/// a large file opens with one group shown while the rest arrives with
+/// progress. The callbacks run on that thread; the owner passes them on to
+/// its own. Destroying the load cancels it and waits for the thread (a query
+/// in progress is interrupted within a few thousand SQLite steps).
 class BackgroundEncounterLoad {
 public:
     using Encounters = std::shared_ptr<std::vector<core::Encounter>>;
-    /// After each group: groups read so far, of `total`.
+    /// After each part: parts read so far, of `total` (partsFor(expected)).
     using Progress = std::function<void(int done, int total)>;
     /// Once, unless cancelled: every encounter in seq order, or an error message (encounters null).
     using Done = std::function<void(Encounters encounters, const std::string& error)>;
 
-    /// `groups`: the file's groups; `expected`: its encounter count when the load
-    /// began; a negative `expected` only opens the file (the read-only open runs
-    /// `PRAGMA quick_check`) and calls `done` with no encounters and no error. Encounters no group scope reaches (rows without a group whose winner
-    /// never lived in one) are caught by comparing the count: the file is then
-    /// read whole once more.
-    BackgroundEncounterLoad(std::string path, std::vector<std::string> groups, std::int64_t expected,
-                            Progress progress, Done done);
+    /// How many parts a file of `encounters` is read in (about 50,000 rows each, 1 to 100).
+    static int partsFor(std::int64_t encounters);
+
+    /// `expected`: the file's encounter count when the load began; a negative
+    /// `expected` only opens the file (the read-only open runs `PRAGMA
+    /// quick_check`) and calls `done` with no encounters and no error. When
+    /// the count read differs from the file's at the end (another program
+    /// wrote meanwhile), the file is read whole once more.
+    BackgroundEncounterLoad(std::string path, std::int64_t expected, Progress progress, Done done);
     ~BackgroundEncounterLoad();
     BackgroundEncounterLoad(const BackgroundEncounterLoad&) = delete;
     BackgroundEncounterLoad& operator=(const BackgroundEncounterLoad&) = delete;
@@ -41,7 +43,7 @@ public:
     void cancel();
 
 private:
-    void run(std::string path, std::vector<std::string> groups, std::int64_t expected, Progress progress, Done done);
+    void run(std::string path, std::int64_t expected, Progress progress, Done done);
 
     std::atomic<bool> cancelled_{false};
     std::thread thread_;

@@ -169,7 +169,7 @@ void ColonyDocument::startBackgroundCheck()
             },
             Qt::QueuedConnection);
     };
-    checker_ = std::make_unique<BackgroundEncounterLoad>(store_->path(), std::vector<std::string>{}, -1,
+    checker_ = std::make_unique<BackgroundEncounterLoad>(store_->path(), -1,
                                                          [](int, int) {}, std::move(done));
 }
 
@@ -177,7 +177,7 @@ void ColonyDocument::readEverything()
 {
     if (!store_ || complete_ || loader_) return;
     startBackgroundLoad();
-    emit loadProgress(0, static_cast<int>(residences_.groups().size()));
+    emit loadProgress(0, BackgroundEncounterLoad::partsFor(store_->encounterCount()));
 }
 
 std::vector<std::string> ColonyDocument::dropOldGroups()
@@ -223,7 +223,7 @@ void ColonyDocument::startBackgroundLoad()
             },
             Qt::QueuedConnection);
     };
-    loader_ = std::make_unique<BackgroundEncounterLoad>(store_->path(), residences_.groups(), store_->encounterCount(),
+    loader_ = std::make_unique<BackgroundEncounterLoad>(store_->path(), store_->encounterCount(),
                                                         std::move(progress), std::move(finished));
 }
 

@@ -172,7 +172,7 @@ signals:
     void historyStepped(bool undone, const QString& text);
     /// A view with a group choice should turn to `group` (showGroup).
     void groupShown(const QString& group);
-    /// The background load of a large file: `done` of `total` groups read.
+    /// The background load of a large file: `done` of `total` parts read (BackgroundEncounterLoad::partsFor).
     void loadProgress(int done, int total);
     /// Every encounter is now in the cache (an EncountersChanged came just before).
     void loadFinished();

@@ -33,7 +33,7 @@ LoadProgress::LoadProgress(ColonyDocument* document, QWidget* parent)
         update();
         bar_->setRange(0, total);
         bar_->setValue(done);
-        bar_->setToolTip(tr("%1 of %2 groups read").arg(done).arg(total));
+        bar_->setToolTip(tr("%1% of the encounters read").arg(total > 0 ? done * 100 / total : 100));
     });
     update();
 }
