@@ -272,6 +272,9 @@ void RankTimelineView::showComputing()
     computingText_->setText(group_.isEmpty() ? tr("Computing the ranks of every group…")
                                              : tr("Computing the ranks in %1…").arg(group_));
     computingText_->setColor(plot_->xAxis->labelColor()); // the plot's own text colour (light or dark plots)
+    // Empty axes without numbers: their range is not the group's yet (before a first result, dates of 1970).
+    plot_->xAxis->setTickLabels(false);
+    plot_->yAxis->setTickLabels(false);
     plot_->replot(QCustomPlot::rpQueuedReplot);
 }
 
@@ -441,6 +444,8 @@ void RankTimelineView::rebuildPlot()
         const double from = keyOf(timeline_.checkpoints.front()), to = keyOf(timeline_.checkpoints.back());
         plot_->xAxis->setRange(from - 20 * 86400.0, to + 20 * 86400.0);
     }
+    plot_->xAxis->setTickLabels(!timeline_.checkpoints.empty()); // no dates of 1970 on an empty timeline
+    plot_->yAxis->setTickLabels(true);
     applyFilters();
     if (scale_ == Scale::Elo) {
         bool found = false;
