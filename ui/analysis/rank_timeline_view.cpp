@@ -99,7 +99,6 @@ RankTimelineView::RankTimelineView(ColonyDocument* document, AnimalSelection* se
     controls->addWidget(groupBox_);
     controls->addWidget(ageBox_);
     controls->addWidget(marksBox_);
-    controls->addWidget(progress_, 1);
     controls->addStretch();
     PlotFigure figure;
     figure.plot = plot_;
@@ -134,6 +133,7 @@ RankTimelineView::RankTimelineView(ColonyDocument* document, AnimalSelection* se
     dateLabel_->setMinimumWidth(90);
     auto* layout = new QVBoxLayout(this);
     layout->addLayout(controls);
+    layout->addWidget(progress_); // a row of its own while computing: the controls keep their width
     layout->addWidget(split, 1);
     layout->addWidget(flagLegend_);
     layout->addLayout(dates);

@@ -135,11 +135,14 @@ SexRatioView::SexRatioView(ColonyEditFacade* facade, QWidget* parent)
     maturity_->setSuffix(tr(" years"));
     save_->setToolTip(tr("Store the species, gestation length and maturity age in the colony file"));
 
+    // Two rows, so the view fits a small screen: the species and its gestation, then the rest.
+    auto* species = new QHBoxLayout;
+    species->addWidget(new QLabel(tr("Species:"), this));
+    species->addWidget(species_);
+    species->addWidget(new QLabel(tr("Gestation:"), this));
+    species->addWidget(gestation_);
+    species->addStretch();
     auto* controls = new QHBoxLayout;
-    controls->addWidget(new QLabel(tr("Species:"), this));
-    controls->addWidget(species_);
-    controls->addWidget(new QLabel(tr("Gestation:"), this));
-    controls->addWidget(gestation_);
     controls->addWidget(new QLabel(tr("Females ranked from:"), this));
     controls->addWidget(maturity_);
     controls->addWidget(new HelpButton(QStringLiteral("maternal_rank"), this));
@@ -192,6 +195,7 @@ SexRatioView::SexRatioView(ColonyEditFacade* facade, QWidget* parent)
     split->setStretchFactor(1, 2);
 
     auto* layout = new QVBoxLayout(this);
+    layout->addLayout(species);
     layout->addLayout(controls);
     layout->addWidget(message_);
     layout->addWidget(split, 1);

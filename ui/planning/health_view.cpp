@@ -97,14 +97,17 @@ HealthView::HealthView(ColonyDocument* document, QWidget* parent)
     controls->addWidget(from_);
     controls->addWidget(new QLabel(tr("To:"), this));
     controls->addWidget(to_);
-    controls->addWidget(new QLabel(tr("Not seen for more than (days):"), this));
-    controls->addWidget(unseenDays_);
-    controls->addWidget(new QLabel(tr("Fewest encounters for a rank:"), this));
-    controls->addWidget(minEncounters_);
-    controls->addWidget(new QLabel(tr("Match within (min):"), this));
-    controls->addWidget(matchMinutes_);
     controls->addWidget(new HelpButton(QStringLiteral("data_health"), this));
     controls->addStretch();
+    // The thresholds in a second row, so the view fits a small screen.
+    auto* thresholds = new QHBoxLayout;
+    thresholds->addWidget(new QLabel(tr("Not seen for more than (days):"), this));
+    thresholds->addWidget(unseenDays_);
+    thresholds->addWidget(new QLabel(tr("Fewest encounters for a rank:"), this));
+    thresholds->addWidget(minEncounters_);
+    thresholds->addWidget(new QLabel(tr("Match within (min):"), this));
+    thresholds->addWidget(matchMinutes_);
+    thresholds->addStretch();
     problem_->setObjectName(QStringLiteral("healthProblem"));
     problem_->setStyleSheet(QStringLiteral("QLabel { color: #b00000; }"));
     problem_->hide();
@@ -123,6 +126,7 @@ HealthView::HealthView(ColonyDocument* document, QWidget* parent)
 
     auto* layout = new QVBoxLayout(this);
     layout->addLayout(controls);
+    layout->addLayout(thresholds);
     layout->addWidget(problem_);
     layout->addWidget(progress_);
     layout->addWidget(banner_);
