@@ -86,6 +86,7 @@ MatrixView::MatrixView(ColonyDocument* document, QWidget* parent)
 {
     flagLegend_->setObjectName(QStringLiteral("matrixFlagLegend"));
     flagLegend_->setWordWrap(true);
+    summary_->setWordWrap(true); // its method name and counts must not widen the view
     for (const core::RankMethodInfo& m : core::rankMethods())
         methodBox_->addItem(QCoreApplication::translate("hierloom::core::RankMethod", m.displayName),
                             QString::fromLatin1(m.code));
