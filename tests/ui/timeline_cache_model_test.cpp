@@ -24,6 +24,8 @@
 
 #include <QCoreApplication>
 
+#include <qcustomplot.h>
+
 #include <gtest/gtest.h>
 
 #include <random>
@@ -241,10 +243,16 @@ TEST(TimelineCacheModel, TurningBackToAGroupShowsItsTimelineAtOnce)
     ui::RankTimelineView view(&document, &selection);
     view.setGroup(QStringLiteral("A"));
     EXPECT_TRUE(view.isComputing()) << "another group: the plot says it is computing until the result arrives";
+    // Its empty axes show no ticks of a range that is not the group's (dates of 1970 before any result).
+    EXPECT_FALSE(view.plot()->xAxis->tickLabels());
+    EXPECT_FALSE(view.plot()->yAxis->tickLabels());
     view.runner()->wait();
     EXPECT_FALSE(view.isComputing());
+    EXPECT_TRUE(view.plot()->xAxis->tickLabels());
     const std::string a = timelineText(view.timeline());
     view.setGroup(QStringLiteral("B"));
+    EXPECT_TRUE(view.isComputing());
+    EXPECT_FALSE(view.plot()->xAxis->tickLabels()) << "nor group A's dates while B is computed";
     view.runner()->wait();
     const std::string b = timelineText(view.timeline());
     EXPECT_NE(a, b);

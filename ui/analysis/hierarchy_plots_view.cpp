@@ -56,7 +56,6 @@ HierarchyPlotsView::HierarchyPlotsView(ColonyDocument* document, QWidget* parent
     // One "?" per figure plotted, in the order of the panels.
     for (const char* key : {"h_prime", "steepness", "ttri", "conformity"})
         controls->addWidget(new HelpButton(QString::fromLatin1(key), this));
-    controls->addWidget(progress_, 1);
     controls->addStretch();
     PlotFigure figure;
     figure.plot = plot_;
@@ -80,6 +79,7 @@ HierarchyPlotsView::HierarchyPlotsView(ColonyDocument* document, QWidget* parent
     controls->addWidget(makeExportButton(figure, this));
     auto* layout = new QVBoxLayout(this);
     layout->addLayout(controls);
+    layout->addWidget(progress_); // a row of its own while computing: the controls keep their width
     layout->addWidget(plot_, 1);
     layout->addWidget(flagLine_);
 
@@ -93,6 +93,9 @@ HierarchyPlotsView::HierarchyPlotsView(ColonyDocument* document, QWidget* parent
     plot_->legend->setLayer(QStringLiteral("legend"));
     plot_->legend->setFillOrder(QCPLegend::foColumnsFirst);
     plot_->legend->setVisible(true);
+    // The five long names in one row held the plot at 1051 px: they wrap to its width instead.
+    wrapLegendToPlotWidth(plot_);
+    plot_->setMinimumWidth(400);
     plot_->plotLayout()->setRowStretchFactor(0, 0.001);
     auto* margins = new QCPMarginGroup(plot_);
     const QString labels[] = {tr("h'"), tr("Steepness"), tr("t_tri"), tr("Conformity"), tr("Encounters")};

@@ -86,6 +86,7 @@ MatrixView::MatrixView(ColonyDocument* document, QWidget* parent)
 {
     flagLegend_->setObjectName(QStringLiteral("matrixFlagLegend"));
     flagLegend_->setWordWrap(true);
+    summary_->setWordWrap(true); // its method name and counts must not widen the view
     for (const core::RankMethodInfo& m : core::rankMethods())
         methodBox_->addItem(QCoreApplication::translate("hierloom::core::RankMethod", m.displayName),
                             QString::fromLatin1(m.code));
@@ -116,7 +117,6 @@ MatrixView::MatrixView(ColonyDocument* document, QWidget* parent)
     controls->addWidget(new QLabel(tr("To:"), this));
     controls->addWidget(toEdit_);
     controls->addWidget(groupBox_);
-    controls->addWidget(progress_, 1);
     controls->addStretch();
     auto* fit = new QToolButton(this);
     fit->setObjectName(QStringLiteral("matrixFit"));
@@ -162,6 +162,7 @@ MatrixView::MatrixView(ColonyDocument* document, QWidget* parent)
     controls->addWidget(makeExportButton(figure, this));
     auto* layout = new QVBoxLayout(this);
     layout->addLayout(controls);
+    layout->addWidget(progress_); // a row of its own while computing: the controls keep their width
     layout->addWidget(plot_, 1);
     layout->addWidget(summary_);
     layout->addWidget(flagLegend_);
@@ -190,6 +191,8 @@ MatrixView::MatrixView(ColonyDocument* document, QWidget* parent)
     plot_->plotLayout()->setRowStretchFactor(1, 0.001);
     legendRow->addElement(0, 0, plot_->legend);
     plot_->legend->setFillOrder(QCPLegend::foColumnsFirst);
+    wrapLegendToPlotWidth(plot_);
+    plot_->setMinimumWidth(300);
     plot_->setMouseTracking(true);
     plot_->setInteractions(QCP::iRangeDrag | QCP::iRangeZoom);
 

@@ -72,7 +72,6 @@ PredictionView::PredictionView(ColonyDocument* document, AnimalSelection* select
     controls->addWidget(ruleBox_);
     for (const char* key : {"conformity", "tau_b", "discordant_dyads"})
         controls->addWidget(new HelpButton(QString::fromLatin1(key), this));
-    controls->addWidget(progress_, 1);
     controls->addStretch();
     PlotFigure figure;
     figure.plot = plot_;
@@ -155,6 +154,8 @@ PredictionView::PredictionView(ColonyDocument* document, AnimalSelection* select
     QFont small = font();
     small.setPointSizeF(small.pointSizeF() * 0.8);
     foresightPlot_->legend->setFont(small);
+    wrapLegendToPlotWidth(foresightPlot_);
+    foresightPlot_->setMinimumWidth(250);
     sideLayout->addWidget(foresightPlot_, 1);
     auto* split = new QSplitter(Qt::Horizontal, this);
     split->addWidget(plot_);
@@ -165,6 +166,7 @@ PredictionView::PredictionView(ColonyDocument* document, AnimalSelection* select
     split->setChildrenCollapsible(false);
     auto* layout = new QVBoxLayout(this);
     layout->addLayout(controls);
+    layout->addWidget(progress_); // a row of its own while computing: the controls keep their width
     layout->addWidget(split, 1);
 
     plot_->yAxis->setRangeReversed(true);
@@ -182,6 +184,9 @@ PredictionView::PredictionView(ColonyDocument* document, AnimalSelection* select
     legendRow->addElement(0, 0, plot_->legend);
     plot_->legend->setFillOrder(QCPLegend::foColumnsFirst);
     plot_->legend->setVisible(true);
+    // The legend (a key per matriline) wraps to the plot's width; it used to hold the plot at 859 px or more.
+    wrapLegendToPlotWidth(plot_);
+    plot_->setMinimumWidth(300);
 
     connect(ruleBox_, &QComboBox::currentIndexChanged, this,
             [this](int i) { setRule(i == 0 ? core::SiblingRule::Youngest : core::SiblingRule::Eldest); });

@@ -99,7 +99,6 @@ RankTimelineView::RankTimelineView(ColonyDocument* document, AnimalSelection* se
     controls->addWidget(groupBox_);
     controls->addWidget(ageBox_);
     controls->addWidget(marksBox_);
-    controls->addWidget(progress_, 1);
     controls->addStretch();
     PlotFigure figure;
     figure.plot = plot_;
@@ -134,6 +133,7 @@ RankTimelineView::RankTimelineView(ColonyDocument* document, AnimalSelection* se
     dateLabel_->setMinimumWidth(90);
     auto* layout = new QVBoxLayout(this);
     layout->addLayout(controls);
+    layout->addWidget(progress_); // a row of its own while computing: the controls keep their width
     layout->addWidget(split, 1);
     layout->addWidget(flagLegend_);
     layout->addLayout(dates);
@@ -272,6 +272,9 @@ void RankTimelineView::showComputing()
     computingText_->setText(group_.isEmpty() ? tr("Computing the ranks of every group…")
                                              : tr("Computing the ranks in %1…").arg(group_));
     computingText_->setColor(plot_->xAxis->labelColor()); // the plot's own text colour (light or dark plots)
+    // Empty axes without numbers: their range is not the group's yet (before a first result, dates of 1970).
+    plot_->xAxis->setTickLabels(false);
+    plot_->yAxis->setTickLabels(false);
     plot_->replot(QCustomPlot::rpQueuedReplot);
 }
 
@@ -441,6 +444,8 @@ void RankTimelineView::rebuildPlot()
         const double from = keyOf(timeline_.checkpoints.front()), to = keyOf(timeline_.checkpoints.back());
         plot_->xAxis->setRange(from - 20 * 86400.0, to + 20 * 86400.0);
     }
+    plot_->xAxis->setTickLabels(!timeline_.checkpoints.empty()); // no dates of 1970 on an empty timeline
+    plot_->yAxis->setTickLabels(true);
     applyFilters();
     if (scale_ == Scale::Elo) {
         bool found = false;

@@ -9,6 +9,7 @@
 #include "ui/widgets/help_button.h"
 #include "core/base/display_names.h"
 #include "ui/widgets/figure_caption.h"
+#include "ui/widgets/flow_layout.h"
 #include "ui/widgets/plot_export.h"
 #include "ui/document/qt_convert.h"
 #include "ui/document/document_queries.h"
@@ -135,19 +136,14 @@ SexRatioView::SexRatioView(ColonyEditFacade* facade, QWidget* parent)
     maturity_->setSuffix(tr(" years"));
     save_->setToolTip(tr("Store the species, gestation length and maturity age in the colony file"));
 
-    auto* controls = new QHBoxLayout;
-    controls->addWidget(new QLabel(tr("Species:"), this));
-    controls->addWidget(species_);
-    controls->addWidget(new QLabel(tr("Gestation:"), this));
-    controls->addWidget(gestation_);
-    controls->addWidget(new QLabel(tr("Females ranked from:"), this));
-    controls->addWidget(maturity_);
-    controls->addWidget(new HelpButton(QStringLiteral("maternal_rank"), this));
+    // One row on a wide screen; on a small one the controls go on in a second row.
+    auto* controls = new FlowLayout;
+    controls->addGroup({new QLabel(tr("Species:"), this), species_});
+    controls->addGroup({new QLabel(tr("Gestation:"), this), gestation_});
+    controls->addGroup({new QLabel(tr("Females ranked from:"), this), maturity_,
+                        new HelpButton(QStringLiteral("maternal_rank"), this)});
     controls->addWidget(save_);
-    controls->addSpacing(12);
-    controls->addWidget(new QLabel(tr("Group:"), this));
-    controls->addWidget(group_);
-    controls->addStretch();
+    controls->addGroup({new QLabel(tr("Group:"), this), group_});
 
     message_->setObjectName(QStringLiteral("sexRatioMessage"));
     message_->setWordWrap(true);

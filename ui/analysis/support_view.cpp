@@ -104,9 +104,11 @@ SupportView::SupportView(ColonyDocument* document, QWidget* parent)
     layout->addLayout(options);
     layout->addWidget(progress_);
     layout->addWidget(summary_);
-    layout->addWidget(new QLabel(tr("Rank figures use the winner and the loser only; supporters enter these figures "
-                                    "alone (docs/methods.md, \"Kin support\")."),
-                                 this));
+    auto* note = new QLabel(tr("Rank figures use the winner and the loser only; supporters enter these figures "
+                               "alone (docs/methods.md, \"Kin support\")."),
+                            this);
+    note->setWordWrap(true);
+    layout->addWidget(note);
     layout->addWidget(tabs, 1);
     flagLegend_->setObjectName(QStringLiteral("supportFlagLegend"));
     flagLegend_->setWordWrap(true);

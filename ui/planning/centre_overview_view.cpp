@@ -78,7 +78,6 @@ CentreOverviewView::CentreOverviewView(ColonyDocument* document, QWidget* parent
     controls->addWidget(summary_);
     for (const char* key : {"counter_dominance", "severe_aggression", "rank_changes"})
         controls->addWidget(new HelpButton(QString::fromLatin1(key), this));
-    controls->addWidget(progress_, 1);
     controls->addStretch();
     PlotFigure figure;
     figure.plot = plot_;
@@ -132,10 +131,7 @@ CentreOverviewView::CentreOverviewView(ColonyDocument* document, QWidget* parent
     plot_->legend->setFillOrder(QCPLegend::foColumnsFirst);
     plot_->legend->setVisible(true);
     // In a narrow window the legend wraps to the plot's width instead of being cut at its sides.
-    connect(plot_, &QCustomPlot::beforeReplot, this, [this] {
-        const QMargins m = plot_->plotLayout()->margins();
-        fitLegendToWidth(plot_->legend, plot_->viewport().width() - m.left() - m.right());
-    });
+    wrapLegendToPlotWidth(plot_);
     plot_->setMinimumWidth(360);
     followPlotPalette(plot_);
 
@@ -149,6 +145,7 @@ CentreOverviewView::CentreOverviewView(ColonyDocument* document, QWidget* parent
 
     auto* layout = new QVBoxLayout(this);
     layout->addLayout(controls);
+    layout->addWidget(progress_); // a row of its own while computing: the controls keep their width
     layout->addWidget(caution_);
     layout->addWidget(split, 1);
 

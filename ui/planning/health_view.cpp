@@ -8,6 +8,7 @@
 #include "ui/document/document_settings.h"
 #include "ui/document/qt_convert.h"
 #include "ui/document/visible_refresh.h"
+#include "ui/widgets/flow_layout.h"
 #include "ui/widgets/help_button.h"
 #include "ui/widgets/progress_strip.h"
 #include "ui/widgets/typed_date.h"
@@ -90,21 +91,15 @@ HealthView::HealthView(ColonyDocument* document, QWidget* parent)
     matchMinutes_->setValue(core::kDefaultMatchMinutes);
     matchMinutes_->setObjectName(QStringLiteral("healthMatchMinutes"));
 
-    auto* controls = new QHBoxLayout;
-    controls->addWidget(new QLabel(tr("Group:"), this));
-    controls->addWidget(group_);
-    controls->addWidget(new QLabel(tr("From:"), this));
-    controls->addWidget(from_);
-    controls->addWidget(new QLabel(tr("To:"), this));
-    controls->addWidget(to_);
-    controls->addWidget(new QLabel(tr("Not seen for more than (days):"), this));
-    controls->addWidget(unseenDays_);
-    controls->addWidget(new QLabel(tr("Fewest encounters for a rank:"), this));
-    controls->addWidget(minEncounters_);
-    controls->addWidget(new QLabel(tr("Match within (min):"), this));
-    controls->addWidget(matchMinutes_);
+    // One row on a wide screen; on a small one the controls go on in a second row.
+    auto* controls = new FlowLayout;
+    controls->addGroup({new QLabel(tr("Group:"), this), group_});
+    controls->addGroup({new QLabel(tr("From:"), this), from_});
+    controls->addGroup({new QLabel(tr("To:"), this), to_});
+    controls->addGroup({new QLabel(tr("Not seen for more than (days):"), this), unseenDays_});
+    controls->addGroup({new QLabel(tr("Fewest encounters for a rank:"), this), minEncounters_});
+    controls->addGroup({new QLabel(tr("Match within (min):"), this), matchMinutes_});
     controls->addWidget(new HelpButton(QStringLiteral("data_health"), this));
-    controls->addStretch();
     problem_->setObjectName(QStringLiteral("healthProblem"));
     problem_->setStyleSheet(QStringLiteral("QLabel { color: #b00000; }"));
     problem_->hide();

@@ -264,6 +264,15 @@ void fitLegendToWidth(QCPLegend* legend, int width)
     }
 }
 
+void wrapLegendToPlotWidth(QCustomPlot* plot)
+{
+    QObject::connect(plot, &QCustomPlot::beforeReplot, plot, [plot] {
+        if (!plot->legend || !plot->legend->visible()) return;
+        const QMargins m = plot->plotLayout()->margins();
+        fitLegendToWidth(plot->legend, plot->viewport().width() - m.left() - m.right());
+    });
+}
+
 void fitLegendToHeight(QCPLegend* legend, int height)
 {
     const std::vector<QCPAbstractLegendItem*> items = legendItems(legend);

@@ -91,6 +91,11 @@ QToolButton* makeExportButton(const PlotFigure& figure, QWidget* parent);
 /// plot wraps instead of being cut at the sides.
 void fitLegendToWidth(QCPLegend* legend, int width);
 
+/// Keeps the legend above or below a plot on screen within the plot's width:
+/// before every replot (a resize replots too) it takes the columns that fit.
+/// The legend then no longer sets the plot's minimum width.
+void wrapLegendToPlotWidth(QCustomPlot* plot);
+
 /// Arranges a legend beside a plot in as many columns as it needs so that no
 /// entry falls below `height` pixels (the plot's height): a long legend is
 /// never clipped.

@@ -24,6 +24,7 @@ ProgressStrip::ProgressStrip(ComputeRunner* runner, const QString& what, QWidget
     layout->addWidget(cancel_);
     layout->addWidget(retry_);
     bar_->setMaximumWidth(220);
+    label_->setWordWrap(true); // a long failure message must not widen its view
     bar_->setTextVisible(false);
     retry_->hide();
     hide();
