@@ -61,11 +61,30 @@ void EncounterAppender::add(Encounter& e)
     bindEncounterColumns(insert_, e, terms_);
     insert_.run();
     support_.add(e);
+    added(e);
+}
+
+void EncounterAppender::add(Encounter& e, const UidBytes& uid)
+{
+    if (!e.uid.empty()) return add(e);
+    e.seq = nextSeq_++;
+    bindEncounterColumns(insert_, e, uid, terms_);
+    insert_.run();
+    support_.add(e, uid);
+    added(e);
+}
+
+void EncounterAppender::added(const Encounter& e)
+{
     ++count_;
-    if (!e.observer.empty() && e.observer != lastObserver_) {
-        lastObserver_ = e.observer;
-        observers_.insert(e.observer);
-    }
+    if (e.observer.empty()) return;
+    // The code was just bound, so this finds it without a look-up; the set
+    // gets each observer once, in the order first met.
+    const auto code = static_cast<std::size_t>(terms_(e.observer));
+    if (code >= observerCodes_.size()) observerCodes_.resize(code + 1, false);
+    if (observerCodes_[code]) return;
+    observerCodes_[code] = true;
+    observers_.insert(e.observer);
 }
 
 void EncounterAppender::finish(const std::string& source)

@@ -31,6 +31,10 @@ public:
     EncounterAppender(ColonyStore& store, const WriteTransaction& transaction);
 
     void add(Encounter& e);
+    /// The same for an encounter that has no uid of its own: it gets the
+    /// derived `uid` (its bytes are written as they are; e.uid stays empty).
+    /// An encounter that has a uid keeps it.
+    void add(Encounter& e, const UidBytes& uid);
     /// Records the observers and, for a bulk load, the audit row; call once, before commit.
     void finish(const std::string& source);
 
@@ -39,6 +43,9 @@ public:
     std::int64_t firstSeq() const { return firstSeq_; }
 
 private:
+    /// Counts the encounter just written and notes its observer.
+    void added(const Encounter& e);
+
     ColonyStore& store_;
     bool bulk_;
     bool indexAfter_ = false; ///< the group index was dropped for the load; finish() builds it
@@ -48,7 +55,7 @@ private:
     std::int64_t nextSeq_ = 1;
     std::int64_t firstSeq_ = 1;
     std::int64_t count_ = 0;
-    std::string lastObserver_;
+    std::vector<bool> observerCodes_; ///< by term code: the observers already in observers_
     std::unordered_set<std::string> observers_;
 };
 

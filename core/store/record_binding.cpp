@@ -34,10 +34,12 @@ void bindResidenceColumns(SqliteStatement& q, const Residence& r)
     q.bindOptional(5, storedDate(r.to));
 }
 
-void bindEncounterColumns(SqliteStatement& q, const Encounter& e, EncounterTermCodes& terms)
+namespace {
+
+/// Every column but the uid (parameter 2).
+void bindEncounterFields(SqliteStatement& q, const Encounter& e, EncounterTermCodes& terms)
 {
     q.bind(1, e.seq);
-    q.bindUid(2, e.uid);
     q.bind(3, static_cast<std::int64_t>(e.date));
     if (e.time) q.bind(4, static_cast<std::int64_t>(*e.time));
     else q.bindNull(4);
@@ -48,6 +50,20 @@ void bindEncounterColumns(SqliteStatement& q, const Encounter& e, EncounterTermC
     q.bind(9, terms(e.group));
     q.bind(10, terms(e.observer));
     q.bindStatic(11, e.note);
+}
+
+} // namespace
+
+void bindEncounterColumns(SqliteStatement& q, const Encounter& e, EncounterTermCodes& terms)
+{
+    bindEncounterFields(q, e, terms);
+    q.bindUid(2, e.uid);
+}
+
+void bindEncounterColumns(SqliteStatement& q, const Encounter& e, const UidBytes& uid, EncounterTermCodes& terms)
+{
+    bindEncounterFields(q, e, terms);
+    q.bindStaticUid(2, uid);
 }
 
 Encounter readEncounterRow(const SqliteStatement& q, const EncounterTermTexts& terms, const std::string& path)

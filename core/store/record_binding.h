@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
 #include "core/base/colony.h"
+#include "core/base/derived_uid.h"
 #include "core/store/encounter_terms.h"
 #include "core/store/sqlite_statement.h"
 
@@ -35,6 +36,9 @@ void bindResidenceColumns(SqliteStatement& q, const Residence& r);
 /// Binds parameters 1-11 of kInsertEncounterSql without copying: `e` must
 /// stay unchanged until the statement runs. `terms` gives (and adds) the codes.
 void bindEncounterColumns(SqliteStatement& q, const Encounter& e, EncounterTermCodes& terms);
+/// The same with the bytes of a derived uid in place of `e.uid` (which is
+/// empty); they too must stay alive until the statement runs.
+void bindEncounterColumns(SqliteStatement& q, const Encounter& e, const UidBytes& uid, EncounterTermCodes& terms);
 
 /// The same columns with an empty text in place of the uid (same positions).
 inline constexpr const char* kEncounterColumnsWithoutUidSql =

@@ -5,14 +5,18 @@
 // program) still gives the same records the same uids.
 #include "core/base/derived_uid.h"
 #include "core/store/colony_import.h"
+#include "core/store/colony_store.h"
 #include "core/store/uid_storage.h"
+#include "import_test_support.h"
 
 #include <gtest/gtest.h>
 
 #include <array>
+#include <cstdio>
 #include <random>
 
 using namespace hierloom::core;
+using hierloom::test::TempDir;
 
 namespace {
 
@@ -62,8 +66,14 @@ std::string referenceRowUid(std::string_view place, std::uint64_t row, std::stri
 
 std::string referenceEncounterUid(const Encounter& e, std::int64_t epoch, std::size_t row)
 {
+    std::string time;
+    if (e.time) {
+        char buf[32];
+        std::snprintf(buf, sizeof buf, "%02d:%02d", *e.time / 60, *e.time % 60);
+        time = buf;
+    }
     std::string key;
-    for (const std::string& f : {formatDate(e.date), e.time ? formatTimeOfDay(*e.time) : std::string(), e.winner,
+    for (const std::string& f : {formatDate(e.date), time, e.winner,
                                  e.loser, std::string(toString(e.outcome)), e.behaviour, e.group, e.observer, e.note})
         key += f + '\x1f';
     return referenceRowUid("encounter\x1f" + std::to_string(epoch), row, key);
@@ -108,6 +118,60 @@ TEST(EncounterUidBytes, AreTheBytesOfTheTextUidEarlierVersionsDerived)
                                 : i % 4 == 2 ? static_cast<std::size_t>((1ULL << (rng() % 35)) - rng() % 2)
                                              : static_cast<std::size_t>(rng() % 3000000);
         const std::string reference = referenceEncounterUid(e, epoch, row);
-        ASSERT_EQ(encounterUid(e, epoch, row), reference) << "row " << row;
+        const UidBytes bytes = encounterUidBytes(e, encounterUidPlace(epoch), row);
+        ASSERT_EQ(compactUid(reference), bytes) << reference << " row " << row;
+        ASSERT_EQ(uuidTextOf(bytes.data()), reference);
+        ASSERT_EQ(encounterUid(e, epoch, row), reference);
+    }
+}
+
+TEST(EncounterUidBytes, RowUidsAgreeWithTheReferenceText)
+{
+    std::mt19937_64 rng(5);
+    for (int i = 0; i < 20000; ++i) {
+        const std::string place = randomText(rng), key = randomText(rng);
+        const std::uint64_t row = rng() % (1ULL << 34);
+        const std::string reference = referenceRowUid(place, row, key);
+        EXPECT_EQ(derivedRowUid(place, row, key), reference);
+        EXPECT_EQ(derivedRowUidBytes(KeyHash().add(place).bytes(), row, KeyHash().add(key).bytes()),
+                  compactUid(reference));
+    }
+    // Hashing in pieces is hashing the joined text.
+    EXPECT_EQ(KeyHash().add("enc").add('o').add("").add("unter").bytes(), KeyHash().add("encounter").bytes());
+    EXPECT_EQ(uuidTextOf(KeyHash().bytes().data()), "6c62272e-07bb-0142-62b8-21756295c58d"); // the FNV offset basis
+}
+
+TEST(EncounterUidBytes, AnImportWritesTheUidsOfThePlannedImport)
+{
+    // The bulk path (bytes, written by the appender) and the plan (text,
+    // deriveUids) give the rows of the same file the same uids.
+    TempDir dir;
+    ColonyStore store = ColonyStore::create(dir.file("c.hierloom"));
+    ImportInput input;
+    input.animals = ImportSource{"animals.csv", "id,sex,entry_date\nA,F,2020-01-01\nB,M,2020-01-01\nC,F,2020-01-01\n"};
+    ASSERT_TRUE(importInput(store, input, *parseDate("2024-01-01")).ok());
+    std::string csv = "date,time,winner,loser,outcome,behaviour,observer,note\n";
+    std::mt19937_64 rng(3);
+    for (int i = 0; i < 500; ++i) {
+        const char* ids[] = {"A", "B", "C"};
+        const int w = static_cast<int>(rng() % 3);
+        const int l = (w + 1 + static_cast<int>(rng() % 2)) % 3;
+        csv += formatDate(*parseDate("2021-01-01") + static_cast<Day>(rng() % 700)) + "," +
+               (rng() % 2 ? formatTimeOfDay(static_cast<int>(rng() % 1440)) : std::string()) + "," + ids[w] + "," +
+               ids[l] + "," + (rng() % 5 ? "decided" : "draw") + "," + (rng() % 2 ? "bite" : "") + "," +
+               (rng() % 2 ? "ann" : "ben") + "," + (rng() % 7 ? "" : "\"a, note\"") + "\n";
+    }
+    ImportInput encounters;
+    encounters.encounters = ImportSource{"encounters.csv", csv};
+    const std::int64_t epoch = importEpoch(store);
+    ImportPlan plan = planImport(store.loadAnimals(), store.loadResidences(), encounters, *parseDate("2024-01-01"));
+    ASSERT_TRUE(plan.ok()) << plan.problems.text();
+    deriveUids(plan, epoch);
+    ASSERT_TRUE(importInput(store, encounters, *parseDate("2024-01-01")).ok());
+    const Colony colony = store.load();
+    ASSERT_EQ(colony.encounters.size(), plan.encounters.size());
+    for (std::size_t i = 0; i < plan.encounters.size(); ++i) {
+        EXPECT_EQ(colony.encounters[i].uid, plan.encounters[i].uid) << i;
+        EXPECT_EQ(colony.encounters[i].uid, referenceEncounterUid(plan.encounters[i], epoch, i)) << i;
     }
 }
