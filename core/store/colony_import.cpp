@@ -382,7 +382,7 @@ void checkAndAppendEncounters(const ResidenceIndex& where, std::unordered_set<st
     });
     try {
         while (auto batch = queue.pop())
-            for (std::size_t i = 0; i < batch->rows.size(); ++i) out.add(batch->rows[i], batch->uids[i]);
+            out.add(batch->rows, batch->uids);
     } catch (...) {
         queue.close();
         checker.join();

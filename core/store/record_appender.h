@@ -5,7 +5,9 @@
 #include "core/store/sqlite_statement.h"
 #include "core/store/support_rows.h"
 
+#include <cstddef>
 #include <cstdint>
+#include <memory>
 #include <string>
 #include <unordered_set>
 #include <vector>
@@ -35,6 +37,10 @@ public:
     /// derived `uid` (its bytes are written as they are; e.uid stays empty).
     /// An encounter that has a uid keeps it.
     void add(Encounter& e, const UidBytes& uid);
+    /// add(rows[i], uids[i]) for every row in order. In a bulk transaction
+    /// consecutive rows without supporters go kRowsPerInsert at a time into
+    /// one statement: the same rows, seqs and order, with less work per row.
+    void add(std::vector<Encounter>& rows, const std::vector<UidBytes>& uids);
     /// Records the observers and, for a bulk load, the audit row; call once, before commit.
     void finish(const std::string& source);
 
@@ -43,13 +49,15 @@ public:
     std::int64_t firstSeq() const { return firstSeq_; }
 
 private:
-    /// Counts the encounter just written and notes its observer.
-    void added(const Encounter& e);
+    static constexpr std::size_t kRowsPerInsert = 64;
+    /// Notes the observer of an encounter whose columns were just bound.
+    void noteObserver(const Encounter& e);
 
     ColonyStore& store_;
     bool bulk_;
     bool indexAfter_ = false; ///< the group index was dropped for the load; finish() builds it
     SqliteStatement insert_;
+    std::unique_ptr<SqliteStatement> insertMany_; ///< kRowsPerInsert rows, prepared when first needed
     EncounterTermCodes terms_;
     SupportWriter support_;
     std::int64_t nextSeq_ = 1;
