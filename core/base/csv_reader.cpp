@@ -117,6 +117,19 @@ bool isValidUtf8(std::string_view s)
     return true;
 }
 
+bool moreLinesThan(std::string_view text, std::size_t n)
+{
+    // n line ends mean n + 1 lines.
+    const char* at = text.data();
+    const char* end = at + text.size();
+    for (std::size_t found = 0; found < n; ++found) {
+        const void* next = std::memchr(at, '\n', static_cast<std::size_t>(end - at));
+        if (!next) return false;
+        at = static_cast<const char*>(next) + 1;
+    }
+    return true;
+}
+
 std::string readWholeFile(const std::string& path)
 {
     std::FILE* f = std::fopen(path.c_str(), "rb");

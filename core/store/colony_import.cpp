@@ -419,7 +419,7 @@ ImportResult importInput(ColonyStore& store, ImportInput input, Day today)
     std::optional<ImportSource> encounters = std::move(input.encounters);
     input.encounters.reset();
 
-    const bool bulk = encounters && lineCount(encounters->text) > ColonyStore::kBulkEncounters;
+    const bool bulk = encounters && moreLinesThan(encounters->text, ColonyStore::kBulkEncounters);
     // The colony is read inside the write transaction, so what the checks saw
     // is what the rows are written against (no other program writes
     // meanwhile): the checks of this file cover every rule of the schema.
