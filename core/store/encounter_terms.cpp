@@ -35,12 +35,6 @@ std::int64_t EncounterTermCodes::operator()(const std::string& text)
     if (text.empty()) return 0;
     // Rows in entry order often repeat the text of the row before.
     if (lastText_ && *lastText_ == text) return lastCode_;
-    Recent& slot = recent_[slotOf(text)];
-    if (slot.text && *slot.text == text) {
-        lastText_ = slot.text;
-        lastCode_ = slot.code;
-        return lastCode_;
-    }
     auto it = codes_.find(text);
     if (it == codes_.end()) {
         find_.bind(1, text);
@@ -61,15 +55,7 @@ std::int64_t EncounterTermCodes::operator()(const std::string& text)
     }
     lastText_ = &it->first;
     lastCode_ = it->second;
-    slot = {lastText_, lastCode_};
     return lastCode_;
-}
-
-std::size_t EncounterTermCodes::slotOf(const std::string& text)
-{
-    std::size_t h = text.size();
-    for (unsigned char c : text) h = h * 31 + c;
-    return (h ^ (h >> 8)) % std::tuple_size_v<decltype(recent_)>;
 }
 
 std::int32_t storedDay(std::int64_t day, const std::string& path)

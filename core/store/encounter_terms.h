@@ -2,7 +2,6 @@
 #pragma once
 #include "core/store/sqlite_statement.h"
 
-#include <array>
 #include <cstdint>
 #include <string>
 #include <unordered_map>
@@ -51,18 +50,9 @@ public:
     std::int64_t operator()(const std::string& text);
 
 private:
-    /// A text met before, by a cheap hash of its bytes: most look-ups of a
-    /// bulk load end here instead of in codes_.
-    struct Recent {
-        const std::string* text = nullptr; ///< a key of codes_ (nodes do not move)
-        std::int64_t code = 0;
-    };
-    static std::size_t slotOf(const std::string& text);
-
     SqliteStatement find_;
     SqliteStatement add_;
     std::unordered_map<std::string, std::int64_t> codes_;
-    std::array<Recent, 256> recent_{};
     const std::string* lastText_ = nullptr;
     std::int64_t lastCode_ = 0;
 };

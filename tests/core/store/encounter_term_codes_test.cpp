@@ -1,7 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
-// EncounterTermCodes answers from what it met before (the last text, a small
-// table of recent texts by hash, then its map): whichever answers, the code
-// must be the file's code of that text.
+// EncounterTermCodes answers from what it met before (the last text, then
+// its map) or from the file: whichever answers, the code must be the file's
+// code of that text.
 #include "core/store/colony_store.h"
 #include "core/store/encounter_terms.h"
 #include "core/store/sqlite_statement.h"
@@ -21,7 +21,6 @@ TEST(EncounterTermCodes, EveryLookUpGivesTheFilesCodeOfThatText)
     ColonyStore store = ColonyStore::create(dir.file("c.hierloom"));
     WriteTransaction tx(store, WriteTransaction::Size::Small);
     EncounterTermCodes codes(store.handle());
-    // Far more texts than the table of recent ones has places: they share places.
     std::vector<std::string> texts;
     for (int i = 0; i < 3000; ++i) texts.push_back(i % 3 ? "G" + std::to_string(i) : std::string(1 + i % 40, 'x'));
     std::mt19937 rng(11);
