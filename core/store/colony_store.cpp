@@ -561,7 +561,7 @@ std::vector<Encounter> ColonyStore::loadEncounters() const
     return out;
 }
 
-std::vector<Encounter> ColonyStore::loadEncounterRange(std::int64_t first, std::int64_t last) const
+std::vector<Encounter> ColonyStore::loadEncounterRangeWithoutSupporters(std::int64_t first, std::int64_t last) const
 {
     SqliteStatement q(db_, (std::string("SELECT ") + kEncounterColumnsSql +
                             " FROM encounter_row WHERE seq BETWEEN ?1 AND ?2 ORDER BY seq").c_str());
@@ -570,9 +570,10 @@ std::vector<Encounter> ColonyStore::loadEncounterRange(std::int64_t first, std::
     const EncounterTermTexts terms(db_, path_);
     std::vector<Encounter> out;
     while (q.step()) out.push_back(readEncounterRow(q, terms, path_));
-    loadSupportRows(db_, out);
     return out;
 }
+
+void ColonyStore::loadSupporters(std::vector<Encounter>& encounters) const { loadSupportRows(db_, encounters); }
 
 std::optional<std::pair<std::int64_t, std::int64_t>> ColonyStore::encounterSeqRange() const
 {

@@ -85,9 +85,13 @@ public:
     std::vector<Encounter> loadEncounters() const;
     /// The encounters of a scope, in entry order (seq ascending).
     std::vector<Encounter> loadEncounters(const EncounterScope& scope) const;
-    /// The encounters whose seq lies in [first, last], in entry order: a
-    /// whole file read in parts along its primary key (no sort, no scope).
-    std::vector<Encounter> loadEncounterRange(std::int64_t first, std::int64_t last) const;
+    /// The encounters whose seq lies in [first, last], in entry order, WITHOUT
+    /// their supporters: a whole file read in parts along its primary key (no
+    /// sort, no scope), then loadSupporters once over all the parts (a read of
+    /// the supporters costs the whole support table, whatever the part).
+    std::vector<Encounter> loadEncounterRangeWithoutSupporters(std::int64_t first, std::int64_t last) const;
+    /// Fills the supporters of `encounters` (in seq order, none yet): one pass over the file's supporters.
+    void loadSupporters(std::vector<Encounter>& encounters) const;
     /// The lowest and the highest seq of the file's encounters; none when it has none.
     std::optional<std::pair<std::int64_t, std::int64_t>> encounterSeqRange() const;
     /// The date of the file's latest encounter (every group), if any.

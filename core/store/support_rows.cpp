@@ -59,13 +59,8 @@ void loadSupportRows(sqlite3* db, std::vector<Encounter>& encounters)
 {
     // Joined on the encounter so the rows arrive in seq order; a walk along the
     // loaded encounters (also in seq order) then places them without a map.
-    if (encounters.empty()) return;
-    // Only the loaded rows' range of seq: a file read in parts reads each
-    // part's supporters, not every supporter once per part.
     SqliteStatement q(db, "SELECT e.seq, s.animal, s.side FROM encounter_support s JOIN encounter_row e "
-                          "ON e.uid = s.encounter WHERE e.seq BETWEEN ?1 AND ?2 ORDER BY e.seq, s.rowid");
-    q.bind(1, encounters.front().seq);
-    q.bind(2, encounters.back().seq);
+                          "ON e.uid = s.encounter ORDER BY e.seq, s.rowid");
     size_t at = 0;
     while (q.step()) {
         const std::int64_t seq = q.integer(0);

@@ -49,7 +49,8 @@ void BackgroundEncounterLoad::run(std::string path, std::int64_t expected, Progr
             for (int i = 0; i < total; ++i) {
                 if (cancelled_) return;
                 const std::int64_t first = low + span * i;
-                std::vector<core::Encounter> part = store.loadEncounterRange(first, std::min(high, first + span - 1));
+                std::vector<core::Encounter> part =
+                    store.loadEncounterRangeWithoutSupporters(first, std::min(high, first + span - 1));
                 std::move(part.begin(), part.end(), std::back_inserter(*all));
                 progress(i + 1, total);
             }
@@ -57,6 +58,7 @@ void BackgroundEncounterLoad::run(std::string path, std::int64_t expected, Progr
             progress(total, total);
         }
         if (cancelled_) return;
+        store.loadSupporters(*all);
         // Another program wrote while the parts were read: read it whole.
         if (static_cast<std::int64_t>(all->size()) != store.encounterCount()) {
             all->clear();

@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
-// ColonyStore::loadEncounterRange, the desktop's background load in parts:
-// the parts of any cut of the seq range, put end to end, are exactly
+// ColonyStore::loadEncounterRangeWithoutSupporters and loadSupporters, the
+// desktop's background load in parts: the parts of any cut of the seq range,
+// put end to end, with their supporters added once, are exactly
 // loadEncounters() (every field, uid, note and supporters), also after
 // deletions left gaps in seq (model-based: random colony files, random cuts).
 #include "core/store/colony_edits.h"
@@ -76,11 +77,16 @@ TEST(EncounterRange, PartsEndToEndAreTheWholeFile)
             std::int64_t first = range->first - below(3);
             for (std::int64_t p = 0; p < parts; ++p) {
                 const std::int64_t last = p + 1 == parts ? range->second + below(3) : first + below(60);
-                for (Encounter& e : store.loadEncounterRange(first, last)) joined.push_back(std::move(e));
+                for (Encounter& e : store.loadEncounterRangeWithoutSupporters(first, last)) {
+                    EXPECT_TRUE(e.winnerSupport.empty() && e.loserSupport.empty());
+                    joined.push_back(std::move(e));
+                }
                 first = last + 1;
             }
             if (first <= range->second)
-                for (Encounter& e : store.loadEncounterRange(first, range->second)) joined.push_back(std::move(e));
+                for (Encounter& e : store.loadEncounterRangeWithoutSupporters(first, range->second))
+                    joined.push_back(std::move(e));
+            store.loadSupporters(joined);
             EXPECT_EQ(texts(joined), texts(whole)) << "file " << file << ", cut " << cut;
         }
     }
@@ -92,5 +98,5 @@ TEST(EncounterRange, AnEmptyFileHasNoRange)
     TempDir dir;
     const ColonyStore store = ColonyStore::create(dir.file("empty.hierloom"));
     EXPECT_FALSE(store.encounterSeqRange());
-    EXPECT_TRUE(store.loadEncounterRange(0, 1000).empty());
+    EXPECT_TRUE(store.loadEncounterRangeWithoutSupporters(0, 1000).empty());
 }
