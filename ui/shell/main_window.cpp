@@ -43,6 +43,7 @@
 #include <QStatusBar>
 #include <QTabWidget>
 #include <QScopeGuard>
+#include <QScreen>
 #include <QTimer>
 #include <QActionGroup>
 #include <QUndoStack>
@@ -123,6 +124,13 @@ MainWindow::MainWindow(const QString& colonyPath, QWidget* parent)
 
     QSettings settings;
     if (!restoreGeometry(settings.value("mainWindow/geometry").toByteArray())) resize(1200, 760);
+    // A size from a larger screen (or the default on a 1024x768 one) is cut
+    // to the screen's room, less a margin for the frame; the views fit
+    // 1008x708 (screen_fit_test.cpp).
+    if (const QScreen* s = screen()) {
+        const QSize room = s->availableGeometry().size() - QSize(16, 60);
+        if (!room.isEmpty() && (width() > room.width() || height() > room.height())) resize(size().boundedTo(room));
+    }
     restoreState(settings.value("mainWindow/state").toByteArray());
     tabs_->setCurrentIndex(settings.value("mainWindow/view", 0).toInt());
     refresh();
