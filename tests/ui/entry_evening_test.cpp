@@ -243,3 +243,28 @@ TEST(EveningEntry, AMessageDoesNotMoveTheFields)
     EXPECT_EQ(e.panel->sessionList()->geometry().top(), table.top());
     EXPECT_TRUE(inFile(e.path).empty());
 }
+
+TEST(EveningEntry, ARefusedLineFixedInPlaceLeavesTheRefusedList)
+{
+    // Typed as a person does: the loser is refused twice, typed again on the
+    // entry row each time, then saved; the listed refusals were of that line.
+    Entry e;
+    e.line("0905", "F1", "ZZ");
+    ASSERT_EQ(QApplication::focusWidget(), e.panel->loserEdit());
+    ASSERT_EQ(e.panel->refusedList()->count(), 1);
+    e.type("YY"); // the refused text is selected: typing replaces it
+    e.key(Qt::Key_Return);
+    ASSERT_EQ(e.panel->refusedList()->count(), 2);
+    e.type("D1");
+    e.key(Qt::Key_Return);
+    ASSERT_EQ(inFile(e.path).size(), 1u);
+    EXPECT_EQ(inFile(e.path)[0].loser, "D1");
+    EXPECT_EQ(e.panel->refusedList()->count(), 0);
+    // A refused line cleared with Escape stays listed when the next line is saved.
+    e.line("0910", "F2", "ZZ");
+    e.key(Qt::Key_Escape);
+    e.line("0915", "F2", "D2");
+    ASSERT_EQ(inFile(e.path).size(), 2u);
+    ASSERT_EQ(e.panel->refusedList()->count(), 1);
+    EXPECT_TRUE(e.panel->refusedList()->item(0)->text().startsWith(QStringLiteral("0910 F2 > ZZ")));
+}

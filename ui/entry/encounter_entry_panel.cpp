@@ -608,10 +608,15 @@ bool EncounterEntryPanel::commitLine()
         return false;
     }
     if (warned) warned_.insert(e.uid);
-    // A refused line saved once its fault was fixed (the observer, the date) leaves the refused list.
+    // A refused line saved once its fault was fixed leaves the refused list:
+    // fixed in place (the loser typed again on the entry row), or elsewhere
+    // (the observer, the date) with the same fields.
     const QStringList saved = typedFields();
-    for (int i = refused_->count() - 1; i >= 0; --i)
-        if (refused_->item(i)->data(Qt::UserRole).toStringList() == saved) delete refused_->takeItem(i);
+    for (int i = refused_->count() - 1; i >= 0; --i) {
+        const QListWidgetItem* item = refused_->item(i);
+        if (item->data(Qt::UserRole).toStringList() == saved || item->data(kEntryLineRole).toULongLong() == entryLine_)
+            delete refused_->takeItem(i);
+    }
     const bool hadTime = e.time.has_value();
     editing_.reset();
     mode_->clear();
@@ -623,6 +628,7 @@ bool EncounterEntryPanel::commitLine()
 
 void EncounterEntryPanel::clearLine()
 {
+    ++entryLine_; // the next line is another: what was refused of this one stays listed
     for (QLineEdit* edit : {time_, winner_, loser_, note_, winnerSupport_, loserSupport_}) edit->clear();
     // A completion list left open by the last field would hang under an empty field.
     for (QObject* popup : completionPopups_) static_cast<QWidget*>(popup)->hide();

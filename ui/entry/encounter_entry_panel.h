@@ -168,6 +168,8 @@ private:
     std::set<std::string> warned_;           // lines saved despite a duplicate warning
     std::optional<core::Encounter> editing_; // the row being changed, if any
     int refusals_ = 0;                       // lines refused in this session
+    static constexpr int kEntryLineRole = Qt::UserRole + 1; // a refused item: the entryLine_ it came from
+    std::uint64_t entryLine_ = 0; // which line is on the entry row: a refused line fixed in place and saved leaves the refused list
 };
 
 } // namespace hierloom::ui

@@ -98,6 +98,7 @@ void EncounterEntryPanel::refuse(const core::FieldProblems& problems)
         delete refused_->takeItem(refused_->count() - 1); // the same line refused again: listed once
     auto* item = new QListWidgetItem(text, refused_);
     item->setData(Qt::UserRole, fields);
+    item->setData(kEntryLineRole, QVariant::fromValue<quint64>(entryLine_));
     refused_->scrollToBottom();
     refreshList();
     showProblems(problems);
@@ -109,6 +110,7 @@ void EncounterEntryPanel::recallRefused()
     if (!item) return;
     const QStringList f = item->data(Qt::UserRole).toStringList();
     delete refused_->takeItem(refused_->row(item));
+    ++entryLine_; // a line of its own now: its next refusal is listed again
     editing_.reset();
     mode_->clear();
     time_->setText(f.value(0));
