@@ -1,5 +1,6 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "core/store/check_cache.h"
+#include "core/store/database_header.h"
 
 #include "core/store/partial_files.h"
 
@@ -117,10 +118,11 @@ std::optional<ColonyFileState> colonyFileState(const std::string& path)
     const auto file = stampOf(path);
     if (!file) return std::nullopt;
     s.file = *file;
-    std::ifstream in(path, std::ios::binary);
-    unsigned char h[64] = {};
-    in.read(reinterpret_cast<char*>(h), sizeof h);
-    if (in.gcount() < static_cast<std::streamsize>(sizeof h)) return std::nullopt;
+    // Through SQLite, never a descriptor of ours: this process may hold a
+    // connection to the file (database_header.h says why that matters).
+    const auto header = readDatabaseHeader(path);
+    if (!header || s.file.size < 64) return std::nullopt; // too short to hold the fields read below
+    const unsigned char* h = header->data();
     auto be32 = [&](int at) {
         return (std::uint32_t{h[at]} << 24) | (std::uint32_t{h[at + 1]} << 16) | (std::uint32_t{h[at + 2]} << 8) |
                std::uint32_t{h[at + 3]};

@@ -1,5 +1,6 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "core/store/colony_store.h"
+#include "core/store/database_header.h"
 
 #include "core/store/colony_schema.h"
 #include "core/store/file_identity.h"
@@ -119,20 +120,18 @@ void checkHeader(const std::string& path)
     const auto size = std::filesystem::file_size(path, ec);
     if (ec) throw ColonyFileError(Kind::Io, path + ": cannot be read: " + ec.message());
     if (size == 0) throw ColonyFileError(Kind::NotAColonyFile, path + ": is empty, not a colony file");
-    std::ifstream in(path, std::ios::binary);
-    char head[16] = {};
-    in.read(head, sizeof head);
-    if (in.gcount() < 16 || std::memcmp(head, "SQLite format 3", 16) != 0)
+    // Read through SQLite, never a descriptor of ours: this process may hold
+    // a connection to the file already (database_header.h says why).
+    const auto header = readDatabaseHeader(path);
+    if (!header) throw ColonyFileError(Kind::Io, path + ": cannot be read");
+    const unsigned char* h = header->data();
+    if (std::memcmp(h, "SQLite format 3", 16) != 0)
         throw ColonyFileError(Kind::NotAColonyFile, path + ": is not a colony file (not an SQLite database)");
     if (size < 512)
         throw ColonyFileError(Kind::Damaged, path + ": is damaged (shorter than one database page)");
     // The header records the page count when its two change counters agree;
     // a shorter file lost its end (a partial copy). A non-empty -wal file may
     // legitimately finish an interrupted checkpoint, so the check is skipped then.
-    unsigned char h[100] = {};
-    in.seekg(0);
-    in.read(reinterpret_cast<char*>(h), sizeof h);
-    if (in.gcount() < 100) throw ColonyFileError(Kind::Damaged, path + ": is damaged (its header is cut short)");
     auto be32 = [&](int at) {
         return (std::uint32_t{h[at]} << 24) | (std::uint32_t{h[at + 1]} << 16) | (std::uint32_t{h[at + 2]} << 8) |
                std::uint32_t{h[at + 3]};

@@ -1,5 +1,6 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "core/store/file_identity.h"
+#include "core/store/database_header.h"
 
 #include "core/base/colony_file_error.h"
 #include "core/store/colony_store.h"
@@ -89,15 +90,16 @@ void checkWalBelongs(const std::string& path)
     const auto walSize = fs::file_size(wal, ec);
     if (ec || walSize < 32) return;
     unsigned char walHead[32] = {};
-    unsigned char dbHead[100] = {};
     {
+        // SQLite holds no lock on the -wal itself: a descriptor of ours is safe there.
         std::ifstream w(wal, std::ios::binary);
         w.read(reinterpret_cast<char*>(walHead), sizeof walHead);
         if (w.gcount() < 32) return;
-        std::ifstream d(path, std::ios::binary);
-        d.read(reinterpret_cast<char*>(dbHead), sizeof dbHead);
-        if (d.gcount() < 100) return;
     }
+    // The file itself only through SQLite (database_header.h).
+    const auto header = readDatabaseHeader(path);
+    if (!header) return;
+    const unsigned char* dbHead = header->data();
     // SQLite ignores a -wal without its magic number or without one whole frame.
     if ((be32(walHead) & 0xFFFFFFFEu) != kWalMagic) return;
     const std::uint32_t walPage = be32(walHead + 8);
