@@ -127,6 +127,11 @@ std::optional<int> parseTimeOfDay(std::string_view s)
 
 std::string formatTimeOfDay(int minutes)
 {
+    if (minutes >= 0 && minutes < 100 * 60) { // two-digit hours: hand-formatted (once per imported encounter)
+        const int h = minutes / 60, m = minutes % 60;
+        return {static_cast<char>('0' + h / 10), static_cast<char>('0' + h % 10), ':', static_cast<char>('0' + m / 10),
+                static_cast<char>('0' + m % 10)};
+    }
     char buf[32];
     std::snprintf(buf, sizeof buf, "%02d:%02d", minutes / 60, minutes % 60);
     return buf;

@@ -42,6 +42,10 @@ private:
 /// True when `s` is well-formed UTF-8 (no overlongs, no surrogates).
 bool isValidUtf8(std::string_view s);
 
+/// True when `text` has more than `n` lines (a last line without a line end
+/// counts), reading only as far as it takes to know.
+bool moreLinesThan(std::string_view text, std::size_t n);
+
 /// Reads a whole file; throws std::runtime_error naming the file when it cannot.
 std::string readWholeFile(const std::string& path);
 

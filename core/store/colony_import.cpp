@@ -304,13 +304,26 @@ std::int64_t importEpoch(const ColonyStore& store)
     return q.step() ? q.integer(0) : 0;
 }
 
+UidBytes encounterUidPlace(std::int64_t epoch)
+{
+    return KeyHash().add("encounter\x1f").add(std::to_string(epoch)).bytes();
+}
+
+UidBytes encounterUidBytes(const Encounter& e, const UidBytes& place, std::size_t row)
+{
+    // The key: each field's text followed by a unit separator.
+    constexpr char sep = '\x1f';
+    KeyHash key;
+    key.add(formatDate(e.date)).add(sep);
+    if (e.time) key.add(formatTimeOfDay(*e.time));
+    key.add(sep).add(e.winner).add(sep).add(e.loser).add(sep).add(toString(e.outcome)).add(sep);
+    key.add(e.behaviour).add(sep).add(e.group).add(sep).add(e.observer).add(sep).add(e.note).add(sep);
+    return derivedRowUidBytes(place, row, key.bytes());
+}
+
 std::string encounterUid(const Encounter& e, std::int64_t epoch, std::size_t row)
 {
-    std::string key;
-    for (const std::string& f : {formatDate(e.date), e.time ? formatTimeOfDay(*e.time) : std::string(), e.winner,
-                                 e.loser, std::string(toString(e.outcome)), e.behaviour, e.group, e.observer, e.note})
-        key += f + '\x1f';
-    return derivedRowUid("encounter\x1f" + std::to_string(epoch), row, key);
+    return uuidTextOf(encounterUidBytes(e, encounterUidPlace(epoch), row).data());
 }
 
 void deriveUids(ImportPlan& plan, std::int64_t epoch)
@@ -334,25 +347,34 @@ void checkAndAppendEncounters(const ResidenceIndex& where, std::unordered_set<st
                               std::int64_t epoch)
 {
     constexpr std::size_t batchRows = 4096;
-    BoundedQueue<std::vector<Encounter>> queue(8);
+    /// Rows that passed, each with its derived uid (unused for a row whose file gave one).
+    struct Batch {
+        std::vector<Encounter> rows;
+        std::vector<UidBytes> uids;
+        Batch()
+        {
+            rows.reserve(batchRows);
+            uids.reserve(batchRows);
+        }
+    };
+    BoundedQueue<Batch> queue(8);
     std::exception_ptr checkFailed; // an exception must not escape the thread (std::terminate)
     std::thread checker([&] {
         try {
-            std::vector<Encounter> batch;
-            batch.reserve(batchRows);
+            Batch batch;
+            const UidBytes place = encounterUidPlace(epoch);
             std::size_t row = 0;
             checkEncounters(where, uids, src, today, problems, [&](Encounter& e) {
-                // The uid is made here, off the writing thread.
-                if (e.uid.empty()) e.uid = encounterUid(e, epoch, row);
+                // The uid is derived here, off the writing thread, as the 16 bytes the file keeps.
+                batch.uids.push_back(e.uid.empty() ? encounterUidBytes(e, place, row) : UidBytes{});
                 ++row;
-                batch.push_back(std::move(e));
-                if (batch.size() < batchRows) return true;
+                batch.rows.push_back(std::move(e));
+                if (batch.rows.size() < batchRows) return true;
                 const bool open = queue.push(std::move(batch));
-                batch = {};
-                batch.reserve(batchRows);
+                batch = Batch();
                 return open;
             });
-            if (!batch.empty()) queue.push(std::move(batch));
+            if (!batch.rows.empty()) queue.push(std::move(batch));
         } catch (...) {
             checkFailed = std::current_exception();
         }
@@ -360,7 +382,7 @@ void checkAndAppendEncounters(const ResidenceIndex& where, std::unordered_set<st
     });
     try {
         while (auto batch = queue.pop())
-            for (Encounter& e : *batch) out.add(e);
+            out.add(batch->rows, batch->uids);
     } catch (...) {
         queue.close();
         checker.join();
@@ -397,7 +419,7 @@ ImportResult importInput(ColonyStore& store, ImportInput input, Day today)
     std::optional<ImportSource> encounters = std::move(input.encounters);
     input.encounters.reset();
 
-    const bool bulk = encounters && lineCount(encounters->text) > ColonyStore::kBulkEncounters;
+    const bool bulk = encounters && moreLinesThan(encounters->text, ColonyStore::kBulkEncounters);
     // The colony is read inside the write transaction, so what the checks saw
     // is what the rows are written against (no other program writes
     // meanwhile): the checks of this file cover every rule of the schema.

@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
 #include "core/base/colony.h"
+#include "core/base/derived_uid.h"
 #include "core/base/import_problems.h"
 #include "core/rules/identifier_rules.h"
 
@@ -59,8 +60,16 @@ void deriveUids(ImportPlan& plan, std::int64_t epoch);
 
 /// The derived uid of the `row`-th encounter (from 0) of an import into a
 /// colony at import epoch `epoch` (derivedRowUid: the uids of one import sort
-/// in row order).
+/// in row order); the text of encounterUidBytes.
 std::string encounterUid(const Encounter& e, std::int64_t epoch, std::size_t row);
+
+/// The hash of the place part of the encounter uids of an import at `epoch`
+/// (the same for the whole import).
+UidBytes encounterUidPlace(std::int64_t epoch);
+
+/// The 16 bytes of encounterUid(e, epoch, row) given `place` =
+/// encounterUidPlace(epoch), hashing the fields without joining them into a key.
+UidBytes encounterUidBytes(const Encounter& e, const UidBytes& place, std::size_t row);
 
 /// Paths of the files to import; empty means not given.
 struct ImportPaths {

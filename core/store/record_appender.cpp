@@ -6,6 +6,9 @@
 #include "core/store/record_binding.h"
 #include "core/store/write_transaction.h"
 
+#include <algorithm>
+#include <cstddef>
+
 namespace hierloom::core {
 
 namespace {
@@ -59,13 +62,58 @@ void EncounterAppender::add(Encounter& e)
     if (e.uid.empty()) e.uid = newUid();
     e.seq = nextSeq_++;
     bindEncounterColumns(insert_, e, terms_);
+    noteObserver(e);
     insert_.run();
     support_.add(e);
     ++count_;
-    if (!e.observer.empty() && e.observer != lastObserver_) {
-        lastObserver_ = e.observer;
-        observers_.insert(e.observer);
+}
+
+void EncounterAppender::add(Encounter& e, const UidBytes& uid)
+{
+    e.seq = nextSeq_++;
+    bindEncounterColumns(insert_, e, uid, terms_);
+    noteObserver(e);
+    insert_.run();
+    if (e.uid.empty()) support_.add(e, uid);
+    else support_.add(e);
+    ++count_;
+}
+
+void EncounterAppender::add(std::vector<Encounter>& rows, const std::vector<UidBytes>& uids)
+{
+    std::size_t i = 0;
+    while (i < rows.size()) {
+        // Rows from i on without supporters, up to a statement's worth.
+        std::size_t plain = 0;
+        while (plain < kRowsPerInsert && i + plain < rows.size() && rows[i + plain].winnerSupport.empty() &&
+               rows[i + plain].loserSupport.empty())
+            ++plain;
+        if (!bulk_ || plain < kRowsPerInsert) {
+            for (const std::size_t end = i + std::max<std::size_t>(plain, 1); i < end; ++i) add(rows[i], uids[i]);
+            continue;
+        }
+        if (!insertMany_)
+            insertMany_ = std::make_unique<SqliteStatement>(store_.handle(), insertEncountersSql(kRowsPerInsert).c_str());
+        for (int k = 0; k < static_cast<int>(kRowsPerInsert); ++k, ++i) {
+            rows[i].seq = nextSeq_++;
+            bindEncounterColumns(*insertMany_, rows[i], uids[i], terms_, k);
+            noteObserver(rows[i]);
+        }
+        insertMany_->run();
+        count_ += kRowsPerInsert;
     }
+}
+
+void EncounterAppender::noteObserver(const Encounter& e)
+{
+    if (e.observer.empty()) return;
+    // Its code was just bound, so this finds it without a look-up; the set
+    // gets each observer once, in the order first met.
+    const auto code = static_cast<std::size_t>(terms_(e.observer));
+    if (code >= observerCodes_.size()) observerCodes_.resize(code + 1, false);
+    if (observerCodes_[code]) return;
+    observerCodes_[code] = true;
+    observers_.insert(e.observer);
 }
 
 void EncounterAppender::finish(const std::string& source)

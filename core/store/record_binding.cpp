@@ -34,20 +34,46 @@ void bindResidenceColumns(SqliteStatement& q, const Residence& r)
     q.bindOptional(5, storedDate(r.to));
 }
 
+namespace {
+
+/// Every column but the uid, from parameter `at` + 1 on.
+void bindEncounterFields(SqliteStatement& q, const Encounter& e, EncounterTermCodes& terms, int at)
+{
+    q.bind(at + 1, e.seq);
+    q.bind(at + 3, static_cast<std::int64_t>(e.date));
+    if (e.time) q.bind(at + 4, static_cast<std::int64_t>(*e.time));
+    else q.bindNull(at + 4);
+    q.bindStatic(at + 5, e.winner);
+    q.bindStatic(at + 6, e.loser);
+    q.bind(at + 7, static_cast<std::int64_t>(e.outcome == Outcome::Draw ? 1 : 0));
+    q.bind(at + 8, terms(e.behaviour));
+    q.bind(at + 9, terms(e.group));
+    q.bind(at + 10, terms(e.observer));
+    q.bindStatic(at + 11, e.note);
+}
+
+} // namespace
+
 void bindEncounterColumns(SqliteStatement& q, const Encounter& e, EncounterTermCodes& terms)
 {
-    q.bind(1, e.seq);
+    bindEncounterFields(q, e, terms, 0);
     q.bindUid(2, e.uid);
-    q.bind(3, static_cast<std::int64_t>(e.date));
-    if (e.time) q.bind(4, static_cast<std::int64_t>(*e.time));
-    else q.bindNull(4);
-    q.bindStatic(5, e.winner);
-    q.bindStatic(6, e.loser);
-    q.bind(7, static_cast<std::int64_t>(e.outcome == Outcome::Draw ? 1 : 0));
-    q.bind(8, terms(e.behaviour));
-    q.bind(9, terms(e.group));
-    q.bind(10, terms(e.observer));
-    q.bindStatic(11, e.note);
+}
+
+void bindEncounterColumns(SqliteStatement& q, const Encounter& e, const UidBytes& derivedUid,
+                          EncounterTermCodes& terms, int row)
+{
+    const int at = row * kEncounterColumnCount;
+    bindEncounterFields(q, e, terms, at);
+    if (e.uid.empty()) q.bindStaticUid(at + 2, derivedUid);
+    else q.bindUid(at + 2, e.uid);
+}
+
+std::string insertEncountersSql(int rows)
+{
+    std::string sql = kInsertEncounterSql;
+    for (int i = 1; i < rows; ++i) sql += ",(?,?,?,?,?,?,?,?,?,?,?)";
+    return sql;
 }
 
 Encounter readEncounterRow(const SqliteStatement& q, const EncounterTermTexts& terms, const std::string& path)

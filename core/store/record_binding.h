@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
 #include "core/base/colony.h"
+#include "core/base/derived_uid.h"
 #include "core/store/encounter_terms.h"
 #include "core/store/sqlite_statement.h"
 
@@ -35,6 +36,16 @@ void bindResidenceColumns(SqliteStatement& q, const Residence& r);
 /// Binds parameters 1-11 of kInsertEncounterSql without copying: `e` must
 /// stay unchanged until the statement runs. `terms` gives (and adds) the codes.
 void bindEncounterColumns(SqliteStatement& q, const Encounter& e, EncounterTermCodes& terms);
+/// The same for row `row` (from 0) of insertEncountersSql (its parameters
+/// 11 row + 1 to 11 row + 11), with the bytes of `derivedUid` as the uid when
+/// `e` has none; they too must stay alive until the statement runs.
+void bindEncounterColumns(SqliteStatement& q, const Encounter& e, const UidBytes& derivedUid,
+                          EncounterTermCodes& terms, int row = 0);
+
+/// The parameters of one row of kInsertEncounterSql.
+inline constexpr int kEncounterColumnCount = 11;
+/// kInsertEncounterSql for `rows` rows in one statement.
+std::string insertEncountersSql(int rows);
 
 /// The same columns with an empty text in place of the uid (same positions).
 inline constexpr const char* kEncounterColumnsWithoutUidSql =

@@ -132,11 +132,6 @@ private:
 };
 
 /// True when the text has more than `n` lines (then its import is a bulk load).
-bool moreLinesThan(const std::string& text, std::size_t n)
-{
-    return static_cast<std::size_t>(std::count(text.begin(), text.end(), '\n')) + 1 > n;
-}
-
 std::string withoutSuffix(const std::string& generated, const char* suffix)
 {
     return generated.substr(0, generated.size() - std::char_traits<char>::length(suffix));

@@ -72,6 +72,11 @@ void SqliteStatement::bindUid(int index, std::string_view uid)
         bind(index, uid);
 }
 
+void SqliteStatement::bindStaticUid(int index, const std::array<unsigned char, 16>& bytes)
+{
+    sqlite3_bind_blob(stmt_, index, bytes.data(), static_cast<int>(bytes.size()), SQLITE_STATIC);
+}
+
 bool SqliteStatement::step()
 {
     const int rc = sqlite3_step(stmt_);

@@ -1,5 +1,6 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
+#include <array>
 #include <cstdint>
 #include <optional>
 #include <string>
@@ -29,6 +30,9 @@ public:
     /// Binds a record uid in its stored form (core/store/uid_storage.h):
     /// 16 bytes for a canonical uid, the text otherwise.
     void bindUid(int index, std::string_view uid);
+    /// Binds the 16 bytes of a canonical uid (its stored form) without a copy:
+    /// they must stay alive and unchanged until the statement is stepped.
+    void bindStaticUid(int index, const std::array<unsigned char, 16>& bytes);
 
     /// Steps once: true when a row is available.
     bool step();

@@ -20,15 +20,22 @@ SupportWriter::SupportWriter(sqlite3* db) : insert_(db, kInsertSupportSql) {}
 
 void SupportWriter::add(const Encounter& e)
 {
-    if (e.winnerSupport.empty() && e.loserSupport.empty()) return;
-    addSide(e, e.winnerSupport, "winner");
-    addSide(e, e.loserSupport, "loser");
+    addSide(e, nullptr, e.winnerSupport, "winner");
+    addSide(e, nullptr, e.loserSupport, "loser");
 }
 
-void SupportWriter::addSide(const Encounter& e, const std::vector<std::string>& ids, const char* side)
+void SupportWriter::add(const Encounter& e, const UidBytes& uid)
+{
+    addSide(e, &uid, e.winnerSupport, "winner");
+    addSide(e, &uid, e.loserSupport, "loser");
+}
+
+void SupportWriter::addSide(const Encounter& e, const UidBytes* uid, const std::vector<std::string>& ids,
+                            const char* side)
 {
     for (const std::string& id : ids) {
-        insert_.bindUid(1, e.uid);
+        if (uid) insert_.bindStaticUid(1, *uid);
+        else insert_.bindUid(1, e.uid);
         insert_.bind(2, id);
         insert_.bind(3, side);
         insert_.run();

@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
 #include "core/base/colony.h"
+#include "core/base/derived_uid.h"
 #include "core/store/sqlite_statement.h"
 
 #include <vector>
@@ -20,9 +21,11 @@ public:
     explicit SupportWriter(sqlite3* db);
     /// Inserts the rows of `e` (nothing when it has no supporters).
     void add(const Encounter& e);
+    /// The same for an encounter whose uid is the derived `uid` (e.uid empty).
+    void add(const Encounter& e, const UidBytes& uid);
 
 private:
-    void addSide(const Encounter& e, const std::vector<std::string>& ids, const char* side);
+    void addSide(const Encounter& e, const UidBytes* uid, const std::vector<std::string>& ids, const char* side);
     SqliteStatement insert_;
 };
 

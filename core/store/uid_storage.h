@@ -1,5 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
+#include "core/base/derived_uid.h"
+
 #include <array>
 #include <optional>
 #include <string>
@@ -14,8 +16,6 @@ namespace hierloom::core {
 // (36 characters, lower-case hex, dashes at 8-13-18-23) is stored as its
 // 16 bytes (a BLOB); any other uid (upper-case hex, a hand-made value) stays
 // text as given, so every uid reads back exactly as it was written.
-
-using UidBytes = std::array<unsigned char, 16>;
 
 /// The 16 bytes of a canonical uid; nothing for any other text.
 std::optional<UidBytes> compactUid(std::string_view uid);

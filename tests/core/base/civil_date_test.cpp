@@ -3,6 +3,8 @@
 
 #include <gtest/gtest.h>
 
+#include <cstdio>
+
 using namespace hierloom::core;
 
 TEST(CivilDate, EpochAndKnownDays)
@@ -33,6 +35,12 @@ TEST(CivilDate, TimeOfDay)
     EXPECT_FALSE(parseTimeOfDay("24:00").has_value());
     EXPECT_FALSE(parseTimeOfDay("7:45").has_value());
     EXPECT_EQ(formatTimeOfDay(465), "07:45");
+    // Hand-formatted for two-digit hours, printf's form otherwise: the same text as printf's everywhere.
+    for (int minutes = -200; minutes < 100 * 60 + 200; ++minutes) {
+        char buf[32];
+        std::snprintf(buf, sizeof buf, "%02d:%02d", minutes / 60, minutes % 60);
+        ASSERT_EQ(formatTimeOfDay(minutes), buf) << minutes;
+    }
 }
 
 TEST(CivilDate, LeapDayBirthdayFallsOnFirstMarch)

@@ -4,6 +4,7 @@
 // the audit trail, merges and bulk loads.
 #include "core/store/colony_csv_export.h"
 #include "core/store/colony_edits.h"
+#include "core/store/colony_import.h"
 #include "core/store/colony_merge.h"
 #include "core/store/colony_schema.h"
 #include "core/store/colony_store.h"
@@ -313,4 +314,66 @@ TEST(SupportStore, ABulkImportKeepsSupportersAndRestoresTheAuditTrigger)
     EXPECT_EQ(loaded[1].winnerSupport, (Ids{"C", "D"}));
     EXPECT_EQ(loaded[1].loserSupport, Ids{"E"});
     EXPECT_TRUE(loaded[0].winnerSupport.empty());
+}
+
+TEST(SupportStore, ABulkImportWritesEveryRowAsPlannedBetweenStatementsOfManyRows)
+{
+    // A bulk load writes runs of rows without supporters many to a statement
+    // and the others one by one: the result must be the plan, row for row,
+    // with the supporter rows in the order one-by-one writing gives them.
+    TempDir dir;
+    ColonyStore store = ColonyStore::create(dir.file("c.hierloom"));
+    addFounders(store);
+    const char* ids[] = {"A", "B", "C", "D", "E"};
+    std::string text = "date,time,winner,loser,outcome,behaviour,observer,note,winner_support,loser_support\n";
+    const size_t n = ColonyStore::kBulkEncounters + 333;
+    for (size_t i = 0; i < n; ++i) {
+        const bool supported = i % 150 < 2 || i % 977 == 3 || (i > 5000 && i < 5070 && i % 7 == 0);
+        const size_t w = i % 5, l = (i / 5 + 1 + i) % 5 == w ? (w + 1) % 5 : (i / 5 + 1 + i) % 5;
+        const size_t s = 3 - (w + l) % 3 == w || 3 - (w + l) % 3 == l ? 4 : 3 - (w + l) % 3;
+        text += formatDate(day("2011-01-01") + static_cast<Day>(i % 4000)) + "," +
+                (i % 3 ? formatTimeOfDay(static_cast<int>(i % 1440)) : "") + "," + ids[w] + "," + ids[l] + "," +
+                (i % 11 ? "decided" : "draw") + "," + (i % 2 ? "bite" : "chase") + "," + (i % 5 ? "ann" : "") + "," +
+                (i % 13 ? "" : "\"a, note\"") + "," + (supported && s != w && s != l ? ids[s] : "") + ",\n";
+    }
+    ImportInput input;
+    input.encounters = ImportSource{"encounters.csv", text};
+    ImportPlan plan = planImport(store.loadAnimals(), store.loadResidences(), input, kToday);
+    ASSERT_TRUE(plan.ok()) << plan.problems.text();
+    deriveUids(plan, importEpoch(store));
+    const ImportResult r = importInput(store, input, kToday);
+    ASSERT_TRUE(r.ok()) << r.problems.text();
+
+    const std::vector<Encounter> loaded = store.loadEncounters();
+    ASSERT_EQ(loaded.size(), n);
+    std::string expectedSupport, support;
+    int supportedRows = 0;
+    for (size_t i = 0; i < n; ++i) {
+        const Encounter& want = plan.encounters[i];
+        const Encounter& got = loaded[i];
+        EXPECT_EQ(got.seq, static_cast<std::int64_t>(i + 1));
+        EXPECT_EQ(got.uid, want.uid) << i;
+        EXPECT_EQ(got.date, want.date) << i;
+        EXPECT_EQ(got.time, want.time) << i;
+        EXPECT_EQ(got.winner + got.loser, want.winner + want.loser) << i;
+        EXPECT_EQ(got.outcome, want.outcome) << i;
+        EXPECT_EQ(got.behaviour + "|" + got.group + "|" + got.observer + "|" + got.note,
+                  want.behaviour + "|" + want.group + "|" + want.observer + "|" + want.note) << i;
+        EXPECT_EQ(got.winnerSupport, want.winnerSupport) << i;
+        for (const std::string& a : want.winnerSupport) expectedSupport += std::to_string(i + 1) + " winner " + a + "\n";
+        supportedRows += want.winnerSupport.empty() ? 0 : 1;
+    }
+    EXPECT_GT(supportedRows, 100);
+    sqlite3_stmt* q = nullptr;
+    sqlite3_prepare_v2(store.handle(),
+                       "SELECT e.seq, s.side, s.animal FROM encounter_support s JOIN encounter_row e ON e.uid = s.encounter "
+                       "ORDER BY s.rowid",
+                       -1, &q, nullptr);
+    while (sqlite3_step(q) == SQLITE_ROW)
+        support += std::to_string(sqlite3_column_int64(q, 0)) + " " +
+                   reinterpret_cast<const char*>(sqlite3_column_text(q, 1)) + " " +
+                   reinterpret_cast<const char*>(sqlite3_column_text(q, 2)) + "\n";
+    sqlite3_finalize(q);
+    EXPECT_EQ(support, expectedSupport);
+    EXPECT_EQ(store.observers(), Ids{"ann"});
 }
