@@ -2,6 +2,7 @@
 #include "core/research/data_health.h"
 
 #include "core/ranks/encounter_selection.h"
+#include "core/ranks/parallel_randomisation.h"
 #include "core/ranks/randomised_elo.h"
 #include "core/stats/cohens_kappa.h"
 
@@ -211,7 +212,8 @@ std::map<std::string, double> eloIntervalWidths(const EncounterSelection& s, con
 {
     std::map<std::string, double> widths;
     if (o.randomisations <= 0) return widths;
-    const std::vector<RandomisedEloRow> rows = randomisedElo(s.size(), s.bouts, o.elo, o.randomisations, o.seed, o.threads, cancel);
+    const std::vector<RandomisedEloRow> rows = randomisedElo(s.size(), s.bouts, o.elo, o.randomisations, o.seed,
+                                                                    o.threads == 0 ? defaultThreadCount() : o.threads, cancel);
     for (size_t i = 0; i < rows.size(); ++i)
         if (rows[i].rated) widths[s.ids[i]] = rows[i].high - rows[i].low;
     return widths;

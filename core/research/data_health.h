@@ -42,7 +42,7 @@ struct HealthOptions {
     EloSettings elo;         ///< for the randomised-Elo interval widths
     int randomisations = 1000; ///< orders of randomised Elo (0: no widths)
     std::uint64_t seed = 1;
-    unsigned threads = 0;
+    unsigned threads = 0;    ///< for the randomisations; 0: every core (the widths are the same for any count)
 };
 
 /// One animal's observation effort in the window.
