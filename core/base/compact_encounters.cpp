@@ -96,6 +96,14 @@ std::int16_t smallCode(CodeTable& table, std::string_view text, const char* what
 
 void CompactEncounters::add(const Encounter& e)
 {
+    const auto index = static_cast<std::uint32_t>(records.size());
+    records.push_back(recordOf(e));
+    for (const std::string& id : e.winnerSupport) supporters.push_back({index, animals.intern(id), SupportSide::Winner});
+    for (const std::string& id : e.loserSupport) supporters.push_back({index, animals.intern(id), SupportSide::Loser});
+}
+
+CompactEncounter CompactEncounters::recordOf(const Encounter& e)
+{
     CompactEncounter r;
     r.seq = e.seq;
     r.date = e.date;
@@ -106,10 +114,7 @@ void CompactEncounters::add(const Encounter& e)
     r.group = smallCode(groups, e.group, "groups");
     r.behaviour = smallCode(behaviours, e.behaviour, "behaviour codes");
     r.draw = e.outcome == Outcome::Draw;
-    const auto index = static_cast<std::uint32_t>(records.size());
-    records.push_back(r);
-    for (const std::string& id : e.winnerSupport) supporters.push_back({index, animals.intern(id), SupportSide::Winner});
-    for (const std::string& id : e.loserSupport) supporters.push_back({index, animals.intern(id), SupportSide::Loser});
+    return r;
 }
 
 Encounter CompactEncounters::expand(size_t index) const

@@ -87,6 +87,8 @@ struct CompactEncounters {
     size_t bytesHeld() const;
     /// Adds one encounter (in seq order), interning its texts.
     void add(const Encounter& e);
+    /// The record of `e` (its texts interned), not added; supporters aside.
+    CompactEncounter recordOf(const Encounter& e);
     /// The encounter of one record, without note and uid.
     Encounter expand(size_t index) const;
 };

@@ -38,6 +38,37 @@ std::string uuidTextOf(const unsigned char* b)
     return out;
 }
 
+namespace {
+
+int hexValue(char c)
+{
+    if (c >= '0' && c <= '9') return c - '0';
+    if (c >= 'a' && c <= 'f') return c - 'a' + 10;
+    return -1; // upper case is not canonical: kept as text so it reads back as written
+}
+
+} // namespace
+
+std::optional<UidBytes> canonicalUidBytes(std::string_view u)
+{
+    if (u.size() != 36) return std::nullopt;
+    UidBytes out{};
+    size_t at = 0;
+    for (size_t i = 0; i < 36;) {
+        if (i == 8 || i == 13 || i == 18 || i == 23) {
+            if (u[i] != '-') return std::nullopt;
+            ++i;
+            continue;
+        }
+        const int hi = hexValue(u[i]);
+        const int lo = hexValue(u[i + 1]);
+        if (hi < 0 || lo < 0) return std::nullopt;
+        out[at++] = static_cast<unsigned char>(hi << 4 | lo);
+        i += 2;
+    }
+    return out;
+}
+
 std::string derivedUid(std::string_view key) { return uuidTextOf(withVersionAndVariant(KeyHash().add(key).bytes()).data()); }
 
 UidBytes derivedRowUidBytes(const UidBytes& p, std::uint64_t row, const UidBytes& k)

@@ -2,6 +2,7 @@
 #pragma once
 #include <array>
 #include <cstdint>
+#include <optional>
 #include <string>
 #include <string_view>
 
@@ -43,6 +44,11 @@ std::string derivedUid(std::string_view key);
 
 /// The canonical text form (lower-case hex, dashed 8-4-4-4-12) of 16 bytes.
 std::string uuidTextOf(const unsigned char* bytes);
+
+/// The 16 bytes of a uid in the canonical form (36 characters, lower-case
+/// hex, dashes at 8-13-18-23); nothing for any other text (upper case, a
+/// hand-made value), which is kept as text wherever uids are stored.
+std::optional<UidBytes> canonicalUidBytes(std::string_view uid);
 
 /// A derived uid for the `row`-th record (from 0) of one load: 48 bits from
 /// the hash of `place` (the same for the whole load), then `row` in 34 bits,

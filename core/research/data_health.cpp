@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "core/research/data_health.h"
 
+#include "core/ranks/compact_selection.h"
 #include "core/ranks/encounter_selection.h"
 #include "core/ranks/parallel_randomisation.h"
 #include "core/ranks/randomised_elo.h"
@@ -197,14 +198,29 @@ std::map<std::string, RankFlag> rankFlags(const CompactEncounters& encounters, s
     return flagsOf(encounterCounts(encounters, from, to, group), minEncounters);
 }
 
-EncounterSelection eloIntervalSelection(const Colony& colony, const ResidenceIndex& where, const HealthOptions& o)
+namespace {
+
+SelectionOptions intervalSelectionOptions(const HealthOptions& o)
 {
     SelectionOptions sel;
     sel.from = o.from;
     sel.to = o.to.value_or(o.today);
     sel.group = o.group;
     sel.draws = o.elo.draws;
-    return selectEncounters(colony, where, sel);
+    return sel;
+}
+
+} // namespace
+
+EncounterSelection eloIntervalSelection(const Colony& colony, const ResidenceIndex& where, const HealthOptions& o)
+{
+    return selectEncounters(colony, where, intervalSelectionOptions(o));
+}
+
+EncounterSelection eloIntervalSelection(const CompactEncounters& encounters, const std::vector<Animal>& animals,
+                                        const ResidenceIndex& where, const HealthOptions& o)
+{
+    return selectEncounters(encounters, animals, where, intervalSelectionOptions(o));
 }
 
 std::map<std::string, double> eloIntervalWidths(const EncounterSelection& s, const HealthOptions& o,

@@ -161,6 +161,9 @@ std::map<std::string, double> eloIntervalWidths(const Colony& colony, const Resi
 /// policy), and the widths of a selection so made: a worker may select, let
 /// go of the colony, then randomise.
 EncounterSelection eloIntervalSelection(const Colony& colony, const ResidenceIndex& where, const HealthOptions& options);
+/// The same selection from compact records; `animals` is the colony's animal list.
+EncounterSelection eloIntervalSelection(const CompactEncounters& encounters, const std::vector<Animal>& animals,
+                                        const ResidenceIndex& where, const HealthOptions& options);
 std::map<std::string, double> eloIntervalWidths(const EncounterSelection& selection, const HealthOptions& options,
                                                 const std::atomic<bool>* cancel = nullptr);
 

@@ -574,6 +574,8 @@ std::vector<Encounter> ColonyStore::loadEncounterRangeWithoutSupporters(std::int
 
 void ColonyStore::loadSupporters(std::vector<Encounter>& encounters) const { loadSupportRows(db_, encounters); }
 
+void ColonyStore::loadSupporters(EncounterRecords& records) const { loadSupportRows(db_, records); }
+
 std::optional<std::pair<std::int64_t, std::int64_t>> ColonyStore::encounterSeqRange() const
 {
     SqliteStatement q(db_, "SELECT min(seq), max(seq) FROM encounter_row");

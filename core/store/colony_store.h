@@ -2,6 +2,7 @@
 #pragma once
 #include "core/base/colony.h"
 #include "core/base/colony_file_error.h"
+#include "core/base/encounter_records.h"
 #include "core/store/check_cache.h"
 
 #include <cstdint>
@@ -92,6 +93,8 @@ public:
     std::vector<Encounter> loadEncounterRangeWithoutSupporters(std::int64_t first, std::int64_t last) const;
     /// Fills the supporters of `encounters` (in seq order, none yet): one pass over the file's supporters.
     void loadSupporters(std::vector<Encounter>& encounters) const;
+    /// The same for compact records (in seq order, no supporters yet).
+    void loadSupporters(EncounterRecords& records) const;
     /// The lowest and the highest seq of the file's encounters; none when it has none.
     std::optional<std::pair<std::int64_t, std::int64_t>> encounterSeqRange() const;
     /// The date of the file's latest encounter (every group), if any.

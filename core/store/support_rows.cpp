@@ -55,19 +55,43 @@ void replaceSupportRows(sqlite3* db, const Encounter& e)
     SupportWriter(db).add(e);
 }
 
-void loadSupportRows(sqlite3* db, std::vector<Encounter>& encounters)
+namespace {
+
+/// Every supporter row joined on its encounter, in seq order and within an
+/// encounter in the order written: visit(seq, animal, side).
+template <class Visit> void forEachSupportRow(sqlite3* db, Visit visit)
 {
-    // Joined on the encounter so the rows arrive in seq order; a walk along the
-    // loaded encounters (also in seq order) then places them without a map.
     SqliteStatement q(db, "SELECT e.seq, s.animal, s.side FROM encounter_support s JOIN encounter_row e "
                           "ON e.uid = s.encounter ORDER BY e.seq, s.rowid");
+    while (q.step())
+        if (!visit(q.integer(0), q.text(1), q.text(2))) return;
+}
+
+} // namespace
+
+void loadSupportRows(sqlite3* db, std::vector<Encounter>& encounters)
+{
+    // The rows arrive in seq order; a walk along the loaded encounters (also
+    // in seq order) then places them without a map.
     size_t at = 0;
-    while (q.step()) {
-        const std::int64_t seq = q.integer(0);
+    forEachSupportRow(db, [&](std::int64_t seq, const std::string& animal, const std::string& side) {
         while (at < encounters.size() && encounters[at].seq < seq) ++at;
-        if (at == encounters.size()) break;
-        if (encounters[at].seq == seq) addRow(encounters[at], q.text(1), q.text(2));
-    }
+        if (at == encounters.size()) return false;
+        if (encounters[at].seq == seq) addRow(encounters[at], animal, side);
+        return true;
+    });
+}
+
+void loadSupportRows(sqlite3* db, EncounterRecords& records)
+{
+    size_t at = 0;
+    forEachSupportRow(db, [&](std::int64_t seq, const std::string& animal, const std::string& side) {
+        while (at < records.size() && records.seq(at) < seq) ++at;
+        if (at == records.size()) return false;
+        if (records.seq(at) == seq)
+            records.appendSupporter(at, animal, side == "winner" ? SupportSide::Winner : SupportSide::Loser);
+        return true;
+    });
 }
 
 void loadSupportRowsOf(sqlite3* db, Encounter& e)

@@ -2,6 +2,7 @@
 #pragma once
 #include "core/base/colony.h"
 #include "core/base/derived_uid.h"
+#include "core/base/encounter_records.h"
 #include "core/store/sqlite_statement.h"
 
 #include <vector>
@@ -37,6 +38,9 @@ void replaceSupportRows(sqlite3* db, const Encounter& e);
 
 /// Fills the supporters of `encounters`, which are in seq order (as loaded).
 void loadSupportRows(sqlite3* db, std::vector<Encounter>& encounters);
+
+/// The same for compact records without supporters yet (in seq order).
+void loadSupportRows(sqlite3* db, EncounterRecords& records);
 
 /// Fills the supporters of one encounter, found by its uid.
 void loadSupportRowsOf(sqlite3* db, Encounter& e);

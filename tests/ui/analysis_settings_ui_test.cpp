@@ -134,7 +134,7 @@ TEST(AnalysisSettingsDialog, KeystrokesChangeTheMatrixView)
     matrix->setMethod(core::RankMethod::Elo); // it opens in I&SI order, as `matrix`; Elo shows the k
     ASSERT_TRUE(w.window.showView(QStringLiteral("matrix")));
     matrix->runner()->wait();
-    const core::Colony& colony = w.window.document()->colony();
+    const core::Colony& colony = w.window.document()->colonyFor({});
     const core::ResidenceIndex& where = w.window.document()->residences();
     // Draws count half to each side: the cells add up to every counted encounter.
     const core::EncounterSelection all = core::selectEncounters(colony, where, {});

@@ -128,7 +128,7 @@ TEST(PlannerView, SplitByMatrilinesSaveAndReopen)
     TempDir dir;
     QuietWindow window;
     ASSERT_TRUE(window.openColony(QString::fromStdString(demoFile(dir))));
-    const size_t encounters = window.document()->colony().encounters.size();
+    const size_t encounters = window.document()->encounters().size();
     ui::PlannerView* planner = window.managerViews().planner;
     ASSERT_NE(planner, nullptr);
     EXPECT_TRUE(hasCaution(planner));
@@ -169,7 +169,7 @@ TEST(PlannerView, SplitByMatrilinesSaveAndReopen)
     EXPECT_EQ(planner->findChildren<QLabel*>(QStringLiteral("adultFemalesOnly")).size(), 2);
     const QTableWidget* moves = planner->movesTable();
     ASSERT_GT(moves->rowCount(), 0);
-    const core::Colony& colony = window.document()->colony();
+    const core::Colony& colony = window.document()->colonyFor({});
     const std::string& first = r.moves.front().animal;
     const std::string& name = colony.animals[static_cast<size_t>(colony.animalIndex(first))].name;
     EXPECT_EQ(moves->item(0, 0)->text().toStdString(), name + " (" + first + ")");
@@ -187,7 +187,7 @@ TEST(PlannerView, SplitByMatrilinesSaveAndReopen)
     EXPECT_GT(planner->compareTable()->rowCount(), 0);
     // Never a change to the records.
     window.document()->reload();
-    EXPECT_EQ(window.document()->colony().encounters.size(), encounters);
+    EXPECT_EQ(window.document()->encounters().size(), encounters);
     EXPECT_EQ(window.document()->residences().group("South Pen"), -1);
 }
 
@@ -199,7 +199,7 @@ TEST(HierarchyReport, DemoReportIsAValidPdf)
     document.open(QString::fromStdString(demoFile(dir)));
     const QString pdf = QString::fromStdString(dir.file("report.pdf"));
     const int pages = report::writeHierarchyReportPdf(
-        pdf, document.colony(), ui::documentReportOptions(&document, core::demo::kGroup, std::nullopt));
+        pdf, document.colonyFor({}), ui::documentReportOptions(&document, core::demo::kGroup, std::nullopt));
     EXPECT_GE(pages, 3);
     QFile file(pdf);
     ASSERT_TRUE(file.open(QIODevice::ReadOnly));
@@ -219,7 +219,7 @@ TEST(HierarchyReport, DemoReportIsAValidPdf)
         while (it.hasNext()) counted = std::max(counted, it.next().captured(1).toInt());
     }
     EXPECT_EQ(counted, pages);
-    EXPECT_THROW(report::writeHierarchyReportPdf(pdf, document.colony(),
+    EXPECT_THROW(report::writeHierarchyReportPdf(pdf, document.colonyFor({}),
                                                  ui::documentReportOptions(&document, "No Such Group", std::nullopt)),
                  std::invalid_argument);
 }
@@ -232,7 +232,7 @@ TEST(HierarchyReport, HasTheForesightSection)
     document.open(QString::fromStdString(demoFile(dir)));
     QPdfWriter writer(QString::fromStdString(dir.file("r.pdf")));
     QStringList headings;
-    report::paintHierarchyReport(writer, document.colony(),
+    report::paintHierarchyReport(writer, document.colonyFor({}),
                                  ui::documentReportOptions(&document, core::demo::kGroup, std::nullopt), &headings);
     const qsizetype changes = headings.indexOf(QStringLiteral("Recent rank changes"));
     const qsizetype foresight = headings.indexOf(QStringLiteral("How much does inheritance explain"));

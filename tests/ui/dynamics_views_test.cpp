@@ -46,7 +46,7 @@ core::Foresight expectedForesight(ui::ColonyDocument* document, core::SiblingRul
     o.rule = rule;
     o.maturityYears = settings.maturityYears;
     o.elo = settings.elo;
-    return core::computeForesight(document->colony(), document->residences(), record, o);
+    return core::computeForesight(document->colonyFor({}), document->residences(), record, o);
 }
 
 } // namespace

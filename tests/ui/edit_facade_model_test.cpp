@@ -153,7 +153,7 @@ private:
 
     void edit()
     {
-        const auto& cache = document_.colony().encounters;
+        const std::vector<core::Encounter> cache = document_.encounters().expand();
         if (cache.empty()) return;
         core::Encounter e = cache[static_cast<size_t>(uniform(0, static_cast<int>(cache.size()) - 1))];
         switch (uniform(0, 4)) {
@@ -185,7 +185,7 @@ private:
 
     void remove()
     {
-        const auto& cache = document_.colony().encounters;
+        const std::vector<core::Encounter> cache = document_.encounters().expand();
         if (cache.empty()) return;
         std::vector<core::Encounter> rows;
         const int n = std::min(uniform(1, 3), static_cast<int>(cache.size()));
@@ -251,7 +251,7 @@ private:
         ASSERT_TRUE(caught.empty()) << caught.front().message;
         caughtUp();
         std::vector<core::Encounter> rows;
-        for (const core::Encounter& e : document_.colony().encounters)
+        for (const core::Encounter& e : document_.colonyFor({}).encounters)
             if (session_.count(e.uid)) rows.push_back(e);
         if (rows.empty()) return;
         const core::FieldProblems p = facade_.deleteEncounters(rows, QStringLiteral("Take back the session"));
@@ -360,8 +360,8 @@ private:
         // Until the desktop notices another program's write, it shows the file as it last read it.
         ASSERT_EQ(document_.writtenElsewhere(), outside_.has_value());
         const State& shown = model_.now();
-        ASSERT_TRUE(ui::sameRecords(document_.colony().encounters, shown.encounters)) << "the document's cache drifted";
-        if (!outside_) ASSERT_TRUE(ui::sameRecords(document_.colony().encounters, file.encounters));
+        ASSERT_TRUE(ui::sameRecords(document_.colonyFor({}).encounters, shown.encounters)) << "the document's cache drifted";
+        if (!outside_) ASSERT_TRUE(ui::sameRecords(document_.colonyFor({}).encounters, file.encounters));
         ASSERT_EQ(animals_.rowCount(), 6); // the animals' table is not touched by any of these steps
 
         // The table: every encounter the document shows, newest first, each cell from its record.

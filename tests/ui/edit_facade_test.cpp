@@ -44,9 +44,9 @@ struct Facade {
     void expectCacheIsTheFile()
     {
         const core::Colony file = core::ColonyStore::open(path, core::ColonyStore::Mode::ReadOnly).load();
-        EXPECT_TRUE(ui::sameRecords(document.colony().encounters, file.encounters));
-        EXPECT_TRUE(ui::sameRecords(document.colony().animals, file.animals));
-        EXPECT_TRUE(ui::sameRecords(document.colony().residences, file.residences));
+        EXPECT_TRUE(ui::sameRecords(document.colonyFor({}).encounters, file.encounters));
+        EXPECT_TRUE(ui::sameRecords(document.pedigree().animals, file.animals));
+        EXPECT_TRUE(ui::sameRecords(document.pedigree().residences, file.residences));
     }
 };
 
@@ -102,14 +102,14 @@ TEST(EditFacade, EveryKindOfWriteIsOneCommandAndOneChangeAndUndoRestoresTheFile)
     ASSERT_FALSE(e.uid.empty()); // the entered record carries its uid and seq
     {
         SCOPED_TRACE("edit encounter");
-        core::Encounter changed = f.document.colony().encounters.front();
+        core::Encounter changed = f.document.colonyFor({}).encounters.front();
         changed.note = "bit on the tail";
         checkUndoableWrite(f, Kind::EncountersChanged, [&] { return f.facade.editEncounter(changed); });
     }
     {
         SCOPED_TRACE("delete encounter");
         checkUndoableWrite(f, Kind::EncountersChanged,
-                           [&] { return f.facade.deleteEncounters({f.document.colony().encounters.front()}); });
+                           [&] { return f.facade.deleteEncounters({f.document.colonyFor({}).encounters.front()}); });
     }
     {
         SCOPED_TRACE("add animal");
@@ -122,7 +122,7 @@ TEST(EditFacade, EveryKindOfWriteIsOneCommandAndOneChangeAndUndoRestoresTheFile)
     }
     {
         SCOPED_TRACE("edit animal");
-        core::Animal a = f.document.colony().animals[static_cast<size_t>(f.document.colony().animalIndex("F2"))];
+        core::Animal a = f.document.pedigree().animals[static_cast<size_t>(f.document.pedigree().animalIndex("F2"))];
         a.name = "Beatrix";
         checkUndoableWrite(f, Kind::AnimalsChanged, [&] { return f.facade.editAnimal(a); });
     }
@@ -183,8 +183,8 @@ TEST(EditFacade, AnEditThatChangesNothingWritesAndPushesNothing)
     const std::string before = fileDump(f.path);
     QSignalSpy changed(&f.document, &ui::ColonyDocument::changed);
 
-    EXPECT_TRUE(f.facade.editEncounter(f.document.colony().encounters.front()).empty());
-    EXPECT_TRUE(f.facade.editAnimal(f.document.colony().animals.front()).empty());
+    EXPECT_TRUE(f.facade.editEncounter(f.document.colonyFor({}).encounters.front()).empty());
+    EXPECT_TRUE(f.facade.editAnimal(f.document.pedigree().animals.front()).empty());
     EXPECT_TRUE(f.facade.setObservers({"GW"}).empty());
     EXPECT_TRUE(f.facade.setBehaviourCodes(f.document.store()->behaviourCodes()).empty());
     // Thresholds and species as in effect (the defaults; nothing stored yet).
@@ -251,7 +251,7 @@ TEST(EditFacade, ImportClearsTheHistoryOnceAndSaysWhy)
     EXPECT_TRUE(cleared.at(0).at(0).toString().contains(QStringLiteral("import"))) << cleared.at(0).at(0).toString().toStdString();
     ASSERT_EQ(changed.count(), 1);
     EXPECT_EQ(changed.at(0).at(0).value<Kind>(), Kind::Reset);
-    EXPECT_EQ(f.document.colony().encounters.size(), 3u);
+    EXPECT_EQ(f.document.encounters().size(), 3u);
     f.expectCacheIsTheFile();
 }
 
@@ -281,7 +281,7 @@ TEST(EditFacade, MergeChecksWithoutWritingThenClearsTheHistoryOnceAndSaysWhy)
     EXPECT_EQ(f.stack()->count(), 0);
     ASSERT_EQ(cleared.count(), 1);
     EXPECT_TRUE(cleared.at(0).at(0).toString().contains(QStringLiteral("merge")));
-    EXPECT_EQ(f.document.colony().encounters.size(), 2u);
+    EXPECT_EQ(f.document.encounters().size(), 2u);
     f.expectCacheIsTheFile();
 }
 

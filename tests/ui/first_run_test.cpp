@@ -80,8 +80,8 @@ TEST_F(FirstRun, DemoOpensReadOnlyAsACopy)
     EXPECT_TRUE(QFileInfo(doc->path()).absoluteFilePath().startsWith(QDir(dataFolder).absolutePath()));
     // It holds the bundled demo colony (the generator's own record count).
     const core::Colony expected = core::generateDemoColony();
-    EXPECT_EQ(doc->colony().animals.size(), expected.animals.size());
-    EXPECT_EQ(doc->colony().encounters.size(), expected.encounters.size());
+    EXPECT_EQ(doc->pedigree().animals.size(), expected.animals.size());
+    EXPECT_EQ(doc->encounters().size(), expected.encounters.size());
     EXPECT_FALSE(window.findChild<ui::WelcomePanel*>()->isVisible());
     EXPECT_TRUE(window.windowTitle().contains(QStringLiteral("read-only"))) << window.windowTitle().toStdString();
     // The copy is replaced on every visit, so it stays out of the recent list.

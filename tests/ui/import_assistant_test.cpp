@@ -156,7 +156,7 @@ TEST(ImportAssistant, TypedMappingPreviewDateQuestionNewAnimalImportAndReuse)
     ASSERT_EQ(encounters.size(), 3u);
     EXPECT_EQ(core::formatDate(encounters[2].date), "2021-05-07");
     EXPECT_EQ(encounters[2].winner, "N9");
-    EXPECT_EQ(o.document.colony().animalIndex("N9") >= 0, true);
+    EXPECT_EQ(o.document.pedigree().animalIndex("N9") >= 0, true);
 
     // A second sheet: the saved mapping chosen by typing its name fills every field.
     ui::ImportAssistantDialog again(&o.facade);

@@ -85,7 +85,7 @@ TEST(LargeColonyWindow, OpensWithTheFirstGroupShowsProgressAndFollowsShowGroup)
     window.document()->finishLoading();
     QApplication::processEvents();
     EXPECT_FALSE(progress->isVisible());
-    EXPECT_EQ(window.document()->colony().encounters.size(), 30u);
+    EXPECT_EQ(window.document()->encounters().size(), 30u);
     bool countShown = false;
     for (QLabel* label : window.statusBar()->findChildren<QLabel*>())
         countShown = countShown || label->text() == QStringLiteral("Encounters: 30");
@@ -120,5 +120,5 @@ TEST(LargeColonyWindow, ClosingWhileLoadingStopsTheLoadAndHidesTheProgress)
     auto* progress = window.statusBar()->findChild<QWidget*>(QStringLiteral("loadProgress"));
     ASSERT_NE(progress, nullptr);
     EXPECT_FALSE(progress->isVisible());
-    EXPECT_TRUE(window.document()->colony().encounters.empty());
+    EXPECT_TRUE(window.document()->encounters().empty());
 }

@@ -82,7 +82,7 @@ TEST(OutsideWrite, ALineTypedAfterAnotherProgramWroteIsSavedOnTopAndUndoNeverTou
     // The table mirrors the file: the other program's line is an earlier one.
     ASSERT_EQ(e.panel->sessionList()->rowCount(), 3);
     EXPECT_EQ(e.panel->countText(), QStringLiteral("2 lines · 3 animals · 0 warnings · 1 earlier"));
-    EXPECT_EQ(e.document.colony().encounters.size(), 3u);
+    EXPECT_EQ(e.document.encounters().size(), 3u);
 
     // Ctrl+Z takes back the line typed after the re-read, and no further.
     ctrl(e, Qt::Key_Z);
@@ -133,7 +133,7 @@ TEST(OutsideWrite, AnUndoStepReachedByTheStackItselfWritesNothingAndTheHistoryGo
     EXPECT_EQ(inFile(e.path).size(), 3u); // nothing taken back
     for (int i = 0; i < 50 && e.document.undoStack()->count() > 0; ++i) QTest::qWait(10);
     EXPECT_EQ(e.document.undoStack()->count(), 0);
-    EXPECT_EQ(e.document.colony().encounters.size(), 3u);
+    EXPECT_EQ(e.document.encounters().size(), 3u);
     EXPECT_EQ(e.panel->sessionList()->rowCount(), 3);
 }
 
@@ -211,17 +211,17 @@ TEST(OutsideWrite, TheMainWindowReadsTheFileAgainWhenItIsActivated)
     ASSERT_TRUE(window.openColony(ui::toQString(path)));
     window.show();
     QApplication::setActiveWindow(&window);
-    ASSERT_EQ(window.document()->colony().encounters.size(), 0u);
+    ASSERT_EQ(window.document()->encounters().size(), 0u);
     // The person goes to a terminal (another window has the keyboard) and imports there.
     QWidget terminal;
     terminal.show();
     QApplication::setActiveWindow(&terminal);
     outsideLine(path, "07:00", "F1", "F2");
     outsideLine(path, "07:05", "F1", "D1");
-    EXPECT_EQ(window.document()->colony().encounters.size(), 0u); // nothing read while away
+    EXPECT_EQ(window.document()->encounters().size(), 0u); // nothing read while away
     // Back to the window: read again at once, and said in the status bar.
     QApplication::setActiveWindow(&window);
-    EXPECT_EQ(window.document()->colony().encounters.size(), 2u);
+    EXPECT_EQ(window.document()->encounters().size(), 2u);
     EXPECT_TRUE(window.statusBar()->currentMessage().startsWith(
         QStringLiteral("Another program changed entry.hierloom; it was read again and the undo history emptied "
                       "(encounters 0 → 2, animals 6 → 6)")))

@@ -50,7 +50,7 @@ TEST(MatrixView, OrderedAsCoreOrdersWithMarksAndBoundaries)
 {
     DemoDocument demo;
     ui::MatrixView view(demo.document());
-    const core::Colony& c = demo.document()->colony();
+    const core::Colony& c = demo.document()->colonyFor({});
     const core::ResidenceIndex& where = demo.document()->residences();
     const core::Matrilines lines(c);
     for (core::RankMethod m : {core::RankMethod::Elo, core::RankMethod::DavidsScore, core::RankMethod::Isi}) {
@@ -95,7 +95,7 @@ TEST(HierarchyPlotsView, OnePointPerMonthInEveryPanel)
     DemoDocument demo;
     ui::HierarchyPlotsView view(demo.document());
     finish(view.runner());
-    const core::Colony& c = demo.document()->colony();
+    const core::Colony& c = demo.document()->colonyFor({});
     const core::ResidenceIndex& where = demo.document()->residences();
     const size_t months = core::selectionPeriods(c, where, {}, core::PeriodLength::Month).size();
     EXPECT_EQ(months, 84u); // 2019-01 .. 2025-12
@@ -162,8 +162,8 @@ TEST(HierarchyPlotsView, OneGroupOrAll)
     // The same figures as the core's for that group.
     core::InheritanceOptions options;
     options.group = "B";
-    const core::Matrilines lines(document.colony());
-    const core::HierarchySeries expected = core::computeHierarchySeries(document.colony(), document.residences(), lines, options);
+    const core::Matrilines lines(document.colonyFor({}));
+    const core::HierarchySeries expected = core::computeHierarchySeries(document.colonyFor({}), document.residences(), lines, options);
     ASSERT_EQ(view.series().months.size(), expected.months.size());
     for (size_t m = 0; m < expected.months.size(); ++m) {
         EXPECT_EQ(view.series().months[m].hPrime, expected.months[m].hPrime);

@@ -131,7 +131,7 @@ private:
         const core::FieldProblems p = facade_.addEncounter(e);
         ASSERT_TRUE(p.empty()) << p.front().message;
         // The new row is in the cache at once, whether or not its group was read yet.
-        const auto& cache = document_.colony().encounters;
+        const std::vector<core::Encounter> cache = document_.encounters().expand();
         ASSERT_FALSE(cache.empty());
         EXPECT_EQ(rowText(cache.back()), rowText(e));
     }
@@ -157,7 +157,7 @@ private:
         // As the window's activation does: another program's writes are read now.
         document_.catchUpWithFile();
         const core::ColonyStore fresh = core::ColonyStore::open(path_, core::ColonyStore::Mode::ReadOnly);
-        const auto& cache = document_.colony().encounters;
+        const std::vector<core::Encounter> cache = document_.encounters().expand();
         ASSERT_TRUE(std::is_sorted(cache.begin(), cache.end(),
                                    [](const auto& a, const auto& b) { return a.seq < b.seq; }));
         if (document_.isComplete()) {
@@ -234,12 +234,12 @@ TEST(ProgressiveLoad, OpensWithOneGroupThenReadsEveryEncounterInTheBackground)
     EXPECT_EQ(shown.front().front().toString(), QStringLiteral("A"));
     EXPECT_FALSE(document.isComplete());
     EXPECT_TRUE(document.isLoading());
-    EXPECT_EQ(document.colony().encounters.size(), 20u);
+    EXPECT_EQ(document.encounters().size(), 20u);
     EXPECT_FALSE(document.holdsGroup("B"));
     document.finishLoading();
     EXPECT_TRUE(document.isComplete());
     EXPECT_FALSE(document.isLoading());
-    EXPECT_EQ(document.colony().encounters.size(), 30u);
+    EXPECT_EQ(document.encounters().size(), 30u);
     EXPECT_EQ(finished.count(), 1);
     // One report per part: 30 rows are one part, "1 of 1".
     ASSERT_EQ(progress.count(), 1);
@@ -253,7 +253,7 @@ TEST(ProgressiveLoad, OpensWithOneGroupThenReadsEveryEncounterInTheBackground)
     EXPECT_FALSE(document.isLoading());
     QCoreApplication::processEvents();
     EXPECT_EQ(finished.count(), 1);
-    EXPECT_TRUE(document.colony().encounters.empty());
+    EXPECT_TRUE(document.encounters().empty());
 }
 
 TEST(ProgressiveLoad, ACentreTooLargeToReadWholeKeepsTheGroupsInUseUntilAskedForEveryGroup)
@@ -279,16 +279,16 @@ TEST(ProgressiveLoad, ACentreTooLargeToReadWholeKeepsTheGroupsInUseUntilAskedFor
     document.open(ui::toQString(path));
     EXPECT_FALSE(document.isComplete());
     EXPECT_FALSE(document.isLoading()) << "nothing more is read by itself";
-    EXPECT_EQ(document.colony().encounters.size(), 20u); // group A
+    EXPECT_EQ(document.encounters().size(), 20u); // group A
     document.showGroup(QStringLiteral("B"));
     EXPECT_EQ(document.heldGroups(), std::vector<std::string>{"B"});
-    EXPECT_EQ(document.colony().encounters.size(), 10u) << "A was dropped for B";
+    EXPECT_EQ(document.encounters().size(), 10u) << "A was dropped for B";
     QSignalSpy progress(&document, &ui::ColonyDocument::loadProgress);
     document.readEverything();
     EXPECT_TRUE(document.isLoading());
     document.finishLoading();
     EXPECT_TRUE(document.isComplete());
-    EXPECT_EQ(document.colony().encounters.size(), 30u);
+    EXPECT_EQ(document.encounters().size(), 30u);
     ASSERT_GE(progress.count(), 2);
     EXPECT_EQ(progress.front().at(0).toInt(), 0); // the bar appears before the first group is read
 }

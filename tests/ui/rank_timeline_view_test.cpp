@@ -82,7 +82,7 @@ TEST_F(TimelineViewTest, OneLinePerFemaleEverRankedInAPrediction)
 {
     ui::RankTimelineView view(demo.document(), &selection);
     finish(view.runner());
-    const core::Colony& c = demo.document()->colony();
+    const core::Colony& c = demo.document()->colonyFor({});
     const core::ResidenceIndex& where = demo.document()->residences();
     const core::Matrilines lines(c);
     ASSERT_EQ(view.timeline().checkpoints.size(), 84u); // 2019-01 .. 2025-12 (demo_colony.h)
@@ -183,7 +183,7 @@ TEST_F(TimelineViewTest, WeeklyStepHasOnePointPerWeek)
     finish(view.runner());
     // One checkpoint per ISO week meeting the record's first to last encounter (core::periodsCovering).
     const core::EncounterSelection all =
-        core::selectEncounters(demo.document()->colony(), demo.document()->residences(), {});
+        core::selectEncounters(demo.document()->colonyFor({}), demo.document()->residences(), {});
     EXPECT_EQ(view.timeline().checkpoints.size(),
               core::periodsCovering(*all.firstDay, *all.lastDay, core::PeriodLength::Week).size());
     EXPECT_GT(view.timeline().checkpoints.size(), 360u); // about seven years of weeks
@@ -220,7 +220,7 @@ TEST_F(TimelineViewTest, ClicksLinkTimelineAndPedigree)
 TEST_F(TimelineViewTest, PedigreeDrawsMothersAboveDaughtersAndPresence)
 {
     ui::PedigreeView tree(demo.document(), &selection);
-    const core::Matrilines lines(demo.document()->colony());
+    const core::Matrilines lines(demo.document()->colonyFor({}));
     const core::DemoColonyFacts facts = core::demoColonyFacts();
     // Every animal of the five female-headed lines is drawn (lineOf lists them, males included).
     EXPECT_EQ(tree.nodes().size(), facts.lineOf.size());

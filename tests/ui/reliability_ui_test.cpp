@@ -115,8 +115,8 @@ TEST(ReliabilityUi, DamagedFileIsOfferedItsNewestBackup)
     ASSERT_TRUE(window.openColony(QString::fromStdString(path))) << window.errors.join('\n').toStdString();
     EXPECT_EQ(window.questions.size(), 1);
     EXPECT_TRUE(window.errors.isEmpty()) << window.errors.join('\n').toStdString();
-    EXPECT_EQ(window.document()->colony().animals.size(), 3u);
-    EXPECT_EQ(window.document()->colony().encounters.size(), 3u);
+    EXPECT_EQ(window.document()->pedigree().animals.size(), 3u);
+    EXPECT_EQ(window.document()->encounters().size(), 3u);
     EXPECT_EQ(window.encounterView()->visibleRowCount(), 3);
     bool keptDamaged = false;
     for (const auto& entry : std::filesystem::directory_iterator(core::backupFolder(path)))
@@ -206,12 +206,12 @@ TEST(ReliabilityUi, MergeDialogAddsTheOtherFilesNewEncounter)
     ASSERT_TRUE(dialog.canMerge());
     ASSERT_TRUE(dialog.merge()) << dialog.errorText().toStdString();
     EXPECT_TRUE(dialog.report().written);
-    EXPECT_EQ(window.document()->colony().encounters.size(), 4u);
+    EXPECT_EQ(window.document()->encounters().size(), 4u);
     EXPECT_EQ(window.encounterView()->visibleRowCount(), 4);
     EXPECT_EQ(window.document()->undoStack()->count(), 0);
     EXPECT_TRUE(window.statusBar()->currentMessage().contains(QStringLiteral("merge")))
         << window.statusBar()->currentMessage().toStdString();
-    const auto& added = window.document()->colony().encounters.back();
+    const auto& added = window.document()->colonyFor({}).encounters.back();
     EXPECT_EQ(added.winner, "D1");
     EXPECT_EQ(added.loser, "F2");
 
@@ -255,7 +255,7 @@ TEST(ReliabilityUi, MergeDialogShowsConflictsFieldByFieldAndDeletions)
     const size_t backups = core::listBackups(ours).size();
     dialog.setPreference(core::MergePreference::Ours);
     ASSERT_TRUE(dialog.merge()) << dialog.errorText().toStdString();
-    EXPECT_EQ(window.document()->colony().encounters.size(), 2u);
+    EXPECT_EQ(window.document()->encounters().size(), 2u);
     EXPECT_EQ(core::listBackups(ours).size(), backups + 1) << "the merge took no backup";
     EXPECT_TRUE(dialog.reportText().contains(QStringLiteral("backed up first"))) << dialog.reportText().toStdString();
 }
@@ -337,20 +337,20 @@ TEST(ReliabilityUi, RestoreFromBackupAsksThenPutsTheBackupBack)
     a.entryType = core::EntryType::Founder;
     const core::FieldProblems added = window.editFacade()->addAnimal(a, "");
     ASSERT_TRUE(added.empty()) << added.front().message;
-    ASSERT_EQ(window.document()->colony().animals.size(), 4u);
+    ASSERT_EQ(window.document()->pedigree().animals.size(), 4u);
 
     // Declined: nothing changes.
     window.answer = false;
     EXPECT_FALSE(window.backupActions()->restore(backup));
     EXPECT_EQ(window.questions.size(), 1);
-    EXPECT_EQ(window.document()->colony().animals.size(), 4u);
+    EXPECT_EQ(window.document()->pedigree().animals.size(), 4u);
     // Confirmed: the backup's three animals are back and the file is open for writing again.
     window.answer = true;
     EXPECT_TRUE(window.backupActions()->restore(backup)) << window.errors.join('\n').toStdString();
     EXPECT_EQ(window.questions.size(), 2);
     EXPECT_TRUE(window.document()->isOpen());
     EXPECT_FALSE(window.document()->isReadOnly());
-    EXPECT_EQ(window.document()->colony().animals.size(), 3u);
+    EXPECT_EQ(window.document()->pedigree().animals.size(), 3u);
     EXPECT_EQ(window.animalView()->visibleRowCount(), 3);
     EXPECT_TRUE(window.errors.isEmpty()) << window.errors.join('\n').toStdString();
     // The added animal's undo step is gone, and the status bar says why.

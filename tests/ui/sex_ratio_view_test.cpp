@@ -35,7 +35,7 @@ std::vector<core::MaternalRankRow> coreBirths(ui::ColonyDocument* doc, int gesta
     core::MaternalRankOptions m;
     m.gestationDays = gestation;
     m.maturityYears = maturity;
-    return core::computeMaternalRanks(doc->colony(), doc->residences(), m);
+    return core::computeMaternalRanks(doc->colonyFor({}), doc->residences(), m);
 }
 
 std::string readFile(const std::string& path)
@@ -166,7 +166,7 @@ TEST(ResearchExportDialog, WritesTheCoreTables)
     // The rank table is the core's rankTableByPeriod output, byte for byte after the mark.
     core::RankOptions ranks;
     ranks.method = core::RankMethod::DavidsScore;
-    const core::ExportTable expected = core::rankTableByPeriod(demo.document()->colony(), demo.document()->residences(),
+    const core::ExportTable expected = core::rankTableByPeriod(demo.document()->colonyFor({}), demo.document()->residences(),
                                                                {}, ranks, core::PeriodLength::Year);
     ASSERT_FALSE(expected.rows.empty());
     EXPECT_EQ(readFile(out.file("tables/ranks_by_period.csv")).substr(3), core::tableCsv(expected, true));
@@ -184,13 +184,13 @@ TEST(ResearchExportDialog, CustomWindowsAndBadEntries)
     EXPECT_TRUE(dialog.writtenFiles().isEmpty());
     EXPECT_TRUE(dialog.report().contains(QStringLiteral("2021-13-01")));
 
-    const auto periods = core::selectionPeriods(demo.document()->colony(), demo.document()->residences(), {},
+    const auto periods = core::selectionPeriods(demo.document()->colonyFor({}), demo.document()->residences(), {},
                                                 core::PeriodLength::Month);
     ASSERT_GE(periods.size(), 2U);
     const QString window = ui::toQString(core::formatDate(periods[0].start) + "," + core::formatDate(periods[1].end));
     dialog.setCustomWindows(window);
     ASSERT_TRUE(dialog.exportTables()) << ui::toStdString(dialog.report());
-    const core::ExportTable expected = core::rankTableByWindows(demo.document()->colony(), demo.document()->residences(),
+    const core::ExportTable expected = core::rankTableByWindows(demo.document()->colonyFor({}), demo.document()->residences(),
                                                                 {}, {}, {{periods[0].start, periods[1].end}});
     EXPECT_EQ(readFile(out.file("w/ranks_by_period.csv")), core::tableCsv(expected, true)); // no mark without the option
 }

@@ -35,7 +35,7 @@ TEST(SupportView, TablesAreTheCoreTablesAndTheMatrixCarriesMatrilineStrips)
     // The matrix: strip row and column, then one row and column per animal in rank order.
     const int n = static_cast<int>(a.order.size());
     ASSERT_EQ(view.matrixTable()->rowCount(), n + 1);
-    const ui::MatrilinePalette palette(core::Matrilines(demo.document()->colony()));
+    const ui::MatrilinePalette palette(core::Matrilines(demo.document()->colonyFor({})));
     for (int i = 0; i < n; ++i) {
         // The rank-ordered names, a flagged one with the data-health mark (rank_flag_views_test.cpp).
         const std::string& id = a.order[static_cast<size_t>(i)];

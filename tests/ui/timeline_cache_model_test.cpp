@@ -126,7 +126,7 @@ private:
     /// A cached row (of a group the document holds), or nothing.
     std::optional<core::Encounter> pickRow()
     {
-        const auto& rows = document_.colony().encounters;
+        const std::vector<core::Encounter> rows = document_.encounters().expand();
         if (rows.empty()) return std::nullopt;
         return rows[static_cast<size_t>(uniform(0, static_cast<int>(rows.size()) - 1))];
     }

@@ -117,7 +117,7 @@ int main(int argc, char* argv[])
     waitPainted(window, timeline);
     const double firstView = ms(total);
     std::printf("%s: open returned %.0f ms, first view (timeline) painted %.0f ms, %zu encounters held\n",
-                whole ? "whole (before)" : "in steps", opened, firstView, doc->colony().encounters.size());
+                whole ? "whole (before)" : "in steps", opened, firstView, doc->encounters().size());
 
     const std::vector<std::string> groups = doc->residences().groups();
     std::vector<double> switchWhileLoading;
@@ -138,7 +138,7 @@ int main(int argc, char* argv[])
         const double full = ms(total);
         waitPainted(window, timeline);
         std::printf("every encounter read: %.0f ms after open (%zu encounters); RSS now %.0f MiB\n", full,
-                    doc->colony().encounters.size(), memoryMiB("VmRSS"));
+                    doc->encounters().size(), memoryMiB("VmRSS"));
     } else if (!doc->isComplete()) {
         std::printf("kept group by group (more than %lld encounters); RSS now %.0f MiB\n",
                     static_cast<long long>(doc->readEverythingUpTo()), memoryMiB("VmRSS"));
@@ -195,17 +195,17 @@ int main(int argc, char* argv[])
         std::printf("group switch back to a group held, timeline repainted (median of %zu): %.0f ms; max %.0f\n",
                     back.size(), median(back), *std::max_element(back.begin(), back.end()));
     std::printf("RSS after the switches: %.0f MiB (%zu encounters held)\n", memoryMiB("VmRSS"),
-                doc->colony().encounters.size());
+                doc->encounters().size());
 
     // The evening entry: residents of the first group, Enter on the loser field.
     window.showView(QStringLiteral("entry"));
     ui::EncounterEntryPanel* panel = window.entryPanel();
     const std::string group = groups.front();
     std::vector<std::string> residents;
-    for (const core::Residence& r : doc->colony().residences) {
+    for (const core::Residence& r : doc->pedigree().residences) {
         if (r.group != group || r.to) continue;
-        const int a = doc->colony().animalIndex(r.animal);
-        if (a >= 0 && !doc->colony().animals[static_cast<size_t>(a)].exit) residents.push_back(r.animal);
+        const int a = doc->pedigree().animalIndex(r.animal);
+        if (a >= 0 && !doc->pedigree().animals[static_cast<size_t>(a)].exit) residents.push_back(r.animal);
         if (residents.size() == 40) break;
     }
     panel->dateEdit()->setText(QDate::currentDate().toString(Qt::ISODate));

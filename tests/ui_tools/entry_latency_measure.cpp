@@ -115,7 +115,7 @@ int main(int argc, char* argv[])
     ui::ColonyDocument* doc = bare ? document.get() : window->document();
     QApplication::processEvents();
     std::printf("%s: open %lld ms, %zu encounters\n", bare ? "bare" : "main window", static_cast<long long>(timer.elapsed()),
-                doc->colony().encounters.size());
+                doc->encounters().size());
     timer.restart();
     doc->reload();
     QApplication::processEvents();
@@ -155,7 +155,7 @@ int main(int argc, char* argv[])
         std::vector<double> w;
         std::vector<core::Encounter> written;
         for (int i = 0; i < 11; ++i) {
-            std::vector<core::Encounter> one{doc->colony().encounters.back()};
+            std::vector<core::Encounter> one{doc->colonyFor({}).encounters.back()};
             one[0].seq = 0;
             one[0].uid.clear();
             QElapsedTimer t;

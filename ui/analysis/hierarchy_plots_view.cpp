@@ -160,10 +160,10 @@ void HierarchyPlotsView::refillGroups()
     if (change.kind == ColonyDocument::ChangeKind::SettingsChanged || change.kind == ColonyDocument::ChangeKind::ListsChanged)
         return;
     if (change.kind == ColonyDocument::ChangeKind::EncountersAppended) {
-        const auto& encounters = document_->colony().encounters;
+        const core::EncounterRecords& encounters = document_->encounters();
         bool known = true;
         for (size_t i = change.firstAppended; i < encounters.size() && known; ++i)
-            known = encounters[i].group.empty() || group_->findData(toQString(encounters[i].group)) >= 0;
+            known = encounters.group(i).empty() || group_->findData(toQString(encounters.group(i))) >= 0;
         if (known) return;
     }
     const QSignalBlocker block(group_);
@@ -195,18 +195,17 @@ void HierarchyPlotsView::recompute()
     // which has recomputed this view (or marked it stale) already.
     if (document_->holdGroup(group_->currentData().toString())) return;
     const ColonyDocument::Snapshot snapshot = document_->snapshot();
-    auto colony = snapshot.colony;
-    auto where = snapshot.residences;
     core::InheritanceOptions options;
     const core::AnalysisSettings settings = documentAnalysisSettings(document_);
     options.elo = settings.elo;
     options.maturityYears = settings.maturityYears;
     options.group = toStdString(group_->currentData().toString());
-    runner_->start([this, colony, where, options](const std::atomic<bool>& cancel,
-                                                  const ComputeRunner::Progress& progress) {
-        const core::Matrilines lines(*colony);
+    runner_->start([this, snapshot, options](const std::atomic<bool>& cancel, const ComputeRunner::Progress& progress) {
+        // The group's encounters only (its selection reads no other).
+        const core::Colony colony = snapshot.colonyFor(options.group);
+        const core::Matrilines lines(colony);
         auto s = std::make_shared<core::HierarchySeries>(
-            core::computeHierarchySeries(*colony, *where, lines, options, &cancel, progress));
+            core::computeHierarchySeries(colony, *snapshot.residences, lines, options, &cancel, progress));
         return ComputeRunner::Apply([this, s] { adopt(std::move(*s)); });
     });
 }
@@ -261,7 +260,7 @@ void HierarchyPlotsView::adopt(core::HierarchySeries series)
         return;
     }
     flagTo_ = std::min(series_.months.back().period.end,
-                       core::lastEncounterDay(document_->colony()).value_or(series_.months.back().period.end));
+                       document_->lastEncounterDay().value_or(series_.months.back().period.end));
     flagFrom_ = core::defaultWindowStart(documentAnalysisSettings(document_), flagTo_);
     flags_->request(flagFrom_, flagTo_, toStdString(group_->currentData().toString()));
 }
@@ -275,7 +274,7 @@ void HierarchyPlotsView::showFlags()
     }
     // The flagged animals of the window, each with its count and interval width.
     QStringList named, tips;
-    for (const core::Animal& a : document_->colony().animals) {
+    for (const core::Animal& a : document_->pedigree().animals) {
         if (!flags_->flagged(a.id) || flags_->encounters(a.id) == 0) continue;
         const QString name = a.name.empty() ? toQString(a.id) : tr("%1 (%2)").arg(toQString(a.name), toQString(a.id));
         const std::optional<double> width = flags_->intervalWidth(a.id);

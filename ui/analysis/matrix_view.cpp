@@ -1,6 +1,8 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "ui/analysis/matrix_view.h"
 
+#include "core/ranks/compact_selection.h"
+
 #include "ui/analysis/rank_flag_watch.h"
 
 #include "core/ranks/encounter_selection.h"
@@ -277,19 +279,19 @@ void MatrixView::recompute()
     const core::AnalysisSettings settings = documentAnalysisSettings(document_);
     options.from = from_;
     options.to = to_;
-    if (!from_ && !to_) options.from = core::defaultWindowStart(settings, core::lastEncounterDay(document_->colony()));
+    if (!from_ && !to_) options.from = core::defaultWindowStart(settings, document_->lastEncounterDay());
     options.group = toStdString(group_);
     options.draws = settings.elo.draws;
     const core::EloSettings elo = settings.elo;
     const std::optional<core::RankMethod> method = method_;
     flags_->request(options.from, options.to, options.group);
     const ColonyDocument::Snapshot snapshot = document_->snapshot();
-    auto colony = snapshot.colony;
-    auto where = snapshot.residences;
-    runner_->start([this, colony, where, options, method, elo](const std::atomic<bool>& cancel,
-                                                          const ComputeRunner::Progress& progress) {
+    runner_->start([this, snapshot, options, method, elo](const std::atomic<bool>& cancel,
+                                                        const ComputeRunner::Progress& progress) {
         progress(0, 3);
-        const core::EncounterSelection sel = core::selectEncounters(*colony, *where, options);
+        const core::Colony* colony = snapshot.pedigree.get();
+        const core::EncounterSelection sel =
+            core::selectEncounters(snapshot.encounters->compact(), colony->animals, *snapshot.residences, options);
         if (cancel) return ComputeRunner::Apply();
         progress(1, 3);
         std::vector<int> order(static_cast<size_t>(sel.size()));

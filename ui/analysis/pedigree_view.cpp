@@ -230,10 +230,10 @@ void PedigreeView::rebuild()
 {
     nodes_.clear();
     titles_.clear();
-    lines_ = std::make_unique<core::Matrilines>(document_->colony());
+    lines_ = std::make_unique<core::Matrilines>(document_->pedigree());
     const core::Matrilines& lines = *lines_;
     palette_ = MatrilinePalette(lines);
-    const core::Colony& colony = document_->colony();
+    const core::Colony& colony = document_->pedigree();
     double top = margin;
     double widest = 0;
     // Tidy layout: leaves take consecutive slots, a mother sits above the middle of her offspring.

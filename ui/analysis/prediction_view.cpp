@@ -224,7 +224,7 @@ void PredictionView::setRule(core::SiblingRule rule)
 
 void PredictionView::recompute()
 {
-    if (!document_->isOpen() || document_->colony().encounters.empty()) {
+    if (!document_->isOpen() || document_->encounters().empty()) {
         runner_->cancel();
         flags_->clear();
         adopt({}, {}, {}, {});
@@ -237,7 +237,7 @@ void PredictionView::recompute()
     options.maturityYears = settings.maturityYears;
     options.rule = rule_;
     if (selection_->day()) options.at = *selection_->day();
-    else options.at = core::lastEncounterDay(document_->colony());
+    else options.at = document_->lastEncounterDay();
     {
         const QSignalBlocker block(dateEdit_);
         dateEdit_->setDate(toQDate(*options.at));
@@ -250,10 +250,11 @@ void PredictionView::recompute()
     core::SelectionOptions record;
     record.draws = settings.elo.draws;
     const ColonyDocument::Snapshot snapshot = document_->snapshot();
-    auto colony = snapshot.colony;
-    auto where = snapshot.residences;
-    runner_->start([this, colony, where, options, foresightOptions, record](const std::atomic<bool>& cancel,
-                                                                          const ComputeRunner::Progress& progress) {
+    runner_->start([this, snapshot, options, foresightOptions, record](const std::atomic<bool>& cancel,
+                                                                     const ComputeRunner::Progress& progress) {
+        // Every group (the prediction and the record's foresight span the colony).
+        const auto colony = std::make_shared<const core::Colony>(snapshot.colonyFor({}));
+        const core::ResidenceIndex* where = snapshot.residences.get();
         const core::Matrilines lines(*colony);
         progress(0, 3);
         auto p = std::make_shared<core::InheritancePrediction>(core::predictInheritance(*colony, *where, lines, options));

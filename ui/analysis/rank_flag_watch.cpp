@@ -31,13 +31,13 @@ void RankFlagWatch::request(std::optional<core::Day> from, std::optional<core::D
         return;
     }
     // The counts at once: the mark is on screen with the view's own figures.
-    flags_ = core::rankFlags(document_->colony(), from, to, group, threshold_);
+    flags_ = core::rankFlags(document_->encounters().compact(), from, to, group, threshold_);
     widthsReady_ = false;
     emit updated();
     core::HealthOptions o;
     o.from = from;
     o.to = to;
-    o.today = to ? *to : core::lastEncounterDay(document_->colony()).value_or(core::today());
+    o.today = to ? *to : document_->lastEncounterDay().value_or(core::today());
     o.group = group;
     o.minEncounters = threshold_;
     o.elo = documentAnalysisSettings(document_).elo;
@@ -60,7 +60,8 @@ void RankFlagWatch::request(std::optional<core::Day> from, std::optional<core::D
     runner_->start([this, snapshot = snapshot, o, key, revision, keep](const std::atomic<bool>& cancel, const ComputeRunner::Progress&) mutable {
         // The rows picked, the document's records are let go before the long
         // part: an edit meanwhile need not copy them (colony_document.h, snapshot()).
-        const core::EncounterSelection picked = core::eloIntervalSelection(*snapshot.colony, *snapshot.residences, o);
+        const core::EncounterSelection picked =
+            core::eloIntervalSelection(snapshot.encounters->compact(), snapshot.pedigree->animals, *snapshot.residences, o);
         snapshot = {};
         auto widths = std::make_shared<const Widths>(core::eloIntervalWidths(picked, o, &cancel));
         return ComputeRunner::Apply([this, widths, key, revision, keep] {

@@ -234,13 +234,13 @@ void RankTimelineView::recompute()
     if (key != shownKey_) showComputing();
     // Shared, unchanging records: the worker must not read the document while an edit changes it.
     const ColonyDocument::Snapshot snapshot = document_->snapshot();
-    auto colony = snapshot.colony;
-    auto where = snapshot.residences;
-    runner_->start([this, colony, where, options, key, revision, keep](const std::atomic<bool>& cancel,
-                                                                      const ComputeRunner::Progress& progress) {
-        const core::Matrilines lines(*colony);
+    runner_->start([this, snapshot, options, key, revision, keep](const std::atomic<bool>& cancel,
+                                                                 const ComputeRunner::Progress& progress) {
+        // The group's encounters only (its selection reads no other).
+        const core::Colony colony = snapshot.colonyFor(options.inheritance.group);
+        const core::Matrilines lines(colony);
         auto result = std::make_shared<Result>();
-        result->timeline = core::computeRankTimeline(*colony, *where, lines, options, &cancel, progress);
+        result->timeline = core::computeRankTimeline(colony, *snapshot.residences, lines, options, &cancel, progress);
         result->palette = MatrilinePalette(lines);
         return ComputeRunner::Apply([this, result, key, revision, keep] {
             // Records changed meanwhile: this result is not theirs (the change

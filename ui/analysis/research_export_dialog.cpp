@@ -212,7 +212,7 @@ bool ResearchExportDialog::exportTables()
     document_->finishLoading();
     QApplication::setOverrideCursor(Qt::WaitCursor);
     try {
-        const std::vector<core::ExportTable> tables = core::researchTables(document_->colony(), document_->residences(), *o);
+        const std::vector<core::ExportTable> tables = core::researchTables(document_->colonyFor({}), document_->residences(), *o);
         core::writeTableSet(tables, toStdString(QDir::fromNativeSeparators(folder)), spreadsheet_->isChecked());
         QStringList lines;
         for (const core::ExportTable& t : tables) {

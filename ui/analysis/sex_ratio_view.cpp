@@ -242,8 +242,9 @@ PlotFigure SexRatioView::figure()
     f.singleHeightMm = 75;
     f.doubleHeightMm = 100;
     f.caption = [this] {
+        // Every group's encounters: the record begins with the file's first encounter, in any group.
         const core::BirthCounting counting = core::countNonBirths(
-            document_->colony(), document_->residences(),
+            document_->colonyFor({}), document_->residences(),
             documentMaternalOptions(toStdString(group_->currentData().toString()), gestation_->value(),
                                     maturity_->value(), documentAnalysisSettings(document_).elo));
         return caption::join(
@@ -330,7 +331,7 @@ void SexRatioView::recompute()
     // which has recomputed this view (or marked it stale) already.
     if (document_->holdGroup(group_->currentData().toString())) return;
     births_ = core::computeMaternalRanks(
-        document_->colony(), document_->residences(),
+        document_->colonyFor({}), document_->residences(),
         documentMaternalOptions(toStdString(group_->currentData().toString()), gestation_->value(), maturity_->value(),
                                 documentAnalysisSettings(document_).elo));
     analysis_ = core::analyseSexRatio(births_);
@@ -373,8 +374,9 @@ void SexRatioView::recompute()
     if (!document_->isOpen()) notes << tr("No colony is open.");
     else if (births_.empty()) notes << tr("No births with a recorded birth date: every figure is empty.");
     else {
+        // Every group's encounters: the record begins with the file's first encounter, in any group.
         const core::BirthCounting counting = core::countNonBirths(
-            document_->colony(), document_->residences(),
+            document_->colonyFor({}), document_->residences(),
             documentMaternalOptions(toStdString(group_->currentData().toString()), gestation_->value(),
                                     maturity_->value(), documentAnalysisSettings(document_).elo));
         if (counting.recordStart)

@@ -144,7 +144,7 @@ void SupportView::refreshGroups()
     group_->clear();
     group_->addItem(tr("every group"), QString());
     std::set<std::string> groups;
-    for (const core::Residence& r : document_->colony().residences) groups.insert(r.group);
+    for (const core::Residence& r : document_->pedigree().residences) groups.insert(r.group);
     for (const std::string& g : groups) group_->addItem(toQString(g), toQString(g));
     const int at = group_->findData(current);
     group_->setCurrentIndex(at < 0 ? 0 : at);
@@ -193,12 +193,13 @@ void SupportView::recompute()
     const ColonyDocument::Snapshot snapshot = document_->snapshot();
     runner_->start([this, snapshot, o](const std::atomic<bool>& cancel, const ComputeRunner::Progress&) {
         auto r = std::make_shared<Result>();
-        r->analysis = core::analyseSupport(*snapshot.colony, *snapshot.residences, o);
+        // Every group's encounters: with no end date the window ends on the file's last encounter, in any group.
+        r->analysis = core::analyseSupport(snapshot.colonyFor({}), *snapshot.residences, o);
         if (cancel) return ComputeRunner::Apply();
         r->pairs = core::supportPairsTable(r->analysis);
         r->daughters = core::supportDaughtersTable(r->analysis);
         r->matrix = core::supportMatrixTable(r->analysis);
-        r->palette = MatrilinePalette(core::Matrilines(*snapshot.colony));
+        r->palette = MatrilinePalette(core::Matrilines(*snapshot.pedigree));
         return ComputeRunner::Apply([this, r] { adopt(*r); });
     });
 }

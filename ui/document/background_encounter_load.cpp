@@ -37,7 +37,9 @@ void BackgroundEncounterLoad::run(std::string path, std::int64_t expected, Progr
             done(nullptr, {}); // the check alone
             return;
         }
-        auto all = std::make_shared<std::vector<core::Encounter>>();
+        // Held compactly as they arrive: a part's Encounters of strings live
+        // only until appended (50,000 rows, not millions).
+        auto all = std::make_shared<core::EncounterRecords>();
         all->reserve(static_cast<size_t>(std::max<std::int64_t>(expected, 0)) + 4096);
         // Equal spans of seq: each part is one range of the primary key, its
         // rows already in entry order, so the parts only append (no sort of
@@ -49,9 +51,9 @@ void BackgroundEncounterLoad::run(std::string path, std::int64_t expected, Progr
             for (int i = 0; i < total; ++i) {
                 if (cancelled_) return;
                 const std::int64_t first = low + span * i;
-                std::vector<core::Encounter> part =
+                const std::vector<core::Encounter> part =
                     store.loadEncounterRangeWithoutSupporters(first, std::min(high, first + span - 1));
-                std::move(part.begin(), part.end(), std::back_inserter(*all));
+                for (const core::Encounter& e : part) all->append(e);
                 progress(i + 1, total);
             }
         } else {
@@ -61,8 +63,7 @@ void BackgroundEncounterLoad::run(std::string path, std::int64_t expected, Progr
         store.loadSupporters(*all);
         // Another program wrote while the parts were read: read it whole.
         if (static_cast<std::int64_t>(all->size()) != store.encounterCount()) {
-            all->clear();
-            *all = store.loadEncounters();
+            *all = core::EncounterRecords(store.loadEncounters());
         }
         if (cancelled_) return;
         done(std::move(all), {});

@@ -1,6 +1,6 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
-#include "core/base/colony.h"
+#include "core/base/encounter_records.h"
 
 #include <atomic>
 #include <cstdint>
@@ -20,7 +20,7 @@ namespace hierloom::ui {
 /// in progress is interrupted within a few thousand SQLite steps).
 class BackgroundEncounterLoad {
 public:
-    using Encounters = std::shared_ptr<std::vector<core::Encounter>>;
+    using Encounters = std::shared_ptr<core::EncounterRecords>;
     /// After each part: parts read so far, of `total` (partsFor(expected)).
     using Progress = std::function<void(int done, int total)>;
     /// Once, unless cancelled: every encounter in seq order, or an error message (encounters null).

@@ -15,67 +15,9 @@
 
 namespace hierloom::ui {
 
-namespace {
-
-/// A group's rows `part` added to `cache`, both in entry order (seq): one
-/// copy of a row that is in both, without the cached rows that `drop` names,
-/// `spare` more rows reserved. One pass: each row kept moves once (a group
-/// switch at a centre moves hundreds of thousands), or is copied once when
-/// `cache` is const (still read by a worker's snapshot).
-template <class Cache, class Drop>
-std::vector<core::Encounter> mergedBySeq(Cache& cache, std::vector<core::Encounter> part, size_t spare, Drop drop)
-{
-    std::vector<core::Encounter> merged;
-    merged.reserve(cache.size() + part.size() + spare);
-    auto c = cache.begin();
-    auto p = part.begin();
-    while (c != cache.end() || p != part.end()) {
-        if (c != cache.end() && drop(*c)) {
-            ++c;
-        } else if (p == part.end() || (c != cache.end() && c->seq <= p->seq)) {
-            if (p != part.end() && p->seq == c->seq) ++p; // the same row: the cached one stays
-            merged.push_back(std::move(*c++));
-        } else {
-            merged.push_back(std::move(*p++));
-        }
-    }
-    return merged;
-}
-
-void mergeBySeq(std::vector<core::Encounter>& cache, std::vector<core::Encounter> part)
-{
-    cache = mergedBySeq(cache, std::move(part), 0, [](const core::Encounter&) { return false; });
-}
-
-/// mergedBySeq into `cache` itself (no worker reads it): the dropped rows
-/// removed in place, then the new rows merged in from the back. The cache
-/// keeps its memory from switch to switch (a group goes as another comes),
-/// where a new vector would fault in a hundred megabytes of fresh pages.
-template <class Drop> void mergeInPlace(std::vector<core::Encounter>& cache, std::vector<core::Encounter> part, Drop drop)
-{
-    cache.erase(std::remove_if(cache.begin(), cache.end(), drop), cache.end());
-    // A row in both (this window's own new row of the group): the cached one stays.
-    const auto bySeq = [](const core::Encounter& e, std::int64_t seq) { return e.seq < seq; };
-    part.erase(std::remove_if(part.begin(), part.end(),
-                              [&](const core::Encounter& p) {
-                                  const auto it = std::lower_bound(cache.begin(), cache.end(), p.seq, bySeq);
-                                  return it != cache.end() && it->seq == p.seq;
-                              }),
-               part.end());
-    size_t c = cache.size();
-    size_t p = part.size();
-    if (cache.capacity() < c + p) cache.reserve(c + p + 4096);
-    cache.resize(c + p);
-    for (size_t k = c + p; p > 0; --k) {
-        if (c > 0 && cache[c - 1].seq > part[p - 1].seq) cache[k - 1] = std::move(cache[--c]);
-        else cache[k - 1] = std::move(part[--p]);
-    }
-}
-
-} // namespace
-
 ColonyDocument::ColonyDocument(QObject* parent)
-    : QObject(parent), colony_(std::make_shared<core::Colony>()), undoStack_(new QUndoStack(this))
+    : QObject(parent), colony_(std::make_shared<core::Colony>()), records_(std::make_shared<core::EncounterRecords>()),
+      undoStack_(new QUndoStack(this))
 {
 }
 
@@ -98,6 +40,8 @@ ColonyDocument::Read ColonyDocument::readFile(const core::ColonyStore& store, st
     read.encounters = store.encounterCount();
     if (read.encounters < progressiveFrom_) {
         read.colony = store.load();
+        read.records = core::EncounterRecords(read.colony.encounters);
+        read.colony.encounters = {};
         return read;
     }
     // A large file: animals, residences and the encounters of some groups now, the rest later.
@@ -109,8 +53,8 @@ ColonyDocument::Read ColonyDocument::readFile(const core::ColonyStore& store, st
         if (!where.groups().empty()) groups.push_back(where.groups().front());
     }
     for (const std::string& g : groups) {
-        std::vector<core::Encounter> part = store.loadEncounters(core::EncounterScope{.group = g});
-        mergeBySeq(read.colony.encounters, std::move(part));
+        const core::EncounterRecords part(store.loadEncounters(core::EncounterScope{.group = g}));
+        read.records = core::EncounterRecords::merged(read.records, part);
     }
     read.groups = std::move(groups);
     return read;
@@ -143,10 +87,11 @@ void ColonyDocument::take(Read read)
     residences_ = core::ResidenceIndex(read.colony.animals, read.colony.residences);
     colony_ = std::make_shared<core::Colony>(std::move(read.colony));
     colony_->reindex();
+    records_ = std::make_shared<core::EncounterRecords>(std::move(read.records));
     snapshot_ = {};
     complete_ = read.complete;
     heldGroups_ = std::move(read.groups);
-    keptFromSeq_ = colony_->encounters.empty() ? 0 : colony_->encounters.back().seq;
+    keptFromSeq_ = records_->empty() ? 0 : records_->seq(records_->size() - 1);
     if (!complete_ && read.encounters <= readEverythingUpTo_) startBackgroundLoad();
     else if (!complete_) startBackgroundCheck();
 }
@@ -236,25 +181,17 @@ void ColonyDocument::stopBackgroundLoad()
     journal_.clear();
 }
 
-void ColonyDocument::backgroundLoaded(std::shared_ptr<std::vector<core::Encounter>> all)
+void ColonyDocument::backgroundLoaded(std::shared_ptr<core::EncounterRecords> all)
 {
     // The load read the file while this window may have written to it: its
     // own changes are applied again, by seq, whether the load saw them or not.
-    std::vector<core::Encounter>& rows = *all;
-    const auto bySeq = [](const core::Encounter& e, std::int64_t seq) { return e.seq < seq; };
     for (const auto& [removed, inserted] : journal_) {
-        for (const core::Encounter& r : removed) {
-            auto it = std::lower_bound(rows.begin(), rows.end(), r.seq, bySeq);
-            if (it != rows.end() && it->seq == r.seq) rows.erase(it);
-        }
-        for (const core::Encounter& e : inserted) {
-            auto it = std::lower_bound(rows.begin(), rows.end(), e.seq, bySeq);
-            if (it != rows.end() && it->seq == e.seq) *it = e;
-            else rows.insert(it, e);
-        }
+        for (const core::Encounter& r : removed) all->remove(r.seq);
+        for (const core::Encounter& e : inserted) all->put(e);
     }
     stopBackgroundLoad();
-    editColony().encounters = std::move(rows);
+    snapshot_ = {};
+    records_ = std::move(all);
     complete_ = true;
     heldGroups_.clear();
     emitChange({ChangeKind::EncountersChanged, 0}, false);
@@ -274,29 +211,20 @@ bool ColonyDocument::holdGroup(const QString& group)
         std::rotate(at, at + 1, heldGroups_.end()); // now the most recently asked for
         return false;
     }
-    std::vector<core::Encounter> part = store_->loadEncounters(core::EncounterScope{.group = g});
-    // This window's own new rows of the group may be in the cache already.
-    // Room for an evening's new lines without moving every record.
+    const core::EncounterRecords part(store_->loadEncounters(core::EncounterScope{.group = g}));
     heldGroups_.push_back(g);
     const std::vector<std::string> dropped = dropOldGroups();
-    // Rows without a group stay (they may be in a held group's scope too), and so do new ones.
-    const auto drop = [&](const core::Encounter& e) {
-        return !dropped.empty() && e.seq <= keptFromSeq_ && !e.group.empty() &&
-               std::find(dropped.begin(), dropped.end(), e.group) != dropped.end();
-    };
     snapshot_ = {};
-    if (colony_.use_count() > 1) {
-        // A worker still reads the records: the new cache is made beside
-        // them, each kept row copied once (not every row copied, then merged).
-        auto next = std::make_shared<core::Colony>();
-        next->animals = colony_->animals;
-        next->residences = colony_->residences;
-        next->reindex();
-        next->encounters = mergedBySeq(std::as_const(colony_->encounters), std::move(part), 4096, drop);
-        colony_ = std::move(next);
-    } else {
-        mergeInPlace(colony_->encounters, std::move(part), drop);
+    core::EncounterRecords kept = *records_; // compact: a copy of a few groups is cheap
+    if (!dropped.empty()) {
+        // Rows without a group stay (they may be in a held group's scope too), and so do new ones.
+        kept.keepIf([&](const core::EncounterRecords& r, size_t i) {
+            return r.seq(i) > keptFromSeq_ || r.group(i).empty() ||
+                   std::find(dropped.begin(), dropped.end(), r.group(i)) == dropped.end();
+        });
     }
+    // This window's own new rows of the group may be held already: the held one stays.
+    records_ = std::make_shared<core::EncounterRecords>(core::EncounterRecords::merged(kept, part));
     // The rows read are the file's as this window knows it, unless another
     // program wrote since (then results of the same revision may differ).
     emitChange({ChangeKind::EncountersChanged, 0}, writtenElsewhere());
@@ -313,7 +241,7 @@ void ColonyDocument::showGroup(const QString& group)
 
 std::int64_t ColonyDocument::encountersInFile() const
 {
-    if (complete_ || !store_) return static_cast<std::int64_t>(colony_->encounters.size());
+    if (complete_ || !store_) return static_cast<std::int64_t>(records_->size());
     return store_->encounterCount();
 }
 
@@ -326,11 +254,18 @@ void ColonyDocument::finishLoading()
     loop.exec();
 }
 
-core::Colony& ColonyDocument::editColony()
+core::Colony& ColonyDocument::editPedigree()
 {
     snapshot_ = {};
     if (colony_.use_count() > 1) colony_ = std::make_shared<core::Colony>(*colony_);
     return *colony_;
+}
+
+core::EncounterRecords& ColonyDocument::editRecords()
+{
+    snapshot_ = {};
+    if (records_.use_count() > 1) records_ = std::make_shared<core::EncounterRecords>(*records_);
+    return *records_;
 }
 
 void ColonyDocument::close()
@@ -341,6 +276,7 @@ void ColonyDocument::close()
     heldGroups_.clear();
     store_.reset();
     colony_ = std::make_shared<core::Colony>();
+    records_ = std::make_shared<core::EncounterRecords>();
     residences_ = core::ResidenceIndex{};
     path_.clear();
     readOnly_ = false;
@@ -443,7 +379,7 @@ void ColonyDocument::setAuditUserName(const std::string& name)
 void ColonyDocument::reloadAnimals()
 {
     if (!store_) return;
-    core::Colony& colony = editColony();
+    core::Colony& colony = editPedigree();
     colony.animals = store_->loadAnimals();
     colony.residences = store_->loadResidences();
     colony.reindex();
@@ -456,22 +392,18 @@ void ColonyDocument::applyEncounterChange(const std::vector<core::Encounter>& re
 {
     if (loader_) journal_.emplace_back(removed, inserted);
     // The cache is in seq order, so each record is found by binary search.
-    auto& cache = editColony().encounters;
-    const auto bySeq = [](const core::Encounter& e, std::int64_t seq) { return e.seq < seq; };
-    for (const core::Encounter& r : removed) {
-        auto it = std::lower_bound(cache.begin(), cache.end(), r.seq, bySeq);
-        if (it != cache.end() && it->seq == r.seq) cache.erase(it);
-    }
+    core::EncounterRecords& cache = editRecords();
+    for (const core::Encounter& r : removed) cache.remove(r.seq);
     const size_t first = cache.size();
     bool appendedOnly = removed.empty();
     std::vector<core::Encounter> sorted = inserted;
     std::sort(sorted.begin(), sorted.end(), [](const auto& a, const auto& b) { return a.seq < b.seq; });
-    for (core::Encounter& e : sorted) {
-        if (cache.empty() || e.seq > cache.back().seq) {
-            cache.push_back(std::move(e));
+    for (const core::Encounter& e : sorted) {
+        if (cache.empty() || e.seq > cache.seq(cache.size() - 1)) {
+            cache.append(e);
         } else {
             appendedOnly = false;
-            cache.insert(std::lower_bound(cache.begin(), cache.end(), e.seq, bySeq), std::move(e));
+            cache.put(e);
         }
     }
     emitChange(appendedOnly ? Change{ChangeKind::EncountersAppended, first} : Change{ChangeKind::EncountersChanged, 0});
@@ -489,11 +421,36 @@ void ColonyDocument::emitChange(Change change, bool recordsChanged)
 
 ColonyDocument::Snapshot ColonyDocument::snapshot() const
 {
-    if (!snapshot_.colony) {
-        snapshot_.colony = colony_; // shared: the next change copies it first if a job still holds it
+    if (!snapshot_.pedigree) {
+        // Shared: the next change copies what it changes first if a job still holds it.
+        snapshot_.pedigree = colony_;
+        snapshot_.encounters = records_;
         snapshot_.residences = std::make_shared<const core::ResidenceIndex>(residences_);
     }
     return snapshot_;
+}
+
+core::Colony ColonyDocument::colonyFor(std::string_view group) const { return snapshot().colonyFor(group); }
+
+core::Colony ColonyDocument::colonyWithAnimal(std::string_view animal) const
+{
+    core::Colony colony = *colony_;
+    colony.encounters = records_->expandTakingPart(animal);
+    return colony;
+}
+
+std::optional<core::Day> ColonyDocument::lastEncounterDay() const
+{
+    if (records_->empty()) return std::nullopt;
+    return records_->lastDay();
+}
+
+core::Colony ColonyDocument::Snapshot::colonyFor(std::string_view group) const
+{
+    core::Colony colony = *pedigree;
+    colony.reindex();
+    colony.encounters = encounters->expandScope(group);
+    return colony;
 }
 
 } // namespace hierloom::ui

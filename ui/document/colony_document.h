@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
 #include "core/base/colony.h"
+#include "core/base/encounter_records.h"
 #include "core/store/colony_store.h"
 #include "core/base/residence_index.h"
 
@@ -11,6 +12,7 @@
 #include <cstdint>
 #include <memory>
 #include <optional>
+#include <string_view>
 #include <vector>
 
 class QUndoStack;
@@ -23,7 +25,9 @@ class ColonyCommand;
 
 /// The one open colony file and a cached copy of its records. Models and
 /// views read the cache (and the file through the const store()) and listen
-/// to changed(kind).
+/// to changed(kind). The cache holds the animals and residences as a
+/// core::Colony (pedigree(), whose encounters are always empty) and the
+/// encounters compactly (encounters(), core/base/encounter_records.h).
 ///
 /// A file of many encounters (progressiveFrom()) opens in steps: the animals,
 /// residences and the encounters of one group first, so the first view shows
@@ -141,19 +145,38 @@ public:
 
     /// The open store for reading, or nullptr; writes go through ColonyEditFacade.
     const core::ColonyStore* store() const { return store_ ? &*store_ : nullptr; }
-    const core::Colony& colony() const { return *colony_; }
+    /// The animals and residences; its `encounters` is always empty (encounters() holds them).
+    const core::Colony& pedigree() const { return *colony_; }
+    /// The encounters held, in seq order (all of the file's once isComplete()).
+    const core::EncounterRecords& encounters() const { return *records_; }
+    /// pedigree() with the encounters held for `group`'s scope as Encounters
+    /// (every one held when `group` is empty), for the analyses of core that
+    /// take a Colony: a copy made for the occasion; a job makes it on its own
+    /// thread (Snapshot::colonyFor).
+    core::Colony colonyFor(std::string_view group) const;
+    /// pedigree() with the encounters held in which `animal` takes part (an
+    /// animal's edit is checked against those).
+    core::Colony colonyWithAnimal(std::string_view animal) const;
+    /// The latest date of the encounters held, if any.
+    std::optional<core::Day> lastEncounterDay() const;
     const core::ResidenceIndex& residences() const { return residences_; }
 
     /// The name stamped on the audit rows of this connection's writes (not a
     /// change to the file itself); ignored when no colony is open.
     void setAuditUserName(const std::string& name);
 
-    /// An unchanging copy of colony() and residences() for background jobs:
-    /// made on the first request after a change and shared by every view
-    /// until the next change, so a change costs one copy, not one per view.
+    /// An unchanging copy of pedigree(), encounters() and residences() for
+    /// background jobs: shared with the document until its next change, which
+    /// then copies what it changes (the compact encounters: tens of
+    /// milliseconds for millions of rows) instead of waiting for the job.
     struct Snapshot {
-        std::shared_ptr<const core::Colony> colony;
+        std::shared_ptr<const core::Colony> pedigree; ///< encounters empty
+        std::shared_ptr<const core::EncounterRecords> encounters;
         std::shared_ptr<const core::ResidenceIndex> residences;
+        /// The pedigree with the encounters an analysis of `group` reads
+        /// (EncounterRecords::expandScope; every one when `group` is empty),
+        /// as the analyses of core take them. For a job's own thread.
+        core::Colony colonyFor(std::string_view group) const;
     };
     Snapshot snapshot() const;
 
@@ -201,7 +224,8 @@ private:
     /// What a read of the file gave: everything, or (a large file) the
     /// encounters of `groups` only.
     struct Read {
-        core::Colony colony;
+        core::Colony colony; // animals and residences
+        core::EncounterRecords records;
         bool complete = true;
         std::vector<std::string> groups;
         std::int64_t encounters = 0; // in the file
@@ -218,15 +242,18 @@ private:
     /// while loading) and returns them; the caller drops their rows.
     std::vector<std::string> dropOldGroups();
     void stopBackgroundLoad();
-    void backgroundLoaded(std::shared_ptr<std::vector<core::Encounter>> all);
-    /// The cache for changing: copied first when a snapshot still shares it.
-    core::Colony& editColony();
+    void backgroundLoaded(std::shared_ptr<core::EncounterRecords> all);
+    /// The animals and residences for changing: copied first when a snapshot still shares them.
+    core::Colony& editPedigree();
+    /// The encounters for changing: copied first when a snapshot still shares them.
+    core::EncounterRecords& editRecords();
     /// Announces a change; `recordsChanged` false when the cache only read
     /// or dropped groups (the file's records, and revision(), are as they were).
     void emitChange(Change change, bool recordsChanged = true);
 
     std::optional<core::ColonyStore> store_;
-    std::shared_ptr<core::Colony> colony_; // shared with snapshots until changed
+    std::shared_ptr<core::Colony> colony_;            // animals, residences; shared with snapshots until changed
+    std::shared_ptr<core::EncounterRecords> records_; // shared with snapshots until changed
     core::ResidenceIndex residences_;
     QString path_;
     bool readOnly_ = false;

@@ -88,17 +88,18 @@ core::FieldProblems ColonyEditFacade::addEncounter(core::Encounter& e)
 core::FieldProblems ColonyEditFacade::editEncounter(core::Encounter e)
 {
     if (auto p = writable(); !p.empty()) return p;
-    const auto& cache = document_->colony().encounters;
-    auto it = std::lower_bound(cache.begin(), cache.end(), e.seq,
-                               [](const core::Encounter& x, std::int64_t seq) { return x.seq < seq; });
-    if (it == cache.end() || it->uid != e.uid)
+    const core::EncounterRecords& cache = document_->encounters();
+    const size_t at = cache.find(e.seq);
+    std::optional<core::Encounter> held;
+    if (at < cache.size()) held = cache.at(at);
+    if (!held || held->uid != e.uid)
         return {{"uid", tr("This encounter is no longer in the file (another program may have deleted it); "
                            "nothing was changed.").toStdString()}};
     e.group.clear(); // re-derived from the residences of the (possibly new) animals
     if (auto p = checkEncounter(e); !p.empty()) return p;
-    if (sameRecord(*it, e)) return {}; // nothing changed: nothing to write or undo
+    if (sameRecord(*held, e)) return {}; // nothing changed: nothing to write or undo
     std::vector<core::Encounter> one{e};
-    return pushEncounterChange({*it}, one, tr("Edit encounter %1 over %2").arg(toQString(e.winner), toQString(e.loser)));
+    return pushEncounterChange({*held}, one, tr("Edit encounter %1 over %2").arg(toQString(e.winner), toQString(e.loser)));
 }
 
 core::FieldProblems ColonyEditFacade::deleteEncounters(const std::vector<core::Encounter>& rows, const QString& text)
@@ -107,14 +108,15 @@ core::FieldProblems ColonyEditFacade::deleteEncounters(const std::vector<core::E
     if (rows.empty()) return {};
     // The rows as the file holds them now (another program may have changed or deleted them).
     std::vector<core::Encounter> now;
-    const auto& cache = document_->colony().encounters;
+    const core::EncounterRecords& cache = document_->encounters();
     for (const core::Encounter& r : rows) {
-        auto it = std::lower_bound(cache.begin(), cache.end(), r.seq,
-                                   [](const core::Encounter& x, std::int64_t seq) { return x.seq < seq; });
-        if (it == cache.end() || it->uid != r.uid)
+        const size_t at = cache.find(r.seq);
+        std::optional<core::Encounter> held;
+        if (at < cache.size()) held = cache.at(at);
+        if (!held || held->uid != r.uid)
             return {{"uid", tr("The encounter %1 over %2 is no longer in the file (another program may have deleted "
                                "it); nothing was deleted.").arg(toQString(r.winner), toQString(r.loser)).toStdString()}};
-        now.push_back(*it);
+        now.push_back(std::move(*held));
     }
     std::vector<core::Encounter> none;
     return pushEncounterChange(std::move(now), none, text.isEmpty() ? (rows.size() == 1 ? tr("Delete 1 encounter") : tr("Delete %1 encounters").arg(rows.size())) : text);
@@ -130,21 +132,21 @@ core::FieldProblems ColonyEditFacade::pushAnimalChange(const core::AnimalChange&
 core::FieldProblems ColonyEditFacade::addAnimal(const core::Animal& a, const std::string& group)
 {
     if (auto p = writable(); !p.empty()) return p;
-    return pushAnimalChange(core::planNewAnimal(document_->colony(), a, group, today()),
+    return pushAnimalChange(core::planNewAnimal(document_->pedigree(), a, group, today()),
                             tr("Add animal %1").arg(toQString(a.id)));
 }
 
 core::FieldProblems ColonyEditFacade::introduceAnimal(const core::Animal& a, const std::string& group)
 {
     if (auto p = writable(); !p.empty()) return p;
-    return pushAnimalChange(core::planIntroduction(document_->colony(), a, group, today()),
+    return pushAnimalChange(core::planIntroduction(document_->pedigree(), a, group, today()),
                             tr("Introduce %1 into %2").arg(toQString(a.id), toQString(group)));
 }
 
 core::FieldProblems ColonyEditFacade::recordBirth(const core::Animal& newborn)
 {
     if (auto p = writable(); !p.empty()) return p;
-    return pushAnimalChange(core::planBirth(document_->colony(), newborn, today()),
+    return pushAnimalChange(core::planBirth(document_->pedigree(), newborn, today()),
                             tr("Birth of %1 to %2").arg(toQString(newborn.id), toQString(newborn.mother)));
 }
 
@@ -153,16 +155,16 @@ void ColonyEditFacade::holdGroupsOf(const std::string& id)
     // An animal's encounters are in the scopes of the groups it lived in; a
     // large file read group by group must hold them for the checks of its edit.
     if (document_->isComplete()) return;
-    for (const core::Residence& r : document_->colony().residences)
+    for (const core::Residence& r : document_->pedigree().residences)
         if (r.animal == id) document_->holdGroup(toQString(r.group));
 }
 
 core::FieldProblems ColonyEditFacade::editAnimal(const core::Animal& a)
 {
     if (auto p = writable(); !p.empty()) return p;
-    for (const core::Animal& old : document_->colony().animals)
+    for (const core::Animal& old : document_->pedigree().animals)
         if (old.uid == a.uid || old.id == a.id) holdGroupsOf(old.id);
-    return pushAnimalChange(core::planAnimalEdit(document_->colony(), a, today()), tr("Edit animal %1").arg(toQString(a.id)));
+    return pushAnimalChange(core::planAnimalEdit(document_->colonyWithAnimal(a.id), a, today()), tr("Edit animal %1").arg(toQString(a.id)));
 }
 
 core::FieldProblems ColonyEditFacade::recordExit(const std::string& id, core::Day date, core::ExitType type)
@@ -170,14 +172,14 @@ core::FieldProblems ColonyEditFacade::recordExit(const std::string& id, core::Da
     if (auto p = writable(); !p.empty()) return p;
     const QString what = type == core::ExitType::Died ? tr("Death of %1") : tr("Removal of %1");
     holdGroupsOf(id);
-    return pushAnimalChange(core::planExit(document_->colony(), id, date, type, today()), what.arg(toQString(id)));
+    return pushAnimalChange(core::planExit(document_->colonyWithAnimal(id), id, date, type, today()), what.arg(toQString(id)));
 }
 
 core::FieldProblems ColonyEditFacade::moveAnimal(const std::string& id, const std::string& group, core::Day date)
 {
     if (auto p = writable(); !p.empty()) return p;
     holdGroupsOf(id);
-    return pushAnimalChange(core::planMove(document_->colony(), id, group, date, today()),
+    return pushAnimalChange(core::planMove(document_->colonyWithAnimal(id), id, group, date, today()),
                             tr("Move %1 to %2").arg(toQString(id), toQString(group)));
 }
 

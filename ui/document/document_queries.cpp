@@ -8,11 +8,14 @@
 
 namespace hierloom::ui {
 
-std::vector<std::string> groupsWithEncounters(const core::Colony& colony, const core::ResidenceIndex& where)
+std::vector<std::string> groupsWithEncounters(const core::EncounterRecords& encounters, const core::ResidenceIndex& where)
 {
+    const core::CompactEncounters& compact = encounters.compact();
+    std::vector<bool> used(static_cast<size_t>(compact.groups.size()), false);
+    for (const core::CompactEncounter& r : compact.records) used[static_cast<size_t>(r.group)] = true;
     std::set<std::string> names;
-    for (const core::Encounter& e : colony.encounters)
-        if (!e.group.empty()) names.insert(e.group);
+    for (std::int32_t g = 1; g < compact.groups.size(); ++g) // code 0: no group
+        if (used[static_cast<size_t>(g)]) names.insert(compact.groups.name(g));
     std::vector<std::string> out;
     for (const std::string& g : names)
         if (where.group(g) >= 0) out.push_back(g);
@@ -28,7 +31,7 @@ QStringList groupsWithEncounters(ColonyDocument* document)
         for (const std::string& g : document->residences().groups()) out << toQString(g);
         return out;
     }
-    for (const std::string& g : groupsWithEncounters(document->colony(), document->residences())) out << toQString(g);
+    for (const std::string& g : groupsWithEncounters(document->encounters(), document->residences())) out << toQString(g);
     return out;
 }
 

@@ -15,7 +15,7 @@ QStringList AnimalMatcher::setSession(const std::string& group, core::Day day)
     const int g = where.group(group);
     QStringList words;
     if (g >= 0)
-        for (const core::Animal& a : document_->colony().animals) {
+        for (const core::Animal& a : document_->pedigree().animals) {
             const int i = where.animal(a.id);
             if (i >= 0 && where.groupOn(i, day) == g) {
                 residents_.push_back({a.id, a.name});
@@ -33,11 +33,11 @@ AnimalMatcher::Match AnimalMatcher::resolve(const QString& typed) const
     const QString text = typed.trimmed();
     r.id = toStdString(text);
     if (text.isEmpty()) return r;
-    const auto& animals = document_->colony().animals;
+    const auto& animals = document_->pedigree().animals;
     auto label = [](const std::string& id, const std::string& name) {
         return name.empty() ? toQString(id) : toQString(id) + QStringLiteral(" ") + toQString(name);
     };
-    if (const int i = document_->colony().animalIndex(r.id); i >= 0) {
+    if (const int i = document_->pedigree().animalIndex(r.id); i >= 0) {
         r.hint = label(r.id, animals[static_cast<size_t>(i)].name);
         return r;
     }

@@ -292,10 +292,10 @@ void EncounterEntryPanel::documentChanged()
     const auto kind = document_->lastChange().kind;
     if (kind == ColonyDocument::ChangeKind::EncountersAppended && dayIndexValid_) {
         // Appended rows come last: only they need looking at.
-        const auto& all = document_->colony().encounters;
-        const std::string group = toStdString(group_->currentText());
+        const core::EncounterRecords& all = document_->encounters();
+        const std::int32_t group = all.compact().groups.find(toStdString(group_->currentText()));
         for (size_t i = document_->lastChange().firstAppended; i < all.size(); ++i)
-            if (all[i].date == day_ && all[i].group == group) dayIndex_.push_back(i);
+            if (all.record(i).date == day_ && all.record(i).group == group) dayIndex_.push_back(i);
     } else {
         dayIndexValid_ = false;
     }
@@ -578,11 +578,11 @@ bool EncounterEntryPanel::commitLine()
 
     // Same pair at the same time on this day, in this session or earlier: probably entered twice.
     bool warned = false;
-    for (const core::Encounter* row : dayRows()) {
-        if (editing_ && row->uid == editing_->uid) continue;
-        if (samePairKey(row->winner, row->loser) == samePairKey(e.winner, e.loser) && row->time == e.time) {
+    for (const core::Encounter& row : dayRows()) {
+        if (editing_ && row.uid == editing_->uid) continue;
+        if (samePairKey(row.winner, row.loser) == samePairKey(e.winner, e.loser) && row.time == e.time) {
             const QString when = e.time ? tr("at %1").arg(toQString(core::formatTimeOfDay(*e.time))) : tr("without a time");
-            const QString where = sessionUids_.count(row->uid) ? tr("in this session") : tr("in the file for this day");
+            const QString where = sessionUids_.count(row.uid) ? tr("in this session") : tr("in the file for this day");
             if (!askDuplicate_(tr("%1 and %2 %3 are already %4. Save this line as another encounter?")
                                    .arg(toQString(e.winner), toQString(e.loser), when, where))) {
                 showError(lineInfo_, tr("Not saved: a possible duplicate."));

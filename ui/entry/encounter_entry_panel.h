@@ -119,8 +119,8 @@ private:
     void cancelEdit();
     std::optional<int> parsedTime(bool& bad) const;
     /// Every line in the file for the session's date and group, in entry order.
-    std::vector<const core::Encounter*> dayRows() const;
-    std::vector<const core::Encounter*> sessionRows() const;
+    std::vector<core::Encounter> dayRows() const;
+    std::vector<core::Encounter> sessionRows() const;
 
     ColonyEditFacade* facade_;
     ColonyDocument* document_;

@@ -28,28 +28,28 @@
 
 namespace hierloom::ui {
 
-std::vector<const core::Encounter*> EncounterEntryPanel::dayRows() const
+std::vector<core::Encounter> EncounterEntryPanel::dayRows() const
 {
     // Read from the document every time, so the table can never drift from the file.
-    std::vector<const core::Encounter*> out;
+    std::vector<core::Encounter> out;
     if (!dateValid_) return out;
-    const auto& all = document_->colony().encounters;
+    const core::EncounterRecords& all = document_->encounters();
     if (!dayIndexValid_) {
-        const std::string group = toStdString(group_->currentText());
+        const std::int32_t group = all.compact().groups.find(toStdString(group_->currentText()));
         dayIndex_.clear();
         for (size_t i = 0; i < all.size(); ++i)
-            if (all[i].date == day_ && all[i].group == group) dayIndex_.push_back(i);
+            if (all.record(i).date == day_ && all.record(i).group == group) dayIndex_.push_back(i);
         dayIndexValid_ = true;
     }
-    for (size_t i : dayIndex_) out.push_back(&all[i]);
+    for (size_t i : dayIndex_) out.push_back(all.at(i));
     return out;
 }
 
-std::vector<const core::Encounter*> EncounterEntryPanel::sessionRows() const
+std::vector<core::Encounter> EncounterEntryPanel::sessionRows() const
 {
-    std::vector<const core::Encounter*> out;
-    for (const core::Encounter* e : dayRows())
-        if (sessionUids_.count(e->uid)) out.push_back(e);
+    std::vector<core::Encounter> out;
+    for (core::Encounter& e : dayRows())
+        if (sessionUids_.count(e.uid)) out.push_back(std::move(e));
     return out;
 }
 
@@ -58,16 +58,16 @@ int EncounterEntryPanel::sessionRowCount() const { return static_cast<int>(sessi
 void EncounterEntryPanel::refreshList()
 {
     const auto all = dayRows();
-    fillSessionTable(list_, all, sessionUids_, document_->colony());
+    fillSessionTable(list_, all, sessionUids_, document_->pedigree());
     std::set<std::string> animals;
     int ours = 0;
     int warnings = 0;
-    for (const core::Encounter* e : all) {
-        if (!sessionUids_.count(e->uid)) continue;
+    for (const core::Encounter& e : all) {
+        if (!sessionUids_.count(e.uid)) continue;
         ++ours;
-        animals.insert(e->winner);
-        animals.insert(e->loser);
-        warnings += warned_.count(e->uid) ? 1 : 0;
+        animals.insert(e.winner);
+        animals.insert(e.loser);
+        warnings += warned_.count(e.uid) ? 1 : 0;
     }
     const int earlier = static_cast<int>(all.size()) - ours;
     count_->setText(lines(ours) + QStringLiteral(" · ") + animalsText(static_cast<int>(animals.size())) +
@@ -129,7 +129,7 @@ void EncounterEntryPanel::editSelectedRow()
     const int row = list_->currentRow();
     const auto rows = dayRows();
     if (row < 0 || row >= static_cast<int>(rows.size())) return;
-    const core::Encounter& e = *rows[static_cast<size_t>(row)];
+    const core::Encounter& e = rows[static_cast<size_t>(row)];
     editing_ = e;
     time_->setText(e.time ? toQString(core::formatTimeOfDay(*e.time)) : QString());
     winner_->setText(toQString(e.winner));
@@ -157,7 +157,7 @@ void EncounterEntryPanel::deleteSelectedRows()
     const auto rows = dayRows();
     std::vector<core::Encounter> gone;
     for (const QModelIndex& index : list_->selectionModel()->selectedRows())
-        if (index.row() < static_cast<int>(rows.size())) gone.push_back(*rows[static_cast<size_t>(index.row())]);
+        if (index.row() < static_cast<int>(rows.size())) gone.push_back(rows[static_cast<size_t>(index.row())]);
     if (gone.empty()) return;
     const auto problems = facade_->deleteEncounters(gone);
     if (!problems.empty()) showProblems(problems);
@@ -170,8 +170,7 @@ void EncounterEntryPanel::undoWholeSession()
         showProblems(p);
         return;
     }
-    std::vector<core::Encounter> all;
-    for (const core::Encounter* e : sessionRows()) all.push_back(*e);
+    const std::vector<core::Encounter> all = sessionRows();
     if (all.empty()) return;
     const QString what = lines(static_cast<int>(all.size()));
     if (!askUndoSession_(tr("Take back the %1 entered in this session for %2, group %3? Earlier lines stay.")
@@ -189,13 +188,13 @@ void EncounterEntryPanel::endSession()
     const auto rows = sessionRows();
     std::set<std::string> animals;
     int warnings = 0;
-    for (const core::Encounter* e : rows) {
-        animals.insert(e->winner);
-        animals.insert(e->loser);
-        warnings += warned_.count(e->uid) ? 1 : 0;
+    for (const core::Encounter& e : rows) {
+        animals.insert(e.winner);
+        animals.insert(e.loser);
+        warnings += warned_.count(e.uid) ? 1 : 0;
     }
     // The date the lines were stored under, read from them when there are any.
-    const core::Day stored = rows.empty() ? day_ : rows.front()->date;
+    const core::Day stored = rows.empty() ? day_ : rows.front().date;
     summary_->setText(tr("Session ended: %1, group %2, observer %3: %4, %5, %6.")
                           .arg(formatDay(stored), group_->currentText(),
                                observer_->currentText().isEmpty() ? tr("(none)") : observer_->currentText(),

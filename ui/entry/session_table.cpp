@@ -42,13 +42,13 @@ QString idAndName(const std::string& id, const core::Colony& colony)
     return toQString(id) + QLatin1Char(' ') + toQString(colony.animals[static_cast<size_t>(i)].name);
 }
 
-void fillSessionTable(QTableWidget* table, const std::vector<const core::Encounter*>& rows,
+void fillSessionTable(QTableWidget* table, const std::vector<core::Encounter>& rows,
                       const std::set<std::string>& ours, const core::Colony& colony)
 {
     table->setRowCount(static_cast<int>(rows.size()));
     const QBrush earlierText = table->palette().brush(QPalette::Disabled, QPalette::Text);
     for (int r = 0; r < static_cast<int>(rows.size()); ++r) {
-        const core::Encounter& e = *rows[static_cast<size_t>(r)];
+        const core::Encounter& e = rows[static_cast<size_t>(r)];
         const bool earlier = !ours.count(e.uid);
         const QString who = e.observer.empty() ? tr("no observer") : toQString(e.observer);
         const QStringList cells{QString::number(r + 1),

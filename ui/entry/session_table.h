@@ -18,7 +18,7 @@ void setUpSessionTable(QTableWidget* table);
 /// Fills the table with `rows` (the file's lines of one date and group, in
 /// entry order): names beside ids, and lines not entered in this session
 /// (`ours` holds the uids that were) marked as earlier, with their observer.
-void fillSessionTable(QTableWidget* table, const std::vector<const core::Encounter*>& rows,
+void fillSessionTable(QTableWidget* table, const std::vector<core::Encounter>& rows,
                       const std::set<std::string>& ours, const core::Colony& colony);
 
 /// "F1 Ada", or the id alone when the animal has no name or is unknown.

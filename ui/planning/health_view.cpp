@@ -193,7 +193,8 @@ void HealthView::recompute()
     const ColonyDocument::Snapshot snapshot = document_->snapshot();
     runner_->start([this, snapshot, o](const std::atomic<bool>& cancel, const ComputeRunner::Progress&) {
         auto health = std::make_shared<core::DataHealth>(
-            core::dataHealth(*snapshot.colony, *snapshot.residences, o, &cancel));
+            // Every group's encounters: an animal's last sighting counts in any group.
+            core::dataHealth(snapshot.colonyFor({}), *snapshot.residences, o, &cancel));
         return ComputeRunner::Apply([this, health] { adopt(std::move(*health)); });
     });
 }

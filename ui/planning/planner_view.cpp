@@ -255,7 +255,7 @@ std::optional<core::Scenario> PlannerView::savedScenario(const QString& name, QS
     defaults.maturityYears = settings.maturityYears;
     defaults.elo = settings.elo;
     const core::ScenarioFileResult parsed =
-        core::parseScenarioText(*text, toStdString(name), document_->colony(), defaults);
+        core::parseScenarioText(*text, toStdString(name), document_->colonyFor({}), defaults);
     if (!parsed.scenario && error) {
         QStringList lines;
         for (const std::string& e : parsed.errors) lines << toQString(e);
@@ -302,7 +302,7 @@ void PlannerView::rerun()
     s.elo = documentAnalysisSettings(document_).elo; // Elo is no part of a scenario's text
     waitForEveryEncounter();
     try {
-        result_ = core::runScenario(document_->colony(), s);
+        result_ = core::runScenario(document_->colonyFor({}), s);
     } catch (const core::ScenarioError& e) {
         QStringList lines;
         for (const core::ScenarioProblem& p : e.problems()) lines << toQString(p.message);
@@ -319,7 +319,7 @@ void PlannerView::rerun()
                                                                      ? QColor(0xfd, 0xe2, 0xdc)
                                                                      : QColor(0xe2, 0xf0, 0xdc);
         setRow(moves_, row++,
-               {animalText(document_->colony(), m.animal), lineText(document_->colony(), m.animal, m.matriarch),
+               {animalText(document_->pedigree(), m.animal), lineText(document_->pedigree(), m.animal, m.matriarch),
                 rankIn(m.groupBefore, m.rankBefore),
                 rankIn(m.groupAfter, m.rankAfter), toQString(m.status)},
                tint);
@@ -327,8 +327,8 @@ void PlannerView::rerun()
     row = 0;
     for (const core::ScenarioReversal& v : result_->reversals)
         setRow(reversals_, row++,
-               {toQString(v.group), animalText(document_->colony(), v.predictedAbove),
-                animalText(document_->colony(), v.predictedBelow),
+               {toQString(v.group), animalText(document_->pedigree(), v.predictedAbove),
+                animalText(document_->pedigree(), v.predictedBelow),
                 QString::number(v.winsPredictedAbove), QString::number(v.winsPredictedBelow),
                 v.againstPredictionBefore ? tr("yes") : tr("no")});
     // Observed wins count the decided encounters of a window before the scenario's date: say which.
@@ -350,7 +350,7 @@ void PlannerView::rerun()
 
 void PlannerView::fillOrders(const core::Scenario& s)
 {
-    const core::Colony& colony = document_->colony();
+    const core::Colony& colony = document_->pedigree();
     const core::Colony after = core::scenarioColony(colony, s);
     const core::ResidenceIndex whereAfter(after.animals, after.residences);
     std::vector<std::string> groups;
@@ -446,7 +446,7 @@ void PlannerView::compare(const QString& first, const QString& second)
         }
         waitForEveryEncounter();
         try {
-            results[k] = core::runScenario(document_->colony(), *s);
+            results[k] = core::runScenario(document_->colonyFor({}), *s);
             QStringList groups;
             for (const core::ScenarioGroup& g : results[k]->groups)
                 groups << tr("%1 %2 females").arg(toQString(g.group)).arg(g.after.females.size());
@@ -496,7 +496,7 @@ int PlannerView::paint(QPagedPaintDevice& device, bool comparison)
         list.push_back({savedBox_->currentText().isEmpty() ? tr("(unsaved)") : savedBox_->currentText(),
                         composer_->scenario()});
     }
-    return report::paintScenarioReport(device, document_->colony(), list, QFileInfo(document_->path()).fileName());
+    return report::paintScenarioReport(device, document_->colonyFor({}), list, QFileInfo(document_->path()).fileName());
 }
 
 void PlannerView::printDialog()

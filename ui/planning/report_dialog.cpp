@@ -47,7 +47,7 @@ ReportDialog::ReportDialog(ColonyDocument* document, QWidget* parent)
     group_->addItems(groupsWithEncounters(document));
     date_->setCalendarPopup(true);
     date_->setDisplayFormat(QStringLiteral("yyyy-MM-dd"));
-    if (const auto last = core::lastEncounterDay(document->colony())) date_->setDate(toQDate(*last));
+    if (const auto last = document->lastEncounterDay()) date_->setDate(toQDate(*last));
     auto* form = new QFormLayout;
     form->addRow(tr("Group:"), group_);
     form->addRow(tr("At:"), date_);
@@ -79,12 +79,12 @@ void runReportDialog(QWidget* parent, ColonyDocument* document, ReportTarget tar
                                                         QStringLiteral("hierarchy-report.pdf"), QObject::tr("PDF (*.pdf)"));
             if (path.isEmpty()) return;
             if (QFileInfo(path).suffix().isEmpty()) path += QStringLiteral(".pdf");
-            report::writeHierarchyReportPdf(path, document->colony(), o);
+            report::writeHierarchyReportPdf(path, document->colonyFor({}), o);
         } else {
             QPrinter printer;
             QPrintDialog print(&printer, parent);
             if (print.exec() != QDialog::Accepted) return;
-            report::paintHierarchyReport(printer, document->colony(), o);
+            report::paintHierarchyReport(printer, document->colonyFor({}), o);
         }
     } catch (const std::exception& e) {
         QMessageBox::warning(parent, QObject::tr("Cannot Make the Report"), toQString(e.what()));

@@ -135,7 +135,7 @@ void ScenarioComposer::reset()
         const QSignalBlocker b1(group_), b2(date_);
         group_->clear();
         group_->addItems(groupsWithEncounters(document_));
-        if (const auto last = core::lastEncounterDay(document_->colony())) date_->setDate(toQDate(*last));
+        if (const auto last = document_->lastEncounterDay()) date_->setDate(toQDate(*last));
     }
     list_.clear();
     base_ = core::Scenario{};
@@ -150,7 +150,7 @@ void ScenarioComposer::reset()
 
 void ScenarioComposer::refreshChoices()
 {
-    const core::Colony& colony = document_->colony();
+    const core::Colony& colony = document_->pedigree();
     const core::ResidenceIndex& where = document_->residences();
     const core::Day day = toDay(date_->date());
     const int g = where.group(toStdString(group_->currentText()));

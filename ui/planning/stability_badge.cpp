@@ -52,19 +52,17 @@ void StabilityBadge::refresh()
     // Options are read from the file here; the records are the shared snapshot.
     const ColonyDocument::Snapshot snapshot = document_->snapshot();
     std::vector<std::pair<std::string, std::vector<core::StabilityOptions>>> checks;
-    for (const std::string& g : groupsWithEncounters(*snapshot.colony, *snapshot.residences))
+    for (const std::string& g : groupsWithEncounters(*snapshot.encounters, *snapshot.residences))
         checks.push_back({g,
                           {documentStabilityOptions(document_, g, core::PeriodLength::Week),
                            documentStabilityOptions(document_, g, core::PeriodLength::Month)}});
     runner_->start([this, snapshot = snapshot, checks](const std::atomic<bool>& cancel, const ComputeRunner::Progress& progress) mutable {
-        // A compact copy of the records first, then the document's records are
-        // let go: the check of every group takes long on a centre, and an edit
-        // meanwhile need not copy them (colony_document.h, snapshot()).
-        const core::Matrilines lines(*snapshot.colony);
-        const core::CompactEncounters records = core::compactEncounters(snapshot.colony->encounters);
-        const std::vector<core::Animal> animals = snapshot.colony->animals;
+        // The document's compact records, shared: an edit meanwhile copies
+        // them (colony_document.h, snapshot()) rather than wait.
+        const core::Matrilines lines(*snapshot.pedigree);
+        const core::CompactEncounters& records = snapshot.encounters->compact();
+        const std::vector<core::Animal>& animals = snapshot.pedigree->animals;
         const std::shared_ptr<const core::ResidenceIndex> where = snapshot.residences;
-        snapshot = {};
         QStringList groups, evidence;
         int done = 0;
         for (const auto& [group, options] : checks) {

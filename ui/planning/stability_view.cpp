@@ -64,9 +64,9 @@ core::StabilityOptions documentStabilityOptions(const ColonyDocument* document, 
 
 core::StabilitySeries documentStability(const ColonyDocument* document, const std::string& group, core::PeriodLength length)
 {
-    const core::Matrilines lines(document->colony());
-    return core::stabilityWatch(document->colony(), document->residences(), lines,
-                                documentStabilityOptions(document, group, length));
+    const core::Matrilines lines(document->pedigree());
+    return core::stabilityWatch(document->encounters().compact(), document->pedigree().animals, document->residences(),
+                                lines, documentStabilityOptions(document, group, length));
 }
 
 StabilityView::StabilityView(ColonyEditFacade* facade, QWidget* parent)

@@ -98,7 +98,7 @@ AnimalEditorDialog::AnimalEditorDialog(ColonyEditFacade* facade, Mode mode, QWid
         addRow(tr("Exit t&ype:"), exitType_, QStringLiteral("exit_type"));
         // Edit: the id picks the animal (ids are fixed; they are the notebooks' names).
         QStringList ids;
-        for (const core::Animal& a : facade_->document()->colony().animals) ids << toQString(a.id);
+        for (const core::Animal& a : facade_->document()->pedigree().animals) ids << toQString(a.id);
         auto* completer = new QCompleter(ids, id_);
         completer->setCaseSensitivity(Qt::CaseInsensitive);
         id_->setCompleter(completer);
@@ -181,7 +181,7 @@ void AnimalEditorDialog::refillParents()
         const QString current = box->currentData().toString();
         box->clear();
         box->addItem(tr("(unknown)"), QString());
-        for (const core::Animal& a : facade_->document()->colony().animals) {
+        for (const core::Animal& a : facade_->document()->pedigree().animals) {
             if (a.sex != sex || a.id == self) continue;
             if (birth && a.birth && *a.birth >= *birth) continue;
             box->addItem(a.name.empty() ? toQString(a.id) : toQString(a.id) + QStringLiteral(" (") + toQString(a.name) + ')',
@@ -194,7 +194,7 @@ void AnimalEditorDialog::refillParents()
 
 void AnimalEditorDialog::loadAnimal(const QString& id)
 {
-    const auto& colony = facade_->document()->colony();
+    const auto& colony = facade_->document()->pedigree();
     const int i = colony.animalIndex(toStdString(id.trimmed()));
     if (i < 0) {
         show({{"id", "'" + toStdString(id.trimmed()) + "' is not an animal of the colony"}});

@@ -15,7 +15,7 @@ QString tr(const char* text) { return QCoreApplication::translate("hierloom::ui:
 
 QString nameAndId(const ColonyDocument* document, const std::string& id)
 {
-    const core::Colony& colony = document->colony();
+    const core::Colony& colony = document->pedigree();
     const int i = colony.animalIndex(id);
     if (i < 0 || colony.animals[static_cast<size_t>(i)].name.empty()) return toQString(id);
     return toQString(colony.animals[static_cast<size_t>(i)].name) + QStringLiteral(" (") + toQString(id) + ')';
@@ -23,7 +23,7 @@ QString nameAndId(const ColonyDocument* document, const std::string& id)
 
 QString describeAnimal(const ColonyDocument* document, const std::string& id, core::Day day)
 {
-    const core::Colony& colony = document->colony();
+    const core::Colony& colony = document->pedigree();
     const int i = colony.animalIndex(id);
     if (i < 0) return {};
     const core::Animal& a = colony.animals[static_cast<size_t>(i)];

@@ -30,7 +30,7 @@ void AnimalTableModel::setReferenceDay(core::Day day)
 void AnimalTableModel::rebuild()
 {
     beginResetModel();
-    const core::Colony& colony = document_->colony();
+    const core::Colony& colony = document_->pedigree();
     const core::ResidenceIndex& residences = document_->residences();
     const core::Day today = referenceDay_.value_or(core::today());
     rows_.clear();
@@ -76,7 +76,7 @@ QVariant AnimalTableModel::data(const QModelIndex& index, int role) const
     case SortRole: return sortValue(row, index.column());
     case PresentRole: return rows_[row].present;
     case SearchTextRole: {
-        const core::Animal& a = document_->colony().animals[row];
+        const core::Animal& a = document_->pedigree().animals[row];
         return QStringList{toQString(a.id), toQString(a.name), toQString(a.mother), rows_[row].founder}.join(u'\n');
     }
     case Qt::TextAlignmentRole:
@@ -88,7 +88,7 @@ QVariant AnimalTableModel::data(const QModelIndex& index, int role) const
 
 QVariant AnimalTableModel::display(size_t row, int column) const
 {
-    const core::Animal& a = document_->colony().animals[row];
+    const core::Animal& a = document_->pedigree().animals[row];
     switch (column) {
     case Id: return toQString(a.id);
     case Name: return toQString(a.name);
@@ -110,7 +110,7 @@ QVariant AnimalTableModel::display(size_t row, int column) const
 
 QVariant AnimalTableModel::sortValue(size_t row, int column) const
 {
-    const core::Animal& a = document_->colony().animals[row];
+    const core::Animal& a = document_->pedigree().animals[row];
     switch (column) {
     // Unknown birth dates and ages sort before every known one.
     case Birth: return a.birth ? *a.birth : std::numeric_limits<int>::min();

@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
 #include "core/base/colony.h"
+#include "core/base/encounter_records.h"
 
 #include <optional>
 #include <string>
@@ -44,6 +45,22 @@ struct EncounterFilter {
         return true;
     }
     bool operator==(const EncounterFilter&) const = default;
+};
+
+/// EncounterFilter::accepts(records.at(i)) without building the Encounter:
+/// the filter's ids and texts are looked up in the records' code tables once.
+class EncounterFilterOnRecords {
+public:
+    EncounterFilterOnRecords(const EncounterFilter& filter, const core::EncounterRecords& records);
+    bool accepts(size_t i) const;
+
+private:
+    const EncounterFilter& filter_;
+    const core::EncounterRecords& records_;
+    std::int32_t animal_ = -1;   ///< code of filter.animal; -1 when no record has it
+    std::int32_t observer_ = -1; ///< code of *filter.observer; -1 when no record has it
+    /// Per code of each table: whether its text contains filter.text.
+    std::vector<bool> animalText_, behaviourText_, groupText_, observerText_;
 };
 
 } // namespace hierloom::ui

@@ -7,6 +7,7 @@
 #include <algorithm>
 #include <set>
 #include <string_view>
+#include <tuple>
 
 namespace hierloom::ui {
 
@@ -19,21 +20,26 @@ EncounterTableModel::EncounterTableModel(const ColonyDocument* document, QObject
 
 void EncounterTableModel::rebuild()
 {
-    const auto& encounters = document_->colony().encounters;
+    const core::EncounterRecords& encounters = document_->encounters();
     const ColonyDocument::Change& change = document_->lastChange();
     if (change.kind == ColonyDocument::ChangeKind::EncountersAppended && change.firstAppended == known_) {
         // An evening entry appends a row: place it (and tell the view of one
         // inserted row) instead of re-sorting and resetting a million.
-        const auto newer = [&](size_t a, size_t b) { return core::encounterBefore(encounters[b], encounters[a]); };
+        const auto key = [&](size_t i) {
+            const core::CompactEncounter& r = encounters.record(i);
+            return std::tuple(r.date, r.time < 0 ? 24 * 60 : r.time, r.seq);
+        };
+        const auto newer = [&](size_t a, size_t b) { return key(b) < key(a); };
+        const EncounterFilterOnRecords accepts(filter_, encounters);
         for (size_t i = change.firstAppended; i < encounters.size(); ++i) {
-            if (filter_.accepts(encounters[i])) {
+            if (accepts.accepts(i)) {
                 const auto at = std::upper_bound(rows_.begin(), rows_.end(), i, newer);
                 const int row = static_cast<int>(at - rows_.begin());
                 beginInsertRows(QModelIndex(), row, row);
                 rows_.insert(at, i);
                 endInsertRows();
             }
-            const QString name = toQString(encounters[i].observer);
+            const QString name = toQString(encounters.compact().observers.name(encounters.record(i).observer));
             const auto o = std::lower_bound(observers_.begin(), observers_.end(), name);
             if (o == observers_.end() || *o != name) observers_.insert(o, name);
         }
@@ -46,8 +52,13 @@ void EncounterTableModel::rebuild()
     }
     beginResetModel();
     known_ = encounters.size();
+    // The observers of the records held (a code table may keep a name no record uses now).
+    const core::CompactEncounters& compact = encounters.compact();
+    std::vector<bool> used(static_cast<size_t>(compact.observers.size()), false);
+    for (const core::CompactEncounter& r : compact.records) used[static_cast<size_t>(r.observer)] = true;
     std::set<std::string_view> names;
-    for (const core::Encounter& e : encounters) names.insert(e.observer);
+    for (std::int32_t o = 0; o < compact.observers.size(); ++o)
+        if (used[static_cast<size_t>(o)]) names.insert(compact.observers.name(o));
     observers_.clear();
     for (std::string_view n : names) observers_.append(QString::fromUtf8(n.data(), static_cast<qsizetype>(n.size())));
     applyFilter();
@@ -67,17 +78,18 @@ void EncounterTableModel::applyFilter()
 {
     // The rows shown are picked first and only they are sorted: a group's
     // log in a file kept group by group sorts that group, not every row held.
-    const auto& encounters = document_->colony().encounters;
+    const core::EncounterRecords& encounters = document_->encounters();
+    const EncounterFilterOnRecords accepts(filter_, encounters);
     std::vector<size_t> shown;
     for (size_t i = 0; i < encounters.size(); ++i)
-        if (filter_.accepts(encounters[i])) shown.push_back(i);
-    rows_ = core::chronologicalOrder(encounters, std::move(shown));
+        if (accepts.accepts(i)) shown.push_back(i);
+    rows_ = encounters.chronologicalOrder(std::move(shown));
     std::reverse(rows_.begin(), rows_.end());
 }
 
-const core::Encounter& EncounterTableModel::encounterAt(int row) const
+core::Encounter EncounterTableModel::encounterAt(int row) const
 {
-    return document_->colony().encounters[rows_.at(static_cast<size_t>(row))];
+    return document_->encounters().at(rows_.at(static_cast<size_t>(row)));
 }
 
 int EncounterTableModel::rowCount(const QModelIndex& parent) const
@@ -90,9 +102,10 @@ int EncounterTableModel::columnCount(const QModelIndex& parent) const { return p
 QVariant EncounterTableModel::data(const QModelIndex& index, int role) const
 {
     if (!index.isValid() || index.row() >= rowCount()) return {};
-    if (role == Qt::ToolTipRole && index.column() == Note) return toQString(encounterAt(index.row()).note);
+    if (role == Qt::ToolTipRole && index.column() == Note)
+        return toQString(document_->encounters().note(rows_[static_cast<size_t>(index.row())]));
     if (role != Qt::DisplayRole) return {};
-    const core::Encounter& e = encounterAt(index.row());
+    const core::Encounter e = encounterAt(index.row());
     switch (index.column()) {
     case Date: return formatDay(e.date);
     case Time: return e.time ? toQString(core::formatTimeOfDay(*e.time)) : QString();

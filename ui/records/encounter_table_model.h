@@ -32,8 +32,8 @@ public:
 
     /// Every encounter of the colony, whether shown or not.
     int totalCount() const { return static_cast<int>(known_); }
-    /// The encounter shown in a row.
-    const core::Encounter& encounterAt(int row) const;
+    /// The encounter shown in a row (made from the compact records on each call).
+    core::Encounter encounterAt(int row) const;
     /// Distinct observers, sorted, for the observer choice.
     const QStringList& observers() const { return observers_; }
 
@@ -43,8 +43,8 @@ private:
 
     const ColonyDocument* document_;
     EncounterFilter filter_;
-    size_t known_ = 0;         // colony().encounters.size() when rows_ was last made
-    std::vector<size_t> rows_; // indices into colony().encounters of the rows shown, newest first
+    size_t known_ = 0;         // encounters().size() when rows_ was last made
+    std::vector<size_t> rows_; // indices into encounters() of the rows shown, newest first
     QStringList observers_;
 };
 

@@ -121,9 +121,9 @@ void EncounterView::refillChoices()
                 observer_->addItem(name.isEmpty() ? tr("(none recorded)") : name, name);
             observer_->setCurrentIndex(observer.isValid() ? std::max(0, observer_->findData(observer)) : 0);
         }
-        const auto& encounters = document_->colony().encounters;
+        const core::EncounterRecords& encounters = document_->encounters();
         for (size_t i = change.firstAppended; i < encounters.size(); ++i) {
-            const QDate day = toQDate(encounters[i].date);
+            const QDate day = toQDate(encounters.record(i).date);
             const bool first = i == 0; // the colony's first encounter: the range is its day
             if (!fromCheck_->isChecked() && (first || day < from_->date())) from_->setDate(day);
             if (!toCheck_->isChecked() && (first || day > to_->date())) to_->setDate(day);
@@ -139,7 +139,7 @@ void EncounterView::refillChoices()
     // not rebuilt when only encounters changed, or a group was read.
     if (change.kind != ColonyDocument::ChangeKind::EncountersChanged || animal_->count() == 1) {
         std::vector<QString> ids;
-        for (const core::Animal& a : document_->colony().animals) ids.push_back(toQString(a.id));
+        for (const core::Animal& a : document_->pedigree().animals) ids.push_back(toQString(a.id));
         std::sort(ids.begin(), ids.end());
         animal_->clear();
         animal_->addItem(tr("Any animal"), QString());
@@ -154,7 +154,7 @@ void EncounterView::refillChoices()
     observer_->setCurrentIndex(observer.isValid() ? std::max(0, observer_->findData(observer)) : 0);
 
     // Offer the recorded span as the range, keeping a range the user set.
-    const auto& encounters = document_->colony().encounters;
+    const auto& encounters = document_->encounters().compact().records;
     if (!encounters.empty()) {
         const auto [first, last] = std::minmax_element(encounters.begin(), encounters.end(),
                                                        [](const auto& a, const auto& b) { return a.date < b.date; });

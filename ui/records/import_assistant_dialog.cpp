@@ -360,7 +360,7 @@ void ImportAssistantDialog::refresh()
         refreshUnknownNames();
         return;
     }
-    translation_ = core::translateSheet(m, sheet_, document_->colony().animals);
+    translation_ = core::translateSheet(m, sheet_, document_->pedigree().animals);
 
     // The date order: said plainly, never guessed.
     const core::DateOrderFinding& f = translation_.dateFinding;
@@ -463,7 +463,7 @@ bool ImportAssistantDialog::check()
 {
     refresh();
     if (sheet_.name.empty()) return false;
-    const core::Colony& colony = document_->colony();
+    const core::Colony& colony = document_->pedigree();
     const core::ImportPlan plan =
         core::planSheetImport(mapping(), sheet_, colony.animals, colony.residences, facade_->today());
     if (!plan.ok()) {

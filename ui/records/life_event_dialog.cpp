@@ -38,7 +38,7 @@ LifeEventDialog::LifeEventDialog(ColonyEditFacade* facade, Event event, const QS
     // Nothing chosen unless a view had an animal selected: never a default animal.
     animal_->addItem(QString(), QString());
     // Only animals still in the colony can die, leave or move.
-    for (const core::Animal& a : document->colony().animals)
+    for (const core::Animal& a : document->pedigree().animals)
         if (!a.exit) animal_->addItem(nameAndId(document, a.id), toQString(a.id));
     animal_->setEditable(true);
     animal_->setInsertPolicy(QComboBox::NoInsert);
@@ -120,7 +120,7 @@ void LifeEventDialog::accept()
         animal_->setFocus();
         return;
     }
-    if (facade_->document()->colony().animalIndex(id) < 0) {
+    if (facade_->document()->pedigree().animalIndex(id) < 0) {
         showMessage(tr("'%1' is not an animal of the colony").arg(toQString(id)));
         animal_->setFocus();
         return;

@@ -187,7 +187,7 @@ void BackupActions::checkSchedule(std::chrono::system_clock::time_point now)
     if (!document_->isOpen() || document_->isReadOnly()) return;
     // A large file (opened in steps): copied and checked on a thread of its own.
     if (!document_->isComplete() ||
-        static_cast<std::int64_t>(document_->colony().encounters.size()) >= document_->progressiveFrom()) {
+        static_cast<std::int64_t>(document_->encounters().size()) >= document_->progressiveFrom()) {
         background_->startIfDue(document_->path(), now);
         return;
     }

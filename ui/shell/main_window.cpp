@@ -359,9 +359,8 @@ void MainWindow::refresh()
     setWindowTitle(tr("%1 - Hierloom").arg(shown));
     fileLabel_->setText(shown);
     fileLabel_->setToolTip(QDir::toNativeSeparators(document_->path()));
-    const auto& colony = document_->colony();
-    animalCount_->setText(tr("Animals: %1").arg(locale.toString(static_cast<qlonglong>(colony.animals.size()))));
-    const QString encounters = locale.toString(static_cast<qlonglong>(colony.encounters.size()));
+    animalCount_->setText(tr("Animals: %1").arg(locale.toString(static_cast<qlonglong>(document_->pedigree().animals.size()))));
+    const QString encounters = locale.toString(static_cast<qlonglong>(document_->encounters().size()));
     encounterCount_->setText(document_->isComplete() ? tr("Encounters: %1").arg(encounters)
                                                      : tr("Encounters: %1 read so far").arg(encounters));
 }
