@@ -83,12 +83,12 @@ std::vector<Encounter> EncounterRecords::expand() const
 
 std::vector<Encounter> EncounterRecords::expandScope(std::string_view group) const
 {
-    if (group.empty()) return expand();
     std::vector<Encounter> out;
-    const std::int32_t code = compact_.groups.find(group);
+    const std::int32_t code = group.empty() ? -1 : compact_.groups.find(group);
+    if (group.empty()) out.reserve(size());
     for (size_t i = 0; i < size(); ++i) {
         const std::int16_t g = compact_.records[i].group;
-        if (g == 0 || g == code) out.push_back(at(i));
+        if (group.empty() || g == 0 || g == code) out.push_back(compact_.expand(i));
     }
     return out;
 }
@@ -124,13 +124,20 @@ size_t EncounterRecords::find(std::int64_t seq) const
 
 Day EncounterRecords::lastDay() const
 {
+    if (lastDay_) return *lastDay_;
     Day last = 0;
     bool any = false;
     for (const CompactEncounter& r : compact_.records) {
         if (!any || r.date > last) last = r.date;
         any = true;
     }
+    lastDay_ = last;
     return last;
+}
+
+void EncounterRecords::noteAdded(Day date)
+{
+    if (lastDay_ && (size() == 1 || date > *lastDay_)) lastDay_ = date;
 }
 
 void EncounterRecords::setTexts(size_t index, const Encounter& e)
@@ -151,6 +158,7 @@ void EncounterRecords::append(const Encounter& e)
     compact_.add(e);
     uids_.push_back(kNoUid);
     setTexts(size() - 1, e);
+    noteAdded(e.date);
 }
 
 std::pair<size_t, size_t> EncounterRecords::supportersOf(size_t index) const
@@ -175,6 +183,7 @@ void EncounterRecords::put(const Encounter& e)
         notes_.erase(e.seq);
         s.erase(s.begin() + static_cast<std::ptrdiff_t>(first), s.begin() + static_cast<std::ptrdiff_t>(last));
         compact_.records[i] = compact_.recordOf(e);
+        lastDay_.reset(); // the replaced record may have been the latest
     } else {
         for (size_t k = first; k < s.size(); ++k) ++s[k].encounter; // records from i on move one up
         compact_.records.insert(compact_.records.begin() + static_cast<std::ptrdiff_t>(i), compact_.recordOf(e));
@@ -186,6 +195,7 @@ void EncounterRecords::put(const Encounter& e)
     for (const std::string& id : e.loserSupport) added.push_back({index, compact_.animals.intern(id), SupportSide::Loser});
     s.insert(s.begin() + static_cast<std::ptrdiff_t>(first), added.begin(), added.end());
     setTexts(i, e);
+    noteAdded(e.date);
 }
 
 bool EncounterRecords::remove(std::int64_t seq)
@@ -200,6 +210,7 @@ bool EncounterRecords::remove(std::int64_t seq)
     uids_.erase(uids_.begin() + static_cast<std::ptrdiff_t>(i));
     otherUids_.erase(seq);
     notes_.erase(seq);
+    lastDay_.reset();
     return true;
 }
 
@@ -228,6 +239,7 @@ void EncounterRecords::keepOnly(const std::vector<bool>& kept)
     }
     compact_.records.resize(to);
     uids_.resize(to);
+    lastDay_.reset();
     auto& s = compact_.supporters;
     s.erase(std::remove_if(s.begin(), s.end(), [&](const CompactSupport& x) { return !kept[x.encounter]; }), s.end());
     for (CompactSupport& x : s) x.encounter = newIndex[x.encounter];

@@ -12,6 +12,7 @@
 
 #include <cstddef>
 #include <cstdint>
+#include <optional>
 #include <string>
 #include <string_view>
 #include <unordered_map>
@@ -48,7 +49,8 @@ public:
     /// The encounters an analysis of `group` may read, in seq order: those
     /// of the group and those recorded without one (whose scope depends on
     /// where the animals lived, ColonyStore::loadEncounters); every
-    /// encounter when `group` is empty.
+    /// encounter when `group` is empty. Without notes and uids, which no
+    /// analysis reads (CompactEncounters::expand).
     std::vector<Encounter> expandScope(std::string_view group) const;
     /// The encounters in which `animal` takes part (takesPart), in seq order.
     std::vector<Encounter> expandTakingPart(std::string_view animal) const;
@@ -57,7 +59,8 @@ public:
     size_t find(std::int64_t seq) const;
     /// The index of the first record whose seq is not below `seq`.
     size_t lowerBound(std::int64_t seq) const;
-    /// The latest date of any record; 0 when empty.
+    /// The latest date of any record; 0 when empty. Kept as records are
+    /// added, found again by one pass after a removal.
     Day lastDay() const;
 
     /// Adds `e` after the last record (e.seq above every seq held).
@@ -85,6 +88,8 @@ public:
 
 private:
     void keepOnly(const std::vector<bool>& kept);
+    /// Keeps lastDay_ true after a record of `date` was added.
+    void noteAdded(Day date);
     /// Puts the uid and note of `e` beside record `index` (already placed).
     void setTexts(size_t index, const Encounter& e);
     /// The supporters of record `index`: [first, last) of compact_.supporters.
@@ -96,6 +101,7 @@ private:
     std::vector<UidBytes> uids_;                               ///< beside each record; zero when kept in otherUids_
     std::unordered_map<std::int64_t, std::string> otherUids_;  ///< by seq: uids not in the canonical form
     std::unordered_map<std::int64_t, std::string> notes_;      ///< by seq: the notes that are not empty
+    mutable std::optional<Day> lastDay_;                       ///< lastDay() when known
 };
 
 } // namespace hierloom::core

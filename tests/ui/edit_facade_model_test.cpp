@@ -251,7 +251,7 @@ private:
         ASSERT_TRUE(caught.empty()) << caught.front().message;
         caughtUp();
         std::vector<core::Encounter> rows;
-        for (const core::Encounter& e : document_.colonyFor({}).encounters)
+        for (const core::Encounter& e : document_.encounters().expand())
             if (session_.count(e.uid)) rows.push_back(e);
         if (rows.empty()) return;
         const core::FieldProblems p = facade_.deleteEncounters(rows, QStringLiteral("Take back the session"));
@@ -360,8 +360,8 @@ private:
         // Until the desktop notices another program's write, it shows the file as it last read it.
         ASSERT_EQ(document_.writtenElsewhere(), outside_.has_value());
         const State& shown = model_.now();
-        ASSERT_TRUE(ui::sameRecords(document_.colonyFor({}).encounters, shown.encounters)) << "the document's cache drifted";
-        if (!outside_) ASSERT_TRUE(ui::sameRecords(document_.colonyFor({}).encounters, file.encounters));
+        ASSERT_TRUE(ui::sameRecords(document_.encounters().expand(), shown.encounters)) << "the document's cache drifted";
+        if (!outside_) ASSERT_TRUE(ui::sameRecords(document_.encounters().expand(), file.encounters));
         ASSERT_EQ(animals_.rowCount(), 6); // the animals' table is not touched by any of these steps
 
         // The table: every encounter the document shows, newest first, each cell from its record.

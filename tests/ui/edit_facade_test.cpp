@@ -44,7 +44,7 @@ struct Facade {
     void expectCacheIsTheFile()
     {
         const core::Colony file = core::ColonyStore::open(path, core::ColonyStore::Mode::ReadOnly).load();
-        EXPECT_TRUE(ui::sameRecords(document.colonyFor({}).encounters, file.encounters));
+        EXPECT_TRUE(ui::sameRecords(document.encounters().expand(), file.encounters));
         EXPECT_TRUE(ui::sameRecords(document.pedigree().animals, file.animals));
         EXPECT_TRUE(ui::sameRecords(document.pedigree().residences, file.residences));
     }
@@ -102,14 +102,14 @@ TEST(EditFacade, EveryKindOfWriteIsOneCommandAndOneChangeAndUndoRestoresTheFile)
     ASSERT_FALSE(e.uid.empty()); // the entered record carries its uid and seq
     {
         SCOPED_TRACE("edit encounter");
-        core::Encounter changed = f.document.colonyFor({}).encounters.front();
+        core::Encounter changed = f.document.encounters().expand().front();
         changed.note = "bit on the tail";
         checkUndoableWrite(f, Kind::EncountersChanged, [&] { return f.facade.editEncounter(changed); });
     }
     {
         SCOPED_TRACE("delete encounter");
         checkUndoableWrite(f, Kind::EncountersChanged,
-                           [&] { return f.facade.deleteEncounters({f.document.colonyFor({}).encounters.front()}); });
+                           [&] { return f.facade.deleteEncounters({f.document.encounters().expand().front()}); });
     }
     {
         SCOPED_TRACE("add animal");
@@ -183,7 +183,7 @@ TEST(EditFacade, AnEditThatChangesNothingWritesAndPushesNothing)
     const std::string before = fileDump(f.path);
     QSignalSpy changed(&f.document, &ui::ColonyDocument::changed);
 
-    EXPECT_TRUE(f.facade.editEncounter(f.document.colonyFor({}).encounters.front()).empty());
+    EXPECT_TRUE(f.facade.editEncounter(f.document.encounters().expand().front()).empty());
     EXPECT_TRUE(f.facade.editAnimal(f.document.pedigree().animals.front()).empty());
     EXPECT_TRUE(f.facade.setObservers({"GW"}).empty());
     EXPECT_TRUE(f.facade.setBehaviourCodes(f.document.store()->behaviourCodes()).empty());

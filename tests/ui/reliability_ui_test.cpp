@@ -211,7 +211,7 @@ TEST(ReliabilityUi, MergeDialogAddsTheOtherFilesNewEncounter)
     EXPECT_EQ(window.document()->undoStack()->count(), 0);
     EXPECT_TRUE(window.statusBar()->currentMessage().contains(QStringLiteral("merge")))
         << window.statusBar()->currentMessage().toStdString();
-    const auto& added = window.document()->colonyFor({}).encounters.back();
+    const auto& added = window.document()->encounters().expand().back();
     EXPECT_EQ(added.winner, "D1");
     EXPECT_EQ(added.loser, "F2");
 

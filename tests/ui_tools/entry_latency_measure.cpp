@@ -155,7 +155,7 @@ int main(int argc, char* argv[])
         std::vector<double> w;
         std::vector<core::Encounter> written;
         for (int i = 0; i < 11; ++i) {
-            std::vector<core::Encounter> one{doc->colonyFor({}).encounters.back()};
+            std::vector<core::Encounter> one{doc->encounters().at(doc->encounters().size() - 1)};
             one[0].seq = 0;
             one[0].uid.clear();
             QElapsedTimer t;

@@ -22,6 +22,12 @@ auto fields(const Encounter& e)
 void expectSame(const std::vector<Encounter>& model, const EncounterRecords& records, int step)
 {
     ASSERT_EQ(records.size(), model.size()) << "step " << step;
+    Day last = 0;
+    for (size_t i = 0; i < model.size(); ++i) last = i == 0 ? model[i].date : std::max(last, model[i].date);
+    ASSERT_EQ(records.lastDay(), last) << "step " << step;
+    std::vector<size_t> subset;
+    for (size_t i = 0; i < model.size(); i += 2) subset.push_back(i);
+    ASSERT_EQ(records.chronologicalOrder(subset), chronologicalOrder(model, subset)) << "step " << step;
     for (size_t i = 0; i < model.size(); ++i) {
         ASSERT_TRUE(fields(records.at(i)) == fields(model[i])) << "step " << step << ", record " << i;
         ASSERT_EQ(records.seq(i), model[i].seq);
