@@ -42,6 +42,18 @@ EncounterRecords::EncounterRecords(const std::vector<Encounter>& encounters)
     for (const Encounter& e : encounters) append(e);
 }
 
+EncounterRecords::EncounterRecords(CompactEncounters compact, std::vector<UidBytes> uids,
+                                   std::unordered_map<std::int64_t, std::string> otherUids,
+                                   std::unordered_map<std::int64_t, std::string> notes)
+    : compact_(std::move(compact)), uids_(std::move(uids)), otherUids_(std::move(otherUids)), notes_(std::move(notes))
+{
+    if (uids_.size() != compact_.records.size())
+        throw std::invalid_argument("EncounterRecords: one uid per record");
+    for (size_t i = 1; i < size(); ++i)
+        if (compact_.records[i - 1].seq >= compact_.records[i].seq)
+            throw std::invalid_argument("EncounterRecords: records not in seq order");
+}
+
 void EncounterRecords::reserve(size_t records)
 {
     compact_.records.reserve(records);

@@ -27,6 +27,12 @@ public:
     EncounterRecords() = default;
     /// The records of `encounters`, which are in seq order.
     explicit EncounterRecords(const std::vector<Encounter>& encounters);
+    /// Records read as their parts (a loader's): `compact` in seq order, the
+    /// uid bytes beside each record (zero where `otherUids` holds the uid by
+    /// seq), the notes that are not empty by seq.
+    EncounterRecords(CompactEncounters compact, std::vector<UidBytes> uids,
+                     std::unordered_map<std::int64_t, std::string> otherUids,
+                     std::unordered_map<std::int64_t, std::string> notes);
 
     size_t size() const { return compact_.records.size(); }
     bool empty() const { return compact_.records.empty(); }

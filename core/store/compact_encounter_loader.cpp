@@ -69,13 +69,18 @@ void loadSupporters(sqlite3* db, CompactEncounters& out)
 
 } // namespace
 
-CompactEncounters loadCompactEncounters(const ColonyStore& store, const EncounterScope& scope)
+namespace {
+
+/// Reads the rows of `scope` into `out`; `more(q, record)` is called for
+/// each row after the record is added (the uid and note of the full loader).
+template <class More>
+void readCompactRows(const ColonyStore& store, const EncounterScope& scope, const char* columns, CompactEncounters& out,
+                     More more)
 {
-    CompactEncounters out;
     const std::string& path = store.path();
     // The whole file: room for every row at once (no doubling of millions of records).
     if (scope.everything()) out.records.reserve(static_cast<size_t>(store.encounterCount()));
-    SqliteStatement q(store.handle(), (kColumns + encounterScopeSql(scope) + " ORDER BY seq").c_str());
+    SqliteStatement q(store.handle(), (columns + encounterScopeSql(scope) + " ORDER BY seq").c_str());
     bindEncounterScope(q, scope);
     const EncounterTermTexts terms(store.handle(), path);
     TermCodes behaviourOf(terms, out.behaviours), groupOf(terms, out.groups), observerOf(terms, out.observers);
@@ -91,11 +96,39 @@ CompactEncounters loadCompactEncounters(const ColonyStore& store, const Encounte
         r.group = smallCode(groupOf(q.integer(7)), "groups", path);
         r.observer = observerOf(q.integer(8));
         out.records.push_back(r);
+        more(q, r);
     }
     if (out.records.size() > UINT32_MAX)
         throw ColonyFileError(Kind::Damaged, path + ": holds more encounters than this program can analyse");
     loadSupporters(store.handle(), out);
+}
+
+} // namespace
+
+CompactEncounters loadCompactEncounters(const ColonyStore& store, const EncounterScope& scope)
+{
+    CompactEncounters out;
+    readCompactRows(store, scope, kColumns, out, [](const SqliteStatement&, const CompactEncounter&) {});
     return out;
+}
+
+EncounterRecords loadEncounterRecords(const ColonyStore& store, const EncounterScope& scope)
+{
+    static const std::string columns = std::string(kColumns).replace(std::string(kColumns).find(" FROM"), 0, ", uid, note");
+    CompactEncounters compact;
+    std::vector<UidBytes> uids;
+    std::unordered_map<std::int64_t, std::string> otherUids;
+    std::unordered_map<std::int64_t, std::string> notes;
+    readCompactRows(store, scope, columns.c_str(), compact, [&](const SqliteStatement& q, const CompactEncounter& r) {
+        if (const auto bytes = q.uidBytes(9)) {
+            uids.push_back(*bytes);
+        } else {
+            uids.push_back({});
+            otherUids.emplace(r.seq, q.text(9));
+        }
+        if (const std::string_view note = q.textView(10); !note.empty()) notes.emplace(r.seq, note);
+    });
+    return EncounterRecords(std::move(compact), std::move(uids), std::move(otherUids), std::move(notes));
 }
 
 } // namespace hierloom::core

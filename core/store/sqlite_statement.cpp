@@ -7,6 +7,8 @@
 
 #include <sqlite3.h>
 
+#include <algorithm>
+
 namespace hierloom::core {
 
 void throwSqliteError(sqlite3* db, int rc, const std::string& context)
@@ -107,6 +109,15 @@ std::string SqliteStatement::uid(int column) const
     if (sqlite3_column_type(stmt_, column) == SQLITE_BLOB && sqlite3_column_bytes(stmt_, column) == 16)
         return uidText(static_cast<const unsigned char*>(sqlite3_column_blob(stmt_, column)));
     return text(column);
+}
+
+std::optional<std::array<unsigned char, 16>> SqliteStatement::uidBytes(int column) const
+{
+    if (sqlite3_column_type(stmt_, column) != SQLITE_BLOB || sqlite3_column_bytes(stmt_, column) != 16) return std::nullopt;
+    std::array<unsigned char, 16> out{};
+    const auto* p = static_cast<const unsigned char*>(sqlite3_column_blob(stmt_, column));
+    std::copy(p, p + 16, out.begin());
+    return out;
 }
 
 std::string_view SqliteStatement::textView(int column) const

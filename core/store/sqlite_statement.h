@@ -47,6 +47,8 @@ public:
     std::int64_t integer(int column) const;
     /// A record uid column as text, whichever way it is stored.
     std::string uid(int column) const;
+    /// A record uid column's 16 bytes when it holds a canonical uid (a BLOB of 16); nothing otherwise.
+    std::optional<std::array<unsigned char, 16>> uidBytes(int column) const;
     bool isNull(int column) const;
 
 private:

@@ -2,6 +2,7 @@
 #include "ui/document/colony_document.h"
 
 #include "ui/document/background_encounter_load.h"
+#include "core/store/compact_encounter_loader.h"
 #include "ui/document/qt_convert.h"
 
 #include <QEventLoop>
@@ -53,8 +54,8 @@ ColonyDocument::Read ColonyDocument::readFile(const core::ColonyStore& store, st
         if (!where.groups().empty()) groups.push_back(where.groups().front());
     }
     for (const std::string& g : groups) {
-        const core::EncounterRecords part(store.loadEncounters(core::EncounterScope{.group = g}));
-        read.records = core::EncounterRecords::merged(read.records, part);
+        read.records = core::EncounterRecords::merged(
+            read.records, core::loadEncounterRecords(store, core::EncounterScope{.group = g}));
     }
     read.groups = std::move(groups);
     return read;
@@ -211,7 +212,8 @@ bool ColonyDocument::holdGroup(const QString& group)
         std::rotate(at, at + 1, heldGroups_.end()); // now the most recently asked for
         return false;
     }
-    const core::EncounterRecords part(store_->loadEncounters(core::EncounterScope{.group = g}));
+    // Read straight into compact records: no Encounter of strings per row.
+    const core::EncounterRecords part = core::loadEncounterRecords(*store_, core::EncounterScope{.group = g});
     heldGroups_.push_back(g);
     const std::vector<std::string> dropped = dropOldGroups();
     snapshot_ = {};

@@ -89,6 +89,20 @@ TEST(CompactEncounterLoader, ReadsTheRowsOfEveryScopeAndRanksIdenticallyToTheRec
                 e.note.clear();
                 EXPECT_EQ(fields(compact.expand(i)), fields(e)) << label;
             }
+            // The desktop's full records: every field, uid and note included.
+            {
+                EncounterScope withUids = scope;
+                withUids.uids = true;
+                const std::vector<Encounter> expected = store.loadEncounters(withUids);
+                const EncounterRecords records = loadEncounterRecords(store, scope);
+                ASSERT_EQ(records.size(), expected.size()) << label;
+                for (size_t i = 0; i < records.size(); ++i) {
+                    const Encounter e = records.at(i);
+                    EXPECT_EQ(fields(e), fields(expected[i])) << label;
+                    EXPECT_EQ(e.uid, expected[i].uid) << label;
+                    EXPECT_EQ(e.note, expected[i].note) << label;
+                }
+            }
             // What the command line does with a scope: select the same group and window.
             SelectionOptions sel;
             sel.group = scope.group;
