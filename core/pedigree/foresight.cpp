@@ -173,6 +173,7 @@ Foresight computeForesight(const Colony& colony, const ResidenceIndex& where, co
         all[b].informedElo = informed.winnerChance[b];
     }
     // Decided encounters only; the rule's probability fitted on them.
+    result.encounters.reserve(sel.bouts.size());
     for (size_t b = 0; b < sel.bouts.size(); ++b) {
         if (sel.bouts[b].draw) continue;
         if (all[b].ruleConforms) {
