@@ -24,7 +24,10 @@
 
 #include <algorithm>
 #include <cmath>
+#include <exception>
+#include <future>
 #include <iterator>
+#include <optional>
 #include <stdexcept>
 
 namespace hierloom::report {
@@ -200,8 +203,32 @@ void rankChanges(ReportLayout& doc, const ReportColony& c, const Matrilines& lin
     doc.table(t);
 }
 
-void foresight(ReportLayout& doc, const Colony& colony, const ResidenceIndex& where, const HierarchyReportOptions& o,
-               Day at)
+/// A section's figures computed ahead of its painting, or what stopped them
+/// (thrown again where the section is painted, so errors keep their order).
+template <typename T>
+struct Computed {
+    std::optional<T> value;
+    std::exception_ptr error;
+
+    template <typename F>
+    static Computed of(F compute)
+    {
+        Computed c;
+        try {
+            c.value.emplace(compute());
+        } catch (...) {
+            c.error = std::current_exception();
+        }
+        return c;
+    }
+    const T& get() const
+    {
+        if (error) std::rethrow_exception(error);
+        return *value;
+    }
+};
+
+Foresight foresightOf(const Colony& colony, const ResidenceIndex& where, const HierarchyReportOptions& o, Day at)
 {
     clearUpperVectorState();
     SelectionOptions sel;
@@ -212,7 +239,11 @@ void foresight(ReportLayout& doc, const Colony& colony, const ResidenceIndex& wh
     fo.rule = o.rule;
     fo.maturityYears = o.maturityYears;
     fo.elo = o.elo;
-    const Foresight f = computeForesight(colony, where, sel, fo);
+    return computeForesight(colony, where, sel, fo);
+}
+
+void foresight(ReportLayout& doc, const HierarchyReportOptions& o, Day at, const Foresight& f)
+{
     doc.heading(QObject::tr("How much does inheritance explain"));
     doc.paragraph(QObject::tr("For each decided encounter up to %1, the chance each model gave the winner beforehand: "
                               "the %2 inheritance rule alone (the animal it places higher wins with one probability, "
@@ -266,8 +297,7 @@ void foresight(ReportLayout& doc, const Colony& colony, const ResidenceIndex& wh
     doc.chart(QObject::tr("Share of winners each model predicted, per year"), series, labels);
 }
 
-void stability(ReportLayout& doc, const ReportColony& c, const Matrilines& lines,
-               const HierarchyReportOptions& o, Day at)
+StabilitySeries stabilityOf(const ReportColony& c, const Matrilines& lines, const HierarchyReportOptions& o, Day at)
 {
     clearUpperVectorState();
     StabilityOptions so;
@@ -277,7 +307,11 @@ void stability(ReportLayout& doc, const ReportColony& c, const Matrilines& lines
     so.elo = o.elo;
     so.severity = o.severity;
     so.thresholds = o.thresholds;
-    const StabilitySeries s = stabilityWatch(c.compact, c.colony.animals, c.where, lines, so);
+    return stabilityWatch(c.compact, c.colony.animals, c.where, lines, so);
+}
+
+void stability(ReportLayout& doc, const HierarchyReportOptions& o, Day at, const StabilitySeries& s)
+{
     doc.heading(QObject::tr("Stability"));
     doc.paragraph(stabilityMethodText(o.thresholds), true);
     std::vector<bool> alerted(s.periods.size(), false);
@@ -379,6 +413,23 @@ int paintHierarchyReport(QPagedPaintDevice& device, const Colony& colony, const 
     io.elo = o.elo;
     const InheritancePrediction p = predictInheritance(c.compact, colony.animals, where, lines, io);
 
+    // Data health (its 500 randomisations on every core) runs on a thread of
+    // its own while this one computes the foresight and stability figures;
+    // everything is painted afterwards, in the same order as before.
+    HealthOptions ho;
+    ho.from = es.firstDay;
+    ho.to = at;
+    ho.group = o.group;
+    ho.today = at;
+    ho.elo = o.elo;
+    ho.randomisations = 500;
+    std::future<DataHealth> pendingHealth = std::async(std::launch::async, [&] {
+        clearUpperVectorState();
+        return dataHealth(colony, where, ho);
+    });
+    const auto foresightFigures = Computed<Foresight>::of([&] { return foresightOf(colony, where, o, at); });
+    const auto stabilityFigures = Computed<StabilitySeries>::of([&] { return stabilityOf(c, lines, o, at); });
+
     ReportLayout doc(device);
     doc.title(QObject::tr("Hierarchy report: %1").arg(qs(o.group)),
               QObject::tr("%1 - at %2 - made %3 with Hierloom")
@@ -394,21 +445,13 @@ int paintHierarchyReport(QPagedPaintDevice& device, const Colony& colony, const 
                       .arg(decided)
                       .arg(static_cast<int>(es.bouts.size()) - decided)
                       .arg(es.size()));
-    HealthOptions ho;
-    ho.from = es.firstDay;
-    ho.to = at;
-    ho.group = o.group;
-    ho.today = at;
-    ho.elo = o.elo;
-    ho.randomisations = 500;
-    clearUpperVectorState();
-    const DataHealth health = dataHealth(colony, where, ho);
+    const DataHealth health = pendingHealth.get();
     observedAndPredicted(doc, c, lines, o, at, p, health);
     doc.caution(qs(kPlanningCaution));
     discordances(doc, lines, p);
     rankChanges(doc, c, lines, o, at);
-    foresight(doc, colony, where, o, at);
-    stability(doc, c, lines, o, at);
+    foresight(doc, o, at, foresightFigures.get());
+    stability(doc, o, at, stabilityFigures.get());
     paintHealthSection(doc, health, qs(o.group));
     doc.heading(QObject::tr("Methods and references"));
     for (const QString& m : methodsText(o.elo)) doc.paragraph(m, true);

@@ -62,33 +62,81 @@ EloStartRule startRuleOf(SiblingRule rule)
     return rule == SiblingRule::Eldest ? EloStartRule::Eldest : EloStartRule::Youngest;
 }
 
-/// Whether the rule's order of day d puts each pair's winner higher, for the
-/// bouts [first, last) of that day; `rating` and `rated` are plain Elo before the day.
-void judgeDay(const Matrilines& lines, const ResidenceIndex& where, const std::vector<FemaleCandidate>& candidates,
-              const SelectionOptions& selection, const ForesightOptions& o, const EncounterSelection& sel,
-              const std::vector<double>& rating, const std::vector<unsigned char>& rated, size_t first, size_t last,
-              std::vector<ForesightEncounter>& out)
-{
-    const Day d = sel.days[first];
-    ObservedScores observed;
-    for (int i = 0; i < sel.size(); ++i)
-        if (rated[static_cast<size_t>(i)]) observed.emplace(sel.ids[static_cast<size_t>(i)], rating[static_cast<size_t>(i)]);
-    const RankedFemales ranked = rankedFemalesOn(lines, where, candidates, d, selection.group, o.maturityYears);
-    const InheritancePrediction p = predictOrder(lines, ranked, observed, o.rule);
-    std::set<std::string, std::less<>> placed; // matrilines placed by an observed rank
-    for (const PredictedFemale& f : p.females)
-        if (f.observedScore) placed.insert(f.matriarch);
-    for (size_t b = first; b < last; ++b) {
-        ForesightEncounter& e = out[b];
-        const int w = p.find(e.winner);
-        const int l = p.find(e.loser);
-        if (w < 0 || l < 0) continue;
-        const std::string& mw = p.females[static_cast<size_t>(w)].matriarch;
-        const std::string& ml = p.females[static_cast<size_t>(l)].matriarch;
-        if (mw != ml && (!placed.count(mw) || !placed.count(ml))) continue;
-        e.ruleConforms = w < l;
+/// Judges each day's bouts by the rule's order of that day, in pedigree nodes
+/// (the ids are matched once, not at every bout): what predictOrder would
+/// give for the ratings before the day, read without building its strings.
+class DayJudge {
+public:
+    DayJudge(const Matrilines& lines, const ResidenceIndex& where, const SelectionOptions& selection,
+             const ForesightOptions& o, const EncounterSelection& sel)
+        : lines_(lines), where_(where), group_(selection.group), maturityYears_(o.maturityYears), sel_(sel),
+          walks_(lines, o.rule), candidates_(rankedFemaleCandidates(lines, where, selection.group)),
+          nodeOf_(sel.ids.size()), selOf_(static_cast<size_t>(lines.size()), -1),
+          place_(static_cast<size_t>(lines.size()), -1), placed_(static_cast<size_t>(lines.size()), false)
+    {
+        for (size_t i = 0; i < sel.ids.size(); ++i) {
+            nodeOf_[i] = lines.index(sel.ids[i]);
+            if (nodeOf_[i] >= 0) selOf_[static_cast<size_t>(nodeOf_[i])] = static_cast<int>(i);
+        }
     }
-}
+
+    /// Whether the rule's order of day d puts each pair's winner higher, for the
+    /// bouts [first, last) of that day; `rating` and `rated` are plain Elo before the day.
+    void judge(const std::vector<double>& rating, const std::vector<unsigned char>& rated, size_t first, size_t last,
+               std::vector<ForesightEncounter>& out)
+    {
+        const RankedFemales ranked =
+            rankedFemalesOn(lines_, where_, candidates_, sel_.days[first], group_, maturityYears_);
+        std::vector<int> rankedNodes;
+        std::vector<std::optional<double>> score;
+        for (const FemaleCandidate& c : candidates_) {
+            if (!ranked.ranked[static_cast<size_t>(c.node)]) continue;
+            rankedNodes.push_back(c.node);
+            const int i = selOf_[static_cast<size_t>(c.node)];
+            score.push_back(i >= 0 && rated[static_cast<size_t>(i)] ? std::optional<double>(rating[static_cast<size_t>(i)])
+                                                                     : std::nullopt);
+        }
+        const PredictedNodes p = predictNodes(lines_, walks_, ranked.ranked, rankedNodes, score);
+        for (size_t k = 0; k < p.females.size(); ++k) {
+            place_[static_cast<size_t>(p.females[k])] = static_cast<int>(k);
+            // A line is placed by an observed rank of one of its females.
+            if (p.observedRank[static_cast<size_t>(p.females[k])] > 0) placed_[static_cast<size_t>(p.femaleLine[k])] = true;
+        }
+        for (size_t b = first; b < last; ++b) {
+            const int w = placeOf(sel_.bouts[b].winner);
+            const int l = placeOf(sel_.bouts[b].loser);
+            if (w < 0 || l < 0) continue;
+            const int mw = p.femaleLine[static_cast<size_t>(w)];
+            const int ml = p.femaleLine[static_cast<size_t>(l)];
+            if (mw != ml && (!placed_[static_cast<size_t>(mw)] || !placed_[static_cast<size_t>(ml)])) continue;
+            out[b].ruleConforms = w < l;
+        }
+        for (size_t k = 0; k < p.females.size(); ++k) {
+            place_[static_cast<size_t>(p.females[k])] = -1;
+            placed_[static_cast<size_t>(p.femaleLine[k])] = false;
+        }
+    }
+
+private:
+    /// Place in the day's predicted order of an analysed animal, or -1.
+    int placeOf(int animal) const
+    {
+        const int node = nodeOf_[static_cast<size_t>(animal)];
+        return node >= 0 ? place_[static_cast<size_t>(node)] : -1;
+    }
+
+    const Matrilines& lines_;
+    const ResidenceIndex& where_;
+    const std::string& group_;
+    int maturityYears_;
+    const EncounterSelection& sel_;
+    MatrilineWalks walks_;
+    std::vector<FemaleCandidate> candidates_; ///< the females that can be ranked in the group
+    std::vector<int> nodeOf_;                 ///< per analysed animal: its node, or -1
+    std::vector<int> selOf_;                  ///< per node: its analysed animal, or -1
+    std::vector<int> place_;                  ///< per node: place in the day's order, -1 outside it
+    std::vector<bool> placed_;                ///< per matriarch: her line placed by an observed rank today
+};
 
 } // namespace
 
@@ -111,13 +159,12 @@ Foresight computeForesight(const Colony& colony, const ResidenceIndex& where, co
     }
     // Plain Elo: the rule's matriline order is judged from its ratings before each day's first bout.
     const Matrilines lines(colony);
-    // The females that can be ranked in the group, found once instead of on every day.
-    const std::vector<FemaleCandidate> candidates = rankedFemaleCandidates(lines, where, selection.group);
+    DayJudge dayJudge(lines, where, selection, o, sel);
     const EloObserver judge = [&](size_t b, const std::vector<double>& rating, const std::vector<unsigned char>& rated) {
         if (b > 0 && sel.days[b] == sel.days[b - 1]) return;
         size_t last = b + 1;
         while (last < sel.days.size() && sel.days[last] == sel.days[b]) ++last;
-        judgeDay(lines, where, candidates, selection, o, sel, rating, rated, b, last, all);
+        dayJudge.judge(rating, rated, b, last, all);
     };
     const EloTrace plain = traceElo(n, sel.bouts, sel.days, elo, EloStartRule::None, family, present, {}, judge);
     const EloTrace informed = traceElo(n, sel.bouts, sel.days, elo, startRuleOf(o.rule), family, present, {});
@@ -126,6 +173,7 @@ Foresight computeForesight(const Colony& colony, const ResidenceIndex& where, co
         all[b].informedElo = informed.winnerChance[b];
     }
     // Decided encounters only; the rule's probability fitted on them.
+    result.encounters.reserve(sel.bouts.size());
     for (size_t b = 0; b < sel.bouts.size(); ++b) {
         if (sel.bouts[b].draw) continue;
         if (all[b].ruleConforms) {

@@ -101,30 +101,31 @@ std::vector<int> matrilineWalk(const Matrilines& lines, int matriarch, const std
     return out;
 }
 
-InheritancePrediction predictOrder(const Matrilines& lines, const RankedFemales& ranked, const ObservedScores& observed,
-                                   SiblingRule rule, const std::vector<std::string>& explicitOrder)
+MatrilineWalks::MatrilineWalks(const Matrilines& lines, SiblingRule rule)
+    : lines_(&lines), rule_(rule), walks_(static_cast<size_t>(lines.size())),
+      walked_(static_cast<size_t>(lines.size()), false)
 {
-    InheritancePrediction p;
-    p.rule = rule;
-    p.unknownBirthCountedMature = ranked.unknownBirth;
-    const int n = lines.size();
-    // Observed ranks: ranked females with a score, ordered by score, ties by id.
-    std::vector<int> scored;
-    for (int i = 0; i < n; ++i)
-        if (ranked.ranked[static_cast<size_t>(i)] && observed.count(lines.id(i))) scored.push_back(i);
-    std::sort(scored.begin(), scored.end(), [&](int a, int b) { return lines.id(a) < lines.id(b); });
-    std::vector<double> scores;
-    for (int i : scored) scores.push_back(observed.find(lines.id(i))->second);
-    const std::vector<int> ordinal = ordinalRanks(scores, std::vector<bool>(scores.size(), true));
-    std::vector<int> observedRank(static_cast<size_t>(n), 0);
-    for (size_t k = 0; k < scored.size(); ++k) observedRank[static_cast<size_t>(scored[k])] = ordinal[k];
+}
 
-    // Each line with ranked members and its best observed rank (0: none).
-    // A vector by matriarch, not a map: this runs at every checkpoint of a timeline.
-    std::vector<int> best(static_cast<size_t>(n), -1); // matriarch -> best observed rank (-1: no ranked member)
+const std::vector<int>& MatrilineWalks::walk(int matriarch)
+{
+    const auto m = static_cast<size_t>(matriarch);
+    if (!walked_.at(m)) {
+        walks_[m] = matrilineWalk(*lines_, matriarch, std::vector<bool>(walked_.size(), true), rule_);
+        walked_[m] = true;
+    }
+    return walks_[m];
+}
+
+namespace {
+
+/// The lines with ranked members, ordered by the best observed rank among
+/// them, lines without one last by matriarch id.
+std::vector<int> observedLineOrder(const Matrilines& lines, const std::vector<int>& rankedNodes,
+                                   const std::vector<int>& observedRank, std::vector<int>& best)
+{
     std::vector<int> order;
-    for (int i = 0; i < n; ++i) {
-        if (!ranked.ranked[static_cast<size_t>(i)]) continue;
+    for (const int i : rankedNodes) {
         const int m = lines.matriarch(i);
         const int r = observedRank[static_cast<size_t>(i)];
         int& b = best[static_cast<size_t>(m)];
@@ -141,36 +142,91 @@ InheritancePrediction predictOrder(const Matrilines& lines, const RankedFemales&
         if (ra > 0 && ra != rb) return ra < rb;
         return lines.id(a) < lines.id(b);
     });
-    if (!explicitOrder.empty()) {
-        std::vector<int> listed;
-        std::set<int> seen;
-        for (const std::string& id : explicitOrder) {
-            const int m = lines.index(id);
-            if (m < 0) throw std::invalid_argument("matriline order: no animal '" + id + "' in the pedigree");
-            if (lines.mother(m) >= 0)
-                throw std::invalid_argument("matriline order: " + id + " is not a matriarch (her matriarch is " +
-                                            lines.id(lines.matriarch(m)) + ")");
-            if (!seen.insert(m).second) throw std::invalid_argument("matriline order: " + id + " is listed twice");
-            if (best[static_cast<size_t>(m)] >= 0) listed.push_back(m);
-        }
-        for (int m : order)
-            if (!seen.count(m)) listed.push_back(m);
-        order = std::move(listed);
+    return order;
+}
+
+/// The explicit matriline order (matriarch ids), then the other lines of `order`.
+std::vector<int> explicitLineOrder(const Matrilines& lines, const std::vector<std::string>& explicitOrder,
+                                   const std::vector<int>& order, const std::vector<int>& best)
+{
+    std::vector<int> listed;
+    std::set<int> seen;
+    for (const std::string& id : explicitOrder) {
+        const int m = lines.index(id);
+        if (m < 0) throw std::invalid_argument("matriline order: no animal '" + id + "' in the pedigree");
+        if (lines.mother(m) >= 0)
+            throw std::invalid_argument("matriline order: " + id + " is not a matriarch (her matriarch is " +
+                                        lines.id(lines.matriarch(m)) + ")");
+        if (!seen.insert(m).second) throw std::invalid_argument("matriline order: " + id + " is listed twice");
+        if (best[static_cast<size_t>(m)] >= 0) listed.push_back(m);
     }
-    for (int m : order) {
-        p.matrilineOrder.push_back(lines.id(m));
-        for (int f : matrilineWalk(lines, m, ranked.ranked, rule)) {
-            PredictedFemale row;
-            row.animal = lines.id(f);
-            row.matriarch = lines.id(m);
-            row.predictedRank = static_cast<int>(p.females.size()) + 1;
-            if (observedRank[static_cast<size_t>(f)] > 0) {
-                row.observedRank = observedRank[static_cast<size_t>(f)];
-                row.observedScore = observed.find(row.animal)->second;
+    for (int m : order)
+        if (!seen.count(m)) listed.push_back(m);
+    return listed;
+}
+
+} // namespace
+
+PredictedNodes predictNodes(const Matrilines& lines, MatrilineWalks& walks, const std::vector<bool>& ranked,
+                            const std::vector<int>& rankedNodes, const std::vector<std::optional<double>>& score,
+                            const std::vector<std::string>& explicitOrder)
+{
+    const auto n = static_cast<size_t>(lines.size());
+    PredictedNodes p;
+    // Observed ranks: ranked females with a score, ordered by score, ties by id.
+    std::vector<size_t> scored;
+    for (size_t k = 0; k < rankedNodes.size(); ++k)
+        if (score[k]) scored.push_back(k);
+    std::sort(scored.begin(), scored.end(),
+              [&](size_t a, size_t b) { return lines.id(rankedNodes[a]) < lines.id(rankedNodes[b]); });
+    std::vector<double> scores;
+    for (size_t k : scored) scores.push_back(*score[k]);
+    const std::vector<int> ordinal = ordinalRanks(scores, std::vector<bool>(scores.size(), true));
+    p.observedRank.assign(n, 0);
+    for (size_t k = 0; k < scored.size(); ++k) p.observedRank[static_cast<size_t>(rankedNodes[scored[k]])] = ordinal[k];
+
+    // Each line with ranked members and its best observed rank (0: none; -1: no ranked member).
+    std::vector<int> best(n, -1);
+    p.lines = observedLineOrder(lines, rankedNodes, p.observedRank, best);
+    if (!explicitOrder.empty()) p.lines = explicitLineOrder(lines, explicitOrder, p.lines, best);
+    for (int m : p.lines)
+        for (int f : walks.walk(m))
+            if (ranked[static_cast<size_t>(f)]) {
+                p.females.push_back(f);
+                p.femaleLine.push_back(m);
             }
-            p.females.push_back(std::move(row));
-            if (!lines.birth(f) && !lines.sisters(f).empty()) p.unorderable.push_back(lines.id(f));
+    return p;
+}
+
+InheritancePrediction predictOrder(const Matrilines& lines, const RankedFemales& ranked, const ObservedScores& observed,
+                                   SiblingRule rule, const std::vector<std::string>& explicitOrder)
+{
+    InheritancePrediction p;
+    p.rule = rule;
+    p.unknownBirthCountedMature = ranked.unknownBirth;
+    std::vector<int> rankedNodes;
+    std::vector<std::optional<double>> score;
+    for (int i = 0; i < lines.size(); ++i) {
+        if (!ranked.ranked[static_cast<size_t>(i)]) continue;
+        rankedNodes.push_back(i);
+        const auto it = observed.find(lines.id(i));
+        score.push_back(it != observed.end() ? std::optional<double>(it->second) : std::nullopt);
+    }
+    MatrilineWalks walks(lines, rule);
+    const PredictedNodes nodes = predictNodes(lines, walks, ranked.ranked, rankedNodes, score, explicitOrder);
+    for (int m : nodes.lines) p.matrilineOrder.push_back(lines.id(m));
+    for (size_t k = 0; k < nodes.females.size(); ++k) {
+        const int f = nodes.females[k];
+        PredictedFemale row;
+        row.animal = lines.id(f);
+        row.matriarch = lines.id(nodes.femaleLine[k]);
+        row.predictedRank = static_cast<int>(p.females.size()) + 1;
+        if (const int r = nodes.observedRank[static_cast<size_t>(f)]; r > 0) {
+            row.observedRank = r;
+            row.observedScore = observed.find(row.animal)->second;
         }
+        p.females.push_back(std::move(row));
+        if (!lines.birth(f) && !lines.sisters(f).empty()) p.unorderable.push_back(lines.id(f));
     }
     std::sort(p.unorderable.begin(), p.unorderable.end());
     // Discordant dyads: both observed, observed order the reverse of the predicted one.

@@ -82,6 +82,37 @@ std::vector<int> orderSiblings(const Matrilines& lines, std::vector<int> sibling
 std::vector<int> matrilineWalk(const Matrilines& lines, int matriarch, const std::vector<bool>& ranked,
                                SiblingRule rule);
 
+/// Every node of each matriline in inheritance order (matrilineWalk with every
+/// node ranked), walked on first use and kept, for a series of predictions
+/// under one sibling rule: matrilineWalk(lines, m, ranked, rule) is walk(m)
+/// without the unranked nodes. Not safe to share between threads.
+class MatrilineWalks {
+public:
+    MatrilineWalks(const Matrilines& lines, SiblingRule rule);
+    const std::vector<int>& walk(int matriarch);
+    SiblingRule rule() const { return rule_; }
+
+private:
+    const Matrilines* lines_;
+    SiblingRule rule_;
+    std::vector<std::vector<int>> walks_; ///< per node; filled when asked
+    std::vector<bool> walked_;
+};
+
+/// A predicted order in pedigree nodes (predictOrder before the ids).
+struct PredictedNodes {
+    std::vector<int> females;      ///< ranked females, top first
+    std::vector<int> femaleLine;   ///< the matriarch whose line placed each of `females`
+    std::vector<int> lines;        ///< matriarchs of the lines laid end to end
+    std::vector<int> observedRank; ///< per node: 1..m among ranked females with a score, 0 without
+};
+
+/// predictOrder in nodes: `rankedNodes` are the nodes with ranked.ranked set,
+/// ascending, and `score[k]` the observed score of rankedNodes[k], if any.
+PredictedNodes predictNodes(const Matrilines& lines, MatrilineWalks& walks, const std::vector<bool>& ranked,
+                            const std::vector<int>& rankedNodes, const std::vector<std::optional<double>>& score,
+                            const std::vector<std::string>& explicitOrder = {});
+
 /// One ranked female of a predicted order.
 struct PredictedFemale {
     std::string animal;

@@ -1,17 +1,18 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
 #include "core/base/vector_state.h"
+#include "core/ranks/mersenne_twister.h"
 
 #include <algorithm>
 #include <cstdint>
-#include <random>
 #include <thread>
 #include <vector>
 
 namespace hierloom::core {
 
-/// The generator every randomisation uses.
-using RandomEngine = std::mt19937_64;
+/// The generator every randomisation uses: MT19937-64, the same stream as
+/// std::mt19937_64 (mersenne_twister.h).
+using RandomEngine = MersenneTwister64;
 
 /// Seed of iteration block `block` for a run seeded with `seed` (SplitMix64
 /// mixing), so each block's stream is fixed whatever thread runs it.

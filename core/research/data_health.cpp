@@ -12,6 +12,8 @@
 #include <limits>
 #include <map>
 #include <set>
+#include <string_view>
+#include <unordered_map>
 
 namespace hierloom::core {
 
@@ -30,9 +32,11 @@ int direction(const Encounter& e)
     return e.winner < e.loser ? 0 : 1;
 }
 
-std::pair<std::string, std::string> dyadOf(const Encounter& e)
+/// The two ids of an encounter in byte order, viewed in place.
+std::pair<std::string_view, std::string_view> dyadOf(const Encounter& e)
 {
-    return e.winner < e.loser ? std::make_pair(e.winner, e.loser) : std::make_pair(e.loser, e.winner);
+    return e.winner < e.loser ? std::make_pair(std::string_view(e.winner), std::string_view(e.loser))
+                              : std::make_pair(std::string_view(e.loser), std::string_view(e.winner));
 }
 
 /// Matches two observers' encounters of one group and day: same dyad, times
@@ -44,10 +48,11 @@ void matchDay(const std::vector<const Encounter*>& a, const std::vector<const En
     std::vector<bool> used(b.size(), false);
     int matched = 0;
     for (const Encounter* x : a) {
+        const auto dyad = dyadOf(*x);
         int best = -1;
         int bestGap = 0;
         for (size_t j = 0; j < b.size(); ++j) {
-            if (used[j] || dyadOf(*b[j]) != dyadOf(*x)) continue;
+            if (used[j] || dyadOf(*b[j]) != dyad) continue;
             if (x->time.has_value() != b[j]->time.has_value()) continue;
             const int gap = x->time ? std::abs(*x->time - *b[j]->time) : 0;
             if (gap > tolerance) continue;
@@ -67,6 +72,86 @@ void matchDay(const std::vector<const Encounter*>& a, const std::vector<const En
     out.matched += matched;
     out.onlyFirst += static_cast<int>(a.size()) - matched;
     out.onlySecond += static_cast<int>(b.size()) - matched;
+}
+
+/// Small integer ids for strings seen many times (animal ids, observer names),
+/// viewed in place: the encounters outlive the tally.
+class Interned {
+public:
+    int id(const std::string& text)
+    {
+        const auto [it, added] = ids_.try_emplace(text, static_cast<int>(texts_.size()));
+        if (added) texts_.push_back(&text);
+        return it->second;
+    }
+    int find(const std::string& text) const
+    {
+        const auto it = ids_.find(text);
+        return it == ids_.end() ? -1 : it->second;
+    }
+    const std::string& text(int id) const { return *texts_[static_cast<size_t>(id)]; }
+    int size() const { return static_cast<int>(texts_.size()); }
+
+private:
+    std::unordered_map<std::string_view, int> ids_;
+    std::vector<const std::string*> texts_;
+};
+
+/// Encounters and the days they fell on, of one animal, observer or month.
+struct Tally {
+    int encounters = 0;
+    std::vector<Day> days;
+    std::vector<int> animals; ///< months only: interned animal ids
+
+    /// Distinct values of a list (sorts it).
+    template <typename T>
+    static int distinct(std::vector<T>& values)
+    {
+        std::sort(values.begin(), values.end());
+        return static_cast<int>(std::unique(values.begin(), values.end()) - values.begin());
+    }
+};
+
+/// Effort of the window's encounters per animal, observer and month.
+struct EffortTallies {
+    Interned animalIds;
+    Interned observerIds;
+    std::vector<Tally> animals;   ///< by interned animal id
+    std::vector<Tally> observers; ///< by interned observer
+    std::map<std::pair<int, unsigned>, Tally> months;
+
+    void add(const Encounter& e)
+    {
+        const CivilDate c = civilFromDay(e.date);
+        Tally& m = months[{c.year, c.month}];
+        ++m.encounters;
+        m.days.push_back(e.date);
+        for (const std::string* id : {&e.winner, &e.loser}) {
+            const int a = animalIds.id(*id);
+            if (a >= static_cast<int>(animals.size())) animals.resize(static_cast<size_t>(a) + 1);
+            ++animals[static_cast<size_t>(a)].encounters;
+            animals[static_cast<size_t>(a)].days.push_back(e.date);
+            m.animals.push_back(a);
+        }
+        const int o = observerIds.id(e.observer);
+        if (o >= static_cast<int>(observers.size())) observers.resize(static_cast<size_t>(o) + 1);
+        ++observers[static_cast<size_t>(o)].encounters;
+        observers[static_cast<size_t>(o)].days.push_back(e.date);
+    }
+};
+
+/// The last day each animal was seen, in any group, up to day `to`.
+std::unordered_map<std::string_view, Day> lastSeenBy(const Colony& colony, Day to)
+{
+    std::unordered_map<std::string_view, Day> lastSeen;
+    for (const Encounter& e : colony.encounters) {
+        if (e.date > to) continue;
+        for (const std::string* id : {&e.winner, &e.loser}) {
+            auto [it, added] = lastSeen.try_emplace(*id, e.date);
+            if (!added && e.date > it->second) it->second = e.date;
+        }
+    }
+    return lastSeen;
 }
 
 /// The window's last day, else the file's last encounter day up to today
@@ -253,30 +338,15 @@ DataHealth dataHealth(const Colony& colony, const ResidenceIndex& where, const H
     const int groupIndex = o.group.empty() ? -1 : where.group(o.group);
 
     // Effort per animal, observer and month.
+    EffortTallies effort;
+    for (const Encounter& e : colony.encounters)
+        if (inWindow(e, o.from, to, o.group)) effort.add(e);
     std::map<std::string, AnimalEffort> animals;
-    std::map<std::string, std::set<Day>> animalDays;
-    std::map<std::string, ObserverEffort> observers;
-    std::map<std::string, std::set<Day>> observerDays;
-    struct Month {
-        int encounters = 0;
-        std::set<Day> days;
-        std::set<std::string> animals;
-    };
-    std::map<std::pair<int, unsigned>, Month> months;
-    for (const Encounter& e : colony.encounters) {
-        if (!inWindow(e, o.from, to, o.group)) continue;
-        for (const std::string* id : {&e.winner, &e.loser}) {
-            ++animals[*id].encounters;
-            animalDays[*id].insert(e.date);
-        }
-        ++observers[e.observer].encounters;
-        observerDays[e.observer].insert(e.date);
-        const CivilDate c = civilFromDay(e.date);
-        Month& m = months[{c.year, c.month}];
-        ++m.encounters;
-        m.days.insert(e.date);
-        m.animals.insert(e.winner);
-        m.animals.insert(e.loser);
+    for (int a = 0; a < effort.animalIds.size(); ++a) {
+        Tally& t = effort.animals[static_cast<size_t>(a)];
+        AnimalEffort& row = animals[effort.animalIds.text(a)];
+        row.encounters = t.encounters;
+        row.daysSeen = Tally::distinct(t.days);
     }
     // Residents of the window without any encounter are listed too (with none).
     const Day windowStart = o.from.value_or(std::numeric_limits<int>::min() / 2);
@@ -286,35 +356,27 @@ DataHealth dataHealth(const Colony& colony, const ResidenceIndex& where, const H
         if (i >= 0 && where.residentDuring(i, windowStart, to, groupIndex)) animals[a.id];
     }
     // The last time each animal was seen, in any group, up to the reference day.
-    std::map<std::string, Day> lastSeen;
-    for (const Encounter& e : colony.encounters) {
-        if (e.date > to) continue;
-        for (const std::string* id : {&e.winner, &e.loser}) {
-            auto [it, added] = lastSeen.emplace(*id, e.date);
-            if (!added && e.date > it->second) it->second = e.date;
-        }
-    }
+    const std::unordered_map<std::string_view, Day> lastSeen = lastSeenBy(colony, to);
 
     // Randomised-Elo interval widths over the window (docs/methods.md, "Randomised Elo").
     HealthOptions widthOptions = o;
     widthOptions.to = to;
     const std::map<std::string, double> widths = eloIntervalWidths(colony, where, widthOptions, cancel);
-    for (auto& [id, effort] : animals) {
-        effort.animal = id;
-        effort.daysSeen = static_cast<int>(animalDays[id].size());
-        if (auto it = lastSeen.find(id); it != lastSeen.end()) effort.lastSeen = it->second;
-        effort.fewEncounters = tooFewEncounters(effort.encounters, o.minEncounters);
-        if (auto it = widths.find(id); it != widths.end()) effort.intervalWidth = it->second;
-        h.animals.push_back(effort);
+    for (auto& [id, row] : animals) {
+        row.animal = id;
+        if (auto it = lastSeen.find(id); it != lastSeen.end()) row.lastSeen = it->second;
+        row.fewEncounters = tooFewEncounters(row.encounters, o.minEncounters);
+        if (auto it = widths.find(id); it != widths.end()) row.intervalWidth = it->second;
+        h.animals.push_back(row);
     }
-    for (auto& [name, effort] : observers) {
-        effort.observer = name;
-        effort.days = static_cast<int>(observerDays[name].size());
-        h.observers.push_back(effort);
+    std::map<std::string, ObserverEffort> observers;
+    for (int k = 0; k < effort.observerIds.size(); ++k) {
+        Tally& t = effort.observers[static_cast<size_t>(k)];
+        observers[effort.observerIds.text(k)] = {effort.observerIds.text(k), t.encounters, Tally::distinct(t.days)};
     }
-    for (const auto& [ym, m] : months)
-        h.months.push_back({ym.first, ym.second, m.encounters, static_cast<int>(m.days.size()),
-                            static_cast<int>(m.animals.size())});
+    for (const auto& [name, row] : observers) h.observers.push_back(row);
+    for (auto& [ym, m] : effort.months)
+        h.months.push_back({ym.first, ym.second, m.encounters, Tally::distinct(m.days), Tally::distinct(m.animals)});
 
     // Residents on the reference day unseen for more than unseenDays days.
     for (const Animal& a : colony.animals) {
