@@ -200,9 +200,10 @@ void HierarchyPlotsView::recompute()
     options.elo = settings.elo;
     options.maturityYears = settings.maturityYears;
     options.group = toStdString(group_->currentData().toString());
-    runner_->start([this, snapshot, options](const std::atomic<bool>& cancel, const ComputeRunner::Progress& progress) {
+    runner_->start([this, snapshot = snapshot, options](const std::atomic<bool>& cancel, const ComputeRunner::Progress& progress) mutable {
         // The group's encounters only (its selection reads no other).
         const core::Colony colony = snapshot.colonyFor(options.group);
+        snapshot.encounters.reset(); // an edit meanwhile need not copy the document's records
         const core::Matrilines lines(colony);
         auto s = std::make_shared<core::HierarchySeries>(
             core::computeHierarchySeries(colony, *snapshot.residences, lines, options, &cancel, progress));

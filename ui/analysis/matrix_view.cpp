@@ -286,12 +286,13 @@ void MatrixView::recompute()
     const std::optional<core::RankMethod> method = method_;
     flags_->request(options.from, options.to, options.group);
     const ColonyDocument::Snapshot snapshot = document_->snapshot();
-    runner_->start([this, snapshot, options, method, elo](const std::atomic<bool>& cancel,
-                                                        const ComputeRunner::Progress& progress) {
+    runner_->start([this, snapshot = snapshot, options, method, elo](const std::atomic<bool>& cancel,
+                                                        const ComputeRunner::Progress& progress) mutable {
         progress(0, 3);
         const core::Colony* colony = snapshot.pedigree.get();
         const core::EncounterSelection sel =
             core::selectEncounters(snapshot.encounters->compact(), colony->animals, *snapshot.residences, options);
+        snapshot.encounters.reset(); // an edit meanwhile need not copy the document's records
         if (cancel) return ComputeRunner::Apply();
         progress(1, 3);
         std::vector<int> order(static_cast<size_t>(sel.size()));

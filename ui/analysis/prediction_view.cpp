@@ -250,10 +250,11 @@ void PredictionView::recompute()
     core::SelectionOptions record;
     record.draws = settings.elo.draws;
     const ColonyDocument::Snapshot snapshot = document_->snapshot();
-    runner_->start([this, snapshot, options, foresightOptions, record](const std::atomic<bool>& cancel,
-                                                                     const ComputeRunner::Progress& progress) {
+    runner_->start([this, snapshot = snapshot, options, foresightOptions, record](const std::atomic<bool>& cancel,
+                                                                     const ComputeRunner::Progress& progress) mutable {
         // Every group (the prediction and the record's foresight span the colony).
         const auto colony = std::make_shared<const core::Colony>(snapshot.colonyFor({}));
+        snapshot.encounters.reset(); // an edit meanwhile need not copy the document's records
         const core::ResidenceIndex* where = snapshot.residences.get();
         const core::Matrilines lines(*colony);
         progress(0, 3);

@@ -234,10 +234,11 @@ void RankTimelineView::recompute()
     if (key != shownKey_) showComputing();
     // Shared, unchanging records: the worker must not read the document while an edit changes it.
     const ColonyDocument::Snapshot snapshot = document_->snapshot();
-    runner_->start([this, snapshot, options, key, revision, keep](const std::atomic<bool>& cancel,
-                                                                 const ComputeRunner::Progress& progress) {
+    runner_->start([this, snapshot = snapshot, options, key, revision, keep](const std::atomic<bool>& cancel,
+                                                                 const ComputeRunner::Progress& progress) mutable {
         // The group's encounters only (its selection reads no other).
         const core::Colony colony = snapshot.colonyFor(options.inheritance.group);
+        snapshot.encounters.reset(); // an edit meanwhile need not copy the document's records
         const core::Matrilines lines(colony);
         auto result = std::make_shared<Result>();
         result->timeline = core::computeRankTimeline(colony, *snapshot.residences, lines, options, &cancel, progress);

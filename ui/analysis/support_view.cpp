@@ -191,10 +191,12 @@ void SupportView::recompute()
     flags_->request(std::nullopt, std::nullopt, o.group);
     // The permutation test takes a while: off the interface thread, on the document's snapshot.
     const ColonyDocument::Snapshot snapshot = document_->snapshot();
-    runner_->start([this, snapshot, o](const std::atomic<bool>& cancel, const ComputeRunner::Progress&) {
+    runner_->start([this, snapshot = snapshot, o](const std::atomic<bool>& cancel, const ComputeRunner::Progress&) mutable {
         auto r = std::make_shared<Result>();
         // Every group's encounters: with no end date the window ends on the file's last encounter, in any group.
-        r->analysis = core::analyseSupport(snapshot.colonyFor({}), *snapshot.residences, o);
+        const core::Colony colony = snapshot.colonyFor({});
+        snapshot.encounters.reset(); // an edit meanwhile need not copy the document's records
+        r->analysis = core::analyseSupport(colony, *snapshot.residences, o);
         if (cancel) return ComputeRunner::Apply();
         r->pairs = core::supportPairsTable(r->analysis);
         r->daughters = core::supportDaughtersTable(r->analysis);
