@@ -268,3 +268,26 @@ TEST(EveningEntry, ARefusedLineFixedInPlaceLeavesTheRefusedList)
     ASSERT_EQ(e.panel->refusedList()->count(), 1);
     EXPECT_TRUE(e.panel->refusedList()->item(0)->text().startsWith(QStringLiteral("0910 F2 > ZZ")));
 }
+
+TEST(EveningEntry, AnotherLineTypedOverARefusedOneLeavesItListed)
+{
+    // Seen typing an evening: a refused line, then two other lines typed over
+    // it on the entry row (Shift+Tab back to the time), the last one saved.
+    // The first two were never saved: they stay in the refused list.
+    Entry e;
+    e.line("0840", "F1", "ZZ");
+    ASSERT_EQ(e.panel->refusedList()->count(), 1);
+    e.key(Qt::Key_Backtab);
+    e.key(Qt::Key_Backtab);
+    ASSERT_EQ(QApplication::focusWidget(), e.panel->timeEdit());
+    e.line("0905", "F2", "YY");
+    ASSERT_EQ(e.panel->refusedList()->count(), 2);
+    e.type("XX"); // the same line, its loser typed again: still refused
+    e.key(Qt::Key_Return);
+    ASSERT_EQ(e.panel->refusedList()->count(), 3);
+    e.type("D2");
+    e.key(Qt::Key_Return);
+    ASSERT_EQ(inFile(e.path).size(), 1u);
+    ASSERT_EQ(e.panel->refusedList()->count(), 1) << "only the 0905 line's refusals were fixed";
+    EXPECT_TRUE(e.panel->refusedList()->item(0)->text().startsWith(QStringLiteral("0840 F1 > ZZ")));
+}

@@ -169,7 +169,7 @@ private:
     std::optional<core::Encounter> editing_; // the row being changed, if any
     int refusals_ = 0;                       // lines refused in this session
     static constexpr int kEntryLineRole = Qt::UserRole + 1; // a refused item: the entryLine_ it came from
-    std::uint64_t entryLine_ = 0; // which line is on the entry row: a refused line fixed in place and saved leaves the refused list
+    std::uint64_t entryLine_ = 1; // which line is on the entry row: a refused line fixed in place and saved leaves the refused list
 };
 
 } // namespace hierloom::ui

@@ -96,6 +96,18 @@ void EncounterEntryPanel::refuse(const core::FieldProblems& problems)
     text += QStringLiteral(": ") + toQString(problems.front().message);
     if (refused_->count() > 0 && refused_->item(refused_->count() - 1)->data(Qt::UserRole).toStringList() == fields)
         delete refused_->takeItem(refused_->count() - 1); // the same line refused again: listed once
+    // Another line typed over a refused one (another time, or neither animal
+    // kept) does not fix it: the refused line stays listed when this one is
+    // saved. The same line typed again (a field fixed) stays tied to the row.
+    const auto sameLine = [&fields](const QStringList& other) {
+        return other.size() == fields.size() && other[0].trimmed() == fields[0].trimmed() &&
+               (other[1].trimmed() == fields[1].trimmed() || other[2].trimmed() == fields[2].trimmed());
+    };
+    for (int i = 0; i < refused_->count(); ++i) {
+        QListWidgetItem* old = refused_->item(i);
+        if (old->data(kEntryLineRole).toULongLong() == entryLine_ && !sameLine(old->data(Qt::UserRole).toStringList()))
+            old->setData(kEntryLineRole, QVariant::fromValue<quint64>(0)); // no entry line is 0
+    }
     auto* item = new QListWidgetItem(text, refused_);
     item->setData(Qt::UserRole, fields);
     item->setData(kEntryLineRole, QVariant::fromValue<quint64>(entryLine_));
