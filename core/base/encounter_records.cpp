@@ -69,6 +69,31 @@ const std::string& EncounterRecords::note(size_t i) const
 
 std::vector<size_t> EncounterRecords::chronologicalOrder(std::vector<size_t> subset) const
 {
+    // Records are held in seq order, so the index breaks ties as seq does:
+    // date, time and index pack into one 64-bit key when the dates span less
+    // than 2^21 days and the indices fit 32 bits (a whole centre's log sorts
+    // 8 bytes per row, not a 32-byte key).
+    const auto& r = compact_.records;
+    if (!subset.empty() && size() <= UINT32_MAX) {
+        Day low = r[subset.front()].date;
+        Day high = low;
+        for (size_t i : subset) {
+            low = std::min(low, r[i].date);
+            high = std::max(high, r[i].date);
+        }
+        if (static_cast<std::int64_t>(high) - low < (std::int64_t{1} << 21)) {
+            std::vector<std::uint64_t> keys(subset.size());
+            for (size_t k = 0; k < subset.size(); ++k) {
+                const CompactEncounter& e = r[subset[k]];
+                const auto day = static_cast<std::uint64_t>(static_cast<std::int64_t>(e.date) - low);
+                const auto time = static_cast<std::uint64_t>(e.time < 0 ? 24 * 60 : e.time); // 11 bits
+                keys[k] = day << 43 | time << 32 | static_cast<std::uint64_t>(subset[k]);
+            }
+            if (!std::is_sorted(keys.begin(), keys.end())) std::sort(keys.begin(), keys.end());
+            for (size_t k = 0; k < keys.size(); ++k) subset[k] = static_cast<size_t>(keys[k] & 0xffffffffU);
+            return subset;
+        }
+    }
     return analysisOrderOf(std::move(subset), [this](size_t i) {
         const CompactEncounter& r = compact_.records[i];
         return AnalysisOrderKey{r.date, r.time < 0 ? 24 * 60 : r.time, r.seq};

@@ -28,6 +28,9 @@ void expectSame(const std::vector<Encounter>& model, const EncounterRecords& rec
     std::vector<size_t> subset;
     for (size_t i = 0; i < model.size(); i += 2) subset.push_back(i);
     ASSERT_EQ(records.chronologicalOrder(subset), chronologicalOrder(model, subset)) << "step " << step;
+    std::vector<size_t> all(model.size());
+    for (size_t i = 0; i < all.size(); ++i) all[i] = i;
+    ASSERT_EQ(records.chronologicalOrder(all), chronologicalOrder(model)) << "step " << step;
     for (size_t i = 0; i < model.size(); ++i) {
         ASSERT_TRUE(fields(records.at(i)) == fields(model[i])) << "step " << step << ", record " << i;
         ASSERT_EQ(records.seq(i), model[i].seq);
@@ -136,6 +139,28 @@ TEST(EncounterRecords, RandomStepsKeepEveryFieldAsTheModel)
         ASSERT_EQ(all.size(), model.size());
         for (size_t i = 0; i < all.size(); ++i) EXPECT_TRUE(fields(all[i]) == fields(model[i]));
     }
+}
+
+TEST(EncounterRecords, TheAnalysisOrderOverAWideSpanOfDates)
+{
+    // Dates 2^21 days apart and more: past the packed key, the general path.
+    std::vector<Encounter> rows;
+    const Day days[] = {2000000, -700000, 2000000, 5, -700000, 2932000};
+    const int times[] = {600, 600, 300, -1, -1, 0};
+    for (size_t i = 0; i < 6; ++i) {
+        Encounter e;
+        e.seq = static_cast<std::int64_t>(i) + 1;
+        e.date = days[i];
+        if (times[i] >= 0) e.time = times[i];
+        e.winner = "A";
+        e.loser = "B";
+        e.uid = newUid();
+        rows.push_back(e);
+    }
+    const EncounterRecords records(rows);
+    EXPECT_EQ(records.chronologicalOrder({0, 1, 2, 3, 4, 5}), (std::vector<size_t>{1, 4, 3, 2, 0, 5}));
+    EXPECT_EQ(records.chronologicalOrder({0, 1, 2, 3, 4, 5}), chronologicalOrder(rows));
+    EXPECT_EQ(records.chronologicalOrder({0, 2, 3}), (std::vector<size_t>{3, 2, 0}));
 }
 
 TEST(EncounterRecords, AScopeIsItsGroupAndTheRowsWithoutOne)
