@@ -57,23 +57,19 @@ void StabilityBadge::refresh()
                           {documentStabilityOptions(document_, g, core::PeriodLength::Week),
                            documentStabilityOptions(document_, g, core::PeriodLength::Month)}});
     runner_->start([this, snapshot = snapshot, checks](const std::atomic<bool>& cancel, const ComputeRunner::Progress& progress) mutable {
-        // Each group's records first, then the document's are let go: the
-        // check of every group takes long on a centre, and an edit meanwhile
-        // need not copy them (colony_document.h, snapshot()).
+        // The document's compact records, shared: an edit meanwhile copies
+        // them (colony_document.h, snapshot()) rather than wait.
         const core::Matrilines lines(*snapshot.pedigree);
-        std::vector<core::CompactEncounters> scopes;
-        for (const auto& check : checks) scopes.push_back(core::scopeOf(snapshot.encounters->compact(), check.first));
-        snapshot.encounters.reset();
+        const core::CompactEncounters& records = snapshot.encounters->compact();
         const std::vector<core::Animal>& animals = snapshot.pedigree->animals;
         const std::shared_ptr<const core::ResidenceIndex> where = snapshot.residences;
         QStringList groups, evidence;
         int done = 0;
-        for (size_t k = 0; k < checks.size(); ++k) {
-            const auto& [group, options] = checks[k];
+        for (const auto& [group, options] : checks) {
             bool alerted = false;
             for (const core::StabilityOptions& o : options) {
                 if (cancel) return ComputeRunner::Apply{};
-                const core::StabilitySeries s = core::stabilityWatch(scopes[k], animals, *where, lines, o);
+                const core::StabilitySeries s = core::stabilityWatch(records, animals, *where, lines, o);
                 for (const core::StabilityAlert& a : s.latestAlerts()) {
                     alerted = true;
                     evidence << QStringLiteral("%1: %2").arg(toQString(group), toQString(core::describeAlert(s, a)));
