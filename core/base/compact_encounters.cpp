@@ -146,6 +146,26 @@ CompactEncounters compactEncounters(const std::vector<Encounter>& encounters)
     return out;
 }
 
+CompactEncounters scopeOf(const CompactEncounters& all, std::string_view group)
+{
+    CompactEncounters out;
+    out.animals = all.animals;
+    out.groups = all.groups;
+    out.behaviours = all.behaviours;
+    out.observers = all.observers;
+    const std::int32_t code = all.groups.find(group);
+    std::vector<std::uint32_t> newIndex(all.records.size(), UINT32_MAX);
+    for (size_t i = 0; i < all.records.size(); ++i) {
+        const std::int16_t g = all.records[i].group;
+        if (g != 0 && g != code) continue;
+        newIndex[i] = static_cast<std::uint32_t>(out.records.size());
+        out.records.push_back(all.records[i]);
+    }
+    for (const CompactSupport& s : all.supporters)
+        if (newIndex[s.encounter] != UINT32_MAX) out.supporters.push_back({newIndex[s.encounter], s.animal, s.side});
+    return out;
+}
+
 namespace {
 
 /// encounterBefore of core/base/colony.h on compact records.

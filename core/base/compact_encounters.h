@@ -96,6 +96,12 @@ struct CompactEncounters {
 /// The compact form of encounters given in seq order (the old API's records).
 CompactEncounters compactEncounters(const std::vector<Encounter>& encounters);
 
+/// The records of `group` and those recorded without a group (the rows a
+/// scope of `group` may select), with every code table of `all` as it is, so
+/// each code means what it means in `all` and an analysis gives the same
+/// result on either. A worker's own copy of the group it checks.
+CompactEncounters scopeOf(const CompactEncounters& all, std::string_view group);
+
 /// True when the records are already in analysis order (date, then time
 /// with untimed last, then entry order): encounterBefore of docs/methods.md.
 bool inAnalysisOrder(const std::vector<CompactEncounter>& records);

@@ -8,6 +8,7 @@
 #include "core/pedigree/inheritance_prediction.h"
 
 #include <memory>
+#include <optional>
 
 namespace hierloom::ui {
 
@@ -60,8 +61,15 @@ void RankFlagWatch::request(std::optional<core::Day> from, std::optional<core::D
     runner_->start([this, snapshot = snapshot, o, key, revision, keep](const std::atomic<bool>& cancel, const ComputeRunner::Progress&) mutable {
         // The rows picked, the document's records are let go before the long
         // part: an edit meanwhile need not copy them (colony_document.h, snapshot()).
-        const core::EncounterSelection picked =
-            core::eloIntervalSelection(snapshot.encounters->compact(), snapshot.pedigree->animals, *snapshot.residences, o);
+        // A group's own records are copied out first (one scan): the selection
+        // then costs the group, and the document's records are let go sooner.
+        std::optional<core::CompactEncounters> scope;
+        if (!o.group.empty()) {
+            scope = core::scopeOf(snapshot.encounters->compact(), o.group);
+            snapshot.encounters.reset();
+        }
+        const core::EncounterSelection picked = core::eloIntervalSelection(
+            scope ? *scope : snapshot.encounters->compact(), snapshot.pedigree->animals, *snapshot.residences, o);
         snapshot = {};
         auto widths = std::make_shared<const Widths>(core::eloIntervalWidths(picked, o, &cancel));
         return ComputeRunner::Apply([this, widths, key, revision, keep] {

@@ -52,6 +52,8 @@ StabilitySeries expectSameWatch(const Colony& colony, const StabilityOptions& o,
     const CompactEncounters compact = compactEncounters(colony.encounters);
     StabilitySeries series = stabilityWatch(colony, where, lines, o);
     EXPECT_EQ(text(series), text(stabilityWatch(compact, colony.animals, where, lines, o))) << label;
+    // The stability badge's worker checks each group on its own scope (scopeOf).
+    EXPECT_EQ(text(series), text(stabilityWatch(scopeOf(compact, o.group), colony.animals, where, lines, o))) << label;
     return series;
 }
 

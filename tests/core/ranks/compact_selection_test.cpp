@@ -67,6 +67,13 @@ void expectSameRanks(const Colony& colony, const CompactEncounters& compact, con
     const EncounterSelection oldSel = selectEncounters(colony, where, sel);
     const EncounterSelection newSel = selectEncounters(compact, colony.animals, where, sel);
     expectSameSelection(oldSel, newSel, label);
+    if (!sel.group.empty()) {
+        // The desktop's workers select from the group's own records (scopeOf).
+        EncounterSelection scoped = selectEncounters(scopeOf(compact, sel.group), colony.animals, where, sel);
+        EXPECT_EQ(scoped.source.size(), newSel.source.size()) << label;
+        scoped.source = newSel.source; // indices into the scope's records, not into every record
+        expectSameSelection(newSel, scoped, label + " (group's scope)");
+    }
     Colony animalsOnly;
     animalsOnly.animals = colony.animals;
     animalsOnly.residences = colony.residences;
