@@ -98,8 +98,15 @@ void CompactEncounters::add(const Encounter& e)
 {
     const auto index = static_cast<std::uint32_t>(records.size());
     records.push_back(recordOf(e));
-    for (const std::string& id : e.winnerSupport) supporters.push_back({index, animals.intern(id), SupportSide::Winner});
-    for (const std::string& id : e.loserSupport) supporters.push_back({index, animals.intern(id), SupportSide::Loser});
+    for (const CompactSupport& s : supportersOf(e, index)) supporters.push_back(s);
+}
+
+std::vector<CompactSupport> CompactEncounters::supportersOf(const Encounter& e, std::uint32_t index)
+{
+    std::vector<CompactSupport> out;
+    for (const std::string& id : e.winnerSupport) out.push_back({index, animals.intern(id), SupportSide::Winner});
+    for (const std::string& id : e.loserSupport) out.push_back({index, animals.intern(id), SupportSide::Loser});
+    return out;
 }
 
 CompactEncounter CompactEncounters::recordOf(const Encounter& e)

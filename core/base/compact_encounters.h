@@ -89,6 +89,8 @@ struct CompactEncounters {
     void add(const Encounter& e);
     /// The record of `e` (its texts interned), not added; supporters aside.
     CompactEncounter recordOf(const Encounter& e);
+    /// The supporters of `e` as rows of record `index` (ids interned), winner's side first.
+    std::vector<CompactSupport> supportersOf(const Encounter& e, std::uint32_t index);
     /// The encounter of one record, without note and uid.
     Encounter expand(size_t index) const;
 };

@@ -226,10 +226,7 @@ void EncounterRecords::put(const Encounter& e)
         compact_.records.insert(compact_.records.begin() + static_cast<std::ptrdiff_t>(i), compact_.recordOf(e));
         uids_.insert(uids_.begin() + static_cast<std::ptrdiff_t>(i), kNoUid);
     }
-    std::vector<CompactSupport> added;
-    const auto index = static_cast<std::uint32_t>(i);
-    for (const std::string& id : e.winnerSupport) added.push_back({index, compact_.animals.intern(id), SupportSide::Winner});
-    for (const std::string& id : e.loserSupport) added.push_back({index, compact_.animals.intern(id), SupportSide::Loser});
+    const std::vector<CompactSupport> added = compact_.supportersOf(e, static_cast<std::uint32_t>(i));
     s.insert(s.begin() + static_cast<std::ptrdiff_t>(first), added.begin(), added.end());
     setTexts(i, e);
     noteAdded(e.date);

@@ -291,15 +291,10 @@ void MatrixView::recompute()
                                                         const ComputeRunner::Progress& progress) mutable {
         progress(0, 3);
         const core::Colony* colony = snapshot.pedigree.get();
-        // A group's own records are copied out first (one scan): the selection
-        // then costs the group, and the document's records are let go sooner.
-        std::optional<core::CompactEncounters> scope;
-        if (!options.group.empty()) {
-            scope = core::scopeOf(snapshot.encounters->compact(), options.group);
-            snapshot.encounters.reset();
-        }
-        const core::EncounterSelection sel = core::selectEncounters(
-            scope ? *scope : snapshot.encounters->compact(), colony->animals, *snapshot.residences, options);
+        // The selection costs the group, and the document's records are let go sooner.
+        std::shared_ptr<const core::CompactEncounters> scope = snapshot.takeScope(options.group);
+        const core::EncounterSelection sel = core::selectEncounters(*scope, colony->animals, *snapshot.residences, options);
+        scope.reset();
         snapshot.encounters.reset(); // an edit meanwhile need not copy the document's records
         if (cancel) return ComputeRunner::Apply();
         progress(1, 3);

@@ -61,15 +61,11 @@ void RankFlagWatch::request(std::optional<core::Day> from, std::optional<core::D
     runner_->start([this, snapshot = snapshot, o, key, revision, keep](const std::atomic<bool>& cancel, const ComputeRunner::Progress&) mutable {
         // The rows picked, the document's records are let go before the long
         // part: an edit meanwhile need not copy them (colony_document.h, snapshot()).
-        // A group's own records are copied out first (one scan): the selection
-        // then costs the group, and the document's records are let go sooner.
-        std::optional<core::CompactEncounters> scope;
-        if (!o.group.empty()) {
-            scope = core::scopeOf(snapshot.encounters->compact(), o.group);
-            snapshot.encounters.reset();
-        }
-        const core::EncounterSelection picked = core::eloIntervalSelection(
-            scope ? *scope : snapshot.encounters->compact(), snapshot.pedigree->animals, *snapshot.residences, o);
+        // The selection costs the group, and the document's records are let go sooner.
+        std::shared_ptr<const core::CompactEncounters> scope = snapshot.takeScope(o.group);
+        const core::EncounterSelection picked =
+            core::eloIntervalSelection(*scope, snapshot.pedigree->animals, *snapshot.residences, o);
+        scope.reset();
         snapshot = {};
         auto widths = std::make_shared<const Widths>(core::eloIntervalWidths(picked, o, &cancel));
         return ComputeRunner::Apply([this, widths, key, revision, keep] {

@@ -447,6 +447,14 @@ std::optional<core::Day> ColonyDocument::lastEncounterDay() const
     return records_->lastDay();
 }
 
+std::shared_ptr<const core::CompactEncounters> ColonyDocument::Snapshot::takeScope(std::string_view group)
+{
+    if (group.empty()) return {encounters, &encounters->compact()}; // shares ownership of the records
+    auto scope = std::make_shared<const core::CompactEncounters>(core::scopeOf(encounters->compact(), group));
+    encounters.reset();
+    return scope;
+}
+
 core::Colony ColonyDocument::Snapshot::colonyFor(std::string_view group) const
 {
     core::Colony colony = *pedigree;

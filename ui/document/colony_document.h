@@ -177,6 +177,11 @@ public:
         /// (EncounterRecords::expandScope; every one when `group` is empty),
         /// as the analyses of core take them. For a job's own thread.
         core::Colony colonyFor(std::string_view group) const;
+        /// The compact records a job about `group` selects from: the group's
+        /// own, copied out in one scan, after which this snapshot lets go of
+        /// the document's records; for every group (`group` empty) the
+        /// shared records themselves. For a job's own thread.
+        std::shared_ptr<const core::CompactEncounters> takeScope(std::string_view group);
     };
     Snapshot snapshot() const;
 
