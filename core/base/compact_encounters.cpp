@@ -155,21 +155,62 @@ CompactEncounters compactEncounters(const std::vector<Encounter>& encounters)
 
 CompactEncounters scopeOf(const CompactEncounters& all, std::string_view group)
 {
-    CompactEncounters out;
-    out.animals = all.animals;
-    out.groups = all.groups;
-    out.behaviours = all.behaviours;
-    out.observers = all.observers;
-    const std::int32_t code = all.groups.find(group);
-    std::vector<std::uint32_t> newIndex(all.records.size(), UINT32_MAX);
+    return std::move(scopesOf(all, {std::string(group)}).front());
+}
+
+std::vector<CompactEncounters> scopesOf(const CompactEncounters& all, const std::vector<std::string>& groups)
+{
+    // slot[code]: the scope of a group's code, -1 for groups not asked; rows
+    // without a group (code 0) go to every scope.
+    // A group asked twice is cut once and copied (sameAs).
+    std::vector<int> slot(static_cast<size_t>(all.groups.size()), -1);
+    std::vector<std::pair<size_t, size_t>> sameAs;
+    for (size_t k = 0; k < groups.size(); ++k) {
+        const std::int32_t code = all.groups.find(groups[k]);
+        if (code <= 0) continue;
+        int& s = slot[static_cast<size_t>(code)];
+        if (s >= 0) sameAs.emplace_back(k, static_cast<size_t>(s));
+        else s = static_cast<int>(k);
+    }
+    // Counted first so that each scope is allocated once, at its size.
+    std::vector<size_t> records(groups.size(), 0), supporters(groups.size(), 0);
+    size_t noGroup = 0, noGroupSupporters = 0;
+    for (const CompactEncounter& r : all.records) {
+        if (r.group == 0) ++noGroup;
+        else if (slot[static_cast<size_t>(r.group)] >= 0) ++records[static_cast<size_t>(slot[static_cast<size_t>(r.group)])];
+    }
+    for (const CompactSupport& s : all.supporters) {
+        const std::int16_t g = all.records[s.encounter].group;
+        if (g == 0) ++noGroupSupporters;
+        else if (slot[static_cast<size_t>(g)] >= 0) ++supporters[static_cast<size_t>(slot[static_cast<size_t>(g)])];
+    }
+    std::vector<CompactEncounters> out(groups.size());
+    for (size_t k = 0; k < groups.size(); ++k) {
+        out[k].animals = all.animals;
+        out[k].groups = all.groups;
+        out[k].behaviours = all.behaviours;
+        out[k].observers = all.observers;
+        out[k].records.reserve(records[k] + noGroup);
+        out[k].supporters.reserve(supporters[k] + noGroupSupporters);
+    }
+    // One pass over the records, each followed by its supporters (which are
+    // in encounter order), so no index map from old to new is needed.
+    size_t next = 0;
+    const auto place = [&](CompactEncounters& scope, size_t i) {
+        const auto index = static_cast<std::uint32_t>(scope.records.size());
+        scope.records.push_back(all.records[i]);
+        for (size_t s = next; s < all.supporters.size() && all.supporters[s].encounter == i; ++s)
+            scope.supporters.push_back({index, all.supporters[s].animal, all.supporters[s].side});
+    };
     for (size_t i = 0; i < all.records.size(); ++i) {
         const std::int16_t g = all.records[i].group;
-        if (g != 0 && g != code) continue;
-        newIndex[i] = static_cast<std::uint32_t>(out.records.size());
-        out.records.push_back(all.records[i]);
+        if (g == 0)
+            for (CompactEncounters& scope : out) place(scope, i);
+        else if (slot[static_cast<size_t>(g)] >= 0)
+            place(out[static_cast<size_t>(slot[static_cast<size_t>(g)])], i);
+        while (next < all.supporters.size() && all.supporters[next].encounter == i) ++next;
     }
-    for (const CompactSupport& s : all.supporters)
-        if (newIndex[s.encounter] != UINT32_MAX) out.supporters.push_back({newIndex[s.encounter], s.animal, s.side});
+    for (const auto& [k, first] : sameAs) out[k] = out[first];
     return out;
 }
 

@@ -103,6 +103,10 @@ CompactEncounters compactEncounters(const std::vector<Encounter>& encounters);
 /// each code means what it means in `all` and an analysis gives the same
 /// result on either. A worker's own copy of the group it checks.
 CompactEncounters scopeOf(const CompactEncounters& all, std::string_view group);
+/// scopeOf for each of `groups` at once, in that order, by one pass over
+/// `all`: a worker's own copies of the groups it checks, after which it may
+/// let go of `all`. A group with no record gets the rows without a group.
+std::vector<CompactEncounters> scopesOf(const CompactEncounters& all, const std::vector<std::string>& groups);
 
 /// True when the records are already in analysis order (date, then time
 /// with untimed last, then entry order): encounterBefore of docs/methods.md.

@@ -137,8 +137,8 @@ int main(int argc, char* argv[])
         runUntil([&] { return !doc->isLoading(); });
         const double full = ms(total);
         waitPainted(window, timeline);
-        std::printf("every encounter read: %.0f ms after open (%zu encounters); RSS now %.0f MiB\n", full,
-                    doc->encounters().size(), memoryMiB("VmRSS"));
+        std::printf("every encounter read: %.0f ms after open (%zu encounters); RSS now %.0f MiB, peak so far %.0f MiB\n",
+                    full, doc->encounters().size(), memoryMiB("VmRSS"), memoryMiB("VmHWM"));
     } else if (!doc->isComplete()) {
         std::printf("kept group by group (more than %lld encounters); RSS now %.0f MiB\n",
                     static_cast<long long>(doc->readEverythingUpTo()), memoryMiB("VmRSS"));
@@ -194,8 +194,8 @@ int main(int argc, char* argv[])
     if (!back.empty())
         std::printf("group switch back to a group held, timeline repainted (median of %zu): %.0f ms; max %.0f\n",
                     back.size(), median(back), *std::max_element(back.begin(), back.end()));
-    std::printf("RSS after the switches: %.0f MiB (%zu encounters held)\n", memoryMiB("VmRSS"),
-                doc->encounters().size());
+    std::printf("RSS after the switches: %.0f MiB (%zu encounters held), peak so far %.0f MiB\n",
+                memoryMiB("VmRSS"), doc->encounters().size(), memoryMiB("VmHWM"));
 
     // The evening entry: residents of the first group, Enter on the loser field.
     window.showView(QStringLiteral("entry"));
@@ -242,6 +242,7 @@ int main(int argc, char* argv[])
         std::printf("Enter -> row painted: first %.1f ms; then median %.1f ms, max %.1f (%zu lines)\n", enter.front(),
                     median(std::vector<double>(enter.begin() + 1, enter.end())),
                     *std::max_element(enter.begin() + 1, enter.end()), enter.size() - 1);
+    std::printf("peak so far after the lines: %.0f MiB\n", memoryMiB("VmHWM"));
     panel->undoWholeSession();
     QApplication::processEvents();
     std::printf("peak memory (VmHWM) of the desktop: %.0f MiB\n", memoryMiB("VmHWM"));

@@ -57,25 +57,32 @@ void StabilityBadge::refresh()
                           {documentStabilityOptions(document_, g, core::PeriodLength::Week),
                            documentStabilityOptions(document_, g, core::PeriodLength::Month)}});
     runner_->start([this, snapshot = snapshot, checks](const std::atomic<bool>& cancel, const ComputeRunner::Progress& progress) mutable {
-        // The document's compact records, shared: an edit meanwhile copies
-        // them (colony_document.h, snapshot()) rather than wait.
+        // Each group's own records, copied out by one pass; then the
+        // document's are let go, so that an edit while the groups are checked
+        // need not copy them (colony_document.h, snapshot()). Each group's
+        // copy goes as soon as it is checked.
+        std::vector<std::string> names;
+        for (const auto& check : checks) names.push_back(check.first);
+        std::vector<core::CompactEncounters> scopes = core::scopesOf(snapshot.encounters->compact(), names);
+        snapshot.encounters.reset();
         const core::Matrilines lines(*snapshot.pedigree);
-        const core::CompactEncounters& records = snapshot.encounters->compact();
         const std::vector<core::Animal>& animals = snapshot.pedigree->animals;
         const std::shared_ptr<const core::ResidenceIndex> where = snapshot.residences;
         QStringList groups, evidence;
         int done = 0;
-        for (const auto& [group, options] : checks) {
+        for (size_t k = 0; k < checks.size(); ++k) {
+            const auto& [group, options] = checks[k];
             bool alerted = false;
             for (const core::StabilityOptions& o : options) {
                 if (cancel) return ComputeRunner::Apply{};
-                const core::StabilitySeries s = core::stabilityWatch(records, animals, *where, lines, o);
+                const core::StabilitySeries s = core::stabilityWatch(scopes[k], animals, *where, lines, o);
                 for (const core::StabilityAlert& a : s.latestAlerts()) {
                     alerted = true;
                     evidence << QStringLiteral("%1: %2").arg(toQString(group), toQString(core::describeAlert(s, a)));
                 }
             }
             if (alerted) groups << toQString(group);
+            scopes[k] = {};
             progress(++done, static_cast<int>(checks.size()));
         }
         return ComputeRunner::Apply([this, groups, evidence] { show(groups, evidence); });

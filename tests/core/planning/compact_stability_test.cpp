@@ -52,8 +52,10 @@ StabilitySeries expectSameWatch(const Colony& colony, const StabilityOptions& o,
     const CompactEncounters compact = compactEncounters(colony.encounters);
     StabilitySeries series = stabilityWatch(colony, where, lines, o);
     EXPECT_EQ(text(series), text(stabilityWatch(compact, colony.animals, where, lines, o))) << label;
-    // The stability badge's worker checks each group on its own scope (scopeOf).
+    // The stability badge's worker checks each group on its own scope (scopesOf, cut for every group at once).
     EXPECT_EQ(text(series), text(stabilityWatch(scopeOf(compact, o.group), colony.animals, where, lines, o))) << label;
+    const std::vector<CompactEncounters> scopes = scopesOf(compact, {"elsewhere", o.group, "G1"});
+    EXPECT_EQ(text(series), text(stabilityWatch(scopes[1], colony.animals, where, lines, o))) << label;
     return series;
 }
 
