@@ -5,6 +5,8 @@
 #include "core/ranks/elo_kernel.h"
 
 #include <algorithm>
+#include <atomic>
+#include <limits>
 #include <cmath>
 #include <thread>
 
@@ -29,10 +31,27 @@ double likelihoodAt(double k, int n, const std::vector<Bout>& bouts, const EloSe
 }
 
 constexpr int kLanes = 4;
+/// Bouts between two looks at the bound (likelihoodsAt).
+constexpr size_t kBoundStride = 4096;
+
+/// Raises `bound` to `value` when higher.
+void raise(std::atomic<double>& bound, double value)
+{
+    double now = bound.load();
+    while (value > now && !bound.compare_exchange_weak(now, value)) {
+    }
+}
 
 /// L(k) of kLanes values of k in one pass (eloLikelihoodLanes): the same
-/// values as likelihoodAt of each.
-void likelihoodsAt(const double* k, double* out, int n, const std::vector<Bout>& bouts, const EloSettings& settings)
+/// values as likelihoodAt of each; or -infinity for all of them once every
+/// lane's sum so far is below `bound`, the full L of some k already
+/// evaluated. Every bout adds ln E <= 0 (elo_kernel.h: min(x,0) - ln(1+u),
+/// or ln of 0.5 erfc <= 1), so a sum never rises as bouts are added: a lane
+/// below the bound ends below it and can neither be the grid's best nor tie
+/// with it. The grid's outcome is thus exactly that of every value computed
+/// in full, whatever the bound and whichever thread raised it.
+void likelihoodsAt(const double* k, double* out, int n, const std::vector<Bout>& bouts, const EloSettings& settings,
+                   const std::atomic<double>& bound)
 {
     const auto size = static_cast<size_t>(std::max(n, 0));
     std::vector<double> ratings(size * kLanes, settings.start);
@@ -47,10 +66,19 @@ void likelihoodsAt(const double* k, double* out, int n, const std::vector<Bout>&
     const bool ignoreDraws = settings.draws == DrawPolicy::Ignore;
     const Bout* first = bouts.data();
     const Bout* last = first + bouts.size();
-    if (settings.curve == EloCurve::Logistic)
-        detail::eloLikelihoodLanes<EloCurve::Logistic, kLanes>(first, last, rating, rated, k, ignoreDraws, tally);
-    else
-        detail::eloLikelihoodLanes<EloCurve::Normal, kLanes>(first, last, rating, rated, k, ignoreDraws, tally);
+    while (first != last) {
+        const Bout* end = first + std::min<size_t>(kBoundStride, static_cast<size_t>(last - first));
+        if (settings.curve == EloCurve::Logistic)
+            detail::eloLikelihoodLanes<EloCurve::Logistic, kLanes>(first, end, rating, rated, k, ignoreDraws, tally);
+        else
+            detail::eloLikelihoodLanes<EloCurve::Normal, kLanes>(first, end, rating, rated, k, ignoreDraws, tally);
+        first = end;
+        const double limit = bound.load(std::memory_order_relaxed);
+        if (first != last && std::all_of(tally, tally + kLanes, [&](const detail::EloTally& t) { return t.logLikelihood < limit; })) {
+            std::fill(out, out + kLanes, -std::numeric_limits<double>::infinity());
+            return;
+        }
+    }
     for (int j = 0; j < kLanes; ++j) out[j] = tally[j].logLikelihood;
 }
 
@@ -89,12 +117,17 @@ std::optional<EloOptimum> optimiseEloK(int n, const std::vector<Bout>& bouts, co
     static_assert(static_cast<int>(kMaxK / kGridStep) % kLanes == 0);
     const int runs = cells / kLanes;
     threads = std::max(1U, std::min<unsigned>(threads, static_cast<unsigned>(runs)));
+    // Runs in k order (the best k is usually small), each raising the bound
+    // that lets later runs stop early (likelihoodsAt).
+    std::atomic<double> bound(best.logLikelihood);
     auto work = [&](unsigned t) {
         clearUpperVectorState(); // a thread inherits its starter's registers
         for (int r = static_cast<int>(t); r < runs; r += static_cast<int>(threads)) {
             double k[kLanes];
             for (int j = 0; j < kLanes; ++j) k[j] = kGridStep * (1 + r * kLanes + j);
-            likelihoodsAt(k, grid.data() + 1 + static_cast<size_t>(r) * kLanes, n, bouts, settings);
+            double* out = grid.data() + 1 + static_cast<size_t>(r) * kLanes;
+            likelihoodsAt(k, out, n, bouts, settings, bound);
+            raise(bound, *std::max_element(out, out + kLanes));
         }
     };
     if (threads == 1) {

@@ -7,7 +7,9 @@
 
 #include <gtest/gtest.h>
 
+#include <algorithm>
 #include <bit>
+#include <cmath>
 #include <cstdint>
 #include <random>
 
@@ -97,6 +99,73 @@ TEST(EloLanes, OptimisedKIsTheBestOfEveryGridValueComputedAlone)
             s.k = best->k;
             EXPECT_EQ(std::bit_cast<std::uint64_t>(eloLogLikelihood(n, bouts, s)),
                       std::bit_cast<std::uint64_t>(best->logLikelihood));
+        }
+    }
+}
+
+namespace {
+
+/// The optimum of docs/methods.md ("Optimised k") computed the plain way: every
+/// grid value in full, one k at a time, then the golden-section search.
+EloOptimum plainOptimum(int n, const std::vector<Bout>& bouts, EloSettings s)
+{
+    auto at = [&](double k) {
+        s.k = k;
+        return eloLogLikelihood(n, bouts, s);
+    };
+    EloOptimum best{0.0, at(0.0)};
+    for (int i = 1; i <= 200; ++i) {
+        const double value = at(5.0 * i);
+        if (value > best.logLikelihood) best = {5.0 * i, value};
+    }
+    auto consider = [&](double k) {
+        const double value = at(k);
+        if (value > best.logLikelihood || (value == best.logLikelihood && k < best.k)) best = {k, value};
+        return value;
+    };
+    const double invPhi = (std::sqrt(5.0) - 1.0) / 2.0;
+    double a = std::max(0.0, best.k - 5.0), b = std::min(1000.0, best.k + 5.0);
+    double c = b - invPhi * (b - a), d = a + invPhi * (b - a);
+    double fc = consider(c), fd = consider(d);
+    while (b - a > 0.01) {
+        if (fc >= fd) {
+            b = d;
+            d = c;
+            fd = fc;
+            c = b - invPhi * (b - a);
+            fc = consider(c);
+        } else {
+            a = c;
+            c = d;
+            fc = fd;
+            d = a + invPhi * (b - a);
+            fd = consider(d);
+        }
+    }
+    return best;
+}
+
+} // namespace
+
+TEST(EloLanes, GridValuesStoppedEarlyChangeNothing)
+{
+    // Long records (many bound checks, elo_optimisation.cpp), so that the grid's
+    // far values of k stop early: the optimum and its likelihood, bit for bit,
+    // are those of every value computed in full, with any number of threads.
+    for (std::uint64_t seed = 1; seed <= 6; ++seed) {
+        const int n = 8 + static_cast<int>(seed * 7);
+        const std::vector<Bout> bouts = randomBouts(seed, n, 9000 + static_cast<int>(seed * 3001));
+        EloSettings s;
+        s.draws = seed % 2 ? DrawPolicy::Half : DrawPolicy::Ignore;
+        s.curve = seed % 3 == 0 ? EloCurve::Normal : EloCurve::Logistic;
+        const EloOptimum plain = plainOptimum(n, bouts, s);
+        for (unsigned threads : {1U, 2U, 3U}) {
+            const auto best = optimiseEloK(n, bouts, s, threads);
+            ASSERT_TRUE(best.has_value());
+            EXPECT_EQ(std::bit_cast<std::uint64_t>(best->k), std::bit_cast<std::uint64_t>(plain.k))
+                << "seed " << seed << ", threads " << threads;
+            EXPECT_EQ(std::bit_cast<std::uint64_t>(best->logLikelihood), std::bit_cast<std::uint64_t>(plain.logLikelihood))
+                << "seed " << seed << ", threads " << threads;
         }
     }
 }
