@@ -15,6 +15,7 @@
 #include "ui/analysis/prediction_view.h"
 #include "ui/document/qt_convert.h"
 
+#include <QApplication>
 #include <QMouseEvent>
 #include <QTableWidget>
 
@@ -343,4 +344,38 @@ TEST_F(TimelineViewTest, PredictionViewShowsThePlantedReversal)
             EXPECT_FALSE(view.isEmphasised(ui::toQString(f.animal))) << f.animal;
             break;
         }
+}
+
+// The legend stands beside the plot while its entries fit one column of the
+// plot's height; in a plot too low for that (as with a centre's many
+// matrilines) it goes under the plot, wrapped to its width, so the plot keeps
+// the window's width.
+TEST_F(TimelineViewTest, LegendBesideWhenItFitsAndUnderWhenItWouldNeedASecondColumn)
+{
+    ui::RankTimelineView view(demo.document(), &selection);
+    finish(view.runner());
+    QCustomPlot* plot = view.plot();
+    const int entries = plot->legend->itemCount();
+    ASSERT_GT(entries, 8);
+    const int entryHeight = plot->legend->item(0)->minimumOuterSizeHint().height();
+    for (const int height : {entries * (entryHeight + 3) + 200, entries * entryHeight / 2}) {
+        view.resize(1000, height);
+        view.show();
+        QApplication::processEvents();
+        plot->replot();
+        const QRect legend = plot->legend->outerRect();
+        const QRect lines = plot->axisRect()->outerRect();
+        if (height > entries * entryHeight) {
+            EXPECT_EQ(plot->legend->layout(), plot->plotLayout()->element(0, 1)) << height;
+            EXPECT_GE(legend.left(), lines.right()) << height << ": beside the plot";
+            EXPECT_EQ(plot->legend->columnCount(), 1) << height << ": one column";
+            EXPECT_GT(lines.width(), plot->viewport().width() / 2) << height << ": the legend takes only its width";
+        } else {
+            EXPECT_EQ(plot->legend->layout(), plot->plotLayout()->element(1, 0)) << height;
+            EXPECT_GE(legend.top(), lines.bottom()) << height << ": under the plot";
+            EXPECT_GT(plot->legend->columnCount(), 1) << height << ": several columns";
+            EXPECT_LE(legend.right(), plot->viewport().right()) << height;
+            EXPECT_GT(lines.width(), plot->viewport().width() * 3 / 4) << height << ": the plot keeps the width";
+        }
+    }
 }

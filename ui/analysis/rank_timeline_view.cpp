@@ -150,7 +150,9 @@ RankTimelineView::RankTimelineView(ColonyDocument* document, AnimalSelection* se
     ticker->setDateTimeFormat(QStringLiteral("MMM\nyyyy"));
     plot_->xAxis->setTicker(ticker);
     plot_->xAxis->setLabel(tr("Date"));
-    // The legend in a column of its own, top-aligned (a filler below takes the rest).
+    // The legend in a column of its own, top-aligned (a filler below takes
+    // the rest); or, when its entries would need a second column there (a
+    // centre's many matrilines), in a row under the plot, wrapped to its width.
     auto* side = new QCPLayoutGrid;
     plot_->plotLayout()->addElement(0, 1, side);
     plot_->plotLayout()->setColumnStretchFactor(1, 0.001);
@@ -158,13 +160,15 @@ RankTimelineView::RankTimelineView(ColonyDocument* document, AnimalSelection* se
     side->addElement(1, 0, new QCPLayoutElement(plot_));
     side->setRowStretchFactor(0, 0.001);
     side->setMargins(QMargins(2, 0, 4, 2)); // the legend's frame stays inside the plot's edge
+    auto* under = new QCPLayoutGrid;
+    plot_->plotLayout()->addElement(1, 0, under);
+    under->addElement(0, 0, new QCPLayoutElement(plot_)); // an empty grid would cap the plot's width at nothing
+    plot_->plotLayout()->setRowStretchFactor(1, 0.001);
     plot_->legend->setVisible(true);
     QFont legendFont = font();
     legendFont.setPointSizeF(legendFont.pointSizeF() * 0.85);
     plot_->legend->setFont(legendFont);
-    // A long legend (many matrilines) takes a second column rather than being cut at the bottom.
-    connect(plot_, &QCustomPlot::beforeReplot, this,
-            [this] { fitLegendToHeight(plot_->legend, plot_->axisRect()->outerRect().height()); });
+    placeLegendBesideOrUnder(plot_, side, under);
     plot_->setMouseTracking(true);
     plot_->addLayer(QStringLiteral("selected"), plot_->layer(QStringLiteral("main")), QCustomPlot::limAbove);
     plot_->setMinimumWidth(400);

@@ -286,6 +286,36 @@ void fitLegendToHeight(QCPLegend* legend, int height)
     legend->setFillOrder(QCPLayoutGrid::foRowsFirst, true);
 }
 
+void placeLegendBesideOrUnder(QCustomPlot* plot, QCPLayoutGrid* beside, QCPLayoutGrid* under)
+{
+    QObject::connect(plot, &QCustomPlot::beforeReplot, plot, [plot, beside, under] {
+        QCPLegend* legend = plot->legend;
+        if (!legend || !legend->visible()) return;
+        // One column's height, from the entries alone (not from where the
+        // legend is now), so the choice cannot swing from one replot to the next.
+        const std::vector<QCPAbstractLegendItem*> items = legendItems(legend);
+        int column = legend->margins().top() + legend->margins().bottom();
+        for (QCPAbstractLegendItem* item : items) column += item->minimumOuterSizeHint().height() + legend->rowSpacing();
+        const QMargins m = plot->plotLayout()->margins();
+        const int height = plot->viewport().height() - m.top() - m.bottom();
+        const bool fitsBeside = column <= height;
+        QCPLayoutGrid* place = fitsBeside ? beside : under;
+        if (legend->layout() != place) {
+            if (auto* grid = qobject_cast<QCPLayoutGrid*>(legend->layout())) {
+                grid->take(legend);
+                grid->simplify();
+            }
+            place->insertRow(0);
+            place->addElement(0, 0, legend);
+            place->setRowStretchFactor(0, 0.001); // the legend's row as low as its entries
+        }
+        // The plot's full height beside it (the row under it is empty then),
+        // not the height of the last layout, which may have had the legend under it.
+        if (fitsBeside) fitLegendToHeight(legend, height);
+        else fitLegendToWidth(legend, plot->viewport().width() - m.left() - m.right());
+    });
+}
+
 namespace {
 
 QString exportFolder()

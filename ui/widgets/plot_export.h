@@ -6,6 +6,7 @@
 #include <functional>
 #include <optional>
 
+class QCPLayoutGrid;
 class QCPLegend;
 class QCPPainter;
 class QCustomPlot;
@@ -100,5 +101,14 @@ void wrapLegendToPlotWidth(QCustomPlot* plot);
 /// entry falls below `height` pixels (the plot's height): a long legend is
 /// never clipped.
 void fitLegendToHeight(QCPLegend* legend, int height);
+
+/// Keeps a plot's legend in `beside` (a grid right of the plot) while its
+/// entries fit one column of the plot's height, and otherwise in `under` (a
+/// grid below the plot) wrapped to the plot's width, so that a long legend
+/// (a centre's many matrilines) leaves the plot its width. Decided before
+/// every replot; the legend starts in either grid, and each grid keeps a
+/// filler element below the legend's row (an empty grid would cap its
+/// column's width at nothing).
+void placeLegendBesideOrUnder(QCustomPlot* plot, QCPLayoutGrid* beside, QCPLayoutGrid* under);
 
 } // namespace hierloom::ui
