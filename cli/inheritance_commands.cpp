@@ -71,11 +71,9 @@ void runInherit(CommandContext& ctx, const InheritOptions& o)
     EncounterScope scope;
     scope.group = o.group;
     if (!o.monthly) scope.to = parseDate(o.at);
-    // The prediction needs only Elo at one date: compact records (core/base/compact_encounters.h);
-    // the monthly series and rank acquisition still read the records as Encounters.
-    const bool compact = !o.monthly && !o.acquisition;
-    const LoadedColony loaded = compact ? loadCompactColony(ctx, o.colony, scope, o.at.empty())
-                                        : loadColony(ctx, o.colony, scope, false);
+    // Compact records (core/base/compact_encounters.h) for every form: the
+    // prediction, the monthly series and rank acquisition select from them.
+    const LoadedColony loaded = loadCompactColony(ctx, o.colony, scope, !o.monthly && !o.acquisition && o.at.empty());
     WindowOptions window;
     window.group = o.group;
     window.draws = o.draws;
@@ -95,7 +93,7 @@ void runInherit(CommandContext& ctx, const InheritOptions& o)
     std::ostringstream out;
     if (o.acquisition) {
         out << "daughter,older_sister,mother,first_above,age_years,age_days,above_at_last_comparison\n";
-        for (const SisterOvertaking& r : rankAcquisition(loaded.colony, loaded.where, lines, opt.elo, o.group, opt.at))
+        for (const SisterOvertaking& r : rankAcquisition(loaded.compact, loaded.colony.animals, loaded.where, lines, opt.elo, o.group, opt.at))
             out << csvField(r.daughter) << ',' << csvField(r.olderSister) << ',' << csvField(r.mother) << ','
                 << (r.firstAbove ? formatDate(*r.firstAbove) : "") << ',' << rankText(r.ageYears) << ','
                 << rankText(r.ageDays) << ',' << (r.compared ? (r.aboveAtLastComparison ? "yes" : "no") : "") << '\n';
@@ -105,7 +103,7 @@ void runInherit(CommandContext& ctx, const InheritOptions& o)
     if (o.monthly) {
         ConformitySeries series;
         try {
-            series = monthlyConformity(loaded.colony, loaded.where, lines, opt);
+            series = monthlyConformity(loaded.compact, loaded.colony.animals, loaded.where, lines, opt);
         } catch (const std::invalid_argument& e) {
             throw BadInputError(std::string("--matriline-order: ") + e.what());
         }

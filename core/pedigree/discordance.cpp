@@ -3,6 +3,7 @@
 
 #include "core/base/calendar_period.h"
 #include "core/ranks/davids_score.h"
+#include "core/ranks/compact_selection.h"
 #include "core/ranks/encounter_selection.h"
 #include "core/stats/kendall_tau.h"
 #include "core/ranks/win_matrix.h"
@@ -65,16 +66,18 @@ ConformityPoint pointOf(const Matrilines& lines, const InheritancePrediction& p,
                            s.conformity, s.tauB};
 }
 
-} // namespace
-
-ConformitySeries monthlyConformity(const Colony& colony, const ResidenceIndex& where, const Matrilines& lines,
-                                   const InheritanceOptions& o)
+SelectionOptions monthlySelection(const InheritanceOptions& o)
 {
-    ConformitySeries out;
     SelectionOptions s;
     s.group = o.group;
     s.draws = o.elo.draws;
-    const EncounterSelection sel = selectEncounters(colony, where, s);
+    return s;
+}
+
+ConformitySeries conformityByMonth(const EncounterSelection& sel, const ResidenceIndex& where, const Matrilines& lines,
+                                   const InheritanceOptions& o)
+{
+    ConformitySeries out;
     if (!sel.firstDay) return out;
     const std::vector<CalendarPeriod> months = periodsCovering(*sel.firstDay, *sel.lastDay, PeriodLength::Month);
     auto boutIndex = [&](Day d) {
@@ -116,6 +119,20 @@ ConformitySeries monthlyConformity(const Colony& colony, const ResidenceIndex& w
         out.davidsScore.push_back(pointOf(lines, predictOrder(lines, ranked, ds, o.rule, o.matrilineOrder), months[k]));
     }
     return out;
+}
+
+} // namespace
+
+ConformitySeries monthlyConformity(const Colony& colony, const ResidenceIndex& where, const Matrilines& lines,
+                                   const InheritanceOptions& o)
+{
+    return conformityByMonth(selectEncounters(colony, where, monthlySelection(o)), where, lines, o);
+}
+
+ConformitySeries monthlyConformity(const CompactEncounters& encounters, const std::vector<Animal>& animals,
+                                   const ResidenceIndex& where, const Matrilines& lines, const InheritanceOptions& o)
+{
+    return conformityByMonth(selectEncounters(encounters, animals, where, monthlySelection(o)), where, lines, o);
 }
 
 } // namespace hierloom::core

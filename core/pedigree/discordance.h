@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
 #include "core/base/colony.h"
+#include "core/base/compact_encounters.h"
 #include "core/ranks/elo_rating.h"
 #include "core/pedigree/inheritance_prediction.h"
 #include "core/pedigree/matriline.h"
@@ -71,6 +72,11 @@ struct ConformitySeries {
 /// group, when options.group is set); options.at is ignored and the explicit
 /// matriline order, rule and maturity apply to every month.
 ConformitySeries monthlyConformity(const Colony& colony, const ResidenceIndex& where, const Matrilines& lines,
+                                   const InheritanceOptions& options);
+/// The same from compact records (core/base/compact_encounters.h): the same
+/// series, as the selection is the same (selectEncounters).
+ConformitySeries monthlyConformity(const CompactEncounters& encounters, const std::vector<Animal>& animals,
+                                   const ResidenceIndex& where, const Matrilines& lines,
                                    const InheritanceOptions& options);
 
 } // namespace hierloom::core

@@ -4,6 +4,8 @@
 // colonies: every group and none, dates inside and after the record, both
 // sibling rules, both draw policies.
 #include "core/pedigree/inheritance_prediction.h"
+#include "core/pedigree/discordance.h"
+#include "core/pedigree/rank_acquisition.h"
 
 #include "demo_fixture.h"
 #include "random_colony.h"
@@ -140,4 +142,68 @@ TEST(RankedFemaleCandidates, RankTheSameFemalesAsTheDefinitionOnEveryDay)
         }
     }
     EXPECT_GT(ranked, 1000); // the days compared rank females
+}
+
+namespace {
+
+std::string text(const std::vector<SisterOvertaking>& rows)
+{
+    std::ostringstream out;
+    for (const SisterOvertaking& r : rows)
+        out << r.daughter << ' ' << r.olderSister << ' ' << r.mother << ' ' << r.compared << ' '
+            << (r.firstAbove ? std::to_string(*r.firstAbove) : "-") << ' ' << (r.ageYears ? *r.ageYears : -1) << ' '
+            << (r.ageDays ? *r.ageDays : -1) << ' ' << r.aboveAtLastComparison << '\n';
+    return out.str();
+}
+
+std::string text(const ConformitySeries& s)
+{
+    std::ostringstream out;
+    for (const auto* points : {&s.elo, &s.davidsScore}) {
+        for (const ConformityPoint& p : *points)
+            out << p.periodStart << ' ' << p.periodEnd << ' ' << p.ranked << ' ' << p.observed << ' ' << p.comparable
+                << ' ' << p.discordant << ' ' << bits(p.conformity) << ' ' << bits(p.tauB) << '\n';
+        out << "--\n";
+    }
+    return out.str();
+}
+
+} // namespace
+
+// `inherit --acquisition` and `--monthly` read compact records: the same rows
+// as from records, on random colonies spread over many months.
+TEST(CompactInheritance, RankAcquisitionAndTheMonthlySeriesAreTheSameFromCompactRecords)
+{
+    size_t compared = 0, months = 0;
+    for (std::uint64_t seed = 1; seed <= 40; ++seed) {
+        hierloom::test::RandomColonyShape shape;
+        shape.animals = 10 + static_cast<int>(seed % 11);
+        shape.encounters = 100 + static_cast<int>(seed * 13 % 400);
+        shape.days = 100 + static_cast<int>(seed * 37 % 500);
+        const Colony colony = hierloom::test::randomColony(seed, shape);
+        const ResidenceIndex where(colony.animals, colony.residences);
+        const Matrilines lines(colony);
+        const CompactEncounters compact = compactEncounters(colony.encounters);
+        for (const std::string& group : {std::string(), std::string("G1"), std::string("G2")}) {
+            const std::string label = "seed " + std::to_string(seed) + ", group '" + group + "'";
+            EloSettings elo;
+            elo.draws = seed % 3 ? DrawPolicy::Half : DrawPolicy::Ignore;
+            const std::optional<Day> to =
+                seed % 2 ? std::nullopt : std::optional<Day>(*lastEncounterDay(colony) - static_cast<Day>(seed * 3));
+            const std::vector<SisterOvertaking> rows = rankAcquisition(colony, where, lines, elo, group, to);
+            EXPECT_EQ(text(rows), text(rankAcquisition(compact, colony.animals, where, lines, elo, group, to))) << label;
+            for (const SisterOvertaking& r : rows) compared += r.compared ? 1 : 0;
+
+            InheritanceOptions o;
+            o.group = group;
+            o.elo = elo;
+            o.maturityYears = static_cast<int>(seed % 3) + 1;
+            o.rule = seed % 2 ? SiblingRule::Youngest : SiblingRule::Eldest;
+            const ConformitySeries series = monthlyConformity(colony, where, lines, o);
+            EXPECT_EQ(text(series), text(monthlyConformity(compact, colony.animals, where, lines, o))) << label;
+            months += series.elo.size();
+        }
+    }
+    EXPECT_GT(compared, 50U); // sisters were compared, so the rows hold results
+    EXPECT_GT(months, 300U);
 }
