@@ -30,7 +30,9 @@ struct DynamicsOptions {
 
 void runDynamics(CommandContext& ctx, const DynamicsOptions& o)
 {
-    const LoadedColony loaded = loadColony(ctx, o.colony);
+    // Only the window's encounters (a group's scope, its dates): both tables
+    // select from them (selectEncounters), as `ranks` does.
+    const LoadedColony loaded = loadColony(ctx, o.colony, scopeOf(o.window));
     const AnalysisSettings settings = analysisSettingsOf(loaded, o.analysis, o.window.draws);
     const SelectionOptions sel = withDefaultWindow(selectionOf(o.window, loaded), settings, loaded);
     reportAnalysisSettings(ctx, "dynamics", settings, &o.analysis, o.window.draws);

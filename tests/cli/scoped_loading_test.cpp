@@ -112,3 +112,39 @@ TEST(CliScopedLoading, OverviewHasOneRowPerGroup)
     EXPECT_NE(jan.out.find("North,2,2,2,2020-01-03,2,calm,\n"), std::string::npos) << jan.out;
     EXPECT_NE(jan.out.find("South,2,2,2,2020-01-02,1,calm,\n"), std::string::npos) << jan.out;
 }
+
+TEST(CliScopedLoading, DynamicsOfAGroupReadsItsScopeAndItsWindowEndsAtTheFilesLastEncounter)
+{
+    CliTempDir dir;
+    const std::string colony = twoGroups(dir);
+    // Hand-worked: North's encounters are rows 1, 3 (no group; both fighters
+    // live in North) and 4, none of South's.
+    const std::string all = dir.file("all.csv");
+    const CliResult r = runCli({"dynamics", colony, "--group", "North", "--encounters", all});
+    ASSERT_EQ(r.status, 0) << r.err;
+    auto rows = lines(CliTempDir::read(all));
+    ASSERT_EQ(rows.size(), 4U) << CliTempDir::read(all);
+    EXPECT_EQ(rows[1].substr(0, 16), "2020-01-01,N1,N2");
+    EXPECT_EQ(rows[2].substr(0, 16), "2020-01-03,N1,N2");
+    EXPECT_EQ(rows[3].substr(0, 16), "2020-02-01,N2,N1");
+    // Rank changes, hand-worked Elo (k 100, start 1000, logistic): N1 1050 then
+    // about 1086 after January; N2's win on 1 February gains her about 73, not
+    // enough to pass N1 (about 1013 against 987), so neither changes rank. The
+    // window, and so the last period, ends at North's last encounter.
+    const auto changes = lines(r.out);
+    ASSERT_EQ(changes.size(), 3U) << r.out;
+    EXPECT_EQ(changes[1], "2020-02-01,2020-02-01,N1,1,1,0,0,0,0,0,none");
+    EXPECT_EQ(changes[2], "2020-02-01,2020-02-01,N2,2,2,0,0,0,0,0,none");
+    {
+        hierloom::core::ColonyStore file = hierloom::core::ColonyStore::open(colony);
+        hierloom::core::AnalysisSettings s;
+        s.windowDays = 70; // up to the file's last encounter (South's, 2020-04-01): from late January
+        hierloom::core::writeAnalysisSettings(file, s);
+    }
+    const std::string windowed = dir.file("windowed.csv");
+    const CliResult w = runCli({"dynamics", colony, "--group", "North", "--encounters", windowed});
+    ASSERT_EQ(w.status, 0) << w.err;
+    rows = lines(CliTempDir::read(windowed));
+    ASSERT_EQ(rows.size(), 2U) << CliTempDir::read(windowed);
+    EXPECT_EQ(rows[1].substr(0, 16), "2020-02-01,N2,N1");
+}
