@@ -191,11 +191,12 @@ void addMatrixCommand(CLI::App& app, CommandContext& ctx, CommandAction& action)
     cmd->add_option("--out", ctx.outFile, "write the CSV to this file instead of standard output");
     cmd->callback([&ctx, &action, o] {
         action = [&ctx, o] {
-            const LoadedColony loaded = loadColony(ctx, o->colony, scopeOf(o->window));
+            // Compact records: the matrix and its order come from the selection's bouts.
+            const LoadedColony loaded = loadCompactColony(ctx, o->colony, scopeOf(o->window));
             const AnalysisSettings settings = analysisSettingsOf(loaded, o->analysis, o->window.draws);
             const SelectionOptions sel = withDefaultWindow(selectionOf(o->window, loaded), settings, loaded);
             reportAnalysisSettings(ctx, "matrix", settings, &o->analysis, o->window.draws);
-            const EncounterSelection s = selectEncounters(loaded.colony, loaded.where, sel);
+            const EncounterSelection s = selectEncounters(loaded.compact, loaded.colony.animals, loaded.where, sel);
             std::vector<int> order;
             if (o->order == "id") {
                 for (int i = 0; i < s.size(); ++i) order.push_back(i);
