@@ -2,6 +2,7 @@
 #include "core/pedigree/foresight.h"
 
 #include "core/pedigree/matriline.h"
+#include "core/ranks/compact_selection.h"
 #include "core/ranks/informed_elo.h"
 
 #include <cmath>
@@ -140,12 +141,15 @@ private:
 
 } // namespace
 
-Foresight computeForesight(const Colony& colony, const ResidenceIndex& where, const SelectionOptions& selection,
-                           const ForesightOptions& o)
+namespace {
+
+/// The foresight of a selection made from the colony's encounters in either
+/// form; `colony`'s animals and pedigree are read, not its encounters.
+Foresight foresightOf(const EncounterSelection& sel, const Colony& colony, const ResidenceIndex& where,
+                      const SelectionOptions& selection, const ForesightOptions& o)
 {
     Foresight result;
     result.rule = o.rule;
-    const EncounterSelection sel = selectEncounters(colony, where, selection);
     EloSettings elo = o.elo;
     elo.draws = selection.draws;
     const int n = sel.size();
@@ -202,6 +206,20 @@ Foresight computeForesight(const Colony& colony, const ResidenceIndex& where, co
         result.rows.push_back({model, std::nullopt, scoreForesight(chances(nullptr))});
     }
     return result;
+}
+
+} // namespace
+
+Foresight computeForesight(const Colony& colony, const ResidenceIndex& where, const SelectionOptions& selection,
+                           const ForesightOptions& o)
+{
+    return foresightOf(selectEncounters(colony, where, selection), colony, where, selection, o);
+}
+
+Foresight computeForesight(const CompactEncounters& encounters, const Colony& pedigree, const ResidenceIndex& where,
+                           const SelectionOptions& selection, const ForesightOptions& o)
+{
+    return foresightOf(selectEncounters(encounters, pedigree.animals, where, selection), pedigree, where, selection, o);
 }
 
 } // namespace hierloom::core
