@@ -1,8 +1,9 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "core/pedigree/rank_acquisition.h"
 
-#include "core/ranks/encounter_selection.h"
 #include "core/pedigree/inheritance_prediction.h"
+#include "core/ranks/compact_selection.h"
+#include "core/ranks/encounter_selection.h"
 #include "core/ranks/ordinal_ranks.h"
 
 #include <algorithm>
@@ -20,17 +21,19 @@ bool ranksAbove(double ra, double rb, const std::string& a, const std::string& b
     return ra > rb;
 }
 
-} // namespace
-
-std::vector<SisterOvertaking> rankAcquisition(const Colony& colony, const ResidenceIndex& where,
-                                              const Matrilines& lines, const EloSettings& settings,
-                                              const std::string& group, std::optional<Day> to)
+SelectionOptions acquisitionSelection(const EloSettings& settings, const std::string& group, std::optional<Day> to)
 {
     SelectionOptions s;
     s.group = group;
     s.to = to;
     s.draws = settings.draws;
-    const EncounterSelection sel = selectEncounters(colony, where, s);
+    return s;
+}
+
+/// rankAcquisition of the selection acquisitionSelection made, from either form of the encounters.
+std::vector<SisterOvertaking> acquisitionOf(const EncounterSelection& sel, const ResidenceIndex& where,
+                                            const Matrilines& lines, const EloSettings& settings)
+{
     const std::vector<EloDay> history = eloDailyHistory(sel.size(), sel.bouts, sel.days, settings);
 
     std::vector<SisterOvertaking> out;
@@ -75,6 +78,25 @@ std::vector<SisterOvertaking> rankAcquisition(const Colony& colony, const Reside
         }
     }
     return out;
+}
+
+} // namespace
+
+std::vector<SisterOvertaking> rankAcquisition(const Colony& colony, const ResidenceIndex& where,
+                                              const Matrilines& lines, const EloSettings& settings,
+                                              const std::string& group, std::optional<Day> to)
+{
+    return acquisitionOf(selectEncounters(colony, where, acquisitionSelection(settings, group, to)), where, lines,
+                         settings);
+}
+
+std::vector<SisterOvertaking> rankAcquisition(const CompactEncounters& encounters, const std::vector<Animal>& animals,
+                                              const ResidenceIndex& where, const Matrilines& lines,
+                                              const EloSettings& settings, const std::string& group,
+                                              std::optional<Day> to)
+{
+    return acquisitionOf(selectEncounters(encounters, animals, where, acquisitionSelection(settings, group, to)), where,
+                         lines, settings);
 }
 
 } // namespace hierloom::core

@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
 #include "core/base/colony.h"
+#include "core/base/compact_encounters.h"
 #include "core/ranks/elo_rating.h"
 #include "core/pedigree/matriline.h"
 #include "core/base/residence_index.h"
@@ -40,5 +41,10 @@ struct SisterOvertaking {
 std::vector<SisterOvertaking> rankAcquisition(const Colony& colony, const ResidenceIndex& where,
                                               const Matrilines& lines, const EloSettings& settings,
                                               const std::string& group = {}, std::optional<Day> to = std::nullopt);
+/// The same from compact records; `animals` is the colony's animal list.
+std::vector<SisterOvertaking> rankAcquisition(const CompactEncounters& encounters, const std::vector<Animal>& animals,
+                                              const ResidenceIndex& where, const Matrilines& lines,
+                                              const EloSettings& settings, const std::string& group = {},
+                                              std::optional<Day> to = std::nullopt);
 
 } // namespace hierloom::core
