@@ -252,13 +252,17 @@ void PredictionView::recompute()
     const ColonyDocument::Snapshot snapshot = document_->snapshot();
     runner_->start([this, snapshot = snapshot, options, foresightOptions, record](const std::atomic<bool>& cancel,
                                                                      const ComputeRunner::Progress& progress) mutable {
-        // Every group (the prediction and the record's foresight span the colony).
-        const auto colony = std::make_shared<const core::Colony>(snapshot.colonyFor({}));
-        snapshot.encounters.reset(); // an edit meanwhile need not copy the document's records
+        // Every group (the prediction and the record's foresight span the
+        // colony), read from the shared compact records without expanding them.
+        const std::shared_ptr<const core::CompactEncounters> records = snapshot.takeScope({});
+        // The animals with an index of this thread's own (the pedigree has no encounters).
+        const auto colony = std::make_shared<core::Colony>(*snapshot.pedigree);
+        colony->reindex();
         const core::ResidenceIndex* where = snapshot.residences.get();
         const core::Matrilines lines(*colony);
         progress(0, 3);
-        auto p = std::make_shared<core::InheritancePrediction>(core::predictInheritance(*colony, *where, lines, options));
+        auto p = std::make_shared<core::InheritancePrediction>(
+            core::predictInheritance(*records, colony->animals, *where, lines, options));
         if (cancel) return ComputeRunner::Apply();
         progress(1, 3);
         auto s = std::make_shared<core::DiscordanceSummary>(core::summariseDiscordance(lines, *p));
@@ -279,7 +283,7 @@ void PredictionView::recompute()
         }
         if (cancel) return ComputeRunner::Apply();
         progress(2, 3);
-        auto f = std::make_shared<core::Foresight>(core::computeForesight(*colony, *where, record, foresightOptions));
+        auto f = std::make_shared<core::Foresight>(core::computeForesight(*records, *colony, *where, record, foresightOptions));
         progress(3, 3);
         return ComputeRunner::Apply([this, p, s, palette, names, lineNames, f] {
             lineNames_ = *lineNames;
