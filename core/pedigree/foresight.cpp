@@ -176,16 +176,20 @@ Foresight foresightOf(const EncounterSelection& sel, const Colony& colony, const
         all[b].elo = plain.winnerChance[b];
         all[b].informedElo = informed.winnerChance[b];
     }
-    // Decided encounters only; the rule's probability fitted on them.
-    result.encounters.reserve(sel.bouts.size());
+    // Decided encounters only, kept in place (one list of every encounter
+    // at a time); the rule's probability fitted on them.
+    size_t kept = 0;
     for (size_t b = 0; b < sel.bouts.size(); ++b) {
         if (sel.bouts[b].draw) continue;
         if (all[b].ruleConforms) {
             ++result.comparable;
             if (*all[b].ruleConforms) ++result.conforming;
         }
-        result.encounters.push_back(std::move(all[b]));
+        if (kept != b) all[kept] = std::move(all[b]);
+        ++kept;
     }
+    all.resize(kept);
+    result.encounters = std::move(all);
     result.ruleWinProbability = fitRuleWinProbability(result.conforming, result.comparable);
     const double p = result.ruleWinProbability.value_or(0.5);
     for (ForesightEncounter& e : result.encounters)

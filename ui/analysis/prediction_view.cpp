@@ -334,6 +334,10 @@ void PredictionView::adopt(core::InheritancePrediction prediction, core::Discord
 void PredictionView::adoptForesight(core::Foresight foresight)
 {
     foresight_ = std::move(foresight);
+    // The view shows the scores and the counts, not each encounter: the list
+    // (every decided encounter of a centre, hundreds of MB) is let go.
+    decidedEncounters_ = foresight_.encounters.size();
+    foresight_.encounters = {};
     static const QColor colours[] = {QColor(0xE6, 0x9F, 0x00), QColor(0x00, 0x72, 0xB2), QColor(0x00, 0x9E, 0x73)};
     auto modelName = [](core::ForesightModel m) {
         switch (m) {
@@ -385,7 +389,7 @@ void PredictionView::adoptForesight(core::Foresight foresight)
     foresightPlot_->xAxis->setNumberFormat(QStringLiteral("f"));
     foresightPlot_->xAxis->setNumberPrecision(0);
     foresightPlot_->replot(QCustomPlot::rpQueuedReplot);
-    if (foresight_.encounters.empty()) {
+    if (decidedEncounters_ == 0) {
         foresightLabel_->setText(tr("No decided encounters."));
         return;
     }
@@ -395,7 +399,7 @@ void PredictionView::adoptForesight(core::Foresight foresight)
            "A coin scores %5 per encounter and a Brier score of 0.25.")
             .arg(toQString(core::toString(foresight_.rule)))
             .arg(foresight_.comparable)
-            .arg(foresight_.encounters.size())
+            .arg(decidedEncounters_)
             .arg(foresight_.ruleWinProbability ? QString::number(*foresight_.ruleWinProbability * 100, 'f', 1) +
                                                      QStringLiteral("%")
                                                : tr("none"))
