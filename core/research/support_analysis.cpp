@@ -192,13 +192,20 @@ SupportAnalysis supportOf(const Source& source, const Colony& colony, const Resi
 
     // The window's encounters and, per day and group, who was there.
     std::map<std::pair<Day, int>, std::vector<int>> present;
+    const auto inWindow = [&](size_t k) {
+        const Day date = source.date(k);
+        return (!options.from || date >= *options.from) && (!options.to || date <= *options.to) &&
+               (options.group.empty() || source.group(k) == options.group);
+    };
+    const std::vector<size_t> order = source.order();
+    // Room for every encounter of the window at once (millions on a centre:
+    // growing by doubling would hold two lists for a while).
     std::vector<Fight> fights;
-    for (size_t k : source.order()) {
+    fights.reserve(static_cast<size_t>(std::count_if(order.begin(), order.end(), inWindow)));
+    for (size_t k : order) {
+        if (!inWindow(k)) continue;
         const Day date = source.date(k);
         const std::string& group = source.group(k);
-        if (options.from && date < *options.from) continue;
-        if (options.to && date > *options.to) continue;
-        if (!options.group.empty() && group != options.group) continue;
         Fight f;
         f.date = date;
         f.group = &group;
