@@ -5,35 +5,32 @@
 // computation, printing the time and the process's memory (VmRSS now, VmHWM
 // peak) after each. Run one view per process to see each view's own peak.
 // Usage: views_read_all_measure COLONY VIEW... (view ids of the View menu:
-// health, prediction, sex-ratio, support, planner; "none" reads only).
-// The colony is only read.
+// health, prediction, sex-ratio, support, planner; "none" reads only;
+// "report" writes the first group's hierarchy report to a temporary PDF from
+// the document's records as the report dialog does, "report-expanded" from
+// colonyFor({}) as it did before). The colony is only read.
 #include "ui/document/colony_document.h"
+#include "report/hierarchy_report.h"
 #include "ui/document/compute_runner.h"
+#include "ui/document/qt_convert.h"
+#include "ui/planning/report_dialog.h"
 #include "ui/shell/main_window.h"
+#include "measure_support.h"
 
 #include <QApplication>
 #include <QElapsedTimer>
 #include <QStandardPaths>
+#include <QTemporaryDir>
 
 #include <cstdio>
-#include <fstream>
 #include <string>
 
 using namespace hierloom;
 
 namespace {
 
-// VmHWM (peak) or VmRSS (now) of this process in MiB, from /proc/self/status.
-double memoryMiB(const std::string& field)
-{
-    std::ifstream status("/proc/self/status");
-    std::string line;
-    while (std::getline(status, line))
-        if (line.rfind(field + ":", 0) == 0) return std::stod(line.substr(field.size() + 1)) / 1024.0;
-    return -1;
-}
-
-double ms(const QElapsedTimer& t) { return static_cast<double>(t.nsecsElapsed()) / 1e6; }
+using measure::memoryMiB;
+using measure::ms;
 
 // Runs the events until `done` or 600 s.
 template <class Done> void runUntil(Done done)
@@ -89,6 +86,20 @@ int main(int argc, char* argv[])
     for (int i = 2; i < argc; ++i) {
         const QString view = QString::fromLocal8Bit(argv[i]);
         if (view == QStringLiteral("none")) continue;
+        if (view.startsWith(QStringLiteral("report"))) {
+            const QTemporaryDir dir;
+            const QString pdf = dir.filePath(QStringLiteral("report.pdf"));
+            const std::string group = doc->residences().groups().front();
+            const report::HierarchyReportOptions o = ui::documentReportOptions(doc, group, std::nullopt);
+            QElapsedTimer t;
+            t.start();
+            const int pages = view == QStringLiteral("report-expanded")
+                                  ? report::writeHierarchyReportPdf(pdf, doc->colonyFor({}), o)
+                                  : report::writeHierarchyReportPdf(pdf, doc->encounters().compact(), doc->pedigree(), o);
+            std::printf("%s of %s, %d pages: %.0f ms; RSS %.0f MiB, peak %.0f MiB\n", argv[i], group.c_str(), pages,
+                        ms(t), memoryMiB("VmRSS"), memoryMiB("VmHWM"));
+            continue;
+        }
         QElapsedTimer t;
         t.start();
         if (!window.showView(view)) {
