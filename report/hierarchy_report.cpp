@@ -42,13 +42,12 @@ std::string lineOf(const Matrilines& lines, const std::string& id)
     return k >= 0 ? lines.id(lines.matriarch(k)) : std::string();
 }
 
-/// The colony's encounters held twice by the report: as records (data health,
-/// foresight) and as compact records (every computation that needs only a
-/// selection: one interning pass instead of a string lookup per selection).
+/// The colony's pedigree (its encounters not read) and its encounters as
+/// compact records, which every computation of the report reads.
 struct ReportColony {
     const Colony& colony;
     const ResidenceIndex& where;
-    CompactEncounters compact;
+    const CompactEncounters& compact;
 };
 
 EncounterSelection selectionOf(const ReportColony& c, const SelectionOptions& sel)
@@ -228,7 +227,7 @@ struct Computed {
     }
 };
 
-Foresight foresightOf(const Colony& colony, const ResidenceIndex& where, const HierarchyReportOptions& o, Day at)
+Foresight foresightOf(const ReportColony& c, const HierarchyReportOptions& o, Day at)
 {
     clearUpperVectorState();
     SelectionOptions sel;
@@ -239,7 +238,7 @@ Foresight foresightOf(const Colony& colony, const ResidenceIndex& where, const H
     fo.rule = o.rule;
     fo.maturityYears = o.maturityYears;
     fo.elo = o.elo;
-    return computeForesight(colony, where, sel, fo);
+    return computeForesight(c.compact, c.colony, c.where, sel, fo);
 }
 
 void foresight(ReportLayout& doc, const HierarchyReportOptions& o, Day at, const Foresight& f)
@@ -388,6 +387,12 @@ void stability(ReportLayout& doc, const HierarchyReportOptions& o, Day at, const
 int paintHierarchyReport(QPagedPaintDevice& device, const Colony& colony, const HierarchyReportOptions& o,
                          QStringList* headings)
 {
+    return paintHierarchyReport(device, compactEncounters(colony.encounters), colony, o, headings);
+}
+
+int paintHierarchyReport(QPagedPaintDevice& device, const CompactEncounters& encounters, const Colony& colony,
+                         const HierarchyReportOptions& o, QStringList* headings)
+{
     // Qt's start and the text painted between the sections leave the vector
     // registers dirty, which slows every computation after it many times over
     // (core/base/vector_state.h): each computing step cleans them first.
@@ -398,7 +403,7 @@ int paintHierarchyReport(QPagedPaintDevice& device, const Colony& colony, const 
     sel.group = o.group;
     sel.to = o.at;
     sel.draws = o.elo.draws;
-    const ReportColony c{colony, where, compactEncounters(colony.encounters)};
+    const ReportColony c{colony, where, encounters};
     const EncounterSelection es = selectionOf(c, sel);
     if (es.bouts.empty())
         throw std::invalid_argument("the group '" + o.group + "' has no encounters" +
@@ -425,9 +430,9 @@ int paintHierarchyReport(QPagedPaintDevice& device, const Colony& colony, const 
     ho.randomisations = 500;
     std::future<DataHealth> pendingHealth = std::async(std::launch::async, [&] {
         clearUpperVectorState();
-        return dataHealth(colony, where, ho);
+        return dataHealth(encounters, colony.animals, where, ho);
     });
-    const auto foresightFigures = Computed<Foresight>::of([&] { return foresightOf(colony, where, o, at); });
+    const auto foresightFigures = Computed<Foresight>::of([&] { return foresightOf(c, o, at); });
     const auto stabilityFigures = Computed<StabilitySeries>::of([&] { return stabilityOf(c, lines, o, at); });
 
     ReportLayout doc(device);
@@ -462,13 +467,19 @@ int paintHierarchyReport(QPagedPaintDevice& device, const Colony& colony, const 
 
 int writeHierarchyReportPdf(const QString& path, const Colony& colony, const HierarchyReportOptions& o)
 {
+    return writeHierarchyReportPdf(path, compactEncounters(colony.encounters), colony, o);
+}
+
+int writeHierarchyReportPdf(const QString& path, const CompactEncounters& encounters, const Colony& colony,
+                            const HierarchyReportOptions& o)
+{
     QPdfWriter writer(path);
     writer.setResolution(300);
     writer.setPageLayout(QPageLayout(QPageSize(QPageSize::A4), QPageLayout::Portrait, QMarginsF(16, 16, 16, 12),
                                      QPageLayout::Millimeter));
     writer.setTitle(QObject::tr("Hierarchy report: %1").arg(qs(o.group)));
     writer.setCreator(QStringLiteral("Hierloom"));
-    return paintHierarchyReport(writer, colony, o);
+    return paintHierarchyReport(writer, encounters, colony, o);
 }
 
 } // namespace hierloom::report

@@ -38,9 +38,17 @@ struct HierarchyReportOptions {
 /// `headings`, when given, receives the section headings in order.
 int paintHierarchyReport(QPagedPaintDevice& device, const core::Colony& colony, const HierarchyReportOptions& options,
                          QStringList* headings = nullptr);
+/// The same from compact records (the desktop's, without expanding them);
+/// `pedigree`'s animals and residences are read, not its encounters.
+int paintHierarchyReport(QPagedPaintDevice& device, const core::CompactEncounters& encounters,
+                         const core::Colony& pedigree, const HierarchyReportOptions& options,
+                         QStringList* headings = nullptr);
 
 /// Writes the report as an A4 PDF file; returns the number of pages. Throws
 /// std::runtime_error when the file cannot be written.
 int writeHierarchyReportPdf(const QString& path, const core::Colony& colony, const HierarchyReportOptions& options);
+/// The same from compact records and the pedigree.
+int writeHierarchyReportPdf(const QString& path, const core::CompactEncounters& encounters,
+                            const core::Colony& pedigree, const HierarchyReportOptions& options);
 
 } // namespace hierloom::report

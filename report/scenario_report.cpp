@@ -23,10 +23,14 @@ QString ratioText(const GroupComposition& g)
     return g.adultSexRatio ? QString::number(*g.adultSexRatio, 'f', 2) : QObject::tr("no adult male");
 }
 
-void oneScenario(ReportLayout& doc, const Colony& colony, const NamedScenario& named, const QString& colonyName)
+void oneScenario(ReportLayout& doc, const CompactEncounters& encounters, const Colony& colony, const NamedScenario& named,
+                 const QString& colonyName)
 {
-    const ScenarioResult r = runScenario(colony, named.scenario);
-    const Colony after = scenarioColony(colony, named.scenario);
+    const ScenarioResult r = runScenario(encounters, colony, named.scenario);
+    // The changed pedigree; dated as the result, as the scenario's own date or the record's last.
+    Scenario dated = named.scenario;
+    dated.at = r.at;
+    const Colony after = scenarioColony(colony, dated);
     const ResidenceIndex where0(colony.animals, colony.residences), where1(after.animals, after.residences);
     doc.title(QObject::tr("What-if scenario: %1").arg(named.name),
               QObject::tr("%1 - at %2 - printed %3; the colony's records are not changed")
@@ -102,13 +106,13 @@ void oneScenario(ReportLayout& doc, const Colony& colony, const NamedScenario& n
 
 } // namespace
 
-int paintScenarioReport(QPagedPaintDevice& device, const Colony& colony, const std::vector<NamedScenario>& scenarios,
-                        const QString& colonyName)
+int paintScenarioReport(QPagedPaintDevice& device, const CompactEncounters& encounters, const Colony& colony,
+                        const std::vector<NamedScenario>& scenarios, const QString& colonyName)
 {
     ReportLayout doc(device);
     for (size_t i = 0; i < scenarios.size(); ++i) {
         if (i > 0) doc.newPage();
-        oneScenario(doc, colony, scenarios[i], colonyName);
+        oneScenario(doc, encounters, colony, scenarios[i], colonyName);
     }
     doc.finish();
     return doc.pages();

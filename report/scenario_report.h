@@ -22,7 +22,10 @@ struct NamedScenario {
 /// composition, the observed order next to the predicted one, the predicted
 /// moves and the observed relationships that would have to reverse. Returns
 /// the number of pages; throws core::ScenarioError for a scenario that cannot run.
-int paintScenarioReport(QPagedPaintDevice& device, const core::Colony& colony, const std::vector<NamedScenario>& scenarios,
+/// The encounters are read as compact records; `pedigree`'s animals and
+/// residences are read, not its encounters.
+int paintScenarioReport(QPagedPaintDevice& device, const core::CompactEncounters& encounters,
+                        const core::Colony& pedigree, const std::vector<NamedScenario>& scenarios,
                         const QString& colonyName);
 
 } // namespace hierloom::report

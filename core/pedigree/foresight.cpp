@@ -2,6 +2,7 @@
 #include "core/pedigree/foresight.h"
 
 #include "core/pedigree/matriline.h"
+#include "core/ranks/compact_selection.h"
 #include "core/ranks/informed_elo.h"
 
 #include <cmath>
@@ -140,12 +141,15 @@ private:
 
 } // namespace
 
-Foresight computeForesight(const Colony& colony, const ResidenceIndex& where, const SelectionOptions& selection,
-                           const ForesightOptions& o)
+namespace {
+
+/// The foresight of a selection made from the colony's encounters in either
+/// form; `colony`'s animals and pedigree are read, not its encounters.
+Foresight foresightOf(const EncounterSelection& sel, const Colony& colony, const ResidenceIndex& where,
+                      const SelectionOptions& selection, const ForesightOptions& o)
 {
     Foresight result;
     result.rule = o.rule;
-    const EncounterSelection sel = selectEncounters(colony, where, selection);
     EloSettings elo = o.elo;
     elo.draws = selection.draws;
     const int n = sel.size();
@@ -172,16 +176,20 @@ Foresight computeForesight(const Colony& colony, const ResidenceIndex& where, co
         all[b].elo = plain.winnerChance[b];
         all[b].informedElo = informed.winnerChance[b];
     }
-    // Decided encounters only; the rule's probability fitted on them.
-    result.encounters.reserve(sel.bouts.size());
+    // Decided encounters only, kept in place (one list of every encounter
+    // at a time); the rule's probability fitted on them.
+    size_t kept = 0;
     for (size_t b = 0; b < sel.bouts.size(); ++b) {
         if (sel.bouts[b].draw) continue;
         if (all[b].ruleConforms) {
             ++result.comparable;
             if (*all[b].ruleConforms) ++result.conforming;
         }
-        result.encounters.push_back(std::move(all[b]));
+        if (kept != b) all[kept] = std::move(all[b]);
+        ++kept;
     }
+    all.resize(kept);
+    result.encounters = std::move(all);
     result.ruleWinProbability = fitRuleWinProbability(result.conforming, result.comparable);
     const double p = result.ruleWinProbability.value_or(0.5);
     for (ForesightEncounter& e : result.encounters)
@@ -202,6 +210,20 @@ Foresight computeForesight(const Colony& colony, const ResidenceIndex& where, co
         result.rows.push_back({model, std::nullopt, scoreForesight(chances(nullptr))});
     }
     return result;
+}
+
+} // namespace
+
+Foresight computeForesight(const Colony& colony, const ResidenceIndex& where, const SelectionOptions& selection,
+                           const ForesightOptions& o)
+{
+    return foresightOf(selectEncounters(colony, where, selection), colony, where, selection, o);
+}
+
+Foresight computeForesight(const CompactEncounters& encounters, const Colony& pedigree, const ResidenceIndex& where,
+                           const SelectionOptions& selection, const ForesightOptions& o)
+{
+    return foresightOf(selectEncounters(encounters, pedigree.animals, where, selection), pedigree, where, selection, o);
 }
 
 } // namespace hierloom::core

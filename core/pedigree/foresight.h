@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
 #include "core/base/colony.h"
+#include "core/base/compact_encounters.h"
 #include "core/base/residence_index.h"
 #include "core/pedigree/inheritance_prediction.h"
 #include "core/ranks/elo_rating.h"
@@ -86,5 +87,8 @@ struct Foresight {
 /// cover the selection's encounters (draws update them, but are not scored).
 Foresight computeForesight(const Colony& colony, const ResidenceIndex& where, const SelectionOptions& selection,
                            const ForesightOptions& options);
+/// The same from compact records; `pedigree`'s animals are read, not its encounters.
+Foresight computeForesight(const CompactEncounters& encounters, const Colony& pedigree, const ResidenceIndex& where,
+                           const SelectionOptions& selection, const ForesightOptions& options);
 
 } // namespace hierloom::core

@@ -1,9 +1,9 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "core/pedigree/rank_acquisition.h"
 
+#include "core/pedigree/inheritance_prediction.h"
 #include "core/ranks/compact_selection.h"
 #include "core/ranks/encounter_selection.h"
-#include "core/pedigree/inheritance_prediction.h"
 #include "core/ranks/ordinal_ranks.h"
 
 #include <algorithm>
@@ -21,7 +21,7 @@ bool ranksAbove(double ra, double rb, const std::string& a, const std::string& b
     return ra > rb;
 }
 
-SelectionOptions selectionFor(const EloSettings& settings, const std::string& group, std::optional<Day> to)
+SelectionOptions acquisitionSelection(const EloSettings& settings, const std::string& group, std::optional<Day> to)
 {
     SelectionOptions s;
     s.group = group;
@@ -30,8 +30,9 @@ SelectionOptions selectionFor(const EloSettings& settings, const std::string& gr
     return s;
 }
 
-std::vector<SisterOvertaking> overtakings(const EncounterSelection& sel, const ResidenceIndex& where,
-                                          const Matrilines& lines, const EloSettings& settings)
+/// rankAcquisition of the selection acquisitionSelection made, from either form of the encounters.
+std::vector<SisterOvertaking> acquisitionOf(const EncounterSelection& sel, const ResidenceIndex& where,
+                                            const Matrilines& lines, const EloSettings& settings)
 {
     const std::vector<EloDay> history = eloDailyHistory(sel.size(), sel.bouts, sel.days, settings);
 
@@ -85,7 +86,8 @@ std::vector<SisterOvertaking> rankAcquisition(const Colony& colony, const Reside
                                               const Matrilines& lines, const EloSettings& settings,
                                               const std::string& group, std::optional<Day> to)
 {
-    return overtakings(selectEncounters(colony, where, selectionFor(settings, group, to)), where, lines, settings);
+    return acquisitionOf(selectEncounters(colony, where, acquisitionSelection(settings, group, to)), where, lines,
+                         settings);
 }
 
 std::vector<SisterOvertaking> rankAcquisition(const CompactEncounters& encounters, const std::vector<Animal>& animals,
@@ -93,8 +95,8 @@ std::vector<SisterOvertaking> rankAcquisition(const CompactEncounters& encounter
                                               const EloSettings& settings, const std::string& group,
                                               std::optional<Day> to)
 {
-    return overtakings(selectEncounters(encounters, animals, where, selectionFor(settings, group, to)), where, lines,
-                       settings);
+    return acquisitionOf(selectEncounters(encounters, animals, where, acquisitionSelection(settings, group, to)), where,
+                         lines, settings);
 }
 
 } // namespace hierloom::core

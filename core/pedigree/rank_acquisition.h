@@ -41,8 +41,7 @@ struct SisterOvertaking {
 std::vector<SisterOvertaking> rankAcquisition(const Colony& colony, const ResidenceIndex& where,
                                               const Matrilines& lines, const EloSettings& settings,
                                               const std::string& group = {}, std::optional<Day> to = std::nullopt);
-/// The same from compact records (core/base/compact_encounters.h): the same
-/// rows, as the selection is the same (selectEncounters).
+/// The same from compact records; `animals` is the colony's animal list.
 std::vector<SisterOvertaking> rankAcquisition(const CompactEncounters& encounters, const std::vector<Animal>& animals,
                                               const ResidenceIndex& where, const Matrilines& lines,
                                               const EloSettings& settings, const std::string& group = {},

@@ -1,8 +1,9 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "core/planning/scenario.h"
 
-#include "core/ranks/encounter_selection.h"
 #include "core/pedigree/matriline.h"
+#include "core/ranks/compact_selection.h"
+#include "core/ranks/encounter_selection.h"
 #include "core/base/residence_index.h"
 
 #include <algorithm>
@@ -69,13 +70,16 @@ void moveResidence(Colony& c, const std::string& id, Day at, const std::string& 
     }
 }
 
-Applied apply(const Colony& colony, const Scenario& s)
+/// The scenario's changes applied to a copy of `colony`, whose encounters
+/// (if it holds any) are copied but not read: `lastDay` is the date of the
+/// record's last encounter.
+Applied apply(const Colony& colony, std::optional<Day> lastDay, const Scenario& s)
 {
     Applied a;
     a.colony = colony;
     Colony& c = a.colony;
     auto problem = [&](int line, std::string message) { a.problems.push_back({line, std::move(message)}); };
-    const std::optional<Day> at = s.at ? s.at : lastEncounterDay(colony);
+    const std::optional<Day> at = s.at ? s.at : lastDay;
     if (!at) {
         problem(s.dateLine, "no date given and the colony has no encounters to take one from");
         return a;
@@ -227,20 +231,30 @@ Applied apply(const Colony& colony, const Scenario& s)
 
 std::vector<ScenarioProblem> checkScenario(const Colony& colony, const Scenario& scenario)
 {
-    return apply(colony, scenario).problems;
+    return apply(colony, lastEncounterDay(colony), scenario).problems;
+}
+
+std::vector<ScenarioProblem> checkScenario(const CompactEncounters& encounters, const Colony& pedigree,
+                                           const Scenario& scenario)
+{
+    return apply(pedigree, lastEncounterDay(encounters), scenario).problems;
 }
 
 Colony scenarioColony(const Colony& colony, const Scenario& s)
 {
-    Applied a = apply(colony, s);
+    Applied a = apply(colony, lastEncounterDay(colony), s);
     if (!a.problems.empty()) throw ScenarioError(std::move(a.problems));
     return std::move(a.colony);
 }
 
-ScenarioResult runScenario(const Colony& colony, const Scenario& s)
+namespace {
+
+/// runScenario of the changes applied to `colony` (whose animals and
+/// residences are read, not its encounters); `scoresAt(where, day, elo)` and
+/// `select(where, options)` read the encounters in either form.
+template <class ScoresAt, class Select>
+ScenarioResult resultOf(const Colony& colony, const Applied& a, const Scenario& s, ScoresAt scoresAt, Select select)
 {
-    Applied a = apply(colony, s);
-    if (!a.problems.empty()) throw ScenarioError(std::move(a.problems));
     ScenarioResult out;
     out.at = a.at;
     out.addedAnimals = a.added;
@@ -249,7 +263,7 @@ ScenarioResult runScenario(const Colony& colony, const Scenario& s)
     const ResidenceIndex where1(a.colony.animals, a.colony.residences);
     const Matrilines lines1(a.colony);
     // Observed standing from every encounter, so that moved lines carry their ratings.
-    const ObservedScores observed = eloScoresAt(colony, where0, a.at, {}, s.elo);
+    const ObservedScores observed = scoresAt(where0, a.at, s.elo);
 
     const std::vector<std::string> before = s.group.empty() ? groupsOn(where0, a.at) : std::vector<std::string>{s.group};
     std::vector<std::string> groups = before;
@@ -346,7 +360,7 @@ ScenarioResult runScenario(const Colony& colony, const Scenario& s)
     window.from = a.at - s.recentDays + 1;
     window.to = a.at;
     window.draws = DrawPolicy::Ignore;
-    const EncounterSelection sel = selectEncounters(colony, where0, window);
+    const EncounterSelection sel = select(where0, window);
     std::map<std::pair<std::string, std::string>, int> wins;
     for (const Bout& b : sel.bouts)
         if (!b.draw) ++wins[{sel.ids[static_cast<size_t>(b.winner)], sel.ids[static_cast<size_t>(b.loser)]}];
@@ -370,6 +384,32 @@ ScenarioResult runScenario(const Colony& colony, const Scenario& s)
         }
     }
     return out;
+}
+
+} // namespace
+
+ScenarioResult runScenario(const Colony& colony, const Scenario& s)
+{
+    Applied a = apply(colony, lastEncounterDay(colony), s);
+    if (!a.problems.empty()) throw ScenarioError(std::move(a.problems));
+    return resultOf(
+        colony, a, s,
+        [&](const ResidenceIndex& where, Day at, const EloSettings& elo) { return eloScoresAt(colony, where, at, {}, elo); },
+        [&](const ResidenceIndex& where, const SelectionOptions& o) { return selectEncounters(colony, where, o); });
+}
+
+ScenarioResult runScenario(const CompactEncounters& encounters, const Colony& pedigree, const Scenario& s)
+{
+    Applied a = apply(pedigree, lastEncounterDay(encounters), s);
+    if (!a.problems.empty()) throw ScenarioError(std::move(a.problems));
+    return resultOf(
+        pedigree, a, s,
+        [&](const ResidenceIndex& where, Day at, const EloSettings& elo) {
+            return eloScoresAt(encounters, pedigree.animals, where, at, {}, elo);
+        },
+        [&](const ResidenceIndex& where, const SelectionOptions& o) {
+            return selectEncounters(encounters, pedigree.animals, where, o);
+        });
 }
 
 } // namespace hierloom::core

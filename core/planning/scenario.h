@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
 #include "core/base/colony.h"
+#include "core/base/compact_encounters.h"
 #include "core/ranks/elo_rating.h"
 #include "core/pedigree/inheritance_prediction.h"
 
@@ -70,6 +71,9 @@ private:
 /// animals, a mother that is not female, ids already taken, a split naming a
 /// non-matriarch, a group that does not exist, a date with nothing to go on.
 std::vector<ScenarioProblem> checkScenario(const Colony& colony, const Scenario& scenario);
+/// The same against compact records and the pedigree (its encounters not read).
+std::vector<ScenarioProblem> checkScenario(const CompactEncounters& encounters, const Colony& pedigree,
+                                           const Scenario& scenario);
 
 /// One group's predicted order before and after the changes.
 struct ScenarioGroup {
@@ -116,6 +120,9 @@ struct ScenarioResult {
 /// each group's order before and after (docs/methods.md "Matrilineal rank prediction");
 /// nothing is written anywhere. Throws ScenarioError when checkScenario finds problems.
 ScenarioResult runScenario(const Colony& colony, const Scenario& scenario);
+/// The same from compact records (the desktop's, without expanding them);
+/// `pedigree`'s animals and residences are read, not its encounters.
+ScenarioResult runScenario(const CompactEncounters& encounters, const Colony& pedigree, const Scenario& scenario);
 
 /// The copy of the colony with the scenario's changes applied (as runScenario
 /// sees it), for figures beyond the predicted order such as group composition.

@@ -42,10 +42,9 @@ std::optional<int> wholeNumber(const std::string& s)
     return v;
 }
 
-} // namespace
-
-ScenarioFileResult parseScenarioText(std::string_view text, const std::string& file, const Colony& colony,
-                                     const Scenario& defaults)
+/// parseScenarioText with `check` finding the scenario's problems against the colony.
+template <class Check>
+ScenarioFileResult parseChecked(std::string_view text, const std::string& file, const Scenario& defaults, Check check)
 {
     ScenarioFileResult result;
     Scenario s = defaults;
@@ -164,9 +163,25 @@ ScenarioFileResult parseScenarioText(std::string_view text, const std::string& f
         }
     }
     if (!result.errors.empty()) return result;
-    for (const ScenarioProblem& p : checkScenario(colony, s)) error(p.line, p.message);
+    for (const ScenarioProblem& p : check(s)) error(p.line, p.message);
     if (result.errors.empty()) result.scenario = std::move(s);
     return result;
+}
+
+} // namespace
+
+ScenarioFileResult parseScenarioText(std::string_view text, const std::string& file, const Colony& colony,
+                                     const Scenario& defaults)
+{
+    return parseChecked(text, file, defaults, [&](const Scenario& s) { return checkScenario(colony, s); });
+}
+
+ScenarioFileResult parseScenarioText(std::string_view text, const std::string& file,
+                                     const CompactEncounters& encounters, const Colony& pedigree,
+                                     const Scenario& defaults)
+{
+    return parseChecked(text, file, defaults,
+                        [&](const Scenario& s) { return checkScenario(encounters, pedigree, s); });
 }
 
 std::string formatScenarioText(const Scenario& s)

@@ -24,6 +24,10 @@ struct ScenarioFileResult {
 /// normally the colony's analysis settings.
 ScenarioFileResult parseScenarioText(std::string_view text, const std::string& fileName, const Colony& colony,
                                      const Scenario& defaults = Scenario{});
+/// The same checked against compact records and the pedigree (its encounters not read).
+ScenarioFileResult parseScenarioText(std::string_view text, const std::string& fileName,
+                                     const CompactEncounters& encounters, const Colony& pedigree,
+                                     const Scenario& defaults = Scenario{});
 
 /// Writes a scenario in the format parseScenarioText reads (docs/scenario-files.md):
 /// every setting spelled out, then the changes in order, so that parsing the text

@@ -24,37 +24,93 @@ bool inWindow(const Encounter& e, std::optional<Day> from, Day to, const std::st
     return (!from || e.date >= *from) && e.date <= to && (group.empty() || e.group == group);
 }
 
+/// What data health reads of encounters held as a Colony's `Encounter`s:
+/// encounter i's fields, texts by reference.
+struct EncounterRows {
+    const std::vector<Encounter>& encounters;
+
+    size_t size() const { return encounters.size(); }
+    Day date(size_t i) const { return encounters[i].date; }
+    std::optional<int> time(size_t i) const { return encounters[i].time; }
+    std::int64_t seq(size_t i) const { return encounters[i].seq; }
+    bool draw(size_t i) const { return encounters[i].outcome == Outcome::Draw; }
+    const std::string& winner(size_t i) const { return encounters[i].winner; }
+    const std::string& loser(size_t i) const { return encounters[i].loser; }
+    const std::string& group(size_t i) const { return encounters[i].group; }
+    const std::string& observer(size_t i) const { return encounters[i].observer; }
+};
+
+/// The same fields of compact records, texts through their code tables.
+struct CompactRows {
+    const CompactEncounters& encounters;
+
+    size_t size() const { return encounters.records.size(); }
+    Day date(size_t i) const { return encounters.records[i].date; }
+    std::optional<int> time(size_t i) const
+    {
+        const int t = encounters.records[i].time;
+        return t < 0 ? std::nullopt : std::optional<int>(t);
+    }
+    std::int64_t seq(size_t i) const { return encounters.records[i].seq; }
+    bool draw(size_t i) const { return encounters.records[i].draw; }
+    const std::string& winner(size_t i) const { return encounters.animals.name(encounters.records[i].winner); }
+    const std::string& loser(size_t i) const { return encounters.animals.name(encounters.records[i].loser); }
+    const std::string& group(size_t i) const { return encounters.groups.name(encounters.records[i].group); }
+    const std::string& observer(size_t i) const { return encounters.observers.name(encounters.records[i].observer); }
+};
+
+template <class Rows> bool inWindow(const Rows& rows, size_t i, std::optional<Day> from, Day to, const std::string& group)
+{
+    const Day d = rows.date(i);
+    return (!from || d >= *from) && d <= to && (group.empty() || rows.group(i) == group);
+}
+
+/// encounterBefore (docs/methods.md) of two rows.
+template <class Rows> bool rowBefore(const Rows& rows, size_t a, size_t b)
+{
+    if (rows.date(a) != rows.date(b)) return rows.date(a) < rows.date(b);
+    const int ta = rows.time(a).value_or(24 * 60);
+    const int tb = rows.time(b).value_or(24 * 60);
+    if (ta != tb) return ta < tb;
+    return rows.seq(a) < rows.seq(b);
+}
+
 /// Direction of an encounter seen from its dyad (ids in byte order): 0 the
 /// first id won, 1 the second won, 2 a draw.
-int direction(const Encounter& e)
+template <class Rows> int direction(const Rows& rows, size_t i)
 {
-    if (e.outcome == Outcome::Draw) return 2;
-    return e.winner < e.loser ? 0 : 1;
+    if (rows.draw(i)) return 2;
+    return rows.winner(i) < rows.loser(i) ? 0 : 1;
 }
 
 /// The two ids of an encounter in byte order, viewed in place.
-std::pair<std::string_view, std::string_view> dyadOf(const Encounter& e)
+template <class Rows> std::pair<std::string_view, std::string_view> dyadOf(const Rows& rows, size_t i)
 {
-    return e.winner < e.loser ? std::make_pair(std::string_view(e.winner), std::string_view(e.loser))
-                              : std::make_pair(std::string_view(e.loser), std::string_view(e.winner));
+    const std::string& w = rows.winner(i);
+    const std::string& l = rows.loser(i);
+    return w < l ? std::make_pair(std::string_view(w), std::string_view(l))
+                 : std::make_pair(std::string_view(l), std::string_view(w));
 }
 
 /// Matches two observers' encounters of one group and day: same dyad, times
 /// at most `tolerance` minutes apart (closest first, then entry order); an
 /// encounter without a time matches one of the same dyad without a time.
-void matchDay(const std::vector<const Encounter*>& a, const std::vector<const Encounter*>& b, int tolerance,
+template <class Rows>
+void matchDay(const Rows& rows, const std::vector<size_t>& a, const std::vector<size_t>& b, int tolerance,
               ObserverAgreement& out, std::vector<std::vector<int>>& table)
 {
     std::vector<bool> used(b.size(), false);
     int matched = 0;
-    for (const Encounter* x : a) {
-        const auto dyad = dyadOf(*x);
+    for (const size_t x : a) {
+        const auto dyad = dyadOf(rows, x);
+        const std::optional<int> tx = rows.time(x);
         int best = -1;
         int bestGap = 0;
         for (size_t j = 0; j < b.size(); ++j) {
-            if (used[j] || dyadOf(*b[j]) != dyad) continue;
-            if (x->time.has_value() != b[j]->time.has_value()) continue;
-            const int gap = x->time ? std::abs(*x->time - *b[j]->time) : 0;
+            if (used[j] || dyadOf(rows, b[j]) != dyad) continue;
+            const std::optional<int> tb = rows.time(b[j]);
+            if (tx.has_value() != tb.has_value()) continue;
+            const int gap = tx ? std::abs(*tx - *tb) : 0;
             if (gap > tolerance) continue;
             if (best < 0 || gap < bestGap) {
                 best = static_cast<int>(j);
@@ -64,8 +120,8 @@ void matchDay(const std::vector<const Encounter*>& a, const std::vector<const En
         if (best < 0) continue;
         used[static_cast<size_t>(best)] = true;
         ++matched;
-        const int da = direction(*x);
-        const int db = direction(*b[static_cast<size_t>(best)]);
+        const int da = direction(rows, x);
+        const int db = direction(rows, b[static_cast<size_t>(best)]);
         ++table[static_cast<size_t>(da)][static_cast<size_t>(db)];
         if (da == db) ++out.agreeing;
     }
@@ -120,35 +176,37 @@ struct EffortTallies {
     std::vector<Tally> observers; ///< by interned observer
     std::map<std::pair<int, unsigned>, Tally> months;
 
-    void add(const Encounter& e)
+    template <class Rows> void add(const Rows& rows, size_t i)
     {
-        const CivilDate c = civilFromDay(e.date);
+        const Day date = rows.date(i);
+        const CivilDate c = civilFromDay(date);
         Tally& m = months[{c.year, c.month}];
         ++m.encounters;
-        m.days.push_back(e.date);
-        for (const std::string* id : {&e.winner, &e.loser}) {
+        m.days.push_back(date);
+        for (const std::string* id : {&rows.winner(i), &rows.loser(i)}) {
             const int a = animalIds.id(*id);
             if (a >= static_cast<int>(animals.size())) animals.resize(static_cast<size_t>(a) + 1);
             ++animals[static_cast<size_t>(a)].encounters;
-            animals[static_cast<size_t>(a)].days.push_back(e.date);
+            animals[static_cast<size_t>(a)].days.push_back(date);
             m.animals.push_back(a);
         }
-        const int o = observerIds.id(e.observer);
+        const int o = observerIds.id(rows.observer(i));
         if (o >= static_cast<int>(observers.size())) observers.resize(static_cast<size_t>(o) + 1);
         ++observers[static_cast<size_t>(o)].encounters;
-        observers[static_cast<size_t>(o)].days.push_back(e.date);
+        observers[static_cast<size_t>(o)].days.push_back(date);
     }
 };
 
 /// The last day each animal was seen, in any group, up to day `to`.
-std::unordered_map<std::string_view, Day> lastSeenBy(const Colony& colony, Day to)
+template <class Rows> std::unordered_map<std::string_view, Day> lastSeenBy(const Rows& rows, Day to)
 {
     std::unordered_map<std::string_view, Day> lastSeen;
-    for (const Encounter& e : colony.encounters) {
-        if (e.date > to) continue;
-        for (const std::string* id : {&e.winner, &e.loser}) {
-            auto [it, added] = lastSeen.try_emplace(*id, e.date);
-            if (!added && e.date > it->second) it->second = e.date;
+    for (size_t i = 0; i < rows.size(); ++i) {
+        const Day date = rows.date(i);
+        if (date > to) continue;
+        for (const std::string* id : {&rows.winner(i), &rows.loser(i)}) {
+            auto [it, added] = lastSeen.try_emplace(*id, date);
+            if (!added && date > it->second) it->second = date;
         }
     }
     return lastSeen;
@@ -156,13 +214,13 @@ std::unordered_map<std::string_view, Day> lastSeenBy(const Colony& colony, Day t
 
 /// The window's last day, else the file's last encounter day up to today
 /// (in any group: a group nobody recorded lately is unseen), else today.
-Day referenceDay(const Colony& colony, const HealthOptions& o, ReferenceDay& kind)
+template <class Rows> Day referenceDay(const Rows& rows, const HealthOptions& o, ReferenceDay& kind)
 {
     kind = ReferenceDay::WindowEnd;
     if (o.to) return *o.to;
     std::optional<Day> last;
-    for (const Encounter& e : colony.encounters)
-        if (e.date <= o.today && (!last || e.date > *last)) last = e.date;
+    for (size_t i = 0; i < rows.size(); ++i)
+        if (rows.date(i) <= o.today && (!last || rows.date(i) > *last)) last = rows.date(i);
     kind = last ? ReferenceDay::LastRecord : ReferenceDay::Today;
     return last.value_or(o.today);
 }
@@ -327,11 +385,16 @@ std::map<std::string, double> eloIntervalWidths(const Colony& colony, const Resi
     return eloIntervalWidths(eloIntervalSelection(colony, where, o), o, cancel);
 }
 
-DataHealth dataHealth(const Colony& colony, const ResidenceIndex& where, const HealthOptions& o,
-                      const std::atomic<bool>* cancel)
+namespace {
+
+/// Data health of `rows` (either form of the same encounters); `select`
+/// makes the randomised-Elo selection of the window from them.
+template <class Rows, class Select>
+DataHealth dataHealthOf(const Rows& rows, const std::vector<Animal>& colonyAnimals, const ResidenceIndex& where,
+                        const HealthOptions& o, Select select, const std::atomic<bool>* cancel)
 {
     DataHealth h;
-    h.reference = referenceDay(colony, o, h.referenceKind);
+    h.reference = referenceDay(rows, o, h.referenceKind);
     h.minEncounters = o.minEncounters;
     h.unseenDays = o.unseenDays;
     const Day to = h.reference;
@@ -339,8 +402,8 @@ DataHealth dataHealth(const Colony& colony, const ResidenceIndex& where, const H
 
     // Effort per animal, observer and month.
     EffortTallies effort;
-    for (const Encounter& e : colony.encounters)
-        if (inWindow(e, o.from, to, o.group)) effort.add(e);
+    for (size_t i = 0; i < rows.size(); ++i)
+        if (inWindow(rows, i, o.from, to, o.group)) effort.add(rows, i);
     std::map<std::string, AnimalEffort> animals;
     for (int a = 0; a < effort.animalIds.size(); ++a) {
         Tally& t = effort.animals[static_cast<size_t>(a)];
@@ -350,18 +413,19 @@ DataHealth dataHealth(const Colony& colony, const ResidenceIndex& where, const H
     }
     // Residents of the window without any encounter are listed too (with none).
     const Day windowStart = o.from.value_or(std::numeric_limits<int>::min() / 2);
-    for (const Animal& a : colony.animals) {
+    for (const Animal& a : colonyAnimals) {
         const int i = where.animal(a.id);
         if (!o.group.empty() && groupIndex < 0) break; // no such group: nobody resident in it
         if (i >= 0 && where.residentDuring(i, windowStart, to, groupIndex)) animals[a.id];
     }
     // The last time each animal was seen, in any group, up to the reference day.
-    const std::unordered_map<std::string_view, Day> lastSeen = lastSeenBy(colony, to);
+    const std::unordered_map<std::string_view, Day> lastSeen = lastSeenBy(rows, to);
 
     // Randomised-Elo interval widths over the window (docs/methods.md, "Randomised Elo").
     HealthOptions widthOptions = o;
     widthOptions.to = to;
-    const std::map<std::string, double> widths = eloIntervalWidths(colony, where, widthOptions, cancel);
+    std::map<std::string, double> widths;
+    if (widthOptions.randomisations > 0) widths = eloIntervalWidths(select(widthOptions), widthOptions, cancel);
     for (auto& [id, row] : animals) {
         row.animal = id;
         if (auto it = lastSeen.find(id); it != lastSeen.end()) row.lastSeen = it->second;
@@ -379,7 +443,7 @@ DataHealth dataHealth(const Colony& colony, const ResidenceIndex& where, const H
         h.months.push_back({ym.first, ym.second, m.encounters, Tally::distinct(m.days), Tally::distinct(m.animals)});
 
     // Residents on the reference day unseen for more than unseenDays days.
-    for (const Animal& a : colony.animals) {
+    for (const Animal& a : colonyAnimals) {
         const int i = where.animal(a.id);
         if (i < 0 || !where.presentOn(i, to)) continue;
         const int g = where.groupOn(i, to);
@@ -395,9 +459,10 @@ DataHealth dataHealth(const Colony& colony, const ResidenceIndex& where, const H
                      [](const UnseenAnimal& x, const UnseenAnimal& y) { return x.days > y.days; });
 
     // Observer agreement: group-days both observers recorded.
-    std::map<std::pair<std::string, Day>, std::map<std::string, std::vector<const Encounter*>>> byDay;
-    for (const Encounter& e : colony.encounters)
-        if (inWindow(e, o.from, to, o.group) && !e.observer.empty()) byDay[{e.group, e.date}][e.observer].push_back(&e);
+    std::map<std::pair<std::string, Day>, std::map<std::string, std::vector<size_t>>> byDay;
+    for (size_t i = 0; i < rows.size(); ++i)
+        if (inWindow(rows, i, o.from, to, o.group) && !rows.observer(i).empty())
+            byDay[{rows.group(i), rows.date(i)}][rows.observer(i)].push_back(i);
     std::map<std::pair<std::string, std::string>, std::pair<ObserverAgreement, std::vector<std::vector<int>>>> pairs;
     for (auto& [day, perObserver] : byDay) {
         for (auto a = perObserver.begin(); a != perObserver.end(); ++a) {
@@ -408,10 +473,9 @@ DataHealth dataHealth(const Colony& colony, const ResidenceIndex& where, const H
                 agreement.second = b->first;
                 ++agreement.sharedDays;
                 for (auto* list : {&a->second, &b->second})
-                    std::stable_sort(list->begin(), list->end(), [](const Encounter* x, const Encounter* y) {
-                        return encounterBefore(*x, *y);
-                    });
-                matchDay(a->second, b->second, o.matchMinutes, agreement, table);
+                    std::stable_sort(list->begin(), list->end(),
+                                     [&rows](size_t x, size_t y) { return rowBefore(rows, x, y); });
+                matchDay(rows, a->second, b->second, o.matchMinutes, agreement, table);
             }
         }
     }
@@ -422,6 +486,24 @@ DataHealth dataHealth(const Colony& colony, const ResidenceIndex& where, const H
         h.agreement.push_back(a);
     }
     return h;
+}
+
+} // namespace
+
+DataHealth dataHealth(const Colony& colony, const ResidenceIndex& where, const HealthOptions& o,
+                      const std::atomic<bool>* cancel)
+{
+    return dataHealthOf(
+        EncounterRows{colony.encounters}, colony.animals, where, o,
+        [&](const HealthOptions& w) { return eloIntervalSelection(colony, where, w); }, cancel);
+}
+
+DataHealth dataHealth(const CompactEncounters& encounters, const std::vector<Animal>& animals,
+                      const ResidenceIndex& where, const HealthOptions& o, const std::atomic<bool>* cancel)
+{
+    return dataHealthOf(
+        CompactRows{encounters}, animals, where, o,
+        [&](const HealthOptions& w) { return eloIntervalSelection(encounters, animals, where, w); }, cancel);
 }
 
 } // namespace hierloom::core

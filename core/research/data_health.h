@@ -112,6 +112,11 @@ struct DataHealth {
 /// `cancel` (a view's worker): the interval widths stop early and are left empty.
 DataHealth dataHealth(const Colony& colony, const ResidenceIndex& where, const HealthOptions& options,
                       const std::atomic<bool>* cancel = nullptr);
+/// The same from compact records (the desktop's, without expanding them);
+/// `animals` is the colony's animal list.
+DataHealth dataHealth(const CompactEncounters& encounters, const std::vector<Animal>& animals,
+                      const ResidenceIndex& where, const HealthOptions& options,
+                      const std::atomic<bool>* cancel = nullptr);
 
 /// The one rule of the flag (docs/methods.md, "Data health"): an animal with
 /// fewer than `minEncounters` encounters in the window has a rank resting on

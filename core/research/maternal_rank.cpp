@@ -2,6 +2,7 @@
 #include "core/research/maternal_rank.h"
 
 #include "core/base/display_names.h"
+#include "core/ranks/compact_selection.h"
 #include "core/ranks/encounter_selection.h"
 #include "core/ranks/ordinal_ranks.h"
 
@@ -48,6 +49,23 @@ std::optional<Day> firstEncounterDay(const Colony& colony)
     return first;
 }
 
+std::optional<Day> firstEncounterDay(const CompactEncounters& encounters)
+{
+    std::optional<Day> first;
+    for (const CompactEncounter& e : encounters.records)
+        if (!first || e.date < *first) first = e.date;
+    return first;
+}
+
+/// The selection the mothers' Elo runs over: the whole record (in the group, if any).
+SelectionOptions maternalSelection(const MaternalRankOptions& o)
+{
+    SelectionOptions all;
+    all.group = o.group;
+    all.draws = o.elo.draws;
+    return all;
+}
+
 /// In the window and (with a group) the group: the offspring, else its mother, there on the birth day.
 bool inBirthSelection(const Animal& a, const ResidenceIndex& where, const MaternalRankOptions& o, int group)
 {
@@ -81,12 +99,16 @@ std::string notResidentDetail(const std::string& mother, const ResidenceIndex& w
 
 } // namespace
 
-BirthCounting countNonBirths(const Colony& colony, const ResidenceIndex& where, const MaternalRankOptions& o)
+namespace {
+
+/// countNonBirths with the record's first encounter day given.
+BirthCounting nonBirthsOf(const std::vector<Animal>& animals, std::optional<Day> recordStart,
+                          const ResidenceIndex& where, const MaternalRankOptions& o)
 {
     BirthCounting c;
-    c.recordStart = firstEncounterDay(colony);
+    c.recordStart = recordStart;
     const int group = o.group.empty() ? -1 : where.group(o.group);
-    for (const Animal& a : colony.animals) {
+    for (const Animal& a : animals) {
         if (!a.birth || !inBirthSelection(a, where, o, group)) continue;
         if (a.entryType == EntryType::Founder) ++c.founders;
         else if (c.recordStart && *a.birth < *c.recordStart) ++c.bornBefore;
@@ -94,12 +116,15 @@ BirthCounting countNonBirths(const Colony& colony, const ResidenceIndex& where, 
     return c;
 }
 
-std::vector<MaternalRankRow> computeMaternalRanks(const Colony& colony, const ResidenceIndex& where,
-                                                  const MaternalRankOptions& o)
+/// computeMaternalRanks of the selection maternalSelection(o) made from the
+/// colony's encounters in either form; `colony`'s animals are read, not its
+/// encounters.
+std::vector<MaternalRankRow> maternalRanksOf(const Colony& colony, std::optional<Day> recordStart,
+                                             const EncounterSelection& sel, const ResidenceIndex& where,
+                                             const MaternalRankOptions& o)
 {
     const int group = o.group.empty() ? -1 : where.group(o.group);
     std::vector<MaternalRankRow> rows;
-    const std::optional<Day> recordStart = firstEncounterDay(colony);
     for (const Animal& a : colony.animals) {
         if (!a.birth) continue; // without a birth date there is no birth to place in time
         // Founders and animals born before the record began are not births of the record.
@@ -120,10 +145,6 @@ std::vector<MaternalRankRow> computeMaternalRanks(const Colony& colony, const Re
 
     // Elo over the whole record (in the group, if any), read once at every
     // day some mother is ranked on: one pass through the encounters.
-    SelectionOptions all;
-    all.group = o.group;
-    all.draws = o.elo.draws;
-    const EncounterSelection sel = selectEncounters(colony, where, all);
     std::map<Day, size_t> dayIndex;
     for (const MaternalRankRow& r : rows) {
         if (r.mother.empty()) continue;
@@ -196,6 +217,33 @@ std::vector<MaternalRankRow> computeMaternalRanks(const Colony& colony, const Re
         }
     }
     return rows;
+}
+
+} // namespace
+
+BirthCounting countNonBirths(const Colony& colony, const ResidenceIndex& where, const MaternalRankOptions& o)
+{
+    return nonBirthsOf(colony.animals, firstEncounterDay(colony), where, o);
+}
+
+BirthCounting countNonBirths(const CompactEncounters& encounters, const Colony& pedigree, const ResidenceIndex& where,
+                             const MaternalRankOptions& o)
+{
+    return nonBirthsOf(pedigree.animals, firstEncounterDay(encounters), where, o);
+}
+
+std::vector<MaternalRankRow> computeMaternalRanks(const Colony& colony, const ResidenceIndex& where,
+                                                  const MaternalRankOptions& o)
+{
+    return maternalRanksOf(colony, firstEncounterDay(colony), selectEncounters(colony, where, maternalSelection(o)),
+                           where, o);
+}
+
+std::vector<MaternalRankRow> computeMaternalRanks(const CompactEncounters& encounters, const Colony& pedigree,
+                                                  const ResidenceIndex& where, const MaternalRankOptions& o)
+{
+    return maternalRanksOf(pedigree, firstEncounterDay(encounters),
+                           selectEncounters(encounters, pedigree.animals, where, maternalSelection(o)), where, o);
 }
 
 } // namespace hierloom::core

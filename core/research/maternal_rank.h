@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
 #include "core/base/colony.h"
+#include "core/base/compact_encounters.h"
 #include "core/ranks/analysis_settings.h"
 #include "core/ranks/elo_rating.h"
 #include "core/base/residence_index.h"
@@ -88,5 +89,12 @@ std::vector<MaternalRankRow> computeMaternalRanks(const Colony& colony, const Re
 /// The record's start and the animals of the window (and group) that
 /// computeMaternalRanks does not count as births.
 BirthCounting countNonBirths(const Colony& colony, const ResidenceIndex& where, const MaternalRankOptions& options);
+
+/// The same two from compact records (the desktop's, without expanding
+/// them); `pedigree`'s animals are read, not its encounters.
+std::vector<MaternalRankRow> computeMaternalRanks(const CompactEncounters& encounters, const Colony& pedigree,
+                                                  const ResidenceIndex& where, const MaternalRankOptions& options);
+BirthCounting countNonBirths(const CompactEncounters& encounters, const Colony& pedigree, const ResidenceIndex& where,
+                             const MaternalRankOptions& options);
 
 } // namespace hierloom::core

@@ -3,6 +3,7 @@
 
 #include "core/pedigree/rank_acquisition.h"
 #include "core/pedigree/relatedness.h"
+#include "core/ranks/compact_selection.h"
 #include "core/ranks/elo_rating.h"
 #include "core/ranks/encounter_selection.h"
 #include "core/ranks/parallel_randomisation.h"
@@ -55,7 +56,8 @@ size_t drawBelow(RandomEngine& engine, size_t k)
 
 /// One encounter of the window as the analysis needs it (colony animal indices).
 struct Fight {
-    const Encounter* e = nullptr;
+    Day date = 0;
+    const std::string* group = nullptr; ///< as recorded ("" for none)
     int winner = -1;
     int loser = -1;
     const std::vector<int>* candidates = nullptr; // present in the group that day, participants included
@@ -81,12 +83,13 @@ std::optional<double> indexOf(long long highGiven, long long highOpp, long long 
 /// without a run from the first encounter for every date asked.
 class DailyScores {
 public:
-    DailyScores(const Colony& colony, const ResidenceIndex& where, const std::string& group, const EloSettings& elo)
+    /// `select` makes the selection of given options from the colony's encounters.
+    template <class Select> DailyScores(Select select, const std::string& group, const EloSettings& elo)
     {
         SelectionOptions s;
         s.group = group;
         s.draws = elo.draws;
-        selection_ = selectEncounters(colony, where, s);
+        selection_ = select(s);
         history_ = eloDailyHistory(selection_.size(), selection_.bouts, selection_.days, elo);
     }
 
@@ -108,9 +111,78 @@ private:
     std::vector<EloDay> history_;
 };
 
-} // namespace
+/// What the analysis reads of a Colony's encounters: encounter k's fields
+/// (texts by reference), its supporters, and the analyses of core it runs
+/// on them.
+struct ColonyEncounters {
+    const Colony& colony;
+    const ResidenceIndex& where;
 
-SupportAnalysis analyseSupport(const Colony& colony, const ResidenceIndex& where, const SupportOptions& options)
+    std::vector<size_t> order() const { return chronologicalOrder(colony.encounters); }
+    Day date(size_t k) const { return colony.encounters[k].date; }
+    const std::string& group(size_t k) const { return colony.encounters[k].group; }
+    const std::string& winner(size_t k) const { return colony.encounters[k].winner; }
+    const std::string& loser(size_t k) const { return colony.encounters[k].loser; }
+    /// Calls fn(id) for each supporter of one side, in the order recorded.
+    template <class Fn> void forSupporters(size_t k, SupportSide side, Fn fn) const
+    {
+        const Encounter& e = colony.encounters[k];
+        for (const std::string& id : side == SupportSide::Winner ? e.winnerSupport : e.loserSupport) fn(id);
+    }
+    EncounterSelection select(const SelectionOptions& s) const { return selectEncounters(colony, where, s); }
+    std::optional<Day> lastDay() const { return lastEncounterDay(colony); }
+    std::vector<SisterOvertaking> acquisition(const Matrilines& lines, const EloSettings& elo, const std::string& group,
+                                              std::optional<Day> to) const
+    {
+        return rankAcquisition(colony, where, lines, elo, group, to);
+    }
+    ObservedScores scoresAt(Day d, const std::string& group, const EloSettings& elo) const
+    {
+        return eloScoresAt(colony, where, d, group, elo);
+    }
+};
+
+/// The same of compact records, texts through their code tables.
+struct CompactRecords {
+    const CompactEncounters& encounters;
+    const std::vector<Animal>& animals;
+    const ResidenceIndex& where;
+
+    std::vector<size_t> order() const
+    {
+        const std::vector<std::uint32_t> o = analysisOrder(encounters.records);
+        return {o.begin(), o.end()};
+    }
+    Day date(size_t k) const { return encounters.records[k].date; }
+    const std::string& group(size_t k) const { return encounters.groups.name(encounters.records[k].group); }
+    const std::string& winner(size_t k) const { return encounters.animals.name(encounters.records[k].winner); }
+    const std::string& loser(size_t k) const { return encounters.animals.name(encounters.records[k].loser); }
+    template <class Fn> void forSupporters(size_t k, SupportSide side, Fn fn) const
+    {
+        const auto& all = encounters.supporters;
+        auto at = std::lower_bound(all.begin(), all.end(), k,
+                                   [](const CompactSupport& s, size_t index) { return s.encounter < index; });
+        for (; at != all.end() && at->encounter == k; ++at)
+            if (at->side == side) fn(encounters.animals.name(at->animal));
+    }
+    EncounterSelection select(const SelectionOptions& s) const { return selectEncounters(encounters, animals, where, s); }
+    std::optional<Day> lastDay() const { return lastEncounterDay(encounters); }
+    std::vector<SisterOvertaking> acquisition(const Matrilines& lines, const EloSettings& elo, const std::string& group,
+                                              std::optional<Day> to) const
+    {
+        return rankAcquisition(encounters, animals, where, lines, elo, group, to);
+    }
+    ObservedScores scoresAt(Day d, const std::string& group, const EloSettings& elo) const
+    {
+        return eloScoresAt(encounters, animals, where, d, group, elo);
+    }
+};
+
+/// The analysis of the encounters `source` reads (either form); `colony`'s
+/// animals and pedigree are read, not its encounters.
+template <class Source>
+SupportAnalysis supportOf(const Source& source, const Colony& colony, const ResidenceIndex& where,
+                          const SupportOptions& options)
 {
     SupportAnalysis out;
     const int n = static_cast<int>(colony.animals.size());
@@ -120,25 +192,34 @@ SupportAnalysis analyseSupport(const Colony& colony, const ResidenceIndex& where
 
     // The window's encounters and, per day and group, who was there.
     std::map<std::pair<Day, int>, std::vector<int>> present;
+    const auto inWindow = [&](size_t k) {
+        const Day date = source.date(k);
+        return (!options.from || date >= *options.from) && (!options.to || date <= *options.to) &&
+               (options.group.empty() || source.group(k) == options.group);
+    };
+    const std::vector<size_t> order = source.order();
+    // Room for every encounter of the window at once (millions on a centre:
+    // growing by doubling would hold two lists for a while).
     std::vector<Fight> fights;
-    for (size_t k : chronologicalOrder(colony.encounters)) {
-        const Encounter& e = colony.encounters[k];
-        if (options.from && e.date < *options.from) continue;
-        if (options.to && e.date > *options.to) continue;
-        if (!options.group.empty() && e.group != options.group) continue;
+    fights.reserve(static_cast<size_t>(std::count_if(order.begin(), order.end(), inWindow)));
+    for (size_t k : order) {
+        if (!inWindow(k)) continue;
+        const Day date = source.date(k);
+        const std::string& group = source.group(k);
         Fight f;
-        f.e = &e;
-        f.winner = colony.animalIndex(e.winner);
-        f.loser = colony.animalIndex(e.loser);
+        f.date = date;
+        f.group = &group;
+        f.winner = colony.animalIndex(source.winner(k));
+        f.loser = colony.animalIndex(source.loser(k));
         if (f.winner < 0 || f.loser < 0) continue;
         const int wr = residenceOf[static_cast<size_t>(f.winner)];
-        const int g = e.group.empty() ? where.groupOn(wr, e.date) : where.group(e.group);
+        const int g = group.empty() ? where.groupOn(wr, date) : where.group(group);
         if (g < 0) continue;
-        auto [at, fresh] = present.try_emplace({e.date, g});
+        auto [at, fresh] = present.try_emplace({date, g});
         if (fresh)
             for (int i = 0; i < n; ++i) {
                 const int ri = residenceOf[static_cast<size_t>(i)];
-                if (ri >= 0 && where.presentOn(ri, e.date) && where.groupOn(ri, e.date) == g) at->second.push_back(i);
+                if (ri >= 0 && where.presentOn(ri, date) && where.groupOn(ri, date) == g) at->second.push_back(i);
             }
         f.candidates = &at->second;
         // Supporters the rules would refuse (absent that day, a participant) are left out.
@@ -146,10 +227,12 @@ SupportAnalysis analyseSupport(const Colony& colony, const ResidenceIndex& where
             return s >= 0 && s != f.winner && s != f.loser &&
                    std::find(at->second.begin(), at->second.end(), s) != at->second.end();
         };
-        for (const std::string& id : e.winnerSupport)
+        source.forSupporters(k, SupportSide::Winner, [&](const std::string& id) {
             if (const int s = colony.animalIndex(id); eligible(s)) f.winnerSide.push_back(s);
-        for (const std::string& id : e.loserSupport)
+        });
+        source.forSupporters(k, SupportSide::Loser, [&](const std::string& id) {
             if (const int s = colony.animalIndex(id); eligible(s)) f.loserSide.push_back(s);
+        });
         out.acts += static_cast<int>(f.winnerSide.size() + f.loserSide.size());
         fights.push_back(std::move(f));
     }
@@ -269,14 +352,17 @@ SupportAnalysis analyseSupport(const Colony& colony, const ResidenceIndex& where
             const int mother = motherOf(daughter);
             if (mother < 0 || !isFemale(daughter) || !isFemale(opponent)) continue;
             if (std::find(helpers.begin(), helpers.end(), mother) == helpers.end()) continue;
-            auto [at, fresh] = predictions.try_emplace({f.e->date, f.e->group});
+            auto [at, fresh] = predictions.try_emplace({f.date, *f.group});
             if (fresh) {
                 // predictInheritance at that date and group, with one Elo pass per group.
-                auto scores = scoresOf.find(f.e->group);
+                auto scores = scoresOf.find(*f.group);
                 if (scores == scoresOf.end())
-                    scores = scoresOf.try_emplace(f.e->group, colony, where, f.e->group, options.elo).first;
-                const RankedFemales ranked = rankedFemalesOn(lines, where, f.e->date, f.e->group, options.maturityYears);
-                at->second = predictOrder(lines, ranked, scores->second.on(f.e->date), options.rule);
+                    scores = scoresOf
+                                 .try_emplace(*f.group, [&](const SelectionOptions& s) { return source.select(s); },
+                                              *f.group, options.elo)
+                                 .first;
+                const RankedFemales ranked = rankedFemalesOn(lines, where, f.date, *f.group, options.maturityYears);
+                at->second = predictOrder(lines, ranked, scores->second.on(f.date), options.rule);
             }
             const int pd = at->second.find(colony.animals[static_cast<size_t>(daughter)].id);
             const int po = at->second.find(colony.animals[static_cast<size_t>(opponent)].id);
@@ -289,10 +375,10 @@ SupportAnalysis analyseSupport(const Colony& colony, const ResidenceIndex& where
 
     // Daughters: the day they had risen above every older sister, and their mothers' support before it.
     std::optional<Day> end = options.to;
-    if (!end) end = lastEncounterDay(colony);
+    if (!end) end = source.lastDay();
     if (end) {
         std::map<std::string, DaughterSupport> byDaughter;
-        for (const SisterOvertaking& o : rankAcquisition(colony, where, lines, options.elo, options.group, end)) {
+        for (const SisterOvertaking& o : source.acquisition(lines, options.elo, options.group, end)) {
             auto [at, fresh] = byDaughter.try_emplace(o.daughter);
             DaughterSupport& d = at->second;
             if (fresh) {
@@ -308,7 +394,7 @@ SupportAnalysis analyseSupport(const Colony& colony, const ResidenceIndex& where
             const int mother = colony.animalIndex(d.mother);
             if (daughter < 0 || mother < 0) continue;
             for (const Fight& f : fights) {
-                if (d.reached && f.e->date > *d.reached) break;
+                if (d.reached && f.date > *d.reached) break;
                 if (f.winner != daughter && f.loser != daughter) continue;
                 if (mother == f.winner || mother == f.loser) continue;
                 const std::vector<int>& pool = *f.candidates;
@@ -323,7 +409,7 @@ SupportAnalysis analyseSupport(const Colony& colony, const ResidenceIndex& where
 
     // Rank order of the support matrix: Elo at the window's end.
     ObservedScores scores;
-    if (end) scores = eloScoresAt(colony, where, *end, options.group, options.elo);
+    if (end) scores = source.scoresAt(*end, options.group, options.elo);
     for (int i = 0; i < n; ++i)
         if (inPairs[static_cast<size_t>(i)]) out.order.push_back(colony.animals[static_cast<size_t>(i)].id);
     std::sort(out.order.begin(), out.order.end(), [&](const std::string& x, const std::string& y) {
@@ -336,6 +422,19 @@ SupportAnalysis analyseSupport(const Colony& colony, const ResidenceIndex& where
     });
     for (const std::string& id : out.order) out.matriarchs.push_back(lines.id(lines.matriarch(lines.index(id))));
     return out;
+}
+
+} // namespace
+
+SupportAnalysis analyseSupport(const Colony& colony, const ResidenceIndex& where, const SupportOptions& options)
+{
+    return supportOf(ColonyEncounters{colony, where}, colony, where, options);
+}
+
+SupportAnalysis analyseSupport(const CompactEncounters& encounters, const Colony& pedigree, const ResidenceIndex& where,
+                               const SupportOptions& options)
+{
+    return supportOf(CompactRecords{encounters, pedigree.animals, where}, pedigree, where, options);
 }
 
 } // namespace hierloom::core

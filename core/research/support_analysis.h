@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
 #include "core/base/colony.h"
+#include "core/base/compact_encounters.h"
 #include "core/base/residence_index.h"
 #include "core/pedigree/inheritance_prediction.h"
 #include "core/pedigree/matriline.h"
@@ -96,5 +97,9 @@ struct SupportOptions {
 /// permutation test, mothers against the rule, daughters' rank acquisition
 /// with their mothers' support, and the rank order for the support matrix.
 SupportAnalysis analyseSupport(const Colony& colony, const ResidenceIndex& where, const SupportOptions& options);
+/// The same from compact records (the desktop's, without expanding them);
+/// `pedigree`'s animals are read, not its encounters.
+SupportAnalysis analyseSupport(const CompactEncounters& encounters, const Colony& pedigree, const ResidenceIndex& where,
+                               const SupportOptions& options);
 
 } // namespace hierloom::core

@@ -19,6 +19,7 @@
 #include "ui/document/qt_convert.h"
 #include "ui/entry/encounter_entry_panel.h"
 #include "ui/shell/main_window.h"
+#include "measure_support.h"
 
 #include <QApplication>
 #include <QComboBox>
@@ -32,7 +33,6 @@
 
 #include <algorithm>
 #include <cstdio>
-#include <fstream>
 #include <limits>
 #include <string>
 #include <vector>
@@ -41,17 +41,8 @@ using namespace hierloom;
 
 namespace {
 
-// VmHWM (peak) or VmRSS (now) of this process in MiB, from /proc/self/status.
-double memoryMiB(const std::string& field)
-{
-    std::ifstream status("/proc/self/status");
-    std::string line;
-    while (std::getline(status, line))
-        if (line.rfind(field + ":", 0) == 0) return std::stod(line.substr(field.size() + 1)) / 1024.0;
-    return -1;
-}
-
-double ms(const QElapsedTimer& t) { return static_cast<double>(t.nsecsElapsed()) / 1e6; }
+using measure::memoryMiB;
+using measure::ms;
 
 // Runs the events until `done` or 120 s.
 template <class Done> void runUntil(Done done)

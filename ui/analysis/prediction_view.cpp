@@ -252,13 +252,17 @@ void PredictionView::recompute()
     const ColonyDocument::Snapshot snapshot = document_->snapshot();
     runner_->start([this, snapshot = snapshot, options, foresightOptions, record](const std::atomic<bool>& cancel,
                                                                      const ComputeRunner::Progress& progress) mutable {
-        // Every group (the prediction and the record's foresight span the colony).
-        const auto colony = std::make_shared<const core::Colony>(snapshot.colonyFor({}));
-        snapshot.encounters.reset(); // an edit meanwhile need not copy the document's records
+        // Every group (the prediction and the record's foresight span the
+        // colony), read from the shared compact records without expanding them.
+        const std::shared_ptr<const core::CompactEncounters> records = snapshot.takeScope({});
+        // The animals with an index of this thread's own (the pedigree has no encounters).
+        const auto colony = std::make_shared<core::Colony>(*snapshot.pedigree);
+        colony->reindex();
         const core::ResidenceIndex* where = snapshot.residences.get();
         const core::Matrilines lines(*colony);
         progress(0, 3);
-        auto p = std::make_shared<core::InheritancePrediction>(core::predictInheritance(*colony, *where, lines, options));
+        auto p = std::make_shared<core::InheritancePrediction>(
+            core::predictInheritance(*records, colony->animals, *where, lines, options));
         if (cancel) return ComputeRunner::Apply();
         progress(1, 3);
         auto s = std::make_shared<core::DiscordanceSummary>(core::summariseDiscordance(lines, *p));
@@ -279,7 +283,7 @@ void PredictionView::recompute()
         }
         if (cancel) return ComputeRunner::Apply();
         progress(2, 3);
-        auto f = std::make_shared<core::Foresight>(core::computeForesight(*colony, *where, record, foresightOptions));
+        auto f = std::make_shared<core::Foresight>(core::computeForesight(*records, *colony, *where, record, foresightOptions));
         progress(3, 3);
         return ComputeRunner::Apply([this, p, s, palette, names, lineNames, f] {
             lineNames_ = *lineNames;
@@ -330,6 +334,10 @@ void PredictionView::adopt(core::InheritancePrediction prediction, core::Discord
 void PredictionView::adoptForesight(core::Foresight foresight)
 {
     foresight_ = std::move(foresight);
+    // The view shows the scores and the counts, not each encounter: the list
+    // (every decided encounter of a centre, hundreds of MB) is let go.
+    decidedEncounters_ = foresight_.encounters.size();
+    foresight_.encounters = {};
     static const QColor colours[] = {QColor(0xE6, 0x9F, 0x00), QColor(0x00, 0x72, 0xB2), QColor(0x00, 0x9E, 0x73)};
     auto modelName = [](core::ForesightModel m) {
         switch (m) {
@@ -381,7 +389,7 @@ void PredictionView::adoptForesight(core::Foresight foresight)
     foresightPlot_->xAxis->setNumberFormat(QStringLiteral("f"));
     foresightPlot_->xAxis->setNumberPrecision(0);
     foresightPlot_->replot(QCustomPlot::rpQueuedReplot);
-    if (foresight_.encounters.empty()) {
+    if (decidedEncounters_ == 0) {
         foresightLabel_->setText(tr("No decided encounters."));
         return;
     }
@@ -391,7 +399,7 @@ void PredictionView::adoptForesight(core::Foresight foresight)
            "A coin scores %5 per encounter and a Brier score of 0.25.")
             .arg(toQString(core::toString(foresight_.rule)))
             .arg(foresight_.comparable)
-            .arg(foresight_.encounters.size())
+            .arg(decidedEncounters_)
             .arg(foresight_.ruleWinProbability ? QString::number(*foresight_.ruleWinProbability * 100, 'f', 1) +
                                                      QStringLiteral("%")
                                                : tr("none"))

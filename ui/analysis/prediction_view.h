@@ -46,6 +46,7 @@ public:
     QTableWidget* dyadTable() const { return dyads_; }
     QTableWidget* foresightTable() const { return foresightTable_; }
     QCustomPlot* foresightPlot() const { return foresightPlot_; }
+    /// The foresight shown; its per-encounter list is not kept.
     const core::Foresight& foresight() const { return foresight_; }
     const core::InheritancePrediction& prediction() const { return prediction_; }
     const core::DiscordanceSummary& summary() const { return summary_; }
@@ -97,7 +98,8 @@ private:
     core::SiblingRule rule_ = core::SiblingRule::Youngest;
     core::InheritancePrediction prediction_;
     core::DiscordanceSummary summary_;
-    core::Foresight foresight_;
+    core::Foresight foresight_; ///< without its per-encounter list (decidedEncounters_ counts it)
+    size_t decidedEncounters_ = 0;
     MatrilinePalette palette_;
     std::vector<std::string> names_; ///< display name of each female of prediction_
     std::map<std::string, std::string> lineNames_; ///< matriarch id -> name

@@ -244,7 +244,7 @@ PlotFigure SexRatioView::figure()
     f.caption = [this] {
         // Every group's encounters: the record begins with the file's first encounter, in any group.
         const core::BirthCounting counting = core::countNonBirths(
-            document_->colonyFor({}), document_->residences(),
+            document_->encounters().compact(), document_->pedigree(), document_->residences(),
             documentMaternalOptions(toStdString(group_->currentData().toString()), gestation_->value(),
                                     maturity_->value(), documentAnalysisSettings(document_).elo));
         return caption::join(
@@ -330,8 +330,9 @@ void SexRatioView::recompute()
     // A large file read group by group: reading this group announces a change,
     // which has recomputed this view (or marked it stale) already.
     if (document_->holdGroup(group_->currentData().toString())) return;
+    // Every group's encounters, read from the document's compact records.
     births_ = core::computeMaternalRanks(
-        document_->colonyFor({}), document_->residences(),
+        document_->encounters().compact(), document_->pedigree(), document_->residences(),
         documentMaternalOptions(toStdString(group_->currentData().toString()), gestation_->value(), maturity_->value(),
                                 documentAnalysisSettings(document_).elo));
     analysis_ = core::analyseSexRatio(births_);
@@ -376,7 +377,7 @@ void SexRatioView::recompute()
     else {
         // Every group's encounters: the record begins with the file's first encounter, in any group.
         const core::BirthCounting counting = core::countNonBirths(
-            document_->colonyFor({}), document_->residences(),
+            document_->encounters().compact(), document_->pedigree(), document_->residences(),
             documentMaternalOptions(toStdString(group_->currentData().toString()), gestation_->value(),
                                     maturity_->value(), documentAnalysisSettings(document_).elo));
         if (counting.recordStart)

@@ -193,10 +193,14 @@ void SupportView::recompute()
     const ColonyDocument::Snapshot snapshot = document_->snapshot();
     runner_->start([this, snapshot = snapshot, o](const std::atomic<bool>& cancel, const ComputeRunner::Progress&) mutable {
         auto r = std::make_shared<Result>();
-        // Every group's encounters: with no end date the window ends on the file's last encounter, in any group.
-        const core::Colony colony = snapshot.colonyFor({});
-        snapshot.encounters.reset(); // an edit meanwhile need not copy the document's records
-        r->analysis = core::analyseSupport(colony, *snapshot.residences, o);
+        // Every group's encounters (with no end date the window ends on the
+        // file's last encounter, in any group), read from the shared compact
+        // records without expanding them; the animals with an index of this
+        // thread's own.
+        const std::shared_ptr<const core::CompactEncounters> records = snapshot.takeScope({});
+        core::Colony pedigree = *snapshot.pedigree;
+        pedigree.reindex();
+        r->analysis = core::analyseSupport(*records, pedigree, *snapshot.residences, o);
         if (cancel) return ComputeRunner::Apply();
         r->pairs = core::supportPairsTable(r->analysis);
         r->daughters = core::supportDaughtersTable(r->analysis);

@@ -192,10 +192,11 @@ void HealthView::recompute()
     // The randomised-Elo widths take a while on a long record: off the interface thread.
     const ColonyDocument::Snapshot snapshot = document_->snapshot();
     runner_->start([this, snapshot = snapshot, o](const std::atomic<bool>& cancel, const ComputeRunner::Progress&) mutable {
-        // Every group's encounters: an animal's last sighting counts in any group.
-        const core::Colony colony = snapshot.colonyFor({});
-        snapshot.encounters.reset(); // an edit meanwhile need not copy the document's records
-        auto health = std::make_shared<core::DataHealth>(core::dataHealth(colony, *snapshot.residences, o, &cancel));
+        // Every group's encounters (an animal's last sighting counts in any
+        // group), read from the shared compact records without expanding them.
+        const std::shared_ptr<const core::CompactEncounters> records = snapshot.takeScope({});
+        auto health = std::make_shared<core::DataHealth>(
+            core::dataHealth(*records, snapshot.pedigree->animals, *snapshot.residences, o, &cancel));
         return ComputeRunner::Apply([this, health] { adopt(std::move(*health)); });
     });
 }

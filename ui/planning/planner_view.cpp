@@ -255,7 +255,8 @@ std::optional<core::Scenario> PlannerView::savedScenario(const QString& name, QS
     defaults.maturityYears = settings.maturityYears;
     defaults.elo = settings.elo;
     const core::ScenarioFileResult parsed =
-        core::parseScenarioText(*text, toStdString(name), document_->colonyFor({}), defaults);
+        core::parseScenarioText(*text, toStdString(name), document_->encounters().compact(), document_->pedigree(),
+                                defaults);
     if (!parsed.scenario && error) {
         QStringList lines;
         for (const std::string& e : parsed.errors) lines << toQString(e);
@@ -302,7 +303,7 @@ void PlannerView::rerun()
     s.elo = documentAnalysisSettings(document_).elo; // Elo is no part of a scenario's text
     waitForEveryEncounter();
     try {
-        result_ = core::runScenario(document_->colonyFor({}), s);
+        result_ = core::runScenario(document_->encounters().compact(), document_->pedigree(), s);
     } catch (const core::ScenarioError& e) {
         QStringList lines;
         for (const core::ScenarioProblem& p : e.problems()) lines << toQString(p.message);
@@ -446,7 +447,7 @@ void PlannerView::compare(const QString& first, const QString& second)
         }
         waitForEveryEncounter();
         try {
-            results[k] = core::runScenario(document_->colonyFor({}), *s);
+            results[k] = core::runScenario(document_->encounters().compact(), document_->pedigree(), *s);
             QStringList groups;
             for (const core::ScenarioGroup& g : results[k]->groups)
                 groups << tr("%1 %2 females").arg(toQString(g.group)).arg(g.after.females.size());
@@ -496,7 +497,8 @@ int PlannerView::paint(QPagedPaintDevice& device, bool comparison)
         list.push_back({savedBox_->currentText().isEmpty() ? tr("(unsaved)") : savedBox_->currentText(),
                         composer_->scenario()});
     }
-    return report::paintScenarioReport(device, document_->colonyFor({}), list, QFileInfo(document_->path()).fileName());
+    return report::paintScenarioReport(device, document_->encounters().compact(), document_->pedigree(), list,
+                                       QFileInfo(document_->path()).fileName());
 }
 
 void PlannerView::printDialog()

@@ -79,12 +79,12 @@ void runReportDialog(QWidget* parent, ColonyDocument* document, ReportTarget tar
                                                         QStringLiteral("hierarchy-report.pdf"), QObject::tr("PDF (*.pdf)"));
             if (path.isEmpty()) return;
             if (QFileInfo(path).suffix().isEmpty()) path += QStringLiteral(".pdf");
-            report::writeHierarchyReportPdf(path, document->colonyFor({}), o);
+            report::writeHierarchyReportPdf(path, document->encounters().compact(), document->pedigree(), o);
         } else {
             QPrinter printer;
             QPrintDialog print(&printer, parent);
             if (print.exec() != QDialog::Accepted) return;
-            report::paintHierarchyReport(printer, document->colonyFor({}), o);
+            report::paintHierarchyReport(printer, document->encounters().compact(), document->pedigree(), o);
         }
     } catch (const std::exception& e) {
         QMessageBox::warning(parent, QObject::tr("Cannot Make the Report"), toQString(e.what()));

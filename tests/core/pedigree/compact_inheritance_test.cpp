@@ -8,6 +8,7 @@
 #include "core/pedigree/rank_acquisition.h"
 
 #include "demo_fixture.h"
+#include "prediction_text.h"
 #include "random_colony.h"
 
 #include <gtest/gtest.h>
@@ -20,19 +21,7 @@ namespace {
 
 using hierloom::test::bits;
 
-std::string text(const InheritancePrediction& p)
-{
-    std::ostringstream out;
-    out << p.at << ' ' << toString(p.rule) << '\n';
-    for (const PredictedFemale& f : p.females)
-        out << f.animal << ' ' << f.matriarch << ' ' << f.predictedRank << ' '
-            << (f.observedRank ? std::to_string(*f.observedRank) : "-") << ' ' << bits(f.observedScore) << ' '
-            << f.discordantDyads << '\n';
-    for (const std::string& m : p.matrilineOrder) out << "m " << m << '\n';
-    for (const std::string& a : p.unknownBirthCountedMature) out << "u " << a << '\n';
-    for (const std::string& a : p.unorderable) out << "o " << a << '\n';
-    return out.str();
-}
+std::string text(const InheritancePrediction& p) { return hierloom::test::predictionText(p); }
 
 std::string text(const ObservedScores& scores)
 {
