@@ -45,12 +45,7 @@ using measure::memoryMiB;
 using measure::ms;
 
 // Runs the events until `done` or 120 s.
-template <class Done> void runUntil(Done done)
-{
-    QElapsedTimer t;
-    t.start();
-    while (!done() && t.elapsed() < 120000) QApplication::processEvents(QEventLoop::AllEvents, 5);
-}
+template <class Done> void runUntil(Done done) { measure::runUntil(done, 120000); }
 
 // The timeline has finished computing and the window has painted it.
 void waitPainted(ui::MainWindow& window, ui::RankTimelineView* timeline)

@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #pragma once
 // What the desktop measure tools share: this process's memory and elapsed times.
+#include <QApplication>
 #include <QElapsedTimer>
 
 #include <fstream>
@@ -19,5 +20,13 @@ inline double memoryMiB(const std::string& field)
 }
 
 inline double ms(const QElapsedTimer& t) { return static_cast<double>(t.nsecsElapsed()) / 1e6; }
+
+/// Runs the events until `done` or `limitMs` have passed.
+template <class Done> void runUntil(Done done, qint64 limitMs)
+{
+    QElapsedTimer t;
+    t.start();
+    while (!done() && t.elapsed() < limitMs) QApplication::processEvents(QEventLoop::AllEvents, 5);
+}
 
 } // namespace hierloom::measure

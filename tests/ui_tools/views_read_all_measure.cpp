@@ -33,12 +33,7 @@ using measure::memoryMiB;
 using measure::ms;
 
 // Runs the events until `done` or 600 s.
-template <class Done> void runUntil(Done done)
-{
-    QElapsedTimer t;
-    t.start();
-    while (!done() && t.elapsed() < 600000) QApplication::processEvents(QEventLoop::AllEvents, 5);
-}
+template <class Done> void runUntil(Done done) { measure::runUntil(done, 600000); }
 
 // No view of the window is computing (after the events a switch starts have run).
 bool idle(const ui::MainWindow& window)
