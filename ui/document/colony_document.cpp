@@ -16,6 +16,18 @@
 
 namespace hierloom::ui {
 
+namespace {
+
+/// Every encounter of group `g` (with its uid: the desktop edits by uid).
+core::EncounterScope groupScope(const std::string& g)
+{
+    core::EncounterScope scope;
+    scope.group = g;
+    return scope;
+}
+
+} // namespace
+
 ColonyDocument::ColonyDocument(QObject* parent)
     : QObject(parent), colony_(std::make_shared<core::Colony>()), records_(std::make_shared<core::EncounterRecords>()),
       undoStack_(new QUndoStack(this))
@@ -55,7 +67,7 @@ ColonyDocument::Read ColonyDocument::readFile(const core::ColonyStore& store, st
     }
     for (const std::string& g : groups) {
         read.records = core::EncounterRecords::merged(
-            read.records, core::loadEncounterRecords(store, core::EncounterScope{.group = g}));
+            read.records, core::loadEncounterRecords(store, groupScope(g)));
     }
     read.groups = std::move(groups);
     return read;
@@ -213,7 +225,7 @@ bool ColonyDocument::holdGroup(const QString& group)
         return false;
     }
     // Read straight into compact records: no Encounter of strings per row.
-    const core::EncounterRecords part = core::loadEncounterRecords(*store_, core::EncounterScope{.group = g});
+    const core::EncounterRecords part = core::loadEncounterRecords(*store_, groupScope(g));
     heldGroups_.push_back(g);
     const std::vector<std::string> dropped = dropOldGroups();
     snapshot_ = {};
