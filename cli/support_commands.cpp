@@ -33,14 +33,21 @@ struct SupportCommandOptions {
 
 void runSupport(CommandContext& ctx, const SupportCommandOptions& o)
 {
-    const LoadedColony loaded = loadColony(ctx, o.colony);
+    // Only the group's encounters (its scope; every date: the Elo behind the
+    // mothers' acts and the rank order runs from the start of the record), and
+    // the record's last day in any group, which an open window ends on.
+    EncounterScope scope;
+    scope.group = o.window.group;
+    const LoadedColony loaded = loadColony(ctx, o.colony, scope, true);
     const AnalysisSettings settings = analysisSettingsOf(loaded, o.analysis, o.window.draws);
     const SelectionOptions selection = withDefaultWindow(selectionOf(o.window, loaded), settings, loaded);
     reportAnalysisSettings(ctx, "support", settings, &o.analysis, o.window.draws);
     SupportOptions s;
     s.group = selection.group;
     s.from = selection.from;
-    s.to = selection.to;
+    // An open window ends on the record's last day, as it did when every
+    // encounter was read (the group's scope holds the same rows up to it).
+    s.to = selection.to ? selection.to : loaded.lastDay;
     s.iterations = o.permutations;
     s.seed = o.seed;
     s.threads = o.threads == 0 ? defaultThreadCount() : o.threads;
