@@ -1,6 +1,6 @@
 // SPDX-License-Identifier: GPL-3.0-or-later
 #include "core/research/data_health.h"
-
+#include "core/base/analysis_order.h"
 #include "core/ranks/compact_selection.h"
 #include "core/ranks/encounter_selection.h"
 #include "core/ranks/parallel_randomisation.h"
@@ -65,14 +65,10 @@ template <class Rows> bool inWindow(const Rows& rows, size_t i, std::optional<Da
     return (!from || d >= *from) && d <= to && (group.empty() || rows.group(i) == group);
 }
 
-/// encounterBefore (docs/methods.md) of two rows.
-template <class Rows> bool rowBefore(const Rows& rows, size_t a, size_t b)
+/// Row i's place in the analysis order (core/base/analysis_order.h).
+template <class Rows> AnalysisOrderKey orderKey(const Rows& rows, size_t i)
 {
-    if (rows.date(a) != rows.date(b)) return rows.date(a) < rows.date(b);
-    const int ta = rows.time(a).value_or(24 * 60);
-    const int tb = rows.time(b).value_or(24 * 60);
-    if (ta != tb) return ta < tb;
-    return rows.seq(a) < rows.seq(b);
+    return {rows.date(i), rows.time(i).value_or(24 * 60), rows.seq(i)};
 }
 
 /// Direction of an encounter seen from its dyad (ids in byte order): 0 the
@@ -473,8 +469,7 @@ DataHealth dataHealthOf(const Rows& rows, const std::vector<Animal>& colonyAnima
                 agreement.second = b->first;
                 ++agreement.sharedDays;
                 for (auto* list : {&a->second, &b->second})
-                    std::stable_sort(list->begin(), list->end(),
-                                     [&rows](size_t x, size_t y) { return rowBefore(rows, x, y); });
+                    *list = analysisOrderOf(std::move(*list), [&rows](size_t i) { return orderKey(rows, i); });
                 matchDay(rows, a->second, b->second, o.matchMinutes, agreement, table);
             }
         }

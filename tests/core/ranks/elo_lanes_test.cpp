@@ -106,7 +106,9 @@ TEST(EloLanes, OptimisedKIsTheBestOfEveryGridValueComputedAlone)
 namespace {
 
 /// The optimum of docs/methods.md ("Optimised k") computed the plain way: every
-/// grid value in full, one k at a time, then the golden-section search.
+/// grid value in full, one k at a time, then the golden-section search (a
+/// deliberate copy of the search in elo_optimisation.cpp, without its early
+/// stop and lanes, so the two can be compared bit for bit).
 EloOptimum plainOptimum(int n, const std::vector<Bout>& bouts, EloSettings s)
 {
     auto at = [&](double k) {
